@@ -1,0 +1,309 @@
+package check
+
+import (
+	"encoding/json"
+	"fmt"
+	"io"
+	"math"
+	"strconv"
+	"strings"
+	"text/tabwriter"
+)
+
+// Caution is printed at the head of every rendered report.
+const Caution = "CAUTION: these results support, and never replace, the design of a " +
+	"qualified engineer. Local codes, standards and licensed practice govern. Check " +
+	"every input and every result before anything is built."
+
+// Report gathers the results of many checks over many load cases.
+// The zero value is an empty report ready to use.
+type Report struct {
+	// Title heads the rendered report.
+	Title string
+	// Results holds every result in the order added.
+	Results []Result
+}
+
+// Add appends results to the report.
+func (r *Report) Add(results ...Result) { r.Results = append(r.Results, results...) }
+
+// Worse reports whether a is a worse outcome than b: a more severe status,
+// or the same status with a higher ratio.
+func Worse(a, b Result) bool {
+	if a.Status != b.Status {
+		return a.Status.Worse(b.Status)
+	}
+	return a.Ratio > b.Ratio
+}
+
+// Governing returns, for each distinct check and element (ID and Element),
+// the worst result over all load cases: the governing case. Results come in
+// the order each check first appears; ties go to the result added first.
+func (r Report) Governing() []Result {
+	type key struct{ id, element string }
+	index := make(map[key]int)
+	var out []Result
+	for _, res := range r.Results {
+		k := key{res.ID, res.Element}
+		i, ok := index[k]
+		if !ok {
+			index[k] = len(out)
+			out = append(out, res)
+			continue
+		}
+		if Worse(res, out[i]) {
+			out[i] = res
+		}
+	}
+	return out
+}
+
+// Status returns the overall status: the most severe of all results, or
+// Info for an empty report.
+func (r Report) Status() Status {
+	s := Info
+	for _, res := range r.Results {
+		if res.Status.Worse(s) {
+			s = res.Status
+		}
+	}
+	return s
+}
+
+// Filter returns a report holding only the results for which keep is true.
+func (r Report) Filter(keep func(Result) bool) Report {
+	out := Report{Title: r.Title}
+	for _, res := range r.Results {
+		if keep(res) {
+			out.Results = append(out.Results, res)
+		}
+	}
+	return out
+}
+
+// Failures returns the governing results that fail.
+func (r Report) Failures() []Result {
+	var out []Result
+	for _, res := range r.Governing() {
+		if res.Status == Fail {
+			out = append(out, res)
+		}
+	}
+	return out
+}
+
+// Worst returns the governing result with the highest ratio among those
+// that carry a limit (not Info), and false when there is none.
+func (r Report) Worst() (Result, bool) {
+	var worst Result
+	found := false
+	for _, res := range r.Results {
+		if res.Status == Info {
+			continue
+		}
+		if !found || Worse(res, worst) {
+			worst, found = res, true
+		}
+	}
+	return worst, found
+}
+
+// RenderOptions controls text and Markdown rendering. A nil *RenderOptions
+// means the defaults.
+type RenderOptions struct {
+	// All lists every result of every case after the governing summary.
+	// Default false: the governing summary only.
+	All bool
+}
+
+func ratioString(x float64) string {
+	switch {
+	case math.IsInf(x, 1):
+		return "inf"
+	case math.IsNaN(x):
+		return "NaN"
+	}
+	return strconv.FormatFloat(x, 'f', 3, 64)
+}
+
+func factorString(res Result) string {
+	if res.Required == 0 {
+		return ""
+	}
+	p := "inf"
+	if !math.IsInf(res.Provided, 1) {
+		p = strconv.FormatFloat(res.Provided, 'f', 2, 64)
+	}
+	return p + " / " + strconv.FormatFloat(res.Required, 'f', 2, 64)
+}
+
+var columns = []string{"Check", "Element", "Case", "Demand", "Capacity", "Ratio", "FoS prov/req", "Status"}
+
+func row(res Result) []string {
+	ratio := ratioString(res.Ratio)
+	if res.Status == Info {
+		ratio = ""
+	}
+	return []string{res.ID, res.Element, res.Case, res.DemandString(), res.CapacityString(),
+		ratio, factorString(res), res.Status.String()}
+}
+
+// bases lists each distinct (ID, basis) pair once, in order of appearance.
+func bases(results []Result) [][2]string {
+	seen := make(map[[2]string]bool)
+	var out [][2]string
+	for _, res := range results {
+		k := [2]string{res.ID, res.Basis}
+		if res.Basis == "" || seen[k] {
+			continue
+		}
+		seen[k] = true
+		out = append(out, k)
+	}
+	return out
+}
+
+// WriteText renders the report as aligned plain text.
+func (r Report) WriteText(w io.Writer, opts *RenderOptions) error {
+	if opts == nil {
+		opts = &RenderOptions{}
+	}
+	ew := &errWriter{w: w}
+	title := r.Title
+	if title == "" {
+		title = "Check report"
+	}
+	fmt.Fprintf(ew, "%s\n%s\n\n%s\n\n", title, strings.Repeat("=", len([]rune(title))), Caution)
+	fmt.Fprintf(ew, "Overall: %s (%d results)\n\n", r.Status(), len(r.Results))
+	table := func(heading string, results []Result) {
+		fmt.Fprintf(ew, "%s\n\n", heading)
+		tw := tabwriter.NewWriter(ew, 0, 0, 2, ' ', 0)
+		fmt.Fprintln(tw, strings.Join(columns, "\t"))
+		for _, res := range results {
+			fmt.Fprintln(tw, strings.Join(row(res), "\t"))
+		}
+		tw.Flush()
+		fmt.Fprintln(ew)
+	}
+	gov := r.Governing()
+	table("Governing cases", gov)
+	notes := false
+	for _, res := range gov {
+		for _, n := range res.Notes {
+			if !notes {
+				fmt.Fprintf(ew, "Notes\n\n")
+				notes = true
+			}
+			fmt.Fprintf(ew, "- %s (%s): %s\n", res.ID, res.Element, n)
+		}
+	}
+	if notes {
+		fmt.Fprintln(ew)
+	}
+	if b := bases(gov); len(b) > 0 {
+		fmt.Fprintf(ew, "Basis\n\n")
+		for _, kb := range b {
+			fmt.Fprintf(ew, "- %s: %s\n", kb[0], kb[1])
+		}
+		fmt.Fprintln(ew)
+	}
+	if opts.All {
+		table("All results", r.Results)
+	}
+	return ew.err
+}
+
+// WriteMarkdown renders the report as GitHub-flavoured Markdown.
+func (r Report) WriteMarkdown(w io.Writer, opts *RenderOptions) error {
+	if opts == nil {
+		opts = &RenderOptions{}
+	}
+	ew := &errWriter{w: w}
+	title := r.Title
+	if title == "" {
+		title = "Check report"
+	}
+	fmt.Fprintf(ew, "# %s\n\n> %s\n\n**Overall: %s** (%d results)\n\n", title, Caution, r.Status(), len(r.Results))
+	table := func(heading string, results []Result) {
+		fmt.Fprintf(ew, "## %s\n\n| %s |\n|%s\n", heading, strings.Join(columns, " | "),
+			strings.Repeat("---|", len(columns)))
+		for _, res := range results {
+			cells := row(res)
+			for i, c := range cells {
+				cells[i] = strings.ReplaceAll(c, "|", `\|`)
+			}
+			fmt.Fprintf(ew, "| %s |\n", strings.Join(cells, " | "))
+		}
+		fmt.Fprintln(ew)
+	}
+	gov := r.Governing()
+	table("Governing cases", gov)
+	var notes []string
+	for _, res := range gov {
+		for _, n := range res.Notes {
+			notes = append(notes, fmt.Sprintf("- `%s` (%s): %s", res.ID, res.Element, n))
+		}
+	}
+	if len(notes) > 0 {
+		fmt.Fprintf(ew, "## Notes\n\n%s\n\n", strings.Join(notes, "\n"))
+	}
+	if b := bases(gov); len(b) > 0 {
+		fmt.Fprintf(ew, "## Basis\n\n")
+		for _, kb := range b {
+			fmt.Fprintf(ew, "- `%s`: %s\n", kb[0], kb[1])
+		}
+		fmt.Fprintln(ew)
+	}
+	if opts.All {
+		table("All results", r.Results)
+	}
+	return ew.err
+}
+
+// reportJSON is the stable JSON form of a Report.
+type reportJSON struct {
+	Title     string   `json:"title"`
+	Caution   string   `json:"caution"`
+	Status    Status   `json:"status"`
+	Governing []Result `json:"governing"`
+	Results   []Result `json:"results"`
+}
+
+// MarshalJSON writes the report with its caution, overall status, the
+// governing results and every result, values in SI.
+func (r Report) MarshalJSON() ([]byte, error) {
+	gov := r.Governing()
+	if gov == nil {
+		gov = []Result{}
+	}
+	all := r.Results
+	if all == nil {
+		all = []Result{}
+	}
+	return json.Marshal(reportJSON{Title: r.Title, Caution: Caution, Status: r.Status(), Governing: gov, Results: all})
+}
+
+// WriteJSON writes the report as indented JSON.
+func (r Report) WriteJSON(w io.Writer) error {
+	b, err := json.MarshalIndent(r, "", "  ")
+	if err != nil {
+		return err
+	}
+	_, err = w.Write(append(b, '\n'))
+	return err
+}
+
+// errWriter keeps the first write error so rendering code can stay linear.
+type errWriter struct {
+	w   io.Writer
+	err error
+}
+
+func (e *errWriter) Write(p []byte) (int, error) {
+	if e.err != nil {
+		return 0, e.err
+	}
+	n, err := e.w.Write(p)
+	e.err = err
+	return n, err
+}

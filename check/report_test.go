@@ -1,0 +1,184 @@
+package check
+
+import (
+	"bytes"
+	"encoding/json"
+	"flag"
+	"math"
+	"os"
+	"path/filepath"
+	"testing"
+
+	"github.com/stretchr/testify/assert"
+	"github.com/stretchr/testify/require"
+
+	"github.com/sagspan/sagspan/units"
+)
+
+var update = flag.Bool("update", false, "rewrite golden files")
+
+func TestCompare(t *testing.T) {
+	tests := []struct {
+		name             string
+		demand, capacity float64
+		ratio            float64
+		status           Status
+	}{
+		{"within", 80, 100, 0.8, Pass},
+		{"exactly at capacity passes", 100, 100, 1, Pass},
+		{"over", 120, 100, 1.2, Fail},
+		{"zero demand", 0, 100, 0, Pass},
+		{"zero capacity", 10, 0, math.Inf(1), Fail},
+		{"NaN demand never passes", math.NaN(), 100, math.Inf(1), Fail},
+		{"NaN capacity never passes", 10, math.NaN(), math.Inf(1), Fail},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			r := Compare("x", "x", units.KindForce, tt.demand, tt.capacity)
+			assert.Equal(t, tt.status, r.Status)
+			assert.InDelta(t, tt.ratio, r.Ratio, 1e-12)
+			if math.IsInf(tt.ratio, 1) {
+				assert.True(t, math.IsInf(r.Ratio, 1))
+			}
+		})
+	}
+}
+
+func TestStability(t *testing.T) {
+	// Overturning: resisting 300 kN·m, driving 100 kN·m, required 2 →
+	// provided 3, ratio 2·100/300 = 0.667.
+	r := Stability("anchor.overturning", "Overturning", units.KindMoment, 100e3, 300e3, 2)
+	assert.Equal(t, Pass, r.Status)
+	assert.InDelta(t, 3.0, r.Provided, 1e-12)
+	assert.InDelta(t, 2.0/3, r.Ratio, 1e-12)
+	assert.InDelta(t, r.Required/r.Provided, r.Ratio, 1e-12, "ratio = required/provided")
+
+	zero := Stability("anchor.sliding", "Sliding", units.KindForce, 0, 50e3, 1.5)
+	assert.Equal(t, Pass, zero.Status)
+	assert.True(t, math.IsInf(zero.Provided, 1), "no driving force gives an unbounded factor")
+	b, err := json.Marshal(zero)
+	require.NoError(t, err)
+	assert.Contains(t, string(b), `"required_factor":1.5`)
+	assert.NotContains(t, string(b), "provided_factor", "an unbounded factor is omitted from JSON")
+}
+
+func TestAdvisoryNeverFails(t *testing.T) {
+	r := Advisory("comfort", "Frequency", units.KindFrequency, 3, 2)
+	assert.Equal(t, Flag, r.Status)
+	assert.False(t, Compare("a", "a", units.KindForce, 1, 2).Status.Worse(Pass))
+	assert.True(t, Fail.Worse(Flag))
+	assert.True(t, Flag.Worse(Pass))
+	assert.True(t, Pass.Worse(Info))
+}
+
+func TestWithNoteDoesNotAlias(t *testing.T) {
+	base := Compare("a", "a", units.KindForce, 1, 2).WithNote("one")
+	x := base.WithNote("two")
+	y := base.WithNote("three")
+	assert.Equal(t, []string{"one"}, base.Notes)
+	assert.Equal(t, []string{"one", "two"}, x.Notes)
+	assert.Equal(t, []string{"one", "three"}, y.Notes)
+}
+
+func sampleReport() Report {
+	var r Report
+	r.Title = "Demo footbridge"
+	for _, c := range []struct {
+		name string
+		t    float64
+		ecc  float64
+	}{{"permanent", 180e3, 0.05}, {"crowd full", 260e3, 0.12}, {"crowd half", 240e3, 0.16}} {
+		r.Add(
+			Compare("cable.tension", "Rope tension", units.KindForce, c.t, 300e3).
+				For("walkway ropes", c.name).WithBasis("global factor 3.0 on minimum breaking force (common practice)"),
+			Compare("tower.eccentricity", "Resultant eccentricity at column base", units.KindLength, c.ecc, 0.15).
+				For("left tower", c.name).WithBasis("kern of the effective section (common practice)"),
+			Stability("anchor.sliding", "Anchor sliding", units.KindForce, c.t*0.9, 500e3, 1.5).
+				For("left anchor", c.name).WithBasis("base friction, tan δ (EN 1997-1 6.5.3)"),
+		)
+	}
+	r.Add(Advisory("cable.frequency.vertical", "First vertical frequency", units.KindFrequency, 2.0, 1.25).
+		For("span", "permanent").WithNote("in the range walkers excite vertically"))
+	r.Add(Value("cable.sag", "Dead-load sag", units.KindLength, 2.4).For("walkway ropes", "permanent"))
+	return r
+}
+
+func TestGoverning(t *testing.T) {
+	r := sampleReport()
+	gov := r.Governing()
+	require.Len(t, gov, 5)
+	byID := map[string]Result{}
+	for _, g := range gov {
+		byID[g.ID] = g
+	}
+	assert.Equal(t, "crowd full", byID["cable.tension"].Case, "highest tension governs")
+	assert.Equal(t, "crowd half", byID["tower.eccentricity"].Case, "the only failing case governs")
+	assert.Equal(t, Fail, byID["tower.eccentricity"].Status)
+	assert.Equal(t, "crowd full", byID["anchor.sliding"].Case)
+	assert.Equal(t, Fail, r.Status())
+	require.Len(t, r.Failures(), 1)
+
+	// Ties go to the first result added.
+	var tie Report
+	tie.Add(Compare("a", "a", units.KindForce, 1, 2).For("e", "first"), Compare("a", "a", units.KindForce, 1, 2).For("e", "second"))
+	assert.Equal(t, "first", tie.Governing()[0].Case)
+
+	// The same check on two elements governs separately.
+	var two Report
+	two.Add(Compare("a", "a", units.KindForce, 1, 2).For("left", "c"), Compare("a", "a", units.KindForce, 3, 2).For("right", "c"))
+	assert.Len(t, two.Governing(), 2)
+
+	passing := r.Filter(func(res Result) bool { return res.ID != "tower.eccentricity" })
+	assert.Equal(t, Flag, passing.Status())
+	assert.Equal(t, Info, Report{}.Status())
+}
+
+func golden(t *testing.T, name string, got []byte) {
+	t.Helper()
+	path := filepath.Join("testdata", name)
+	if *update {
+		require.NoError(t, os.WriteFile(path, got, 0o644))
+	}
+	want, err := os.ReadFile(path)
+	require.NoError(t, err, "run go test ./check -update to create golden files")
+	assert.Equal(t, string(want), string(got))
+}
+
+func TestRender(t *testing.T) {
+	r := sampleReport()
+	var text, md, js bytes.Buffer
+	require.NoError(t, r.WriteText(&text, &RenderOptions{All: true}))
+	require.NoError(t, r.WriteMarkdown(&md, nil))
+	require.NoError(t, r.WriteJSON(&js))
+	golden(t, "report.txt", text.Bytes())
+	golden(t, "report.md", md.Bytes())
+	golden(t, "report.json", js.Bytes())
+	for _, out := range []string{text.String(), md.String(), js.String()} {
+		assert.Contains(t, out, "never replace")
+	}
+
+	// JSON values are SI and round-trip.
+	var back struct {
+		Status    Status `json:"status"`
+		Governing []struct {
+			ID     string  `json:"id"`
+			Demand float64 `json:"demand"`
+			Unit   string  `json:"unit"`
+			Status Status  `json:"status"`
+		} `json:"governing"`
+	}
+	require.NoError(t, json.Unmarshal(js.Bytes(), &back))
+	assert.Equal(t, Fail, back.Status)
+	assert.Equal(t, "cable.tension", back.Governing[0].ID)
+	assert.Equal(t, 260e3, back.Governing[0].Demand)
+	assert.Equal(t, "N", back.Governing[0].Unit)
+}
+
+func TestRenderEmpty(t *testing.T) {
+	var buf bytes.Buffer
+	require.NoError(t, Report{}.WriteJSON(&buf))
+	assert.Contains(t, buf.String(), `"governing": []`)
+	buf.Reset()
+	require.NoError(t, Report{}.WriteText(&buf, nil))
+	assert.Contains(t, buf.String(), "Overall: info")
+}
