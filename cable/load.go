@@ -1,0 +1,189 @@
+package cable
+
+import (
+	"math"
+
+	"github.com/sagspan/sagspan/units"
+)
+
+// Patch is a load uniform per horizontal metre over [From, To], measured
+// from support A, on top of the uniform load: a crowd on part of the span.
+type Patch struct {
+	From, To units.Length
+	Load     units.LoadPerLength
+}
+
+// Load is a vertical load per horizontal metre: a uniform part over the
+// whole span plus patches.
+type Load struct {
+	Uniform units.LoadPerLength
+	Patches []Patch
+}
+
+// Total returns the resultant of l over the span s: U·L + Σ pᵢ (bᵢ − aᵢ),
+// each patch clipped to the span.
+func (l Load) Total(s Span) units.Force {
+	L := float64(s.Length)
+	t := float64(l.Uniform) * L
+	for _, p := range l.Patches {
+		a, b := clampX(float64(p.From), L), clampX(float64(p.To), L)
+		if b > a {
+			t += float64(p.Load) * (b - a)
+		}
+	}
+	return units.Force(t)
+}
+
+// Validate returns an error wrapping ErrInvalid unless the uniform load
+// and every patch load are finite and not negative, every patch lies within
+// [0, L] with From < To, and the total is positive.
+func (l Load) Validate(s Span) error {
+	if err := s.Validate(); err != nil {
+		return err
+	}
+	if err := nonNegative("uniform load", float64(l.Uniform)); err != nil {
+		return err
+	}
+	L := float64(s.Length)
+	for i, p := range l.Patches {
+		if err := nonNegative("patch load", float64(p.Load)); err != nil {
+			return err
+		}
+		a, b := float64(p.From), float64(p.To)
+		if !finite(a) || !finite(b) || a < 0 || b > L*(1+1e-12) || !(a < b) {
+			return invalidf("load patch %d spans [%g, %g] m, which is not a positive stretch within the span [0, %g] m", i, a, b, L)
+		}
+	}
+	if t := float64(l.Total(s)); !(t > 0) || !finite(t) {
+		return invalidf("total load must be positive and finite, got %g N", t)
+	}
+	return nil
+}
+
+// beam holds the simply-supported beam quantities of a load on a span.
+type beam struct {
+	l, u, ra float64
+	patches  []Patch
+}
+
+func newBeam(s Span, ld Load) beam {
+	L := float64(s.Length)
+	b := beam{l: L, u: float64(ld.Uniform), patches: ld.Patches}
+	b.ra = b.u * L / 2
+	for _, p := range ld.Patches {
+		a, e := clampX(float64(p.From), L), clampX(float64(p.To), L)
+		P := float64(p.Load) * (e - a)
+		b.ra += P * (L - (a+e)/2) / L
+	}
+	return b
+}
+
+// shear returns the beam shear Q(x) = R_A − ∫₀ˣ q.
+func (b beam) shear(x float64) float64 {
+	q := b.ra - b.u*x
+	for _, p := range b.patches {
+		a, e := clampX(float64(p.From), b.l), clampX(float64(p.To), b.l)
+		q -= float64(p.Load) * (clampX(x, e) - clampX(x, a))
+	}
+	return q
+}
+
+// moment returns the beam moment M(x) = R_A x − ∫₀ˣ q(ξ)(x − ξ) dξ.
+func (b beam) moment(x float64) float64 {
+	m := b.ra*x - b.u*x*x/2
+	for _, p := range b.patches {
+		a, e := clampX(float64(p.From), b.l), clampX(float64(p.To), b.l)
+		switch {
+		case x <= a:
+		case x < e:
+			m -= float64(p.Load) * (x - a) * (x - a) / 2
+		default:
+			m -= float64(p.Load) * (e - a) * (x - (a+e)/2)
+		}
+	}
+	return m
+}
+
+// breaks returns the sorted abscissae where the load intensity may change,
+// including 0 and L, in buf when it is large enough.
+func (b beam) breaks(buf []float64) []float64 {
+	xs := append(buf[:0], 0, b.l)
+	for _, p := range b.patches {
+		xs = append(xs, clampX(float64(p.From), b.l), clampX(float64(p.To), b.l))
+	}
+	// insertion sort: few points
+	for i := 1; i < len(xs); i++ {
+		for j := i; j > 0 && xs[j] < xs[j-1]; j-- {
+			xs[j], xs[j-1] = xs[j-1], xs[j]
+		}
+	}
+	return xs
+}
+
+// shearSquared returns D = ∫₀ᴸ Q² dx, exact for piecewise-linear Q.
+func (b beam) shearSquared() float64 {
+	var buf [16]float64
+	xs := b.breaks(buf[:])
+	d := 0.0
+	for i := 1; i < len(xs); i++ {
+		dx := xs[i] - xs[i-1]
+		if dx <= 0 {
+			continue
+		}
+		q0, q1 := b.shear(xs[i-1]), b.shear(xs[i])
+		d += dx * (q0*q0 + q0*q1 + q1*q1) / 3
+	}
+	return d
+}
+
+// arcLength returns ∫₀ᴸ √(1 + z'²) dx with z' = c₀ − Q/H, exact on each
+// piece where the load is uniform.
+func (b beam) arcLength(c0, h float64) float64 {
+	var buf [16]float64
+	xs := b.breaks(buf[:])
+	s := 0.0
+	for i := 1; i < len(xs); i++ {
+		dx := xs[i] - xs[i-1]
+		if dx <= 0 {
+			continue
+		}
+		s += dx * arcMean(c0-b.shear(xs[i-1])/h, c0-b.shear(xs[i])/h)
+	}
+	return s
+}
+
+// arcLengthDH returns d/dH of arcLength(c0, H):
+//
+//	dS/dH = (1/H) ∫ p (c₀ − p)/√(1+p²) dx,  p = c₀ − Q/H
+//
+// integrated exactly on each piece with the cancellation-free differences.
+func (b beam) arcLengthDH(c0, h float64) float64 {
+	var buf [16]float64
+	xs := b.breaks(buf[:])
+	s := 0.0
+	for i := 1; i < len(xs); i++ {
+		dx := xs[i] - xs[i-1]
+		if dx <= 0 {
+			continue
+		}
+		p0, p1 := c0-b.shear(xs[i-1])/h, c0-b.shear(xs[i])/h
+		a0, a1 := math.Hypot(1, p0), math.Hypot(1, p1)
+		sum := p0 + p1
+		// mean of p/√(1+p²) and of p²/√(1+p²) over [p0, p1]
+		meanP := sum / (a0 + a1)
+		first := (a1+a0)/2 + sum*sum/(2*(a1+a0))
+		var asm float64
+		d := p1 - p0
+		switch {
+		case d == 0:
+			asm = 1 / a0
+		case p0*p1 <= 0:
+			asm = math.Asinh(p1*a0-p0*a1) / d
+		default:
+			asm = math.Asinh(d*sum/(p1*a0+p0*a1)) / d
+		}
+		meanP2 := (first - asm) / 2
+		s += dx * (c0*meanP - meanP2)
+	}
+	return s / h
+}

@@ -1,0 +1,141 @@
+package cable
+
+import "math"
+
+// This file holds the numerically careful building blocks shared by the
+// shapes: differences of nearly equal transcendental values computed
+// without cancellation, and a bracketed Newton solver.
+
+// asinhDiff returns asinh(s1) − asinh(s0) without cancellation, using
+//
+//	asinh s1 − asinh s0 = asinh(s1√(1+s0²) − s0√(1+s1²))
+//	s1√(1+s0²) − s0√(1+s1²) = (s1−s0)(s1+s0)/(s1√(1+s0²) + s0√(1+s1²))  (same signs)
+func asinhDiff(s1, s0 float64) float64 {
+	a0, a1 := math.Hypot(1, s0), math.Hypot(1, s1)
+	if s0*s1 <= 0 {
+		return math.Asinh(s1*a0 - s0*a1)
+	}
+	return math.Asinh((s1 - s0) * (s1 + s0) / (s1*a0 + s0*a1))
+}
+
+// slopeSinDiff returns s1/√(1+s1²) − s0/√(1+s0²) without cancellation.
+func slopeSinDiff(s1, s0 float64) float64 {
+	a0, a1 := math.Hypot(1, s0), math.Hypot(1, s1)
+	if s0*s1 <= 0 {
+		return s1/a1 - s0/a0
+	}
+	return (s1 - s0) * (s1 + s0) / ((s1*a0 + s0*a1) * a0 * a1)
+}
+
+// arcMean returns the mean of √(1+s²) over s in [s0, s1]:
+//
+//	(1/(s1−s0)) ∫ √(1+s²) ds = ½[(a1+a0)/2 + (s1+s0)²/(2(a1+a0))] + ½ (asinh s1 − asinh s0)/(s1−s0)
+//
+// with a = √(1+s²), written so that it stays accurate as s1 → s0, where it
+// tends to √(1+s0²).
+func arcMean(s0, s1 float64) float64 {
+	a0, a1 := math.Hypot(1, s0), math.Hypot(1, s1)
+	d := s1 - s0
+	sum := s1 + s0
+	first := (a1+a0)/2 + sum*sum/(2*(a1+a0))
+	var second float64
+	switch {
+	case d == 0:
+		second = 1 / a0
+	case s0*s1 <= 0:
+		second = math.Asinh(s1*a0-s0*a1) / d
+	default:
+		x := d * sum / (s1*a0 + s0*a1)
+		if math.Abs(x) < 1e-8 {
+			second = sum / (s1*a0 + s0*a1) * (1 - x*x/6)
+		} else {
+			second = math.Asinh(x) / d
+		}
+	}
+	return (first + second) / 2
+}
+
+// lnSinh returns ln(sinh x) for x > 0 without overflow.
+func lnSinh(x float64) float64 {
+	if x > 20 {
+		return x - math.Ln2 + math.Log1p(-math.Exp(-2*x))
+	}
+	return math.Log(math.Sinh(x))
+}
+
+// sinhcm1 returns sinh(x)/x − 1 accurately for small x.
+func sinhcm1(x float64) float64 {
+	if math.Abs(x) < 0.5 {
+		x2 := x * x
+		// Σ x^(2j)/(2j+1)!, j = 1..8
+		t, s := 1.0, 0.0
+		for j := 1; j <= 8; j++ {
+			t *= x2 / float64((2*j)*(2*j+1))
+			s += t
+		}
+		return s
+	}
+	return math.Sinh(x)/x - 1
+}
+
+// cothMinusInv returns coth(x) − 1/x accurately for small x.
+func cothMinusInv(x float64) float64 {
+	if math.Abs(x) < 0.5 {
+		x2 := x * x
+		// x/3 − x³/45 + 2x⁵/945 − x⁷/4725 + 2x⁹/93555
+		return x * (1.0/3 + x2*(-1.0/45+x2*(2.0/945+x2*(-1.0/4725+x2*2.0/93555))))
+	}
+	return 1/math.Tanh(x) - 1/x
+}
+
+// newtonBracket finds a root of the increasing function g on [lo, hi],
+// where g(lo) < 0 < g(hi) (not checked), starting from x, taking Newton
+// steps and bisecting whenever a step leaves the bracket. It stops when a
+// step or the bracket is smaller than tol (absolute, in x). ok is false
+// after maxIter steps without convergence.
+func newtonBracket(g func(x float64) (v, dv float64), lo, hi, x, tol float64, maxIter int) (root float64, ok bool) {
+	for i := 0; i < maxIter; i++ {
+		v, dv := g(x)
+		if v == 0 {
+			return x, true
+		}
+		if v < 0 {
+			lo = x
+		} else {
+			hi = x
+		}
+		xn := x - v/dv
+		if !(xn > lo && xn < hi) {
+			xn = lo + (hi-lo)/2
+		}
+		if math.Abs(xn-x) <= tol || hi-lo <= tol {
+			return xn, true
+		}
+		x = xn
+	}
+	return x, false
+}
+
+// cubicRoot returns the positive root of H³ + b H² − k = 0 (k > 0), the
+// form of the classical change-of-state equation, by Newton's method from
+// the upper bound max(0, −b) + ∛k, where the cubic is increasing and convex
+// so the iteration descends monotonically onto the root.
+func cubicRoot(b, k float64) float64 {
+	h := math.Max(0, -b) + math.Cbrt(k)
+	for i := 0; i < 200; i++ {
+		f := h*h*(h+b) - k
+		df := h * (3*h + 2*b)
+		if df <= 0 {
+			break
+		}
+		hn := h - f/df
+		if !(hn < h) {
+			break
+		}
+		if h-hn <= 1e-15*h {
+			return hn
+		}
+		h = hn
+	}
+	return h
+}

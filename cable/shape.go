@@ -1,0 +1,47 @@
+package cable
+
+import "github.com/sagspan/sagspan/units"
+
+// Shape is what every cable shape answers. x is measured horizontally from
+// support A. Z, Sag and Tension are defined on the span [0, L]; an x
+// outside it is clamped to the nearer support, and a NaN x gives NaN.
+type Shape interface {
+	Span() Span
+	// Horizontal returns H, the horizontal component of the rope tension,
+	// constant along the span.
+	Horizontal() units.Force
+	// Reactions returns the vertical components of the rope pull at A and
+	// B, positive upward on the cable (the support pulls up).
+	Reactions() (va, vb units.Force)
+	// Tension returns the rope tension at x.
+	Tension(x units.Length) units.Force
+	// SupportTensions returns the rope tension at A and at B; the larger is
+	// the maximum tension in the span.
+	SupportTensions() (ta, tb units.Force)
+	// SupportAngles returns the inclination of the rope below horizontal at
+	// A and at B, measured going from the support into the span: positive
+	// when the rope descends from the support into the span.
+	SupportAngles() (a, b units.Angle)
+	// Z returns the elevation of the rope at x relative to support A, z up.
+	Z(x units.Length) units.Length
+	// Sag returns the vertical distance of the rope below the chord at x.
+	Sag(x units.Length) units.Length
+	// Length returns the arc length (stretched, for elastic shapes).
+	Length() units.Length
+	// LowPoint returns the vertex of the shape, where the rope is
+	// horizontal; within is false when it falls outside [0, L], in which
+	// case the position is that of the vertex of the curve extended beyond
+	// the support.
+	LowPoint() (x, z units.Length, within bool)
+}
+
+// clampX limits x to [0, l]; NaN stays NaN.
+func clampX(x, l float64) float64 {
+	if x < 0 {
+		return 0
+	}
+	if x > l {
+		return l
+	}
+	return x
+}
