@@ -84,6 +84,7 @@ func Combine(levels []LevelForce, selfWeight units.Force) (Resultant, error) {
 		return Resultant{}, invalid("levels", len(levels), "sum to a force or moment that is not finite")
 	}
 	r := Resultant{
+		Vertical:   units.Force(v),
 		Horizontal: units.Force(h),
 		BaseMoment: units.Moment(m),
 		RopeAngle:  units.Angle(math.Atan2(h, v)),
