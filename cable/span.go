@@ -16,7 +16,9 @@ type Span struct {
 // Chord returns the straight-line distance between the supports:
 //
 //	c = √(L² + h²)
-func (s Span) Chord() units.Length { return units.Length(math.Hypot(float64(s.Length), float64(s.Rise))) }
+func (s Span) Chord() units.Length {
+	return units.Length(math.Hypot(float64(s.Length), float64(s.Rise)))
+}
 
 // Mirror returns the span seen from the other side: B becomes A, so the
 // rise changes sign.
