@@ -1,0 +1,199 @@
+package foundation
+
+import (
+	"fmt"
+	"math"
+
+	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/units"
+)
+
+// Footing is a rectangular concrete pad under a tower column, with its
+// base at Depth below the ground surface. Frame: x along the bridge (side
+// B), z up, origin at the centre of the base.
+type Footing struct {
+	// B is the side along the bridge (x), L the side across it.
+	B, L units.Length
+	// Thickness of the pad; Depth of its base below ground. Soil over the
+	// pad (Depth − Thickness, over the whole plan area, the column's
+	// footprint neglected) is counted as weight.
+	Thickness, Depth units.Length
+	// UnitWeight of the pad; zero → ConcreteUnitWeight (24 kN/m³).
+	UnitWeight units.UnitWeight
+	// Groundwater is true when the water table lies WaterDepth below
+	// ground: the pad is buoyed and the bearing capacity reduced.
+	Groundwater bool
+	WaterDepth  units.Length
+}
+
+// FootingLoad is the load from the tower, brought to the underside of the
+// footing, about the centre of its base, excluding the pad's own weight
+// and the soil on it (Check adds them).
+type FootingLoad struct {
+	// Vertical is positive downward; Horizontal positive toward +x.
+	Vertical, Horizontal units.Force
+	// Moment turns toward +x (presses the +x edge); it includes the
+	// horizontal load's lever arm down to the underside.
+	Moment units.Moment
+	// VariableShare is the fraction of each component due to variable
+	// actions (0 to 1), used only by the partial-factor basis.
+	VariableShare float64
+}
+
+func (f Footing) validate() error {
+	for _, x := range []struct {
+		name string
+		v    float64
+	}{{"Footing.B", float64(f.B)}, {"Footing.L", float64(f.L)}, {"Footing.Thickness", float64(f.Thickness)}} {
+		if err := positive(x.name, x.v); err != nil {
+			return err
+		}
+	}
+	if err := nonNegative("Footing.Depth", float64(f.Depth)); err != nil {
+		return err
+	}
+	if err := nonNegative("Footing.UnitWeight", float64(f.UnitWeight)); err != nil {
+		return err
+	}
+	if f.Groundwater {
+		return nonNegative("Footing.WaterDepth", float64(f.WaterDepth))
+	}
+	return nil
+}
+
+func (ld FootingLoad) validate() error {
+	if err := finite("FootingLoad.Vertical", float64(ld.Vertical)); err != nil {
+		return err
+	}
+	if err := finite("FootingLoad.Horizontal", float64(ld.Horizontal)); err != nil {
+		return err
+	}
+	if err := finite("FootingLoad.Moment", float64(ld.Moment)); err != nil {
+		return err
+	}
+	return fraction("FootingLoad.VariableShare", ld.VariableShare)
+}
+
+// factorOf returns the factor on a load of which share is variable.
+func (s actionSet) factorOf(unfavourable bool, share float64) float64 {
+	return (1-share)*s.factor(unfavourable, false) + share*s.factor(unfavourable, true)
+}
+
+// Check verifies the footing under the tower load on soil s with the
+// bearing-capacity method m, with result IDs "footing.bearing",
+// "footing.sliding" and "footing.overturning".
+//
+// With W the pad's and soil cover's weight less buoyancy and N = V + W:
+//
+//	bearing:     e = M/N along B; N/A' on B' = B − 2|e| against qult (method m),
+//	             or the peak contact pressure against Soil.Allowable when given
+//	sliding:     driving |H|, resisting N tan δ (cohesion and passive ignored)
+//	overturning: about the base edge the moment turns toward:
+//	             driving |M| (+ |V|·B/2 when V pulls up), resisting (W + V⁺)·B/2
+//
+// Allowable basis: factors of safety 3.0 (bearing), 1.5 (sliding), 2.0
+// (overturning) unless set in b. Partial basis: overturning in EQU,
+// sliding and bearing in GEO by the chosen design approach, the vertical
+// load taken both unfavourable and favourable; the worse is reported.
+//
+// Special cases: no horizontal load or moment gives a provided factor of
+// +Inf; a resultant outside the base fails bearing with a note; N ≤ 0
+// (net uplift) passes bearing with a note while overturning fails.
+// Invalid input returns an error wrapping ErrInvalid.
+func (f Footing) Check(load FootingLoad, s Soil, m Method, b *Basis) ([]check.Result, error) {
+	if err := f.validate(); err != nil {
+		return nil, err
+	}
+	if err := load.validate(); err != nil {
+		return nil, err
+	}
+	if err := s.Validate(); err != nil {
+		return nil, err
+	}
+	if !m.valid() {
+		return nil, invalid("Method", fmt.Sprintf("%d is not a known method", int(m)))
+	}
+	bs, err := resolveBasis(b)
+	if err != nil {
+		return nil, err
+	}
+	ld := AnchorBlock{Length: f.B, Width: f.L, Height: f.Thickness, Depth: f.Depth, UnitWeight: f.UnitWeight,
+		Groundwater: f.Groundwater, WaterDepth: f.WaterDepth}.loads(s)
+	if !bs.PartialFactors {
+		set := allowableSet()
+		bear, err := f.bearing(load, s, m, ld, set, false, def(bs.Bearing, 3))
+		if err != nil {
+			return nil, err
+		}
+		return []check.Result{bear, f.sliding(load, s, ld, set, def(bs.Sliding, 1.5)),
+			f.overturning(load, ld, set, def(bs.Overturning, 2))}, nil
+	}
+	var bear, slide check.Result
+	first := true
+	for _, set := range bs.geoSets() {
+		r := f.sliding(load, s, ld, set, 1)
+		if first || r.Ratio > slide.Ratio {
+			slide = r
+		}
+		for _, fav := range []bool{false, true} {
+			r, err := f.bearing(load, s, m, ld, set, fav, 1)
+			if err != nil {
+				return nil, err
+			}
+			if first || r.Ratio > bear.Ratio {
+				bear = r
+			}
+			first = false
+		}
+	}
+	return []check.Result{bear, slide, f.overturning(load, ld, bs.equSet(), 1)}, nil
+}
+
+func (f Footing) bearing(load FootingLoad, s Soil, m Method, ld blockLoads, set actionSet, favourable bool, fs float64) (check.Result, error) {
+	const id, title = "footing.bearing", "Footing bearing pressure"
+	sh := load.VariableShare
+	v := float64(load.Vertical)
+	n := set.gG*(ld.block+ld.cover-ld.buoyancy) + set.factorOf(!favourable == (v > 0), sh)*v
+	h := set.factorOf(true, sh) * math.Abs(float64(load.Horizontal))
+	mo := set.factorOf(true, sh) * float64(load.Moment)
+	what := "the ultimate bearing pressure"
+	if set.allowable && s.Allowable > 0 {
+		what = "the site report's allowable pressure (given)"
+		fs = 1
+	}
+	basis := basisOf(set, what, fs)
+	if n <= 0 {
+		return check.Compare(id, title, units.KindPressure, 0, 0).WithBasis(basis).
+			WithNote("net uplift: the footing lifts off its base"), nil
+	}
+	return baseBearing(id, title, basis, f.B, f.L, f.Depth, f.Groundwater, f.WaterDepth,
+		units.Force(n), units.Force(h), units.Length(mo/n), s, m, set, fs)
+}
+
+func (f Footing) sliding(load FootingLoad, s Soil, ld blockLoads, set actionSet, fs float64) check.Result {
+	sh := load.VariableShare
+	sd := s.factored(set.gPhi, set.gC)
+	v := float64(load.Vertical)
+	n := set.gGfav*(ld.block+ld.cover) - set.gG*ld.buoyancy + set.factorOf(v < 0, sh)*v
+	tanD := math.Tan(float64(sd.InterfaceFriction()))
+	drive := set.factorOf(true, sh) * math.Abs(float64(load.Horizontal))
+	return check.Stability("footing.sliding", "Footing sliding", units.KindForce, drive, math.Max(n, 0)*tanD/set.gRh, fs).
+		WithBasis(basisOf(set, "base friction", fs)).
+		WithNote(fmt.Sprintf("base friction angle δ = %v on normal force %v; cohesion and passive resistance ignored",
+			sd.InterfaceFriction(), units.Force(n)))
+}
+
+func (f Footing) overturning(load FootingLoad, ld blockLoads, set actionSet, fs float64) check.Result {
+	sh := load.VariableShare
+	half := float64(f.B) / 2
+	v := float64(load.Vertical)
+	dst := set.factorOf(true, sh)*math.Abs(float64(load.Moment)) + set.gG*ld.buoyancy*half
+	stb := set.gGfav * (ld.block + ld.cover) * half
+	if v >= 0 {
+		stb += set.factorOf(false, sh) * v * half
+	} else {
+		dst -= set.factorOf(true, sh) * v * half
+	}
+	return check.Stability("footing.overturning", "Footing overturning about the base edge", units.KindMoment, dst, stb, fs).
+		WithBasis(basisOf(set, "the restoring moment about the base edge", fs))
+}
