@@ -223,6 +223,13 @@ func (e ElasticCatenary) at(s float64) (x, z float64) {
 	return x, z
 }
 
+// At returns the position of the point at unstretched coordinate s from
+// A; s outside [0, L₀] gives the analytic extension of the curve.
+func (e ElasticCatenary) At(s units.Length) (x, z units.Length) {
+	xx, zz := e.at(float64(s))
+	return units.Length(xx), units.Length(zz)
+}
+
 // material returns the unstretched coordinate s of the point at abscissa
 // x ∈ [0, L] by a bracketed Newton iteration (x(s) is increasing).
 func (e ElasticCatenary) material(x float64) float64 {

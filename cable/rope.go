@@ -21,7 +21,9 @@ type Rope struct {
 }
 
 // EA returns the axial stiffness Modulus × Area.
-func (r Rope) EA() units.AxialStiffness { return units.AxialStiffness(float64(r.Modulus) * float64(r.Area)) }
+func (r Rope) EA() units.AxialStiffness {
+	return units.AxialStiffness(float64(r.Modulus) * float64(r.Area))
+}
 
 // Weight returns the weight per metre under standard gravity.
 func (r Rope) Weight() units.LoadPerLength { return r.Mass.Weight() }
