@@ -64,16 +64,17 @@ func rankineParts(phi, slope units.Angle) (cb, root float64, err error) {
 
 // CoulombActive returns Coulomb's active earth-pressure coefficient with
 // wall friction delta, the back of the wall at angle wallBack from the
-// vertical (positive when the back leans away from the retained soil, so
-// that the wall face overhangs its heel) and backfill rising at angle slope:
+// vertical (positive when the back leans away from the retained soil: its
+// top is farther from the soil than its heel, and the soil rests on it)
+// and backfill rising at angle slope:
 //
 //	Ka = cos²(φ − θ) / { cos²θ cos(δ + θ) [1 + √( sin(φ + δ) sin(φ − β) / (cos(δ + θ) cos(θ − β)) )]² }
 //
 // with θ = wallBack, β = slope. The resultant ½Ka γ H² (H the vertical
 // height) acts at δ to the normal of the wall back (Murthy, Geotechnical
 // Engineering, eq. 11.51 form; Das, Principles of Foundation Engineering,
-// §7.9, from memory). The sign of θ is fixed by the wedge test beside this
-// file.
+// §7.9, from memory). The sign of θ is confirmed by the trial-wedge test
+// beside this file.
 //
 // Special cases: φ outside (0, 60°], δ outside [0, φ], |θ| ≥ 90°, or
 // β > φ give an error wrapping ErrInvalid.
