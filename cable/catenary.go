@@ -164,8 +164,10 @@ func kForLength(l, h, S float64) (float64, bool) {
 		if kn <= 0 {
 			kn = k / 2
 		}
-		if math.Abs(kn-k) <= 1e-15*k {
-			return kn, true
+		if kn >= k || k-kn <= 1e-15*k {
+			// the iterates descend monotonically; a step that does not
+			// descend means rounding has been reached
+			return math.Min(k, kn), true
 		}
 		k = kn
 	}
