@@ -145,8 +145,8 @@ func (a AnchorBlock) earth(s Soil) (pp, pa EarthForce, err error) {
 //	sliding:     driving Fx (+ Pa, active on the back face, when passive is counted)
 //	             resisting N tan δ + μ Pp            (δ = Soil.InterfaceFriction; cohesion ignored)
 //	overturning: about the front toe (x = Length, z = 0)
-//	             driving Σ (Fx·Z + Fz·(Length − X)) + U·Length/2 (+ Pa·ha)
-//	             resisting (W + Ws)·Length/2         (passive ignored)
+//	             driving Σ (Fx·Z + Fz·(Length − X)) + U·Length/2
+//	             resisting (W + Ws)·Length/2         (earth pressures ignored)
 //	uplift:      driving Fz, resisting W + Ws − U   (side friction ignored)
 //	bearing:     N on the base with eccentricity e = M/N from the base centre,
 //	             M = Σ (Fx·Z + Fz·(Length/2 − X)); earth pressures ignored;
@@ -191,7 +191,7 @@ func (a AnchorBlock) Check(pulls []Pull, s Soil, b *Basis) ([]check.Result, erro
 		if slide, err = a.sliding(pulls, s, ld, set, def(bs.Sliding, 1.5)); err != nil {
 			return nil, err
 		}
-		if over, err = a.overturning(pulls, s, ld, set, def(bs.Overturning, 1.5)); err != nil {
+		if over, err = a.overturning(pulls, ld, set, def(bs.Overturning, 1.5)); err != nil {
 			return nil, err
 		}
 		lift = a.uplift(pulls, ld, set, def(bs.Uplift, 1.5))
@@ -201,7 +201,7 @@ func (a AnchorBlock) Check(pulls []Pull, s Soil, b *Basis) ([]check.Result, erro
 		return []check.Result{slide, over, lift, bear}, nil
 	}
 	equ := bs.equSet()
-	if over, err = a.overturning(pulls, s, ld, equ, 1); err != nil {
+	if over, err = a.overturning(pulls, ld, equ, 1); err != nil {
 		return nil, err
 	}
 	lift = a.uplift(pulls, ld, equ, 1)
@@ -270,7 +270,7 @@ func (a AnchorBlock) sliding(pulls []Pull, s Soil, ld blockLoads, set actionSet,
 	return r, nil
 }
 
-func (a AnchorBlock) overturning(pulls []Pull, s Soil, ld blockLoads, set actionSet, fs float64) (check.Result, error) {
+func (a AnchorBlock) overturning(pulls []Pull, ld blockLoads, set actionSet, fs float64) (check.Result, error) {
 	l := float64(a.Length)
 	var dst, stb float64
 	for _, p := range pulls {
@@ -284,16 +284,9 @@ func (a AnchorBlock) overturning(pulls []Pull, s Soil, ld blockLoads, set action
 	}
 	dst += set.gG * ld.buoyancy * l / 2
 	stb += set.gGfav * (ld.block + ld.cover) * l / 2
-	if a.PassiveMobilisation > 0 {
-		_, pa, err := a.earth(s.factored(set.gPhi, set.gC))
-		if err != nil {
-			return check.Result{}, err
-		}
-		dst += set.gG * float64(pa.Force) * float64(pa.Height)
-	}
 	return check.Stability("anchor.overturning", "Anchor block overturning about the front toe", units.KindMoment, dst, stb, fs).
 		WithBasis(basisOf(set, "the restoring moment about the front toe", fs)).
-		WithNote("passive resistance ignored in overturning"), nil
+		WithNote("earth pressures on the front and back faces ignored in overturning"), nil
 }
 
 func (a AnchorBlock) uplift(pulls []Pull, ld blockLoads, set actionSet, fs float64) check.Result {

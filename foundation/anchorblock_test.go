@@ -1,0 +1,289 @@
+package foundation_test
+
+import (
+	"errors"
+	"math"
+	"strings"
+	"testing"
+
+	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/foundation"
+	"github.com/sagspan/sagspan/units"
+)
+
+const kNm3 = units.KilonewtonPerCubicMetre
+
+func testBlock() foundation.AnchorBlock {
+	return foundation.AnchorBlock{Length: 3, Width: 2.5, Height: 1.5, Depth: 1.5}
+}
+
+func testSand() foundation.Soil {
+	return foundation.Soil{Name: "invented dense sand", UnitWeight: 19 * kNm3, Friction: deg(36)}
+}
+
+func testPull() foundation.Pull {
+	return foundation.Pull{Force: 80 * units.Kilonewton, Angle: deg(25), X: 2.5, Z: 1.2}
+}
+
+func TestAnchorBlockHand(t *testing.T) {
+	// Hand calculation by statics (common-practice model stated in the doc
+	// comment), kN and m: W = 24·3·2.5·1.5 = 270; Fx = 80 cos25 = 72.5046,
+	// Fz = 80 sin25 = 33.8095; δ = ⅔·36° = 24°.
+	fx, fz := 80*math.Cos(25*math.Pi/180), 80*math.Sin(25*math.Pi/180)
+	w := 24.0 * 3 * 2.5 * 1.5
+	n := w - fz
+	tanD := math.Tan(24 * math.Pi / 180)
+	rs, err := testBlock().Check([]foundation.Pull{testPull()}, testSand(), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	noNaN(t, rs)
+	slide := byID(t, rs, "anchor.sliding")
+	near(t, "sliding provided", slide.Provided, n*tanD/fx, 1e-9) // 1.4504: fails 1.5
+	if slide.Status != check.Fail || slide.Required != 1.5 {
+		t.Errorf("sliding %v required %v, want FAIL at 1.5", slide.Status, slide.Required)
+	}
+	over := byID(t, rs, "anchor.overturning")
+	near(t, "overturning provided", over.Provided, w*1.5/(fx*1.2+fz*0.5), 1e-9) // 3.898
+	if over.Required != 1.5 {
+		t.Errorf("overturning required %v, want 1.5 for anchors", over.Required)
+	}
+	lift := byID(t, rs, "anchor.uplift")
+	near(t, "uplift provided", lift.Provided, w/fz, 1e-9)
+	// Bearing: e = (Fx·1.2 + Fz·(1.5 − 2.5))/N from the base centre; the
+	// effective base is (3 − 2e) × 2.5.
+	e := (fx*1.2 - fz) / n
+	bear := byID(t, rs, "anchor.bearing")
+	near(t, "bearing demand", bear.Demand/1e3, n/((3-2*e)*2.5), 1e-9)
+	br, err := foundation.BearingCapacity(foundation.BearingInput{B: 3, L: 2.5, Depth: 1.5,
+		Vertical: units.Force(n * 1e3), Horizontal: units.Force(fx * 1e3), EccB: units.Length(e)}, testSand(), foundation.EC7)
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "bearing capacity", bear.Capacity, float64(br.Qult)/3, 1e-9)
+
+	// With half the passive resistance mobilised: Kp = tan²63°, Ka =
+	// tan²27°, Pp = ½Kp·19·1.5²·2.5, Pa likewise; the active thrust is
+	// added to the driving force.
+	blk := testBlock()
+	blk.PassiveMobilisation = 0.5
+	kp, ka := math.Pow(math.Tan(63*math.Pi/180), 2), math.Pow(math.Tan(27*math.Pi/180), 2)
+	pp, pa := 0.5*kp*19*2.25*2.5, 0.5*ka*19*2.25*2.5
+	rs, err = blk.Check([]foundation.Pull{testPull()}, testSand(), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "sliding with passive", byID(t, rs, "anchor.sliding").Provided, (n*tanD+0.5*pp)/(fx+pa), 1e-9) // 2.409
+	// Overturning ignores earth pressures on both faces.
+	near(t, "overturning unchanged", byID(t, rs, "anchor.overturning").Provided, w*1.5/(fx*1.2+fz*0.5), 1e-9)
+}
+
+func TestAnchorBlockPartialHand(t *testing.T) {
+	// EN 1997-1 Annex A [R, SOURCES §4]: EQU γG,dst 1.1, γG,stb 0.9,
+	// γQ,dst 1.5. A permanent and a variable part of the pull.
+	perm, vari := testPull(), testPull()
+	perm.Force, vari.Force = 60*units.Kilonewton, 20*units.Kilonewton
+	vari.Variable = true
+	rs, err := testBlock().Check([]foundation.Pull{perm, vari}, testSand(), &foundation.Basis{PartialFactors: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	noNaN(t, rs)
+	s := math.Sin(25 * math.Pi / 180)
+	c := math.Cos(25 * math.Pi / 180)
+	lift := byID(t, rs, "anchor.uplift")
+	near(t, "EQU uplift", lift.Provided, 0.9*270/((1.1*60+1.5*20)*s), 1e-9)
+	if lift.Required != 1 {
+		t.Errorf("partial required %v, want 1", lift.Required)
+	}
+	over := byID(t, rs, "anchor.overturning")
+	near(t, "EQU overturning", over.Provided, 0.9*270*1.5/((1.1*60+1.5*20)*(c*1.2+s*0.5)), 1e-9)
+	// DA2 sliding: A1 γG 1.35, γQ 1.5 on the pull, weight 1.0, M1, R2 γR,h 1.1.
+	slide := byID(t, rs, "anchor.sliding")
+	fxd := (1.35*60 + 1.5*20) * c
+	nd := 270 - (1.35*60+1.5*20)*s
+	near(t, "DA2 sliding", slide.Provided, nd*math.Tan(24*math.Pi/180)/1.1/fxd, 1e-9)
+	if !strings.Contains(slide.Basis, "DA2") {
+		t.Errorf("basis %q", slide.Basis)
+	}
+	// DA1: combination 2 (M2 on tan φ') governs sliding here.
+	rs1, err := testBlock().Check([]foundation.Pull{perm, vari}, testSand(), &foundation.Basis{PartialFactors: true, Approach: foundation.DesignApproach1})
+	if err != nil {
+		t.Fatal(err)
+	}
+	s1 := byID(t, rs1, "anchor.sliding")
+	phid := math.Atan(math.Tan(36*math.Pi/180) / 1.25)
+	c1 := (270 - (1.35*60+1.5*20)*s) * math.Tan(24*math.Pi/180) / ((1.35*60 + 1.5*20) * c)
+	c2 := (270 - (60+1.3*20)*s) * math.Tan(2.0/3*phid) / ((60 + 1.3*20) * c)
+	near(t, "DA1 sliding", s1.Provided, math.Min(c1, c2), 1e-9)
+}
+
+func TestAnchorBlockZeroPull(t *testing.T) {
+	for _, b := range []*foundation.Basis{nil, {PartialFactors: true}, {PartialFactors: true, Approach: foundation.DesignApproach1}} {
+		for _, pulls := range [][]foundation.Pull{nil, {{Angle: deg(30), X: 1, Z: 1}}} {
+			rs, err := testBlock().Check(pulls, testSand(), b)
+			if err != nil {
+				t.Fatal(err)
+			}
+			noNaN(t, rs)
+			for _, r := range rs {
+				if r.Status != check.Pass {
+					t.Errorf("%s: %v with no pull", r.ID, r.Status)
+				}
+				if r.ID != "anchor.bearing" && !math.IsInf(r.Provided, 1) {
+					t.Errorf("%s: provided %v with no pull, want +Inf", r.ID, r.Provided)
+				}
+			}
+		}
+	}
+}
+
+func TestAnchorBlockLargerNeverWorse(t *testing.T) {
+	pulls := []foundation.Pull{testPull(), {Force: 30 * units.Kilonewton, Angle: deg(35), X: 1, Z: 0.5, Variable: true}}
+	grow := []struct {
+		name string
+		f    func(*foundation.AnchorBlock, float64)
+	}{
+		{"length", func(a *foundation.AnchorBlock, x float64) { a.Length += units.Length(x) }},
+		{"width", func(a *foundation.AnchorBlock, x float64) { a.Width += units.Length(x) }},
+		{"height", func(a *foundation.AnchorBlock, x float64) { a.Height += units.Length(x); a.Depth += units.Length(x) }},
+		{"cover", func(a *foundation.AnchorBlock, x float64) { a.Depth += units.Length(x) }},
+	}
+	for _, mu := range []float64{0, 0.5} {
+		for _, b := range []*foundation.Basis{nil, {PartialFactors: true}} {
+			for _, g := range grow {
+				prev := map[string]float64{}
+				for step := 0.0; step <= 2; step += 0.25 {
+					blk := testBlock()
+					blk.PassiveMobilisation = mu
+					g.f(&blk, step)
+					rs, err := blk.Check(pulls, testSand(), b)
+					if err != nil {
+						t.Fatal(err)
+					}
+					noNaN(t, rs)
+					for _, id := range []string{"anchor.sliding", "anchor.overturning", "anchor.uplift"} {
+						p := byID(t, rs, id).Provided
+						if old, ok := prev[id]; ok && p < old*(1-1e-12) {
+							t.Errorf("μ %v basis %v: larger %s (+%v m) lowered %s from %v to %v", mu, b, g.name, step, id, old, p)
+						}
+						prev[id] = p
+					}
+					// A larger plan never raises the bearing ratio (a taller
+					// block is heavier and may).
+					if g.name == "length" || g.name == "width" {
+						r := byID(t, rs, "anchor.bearing").Ratio
+						if old, ok := prev["bearing"]; ok && r > old*(1+1e-12) {
+							t.Errorf("μ %v basis %v: larger %s (+%v m) raised the bearing ratio from %v to %v", mu, b, g.name, step, old, r)
+						}
+						prev["bearing"] = r
+					}
+				}
+			}
+		}
+	}
+}
+
+func TestAnchorBlockLinearity(t *testing.T) {
+	// Horizontal pull, no passive: sliding and overturning factors scale
+	// as 1/F; splitting a pull into two at the same point changes nothing.
+	one := foundation.Pull{Force: 50 * units.Kilonewton, X: 2, Z: 1}
+	rs1, _ := testBlock().Check([]foundation.Pull{one}, testSand(), nil)
+	two := one
+	two.Force *= 2
+	rs2, _ := testBlock().Check([]foundation.Pull{two}, testSand(), nil)
+	rsSplit, _ := testBlock().Check([]foundation.Pull{one, one}, testSand(), nil)
+	for _, id := range []string{"anchor.sliding", "anchor.overturning"} {
+		near(t, id+" scaling", byID(t, rs2, id).Provided, byID(t, rs1, id).Provided/2, 1e-12)
+		near(t, id+" split", byID(t, rsSplit, id).Provided, byID(t, rs2, id).Provided, 1e-12)
+	}
+	near(t, "bearing split", byID(t, rsSplit, "anchor.bearing").Ratio, byID(t, rs2, "anchor.bearing").Ratio, 1e-12)
+}
+
+func TestAnchorBlockEdgeCases(t *testing.T) {
+	// A pull that lifts the block: uplift fails, bearing passes with a note.
+	big := foundation.Pull{Force: 1000 * units.Kilonewton, Angle: deg(80), X: 1.5, Z: 1.5}
+	rs, err := testBlock().Check([]foundation.Pull{big}, testSand(), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	noNaN(t, rs)
+	if byID(t, rs, "anchor.uplift").Status != check.Fail {
+		t.Error("uplift should fail")
+	}
+	if b := byID(t, rs, "anchor.bearing"); b.Status != check.Pass || len(b.Notes) == 0 {
+		t.Errorf("bearing on lift-off: %v %v", b.Status, b.Notes)
+	}
+	// A horizontal pull high on a light slab: resultant outside the base.
+	slab := foundation.AnchorBlock{Length: 1, Width: 1, Height: 3, Depth: 0}
+	rs, err = slab.Check([]foundation.Pull{{Force: 60 * units.Kilonewton, X: 1, Z: 3}}, testSand(), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	noNaN(t, rs)
+	if b := byID(t, rs, "anchor.bearing"); b.Status != check.Fail || !strings.Contains(strings.Join(b.Notes, " "), "outside") {
+		t.Errorf("outside base: %v %v", b.Status, b.Notes)
+	}
+	// Groundwater at the surface lowers the uplift factor.
+	wet := testBlock()
+	wet.Groundwater = true
+	dry, _ := testBlock().Check([]foundation.Pull{testPull()}, testSand(), nil)
+	wt, err := wet.Check([]foundation.Pull{testPull()}, testSand(), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	// Buoyancy 9.81·3·2.5·1.5 kN off 270 kN.
+	near(t, "buoyant uplift", byID(t, wt, "anchor.uplift").Provided,
+		byID(t, dry, "anchor.uplift").Provided*(270-9.81*11.25)/270, 1e-9)
+	// A site allowable pressure replaces the bearing-capacity equation.
+	s := testSand()
+	s.Allowable = 150 * units.Kilopascal
+	rs, err = testBlock().Check([]foundation.Pull{testPull()}, s, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if b := byID(t, rs, "anchor.bearing"); b.Capacity != 150e3 {
+		t.Errorf("capacity %v, want the allowable 150 kPa", b.Capacity)
+	}
+}
+
+func TestAnchorBlockRejects(t *testing.T) {
+	good := testBlock()
+	cases := []struct {
+		name  string
+		blk   func(*foundation.AnchorBlock)
+		pull  func(*foundation.Pull)
+		basis *foundation.Basis
+	}{
+		{"zero length", func(a *foundation.AnchorBlock) { a.Length = 0 }, nil, nil},
+		{"NaN width", func(a *foundation.AnchorBlock) { a.Width = units.Length(math.NaN()) }, nil, nil},
+		{"negative depth", func(a *foundation.AnchorBlock) { a.Depth = -1 }, nil, nil},
+		{"mobilisation 2", func(a *foundation.AnchorBlock) { a.PassiveMobilisation = 2 }, nil, nil},
+		{"negative pull", nil, func(p *foundation.Pull) { p.Force = -1 }, nil},
+		{"angle 100", nil, func(p *foundation.Pull) { p.Angle = deg(100) }, nil},
+		{"point outside", nil, func(p *foundation.Pull) { p.X = 4 }, nil},
+		{"Inf Z", nil, func(p *foundation.Pull) { p.Z = units.Length(math.Inf(1)) }, nil},
+		{"factor below 1", nil, nil, &foundation.Basis{Sliding: 0.8}},
+		{"negative partial", nil, nil, &foundation.Basis{PartialFactors: true, GammaRh: -1}},
+		{"bad approach", nil, nil, &foundation.Basis{PartialFactors: true, Approach: 7}},
+	}
+	for _, c := range cases {
+		blk, p := good, testPull()
+		if c.blk != nil {
+			c.blk(&blk)
+		}
+		if c.pull != nil {
+			c.pull(&p)
+		}
+		rs, err := blk.Check([]foundation.Pull{p}, testSand(), c.basis)
+		if !errors.Is(err, foundation.ErrInvalid) || rs != nil {
+			t.Errorf("%s: err %v, results %d", c.name, err, len(rs))
+		}
+		if err != nil && !strings.HasPrefix(err.Error(), "foundation: ") {
+			t.Errorf("%s: message %q lacks the package prefix", c.name, err)
+		}
+	}
+	if _, err := good.Check(nil, foundation.Soil{UnitWeight: 18 * kNm3, Friction: deg(70)}, nil); !errors.Is(err, foundation.ErrInvalid) {
+		t.Errorf("φ 70: %v", err)
+	}
+}
