@@ -54,7 +54,7 @@ func TestLoadedConsistency(t *testing.T) {
 		{cable.Span{Length: 100, Rise: -12}, cable.Load{Uniform: 2000, Patches: []cable.Patch{{From: 50, To: 100, Load: 3000}}}, 400e3},
 		{cable.Span{Length: 60}, cable.Load{Patches: []cable.Patch{{From: 10, To: 25, Load: 5000}, {From: 20, To: 60, Load: 1000}}}, 150e3},
 		{cable.Span{Length: 60, Rise: 30}, cable.Load{Uniform: 500, Patches: []cable.Patch{{From: 0, To: 5, Load: 5000}}}, 150e3}, // vertex before A
-		{cable.Span{Length: 60, Rise: 30}, cable.Load{Patches: []cable.Patch{{From: 30, To: 60, Load: 1000}}}, 150e3},            // unloaded end: no vertex
+		{cable.Span{Length: 60, Rise: 30}, cable.Load{Patches: []cable.Patch{{From: 30, To: 60, Load: 1000}}}, 150e3},             // unloaded end: no vertex
 	} {
 		l, err := cable.NewLoaded(c.span, c.load, c.h)
 		if err != nil {
