@@ -312,13 +312,18 @@ func (m rcModel) momentAt(n float64) (float64, bool) {
 		return phi*p - n, phi * mo
 	}
 	best, found := math.Inf(1), false
-	s0 := 0.0
-	g0, m0 := -m.fy*m.as*m.phi(0)-n, 0.0 // the limit c → 0: all bars yield in tension
-	if m.plain {
-		g0 = -n
-	}
-	if g0 == 0 {
-		best, found = m0, true
+	// The limit c → 0: every bar yields in tension, the concrete carries nothing.
+	s0, g0 := 0.0, -n
+	if g0 == 0 || !m.plain {
+		var p0, m0 float64
+		for i, ar := range m.area {
+			p0 -= ar * m.fy
+			m0 -= ar * m.fy * (m.h/2 - m.dep[i])
+		}
+		g0 = m.phi(0)*p0 - n
+		if g0 == 0 {
+			best, found = m.phi(0)*m0, true
+		}
 	}
 	for k := 1; k <= rcSamples; k++ {
 		s1 := float64(k) / rcSamples
@@ -343,7 +348,7 @@ func (m rcModel) momentAt(n float64) (float64, bool) {
 			_, mm := g(0.5 * (lo + hi))
 			best, found = math.Min(best, mm), true
 		}
-		s0, g0, m0 = s1, g1, m1
+		s0, g0 = s1, g1
 	}
 	return math.Max(best, 0), found
 }

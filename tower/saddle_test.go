@@ -121,3 +121,16 @@ func TestSaddleErrors(t *testing.T) {
 		t.Errorf("fixed saddle under uplift: %v %v", lf, err)
 	}
 }
+
+func BenchmarkSaddleCombine(b *testing.B) {
+	s := tower.Saddle{Kind: tower.Sliding, Height: 3.2}
+	span, back := tower.Pull{Tension: kN(180), Angle: deg(12)}, tower.Pull{Tension: kN(185), Angle: deg(35)}
+	levels := make([]tower.LevelForce, 1)
+	b.ReportAllocs()
+	var sink tower.Resultant
+	for b.Loop() {
+		levels[0], _ = s.Force(span, back)
+		sink, _ = tower.Combine(levels, kN(90))
+	}
+	_ = sink
+}

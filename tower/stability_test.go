@@ -233,3 +233,15 @@ func TestStabilityFailures(t *testing.T) {
 		}
 	}
 }
+
+func BenchmarkStability(b *testing.B) {
+	col := tower.Column{Depth: 0.6, Width: 0.8, Height: 3.0}
+	ft := tower.Footing{Length: 2.2, Width: 1.6, Thickness: 0.6, Depth: 1.2}
+	r, _ := tower.Combine([]tower.LevelForce{{Height: 3, Vertical: kN(60), Horizontal: kN(30)}}, col.Weight())
+	b.ReportAllocs()
+	var sink []check.Result
+	for b.Loop() {
+		sink, _ = tower.Stability(r, col, ft, nil)
+	}
+	_ = sink
+}

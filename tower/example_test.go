@@ -1,0 +1,110 @@
+package tower_test
+
+import (
+	"fmt"
+
+	"github.com/sagspan/sagspan/tower"
+	"github.com/sagspan/sagspan/units"
+)
+
+// An invented footbridge bank: walkway ropes on a fixed saddle at 3.2 m and
+// handrail ropes on a sliding saddle at 4.3 m.
+func ExampleSaddle_Force() {
+	walk := tower.Saddle{Kind: tower.Fixed, Height: 3.2 * units.Metre}
+	lf, err := walk.Force(
+		tower.Pull{Tension: 180 * units.Kilonewton, Angle: units.FromDegrees(12)},
+		tower.Pull{Tension: 185 * units.Kilonewton, Angle: units.FromDegrees(35)})
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Printf("walkway: V %v down, H %v toward the span\n", lf.Vertical, lf.Horizontal)
+
+	rail := tower.Saddle{Kind: tower.Sliding, Friction: 0.15, Height: 4.3 * units.Metre}
+	span := tower.Pull{Tension: 40 * units.Kilonewton, Angle: units.FromDegrees(10)}
+	back := tower.Pull{Tension: 40 * units.Kilonewton, Angle: units.FromDegrees(40)}
+	lf, _ = rail.Force(span, back)
+	fmt.Printf("handrail: V %v down, H %v toward the span, slips %v\n", lf.Vertical, lf.Horizontal, rail.Slips(span, back))
+	// Output:
+	// walkway: V 143.5 kN down, H 24.52 kN toward the span
+	// handrail: V 32.66 kN down, H 4.899 kN toward the span, slips true
+}
+
+func ExampleEccentricityCheck() {
+	col := tower.Column{Depth: 0.9 * units.Metre, Width: 1.2 * units.Metre, Height: 3.5 * units.Metre, Facing: 0.1 * units.Metre}
+	levels := []tower.LevelForce{
+		{Height: 3.2 * units.Metre, Vertical: 144 * units.Kilonewton, Horizontal: 24.5 * units.Kilonewton},
+		{Height: 4.3 * units.Metre, Vertical: 32.7 * units.Kilonewton, Horizontal: 4.9 * units.Kilonewton},
+	}
+	r, err := tower.Combine(levels, col.Weight())
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Printf("V %v, H %v, angle %.2f deg, e %v\n", r.Vertical, r.Horizontal, r.Angle.Degrees(), r.BaseOffset)
+	res, err := tower.EccentricityCheck(r, col, nil)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Printf("%s: %s of %s, ratio %.3f, %s\n", res.ID, res.DemandString(), res.CapacityString(), res.Ratio, res.Status)
+	res, _ = tower.EccentricityCheck(r, col, &tower.EccentricityLimit{Fraction: 0.5, Offset: 0.1 * units.Metre})
+	fmt.Printf("user limit: %s of %s, ratio %.3f, %s\n", res.DemandString(), res.CapacityString(), res.Ratio, res.Status)
+	// Output:
+	// V 267.4 kN, H 29.40 kN, angle 6.27 deg, e 372.0 mm
+	// tower.eccentricity: 372.0 mm of 116.7 mm, ratio 3.188, FAIL
+	// user limit: 372.0 mm of 275.0 mm, ratio 1.353, FAIL
+}
+
+func ExampleStability() {
+	col := tower.Column{Depth: 0.9 * units.Metre, Width: 1.2 * units.Metre, Height: 3.5 * units.Metre}
+	ft := tower.Footing{Length: 2.4 * units.Metre, Width: 2.0 * units.Metre, Thickness: 0.7 * units.Metre, Depth: 1.2 * units.Metre,
+		SoilUnitWeight: 18 * units.KilonewtonPerCubicMetre}
+	r, _ := tower.Combine([]tower.LevelForce{
+		{Height: 3.2 * units.Metre, Vertical: 144 * units.Kilonewton, Horizontal: 24.5 * units.Kilonewton},
+	}, col.Weight())
+	results, err := tower.Stability(r, col, ft, &tower.StabilityFactors{AllowablePressure: 200 * units.Kilopascal})
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	for _, res := range results {
+		fmt.Printf("%-20s %10s %10s  ratio %.3f  %s\n", res.ID, res.DemandString(), res.CapacityString(), res.Ratio, res.Status)
+	}
+	a := ft.Actions(r, col)
+	fmt.Printf("base: V %v, H %v, M %v\n", a.Vertical, a.Horizontal, a.Moment)
+	// Output:
+	// tower.overturning    191.1 kN·m 418.6 kN·m  ratio 0.457  pass
+	// tower.sliding          36.75 kN   174.4 kN  ratio 0.211  pass
+	// tower.base_pressure   122.4 kPa  200.0 kPa  ratio 0.612  pass
+	// tower.base_resultant   273.9 mm    1.200 m  ratio 0.228  pass
+	// base: V 348.8 kN, H 24.50 kN, M 95.55 kN·m
+}
+
+func ExampleRCSection_Check() {
+	bar := 491 * units.SquareMillimetre // Ø25
+	s := tower.RCSection{B: 0.4 * units.Metre, H: 0.4 * units.Metre, Fc: 30 * units.Megapascal, Fy: 420 * units.Megapascal,
+		Bars: tower.RectangularBars(0.4*units.Metre, 0.4*units.Metre, 60*units.Millimetre, 2, 0, bar)}
+	res, err := s.Check(800*units.Kilonewton, 150*units.KilonewtonMetre)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Printf("%s: %s of %s, ratio %.3f, %s\n", res.ID, res.DemandString(), res.CapacityString(), res.Ratio, res.Status)
+	// Output:
+	// tower.column_section: 150.0 kN·m of 224.8 kN·m, ratio 0.667, pass
+}
+
+func ExampleTube_Check() {
+	t := tower.Tube{Shape: tower.Circular, Size: 219.1 * units.Millimetre, Wall: 8 * units.Millimetre,
+		Fy: 355 * units.Megapascal, E: 210 * units.Gigapascal, Code: tower.EN1993}
+	res, err := t.Check(400*units.Kilonewton, 40*units.KilonewtonMetre, 6*units.Metre)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Printf("%s: utilisation %.3f, %s\n%s\n", res.ID, res.Demand, res.Status, res.Notes[0])
+	// Output:
+	// tower.column_section: utilisation 0.738, pass
+	// class 1, λ̄ 1.051, χ 0.630; Nb,Rd 1186 kN, N_Rd 1883 kN, M_Rd 126.6 kN·m
+}
