@@ -68,7 +68,7 @@ func wedgeK(phi, delta, theta, beta float64, passive bool) float64 {
 	const gamma = 1.0
 	tx, ty := math.Tan(theta), 1.0
 	wl := math.Hypot(tx, ty)
-	w := [2]float64{tx / wl, ty / wl}  // up the wall
+	w := [2]float64{tx / wl, ty / wl}   // up the wall
 	mv := [2]float64{ty / wl, -tx / wl} // wall normal into the soil
 	sgn := 1.0
 	if passive {

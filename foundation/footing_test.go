@@ -1,0 +1,135 @@
+package foundation_test
+
+import (
+	"errors"
+	"math"
+	"testing"
+
+	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/foundation"
+	"github.com/sagspan/sagspan/units"
+)
+
+func testFooting() foundation.Footing {
+	return foundation.Footing{B: 2, L: 2, Thickness: 0.6, Depth: 1}
+}
+
+func testFootingLoad() foundation.FootingLoad {
+	return foundation.FootingLoad{Vertical: 300 * units.Kilonewton, Horizontal: 40 * units.Kilonewton, Moment: 80 * units.KilonewtonMetre}
+}
+
+func TestFootingHand(t *testing.T) {
+	// Hand calculation by statics, kN and m: pad 24·2·2·0.6 = 57.6, soil
+	// on it 18·2·2·0.4 = 28.8, N = 386.4; δ = 20°.
+	n := 300 + 57.6 + 28.8
+	rs, err := testFooting().Check(testFootingLoad(), sand30(), foundation.EC7, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	noNaN(t, rs)
+	near(t, "sliding", byID(t, rs, "footing.sliding").Provided, n*math.Tan(20*math.Pi/180)/40, 1e-9)
+	over := byID(t, rs, "footing.overturning")
+	near(t, "overturning", over.Provided, n*1/80, 1e-9)
+	if over.Required != 2 {
+		t.Errorf("footing overturning required %v, want 2.0", over.Required)
+	}
+	e := 80 / n
+	bear := byID(t, rs, "footing.bearing")
+	near(t, "bearing demand", bear.Demand/1e3, n/((2-2*e)*2), 1e-9)
+	br, err := foundation.BearingCapacity(foundation.BearingInput{B: 2, L: 2, Depth: 1, Vertical: units.Force(n * 1e3),
+		Horizontal: 40e3, EccB: units.Length(e)}, sand30(), foundation.EC7)
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "bearing capacity", bear.Capacity, float64(br.Qult)/3, 1e-9)
+
+	// EQU overturning with a quarter of each load variable (EN 1997-1
+	// Annex A: γG,dst 1.1, γQ,dst 1.5, γG,stb 0.9; favourable variable 0).
+	ld := testFootingLoad()
+	ld.VariableShare = 0.25
+	rs, err = testFooting().Check(ld, sand30(), foundation.EC7, &foundation.Basis{PartialFactors: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	noNaN(t, rs)
+	near(t, "EQU overturning", byID(t, rs, "footing.overturning").Provided, (0.9*86.4+0.75*0.9*300)/((0.75*1.1+0.25*1.5)*80), 1e-9)
+}
+
+func TestFootingConsistency(t *testing.T) {
+	// No horizontal load or moment: infinite sliding and overturning factors.
+	rs, err := testFooting().Check(foundation.FootingLoad{Vertical: 200e3}, sand30(), foundation.Vesic, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	noNaN(t, rs)
+	for _, id := range []string{"footing.sliding", "footing.overturning"} {
+		if r := byID(t, rs, id); !math.IsInf(r.Provided, 1) || r.Status != check.Pass {
+			t.Errorf("%s: %v %v", id, r.Provided, r.Status)
+		}
+	}
+	// Mirrored load (H and M reversed) gives the same results.
+	ld := testFootingLoad()
+	a, _ := testFooting().Check(ld, sand30(), foundation.Hansen, nil)
+	ld.Horizontal, ld.Moment = -ld.Horizontal, -ld.Moment
+	b, _ := testFooting().Check(ld, sand30(), foundation.Hansen, nil)
+	for i := range a {
+		near(t, a[i].ID+" mirrored", b[i].Ratio, a[i].Ratio, 1e-12)
+	}
+	// A wider footing never does worse, for every method and basis.
+	for m := foundation.Terzaghi; m <= foundation.EC7; m++ {
+		for _, bs := range []*foundation.Basis{nil, {PartialFactors: true}, {PartialFactors: true, Approach: foundation.DesignApproach1}} {
+			prev := map[string]float64{}
+			for w := 2.0; w <= 4; w += 0.25 {
+				f := testFooting()
+				f.B, f.L = units.Length(w), units.Length(w)
+				rs, err := f.Check(testFootingLoad(), sand30(), m, bs)
+				if err != nil {
+					t.Fatal(err)
+				}
+				noNaN(t, rs)
+				for _, r := range rs {
+					if old, ok := prev[r.ID]; ok && r.Ratio > old*(1+1e-12) {
+						t.Errorf("%v %v: width %v raised %s from %v to %v", m, bs, w, r.ID, old, r.Ratio)
+					}
+					prev[r.ID] = r.Ratio
+				}
+			}
+		}
+	}
+	// Net uplift: overturning fails, bearing passes with a note.
+	rs, err = testFooting().Check(foundation.FootingLoad{Vertical: -200e3, Moment: 10e3}, sand30(), foundation.EC7, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	noNaN(t, rs)
+	if byID(t, rs, "footing.overturning").Status != check.Fail || len(byID(t, rs, "footing.bearing").Notes) == 0 {
+		t.Errorf("uplift: %+v", rs)
+	}
+	// Moment pushing the resultant outside the base fails bearing, no error.
+	rs, err = testFooting().Check(foundation.FootingLoad{Vertical: 100e3, Moment: 400e3}, sand30(), foundation.EC7, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if byID(t, rs, "footing.bearing").Status != check.Fail {
+		t.Error("resultant outside the base should fail bearing")
+	}
+}
+
+func TestFootingRejects(t *testing.T) {
+	cases := []struct {
+		f  foundation.Footing
+		ld foundation.FootingLoad
+		m  foundation.Method
+	}{
+		{foundation.Footing{B: 0, L: 2, Thickness: 0.5, Depth: 1}, testFootingLoad(), foundation.EC7},
+		{foundation.Footing{B: 2, L: 2, Thickness: 0.5, Depth: -1}, testFootingLoad(), foundation.EC7},
+		{testFooting(), foundation.FootingLoad{Vertical: units.Force(math.NaN())}, foundation.EC7},
+		{testFooting(), foundation.FootingLoad{Vertical: 1, VariableShare: 1.2}, foundation.EC7},
+		{testFooting(), testFootingLoad(), foundation.Method(12)},
+	}
+	for i, c := range cases {
+		if _, err := c.f.Check(c.ld, sand30(), c.m, nil); !errors.Is(err, foundation.ErrInvalid) {
+			t.Errorf("case %d: %v", i, err)
+		}
+	}
+}
