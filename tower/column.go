@@ -31,22 +31,22 @@ type Column struct {
 }
 
 func (c Column) validate() error {
-	if err := positive("Column.Depth", c.Depth, float64(c.Depth)); err != nil {
+	if err := positive("Column.Depth", c.Depth); err != nil {
 		return err
 	}
-	if err := positive("Column.Width", c.Width, float64(c.Width)); err != nil {
+	if err := positive("Column.Width", c.Width); err != nil {
 		return err
 	}
-	if err := positive("Column.Height", c.Height, float64(c.Height)); err != nil {
+	if err := positive("Column.Height", c.Height); err != nil {
 		return err
 	}
-	if err := nonNegative("Column.Facing", c.Facing, float64(c.Facing)); err != nil {
+	if err := nonNegative("Column.Facing", c.Facing); err != nil {
 		return err
 	}
 	if 2*c.Facing >= min(c.Depth, c.Width) {
 		return invalid("Column.Facing", c.Facing, "leaves no effective section (twice the facing reaches the smaller side)")
 	}
-	return nonNegative("Column.UnitWeight", c.UnitWeight, float64(c.UnitWeight))
+	return nonNegative("Column.UnitWeight", c.UnitWeight)
 }
 
 func (c Column) unitWeight() units.UnitWeight {

@@ -35,7 +35,7 @@ func (l *EccentricityLimit) allowed(deff units.Length) (units.Length, string, er
 	if !finite(f) || f < 0 || f > 1 {
 		return 0, "", invalid("EccentricityLimit.Fraction", l.Fraction, "must lie between 0 and 1")
 	}
-	if err := isFinite("EccentricityLimit.Offset", l.Offset, float64(l.Offset)); err != nil {
+	if err := isFinite("EccentricityLimit.Offset", l.Offset); err != nil {
 		return 0, "", err
 	}
 	a := units.Length(f)*deff/2 + l.Offset

@@ -4,6 +4,8 @@ import (
 	"errors"
 	"fmt"
 	"math"
+
+	"github.com/sagspan/sagspan/units"
 )
 
 // Sentinel errors wrapped by every error this package returns, for use with
@@ -28,25 +30,28 @@ func invalid(field string, value any, why string) error {
 
 func finite(x float64) bool { return !math.IsNaN(x) && !math.IsInf(x, 0) }
 
+// The checks below are generic so that a valid value is never boxed into an
+// interface: validation on the hot path does not allocate.
+
 // positive checks that x is finite and > 0.
-func positive(field string, x any, v float64) error {
-	if !finite(v) || v <= 0 {
+func positive[T units.Quantity](field string, x T) error {
+	if v := float64(x); !finite(v) || v <= 0 {
 		return invalid(field, x, "must be a positive finite number")
 	}
 	return nil
 }
 
 // nonNegative checks that x is finite and >= 0.
-func nonNegative(field string, x any, v float64) error {
-	if !finite(v) || v < 0 {
+func nonNegative[T units.Quantity](field string, x T) error {
+	if v := float64(x); !finite(v) || v < 0 {
 		return invalid(field, x, "must be zero or a positive finite number")
 	}
 	return nil
 }
 
 // isFinite checks that x is finite.
-func isFinite(field string, x any, v float64) error {
-	if !finite(v) {
+func isFinite[T units.Quantity](field string, x T) error {
+	if !finite(float64(x)) {
 		return invalid(field, x, "must be finite")
 	}
 	return nil

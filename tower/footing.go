@@ -26,25 +26,25 @@ type Footing struct {
 }
 
 func (f Footing) validate(c Column) error {
-	if err := positive("Footing.Length", f.Length, float64(f.Length)); err != nil {
+	if err := positive("Footing.Length", f.Length); err != nil {
 		return err
 	}
-	if err := positive("Footing.Width", f.Width, float64(f.Width)); err != nil {
+	if err := positive("Footing.Width", f.Width); err != nil {
 		return err
 	}
-	if err := positive("Footing.Thickness", f.Thickness, float64(f.Thickness)); err != nil {
+	if err := positive("Footing.Thickness", f.Thickness); err != nil {
 		return err
 	}
-	if err := nonNegative("Footing.Depth", f.Depth, float64(f.Depth)); err != nil {
+	if err := nonNegative("Footing.Depth", f.Depth); err != nil {
 		return err
 	}
-	if err := nonNegative("Footing.UnitWeight", f.UnitWeight, float64(f.UnitWeight)); err != nil {
+	if err := nonNegative("Footing.UnitWeight", f.UnitWeight); err != nil {
 		return err
 	}
-	if err := nonNegative("Footing.SoilUnitWeight", f.SoilUnitWeight, float64(f.SoilUnitWeight)); err != nil {
+	if err := nonNegative("Footing.SoilUnitWeight", f.SoilUnitWeight); err != nil {
 		return err
 	}
-	if err := isFinite("Footing.ColumnOffset", f.ColumnOffset, float64(f.ColumnOffset)); err != nil {
+	if err := isFinite("Footing.ColumnOffset", f.ColumnOffset); err != nil {
 		return err
 	}
 	if math.Abs(float64(f.ColumnOffset))+float64(c.Depth)/2 > float64(f.Length)/2*(1+1e-12) || c.Width > f.Width {

@@ -107,31 +107,31 @@ func (s RCSection) Turned() RCSection {
 }
 
 func (s RCSection) validate() error {
-	if err := positive("RCSection.B", s.B, float64(s.B)); err != nil {
+	if err := positive("RCSection.B", s.B); err != nil {
 		return err
 	}
-	if err := positive("RCSection.H", s.H, float64(s.H)); err != nil {
+	if err := positive("RCSection.H", s.H); err != nil {
 		return err
 	}
-	if err := positive("RCSection.Fc", s.Fc, float64(s.Fc)); err != nil {
+	if err := positive("RCSection.Fc", s.Fc); err != nil {
 		return err
 	}
 	if s.Code != ACI318 && s.Code != EN1992 {
 		return invalid("RCSection.Code", int(s.Code), "is not ACI318 or EN1992")
 	}
 	if len(s.Bars) > 0 {
-		if err := positive("RCSection.Fy", s.Fy, float64(s.Fy)); err != nil {
+		if err := positive("RCSection.Fy", s.Fy); err != nil {
 			return err
 		}
 	}
-	if err := nonNegative("RCSection.Es", s.Es, float64(s.Es)); err != nil {
+	if err := nonNegative("RCSection.Es", s.Es); err != nil {
 		return err
 	}
 	for _, f := range []struct {
 		n string
 		v float64
 	}{{"RCSection.AlphaCC", s.AlphaCC}, {"RCSection.GammaC", s.GammaC}, {"RCSection.GammaS", s.GammaS}} {
-		if err := nonNegative(f.n, f.v, f.v); err != nil {
+		if err := nonNegative(f.n, units.Ratio(f.v)); err != nil {
 			return err
 		}
 	}
@@ -140,13 +140,12 @@ func (s RCSection) validate() error {
 	}
 	var as float64
 	for i, b := range s.Bars {
-		name := "RCSection.Bars[" + strconv.Itoa(i) + "]"
-		if err := positive(name+".Area", b.Area, float64(b.Area)); err != nil {
-			return err
+		if a := float64(b.Area); !finite(a) || a <= 0 {
+			return positive("RCSection.Bars["+strconv.Itoa(i)+"].Area", b.Area)
 		}
 		if !finite(float64(b.X)) || !finite(float64(b.Y)) ||
 			math.Abs(float64(b.X)) >= float64(s.B)/2 || math.Abs(float64(b.Y)) >= float64(s.H)/2 {
-			return invalid(name, fmt.Sprintf("(%v, %v)", b.X, b.Y), "lies outside the section")
+			return invalid("RCSection.Bars["+strconv.Itoa(i)+"]", fmt.Sprintf("(%v, %v)", b.X, b.Y), "lies outside the section")
 		}
 		as += float64(b.Area)
 	}
@@ -419,7 +418,7 @@ func (s RCSection) MomentCapacity(n units.Force) (positive, negative units.Momen
 	if err := s.validate(); err != nil {
 		return 0, 0, err
 	}
-	if err := isFinite("axial force", n, float64(n)); err != nil {
+	if err := isFinite("axial force", n); err != nil {
 		return 0, 0, err
 	}
 	var out [2]units.Moment
@@ -459,10 +458,10 @@ func (s RCSection) Check(n units.Force, m units.Moment) (check.Result, error) {
 	if err := s.validate(); err != nil {
 		return check.Result{}, err
 	}
-	if err := isFinite("axial force", n, float64(n)); err != nil {
+	if err := isFinite("axial force", n); err != nil {
 		return check.Result{}, err
 	}
-	if err := isFinite("moment", m, float64(m)); err != nil {
+	if err := isFinite("moment", m); err != nil {
 		return check.Result{}, err
 	}
 	md := s.model(m < 0)

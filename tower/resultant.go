@@ -58,27 +58,31 @@ type Resultant struct {
 // presses on the base; non-finite values and negative heights or
 // self-weight give ErrInvalid.
 func Combine(levels []LevelForce, selfWeight units.Force) (Resultant, error) {
-	if err := nonNegative("selfWeight", selfWeight, float64(selfWeight)); err != nil {
+	if err := nonNegative("selfWeight", selfWeight); err != nil {
 		return Resultant{}, err
 	}
 	var v, h, m float64
 	for i, l := range levels {
+		if y := float64(l.Height); finite(y) && y >= 0 && finite(float64(l.Offset)) &&
+			finite(float64(l.Vertical)) && finite(float64(l.Horizontal)) {
+			v += float64(l.Vertical)
+			h += float64(l.Horizontal)
+			m += float64(l.Horizontal)*float64(l.Height) + float64(l.Vertical)*float64(l.Offset)
+			continue
+		}
 		name := "levels[" + strconv.Itoa(i) + "]"
-		if err := nonNegative(name+".Height", l.Height, float64(l.Height)); err != nil {
+		if err := nonNegative(name+".Height", l.Height); err != nil {
 			return Resultant{}, err
 		}
-		if err := isFinite(name+".Offset", l.Offset, float64(l.Offset)); err != nil {
+		if err := isFinite(name+".Offset", l.Offset); err != nil {
 			return Resultant{}, err
 		}
-		if err := isFinite(name+".Vertical", l.Vertical, float64(l.Vertical)); err != nil {
+		if err := isFinite(name+".Vertical", l.Vertical); err != nil {
 			return Resultant{}, err
 		}
-		if err := isFinite(name+".Horizontal", l.Horizontal, float64(l.Horizontal)); err != nil {
+		if err := isFinite(name+".Horizontal", l.Horizontal); err != nil {
 			return Resultant{}, err
 		}
-		v += float64(l.Vertical)
-		h += float64(l.Horizontal)
-		m += float64(l.Horizontal)*float64(l.Height) + float64(l.Vertical)*float64(l.Offset)
 	}
 	if !finite(v) || !finite(h) || !finite(m) {
 		return Resultant{}, invalid("levels", len(levels), "sum to a force or moment that is not finite")
@@ -114,11 +118,11 @@ func (r Resultant) validate() error {
 		v    float64
 	}{{"Resultant.Vertical", float64(r.Vertical)}, {"Resultant.Horizontal", float64(r.Horizontal)},
 		{"Resultant.BaseMoment", float64(r.BaseMoment)}, {"Resultant.SelfWeight", float64(r.SelfWeight)}} {
-		if err := isFinite(f.name, f.v, f.v); err != nil {
+		if err := isFinite(f.name, units.Ratio(f.v)); err != nil {
 			return err
 		}
 	}
-	return nonNegative("Resultant.SelfWeight", r.SelfWeight, float64(r.SelfWeight))
+	return nonNegative("Resultant.SelfWeight", r.SelfWeight)
 }
 
 // OffsetAt returns the horizontal position, from the column axis toward the

@@ -16,8 +16,8 @@ type Pull struct {
 }
 
 func (p Pull) validate(name string) error {
-	if err := nonNegative(name+".Tension", p.Tension, float64(p.Tension)); err != nil {
-		return err
+	if t := float64(p.Tension); !finite(t) || t < 0 {
+		return nonNegative(name+".Tension", p.Tension)
 	}
 	a := float64(p.Angle)
 	if !finite(a) || math.Abs(a) >= math.Pi/2 {
@@ -78,13 +78,13 @@ func (s Saddle) validate() error {
 	if s.Kind < Fixed || s.Kind > Roller {
 		return invalid("Saddle.Kind", int(s.Kind), "is not Fixed, Sliding or Roller")
 	}
-	if err := nonNegative("Saddle.Friction", s.Friction, s.Friction); err != nil {
+	if err := nonNegative("Saddle.Friction", units.Ratio(s.Friction)); err != nil {
 		return err
 	}
-	if err := nonNegative("Saddle.Height", s.Height, float64(s.Height)); err != nil {
+	if err := nonNegative("Saddle.Height", s.Height); err != nil {
 		return err
 	}
-	return isFinite("Saddle.Offset", s.Offset, float64(s.Offset))
+	return isFinite("Saddle.Offset", s.Offset)
 }
 
 func (s Saddle) friction() float64 {

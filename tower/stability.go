@@ -47,10 +47,10 @@ func (sf *StabilityFactors) values() (fo, fs, mu float64, qa units.Pressure, err
 	if !finite(fs) || fs < 1 {
 		return 0, 0, 0, 0, invalid("StabilityFactors.Sliding", sf.Sliding, "must be at least 1")
 	}
-	if err := positive("StabilityFactors.Friction", sf.Friction, mu); err != nil {
+	if err := positive("StabilityFactors.Friction", units.Ratio(mu)); err != nil {
 		return 0, 0, 0, 0, err
 	}
-	if err := nonNegative("StabilityFactors.AllowablePressure", sf.AllowablePressure, float64(sf.AllowablePressure)); err != nil {
+	if err := nonNegative("StabilityFactors.AllowablePressure", sf.AllowablePressure); err != nil {
 		return 0, 0, 0, 0, err
 	}
 	return fo, fs, mu, sf.AllowablePressure, nil

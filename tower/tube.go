@@ -75,23 +75,23 @@ func (t Tube) validate() error {
 	if t.Code != AISC360 && t.Code != EN1993 {
 		return invalid("Tube.Code", int(t.Code), "is not AISC360 or EN1993")
 	}
-	if err := positive("Tube.Size", t.Size, float64(t.Size)); err != nil {
+	if err := positive("Tube.Size", t.Size); err != nil {
 		return err
 	}
-	if err := positive("Tube.Wall", t.Wall, float64(t.Wall)); err != nil {
+	if err := positive("Tube.Wall", t.Wall); err != nil {
 		return err
 	}
 	if 2*t.Wall >= t.Size {
 		return invalid("Tube.Wall", t.Wall, "must be less than half the size")
 	}
-	if err := positive("Tube.Fy", t.Fy, float64(t.Fy)); err != nil {
+	if err := positive("Tube.Fy", t.Fy); err != nil {
 		return err
 	}
 	for _, f := range []struct {
 		n string
 		v float64
 	}{{"Tube.E", float64(t.E)}, {"Tube.GammaM0", t.GammaM0}, {"Tube.GammaM1", t.GammaM1}} {
-		if err := nonNegative(f.n, f.v, f.v); err != nil {
+		if err := nonNegative(f.n, units.Ratio(f.v)); err != nil {
 			return err
 		}
 	}
@@ -281,7 +281,7 @@ func (t Tube) CompressionCapacity(lc units.Length) (units.Force, error) {
 	if err := t.validate(); err != nil {
 		return 0, err
 	}
-	if err := positive("effective length", lc, float64(lc)); err != nil {
+	if err := positive("effective length", lc); err != nil {
 		return 0, err
 	}
 	c, err := t.caps(float64(lc))
@@ -313,13 +313,13 @@ func (t Tube) Check(n units.Force, m units.Moment, effLength units.Length) (chec
 	if err := t.validate(); err != nil {
 		return check.Result{}, err
 	}
-	if err := positive("effective length", effLength, float64(effLength)); err != nil {
+	if err := positive("effective length", effLength); err != nil {
 		return check.Result{}, err
 	}
-	if err := isFinite("axial force", n, float64(n)); err != nil {
+	if err := isFinite("axial force", n); err != nil {
 		return check.Result{}, err
 	}
-	if err := isFinite("moment", m, float64(m)); err != nil {
+	if err := isFinite("moment", m); err != nil {
 		return check.Result{}, err
 	}
 	c, err := t.caps(float64(effLength))
