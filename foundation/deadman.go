@@ -50,11 +50,14 @@ func (d Deadman) validate() error {
 //
 //	near the surface (Height ≥ Depth/2): T = Length (Pp − Pa) over 0 … Depth
 //	   + with EndEffects: ⅓ K0 γ (√Kp + √Ka) Depth³ tan φ
-//	deeper:                              T = Length (Pp − Pa) over the face only (cautious)
+//	deeper: the larger of Length (Pp − Pa) over the face only and the
+//	   near-surface value at Depth = 2·Height
 //
 // with Rankine coefficients for level ground and Bell's cohesion terms, the
-// active side's tension cut off. The second return value tells which form
-// was used.
+// active side's tension cut off. The deeper form is this package's cautious
+// choice (a deeper deadman is never taken as weaker than a shallower one);
+// deep anchors have larger capacities by other methods. The second return
+// value tells which form was used.
 func (d Deadman) Resistance(s Soil) (units.Force, string, error) {
 	if err := d.validate(); err != nil {
 		return 0, "", err
@@ -62,29 +65,52 @@ func (d Deadman) Resistance(s Soil) (units.Force, string, error) {
 	if err := s.Validate(); err != nil {
 		return 0, "", err
 	}
-	top := d.Depth - d.Height
-	how := "face only (deep deadman: cautious, common practice)"
-	near := d.Height >= d.Depth/2
-	if near {
-		top = 0
-		how = "Teng's continuous anchor near the surface (from memory)"
+	if d.Height >= d.Depth/2 {
+		t, err := d.teng(s, d.Depth)
+		how := "Teng's continuous anchor near the surface (from memory)"
+		if d.EndEffects {
+			how += ", with end effects"
+		}
+		return t, how, err
+	}
+	face, err := d.passiveLessActive(s, d.Depth-d.Height, d.Depth)
+	if err != nil {
+		return 0, "", err
+	}
+	shallow, err := d.teng(s, 2*d.Height)
+	if err != nil {
+		return 0, "", err
+	}
+	if face >= shallow {
+		return face, "deep deadman: passive less active on the face only (cautious)", nil
+	}
+	return shallow, "deep deadman: Teng's value at depth 2·Height (cautious)", nil
+}
+
+// passiveLessActive returns Length (Pp − Pa) between depths top and bottom.
+func (d Deadman) passiveLessActive(s Soil, top, bottom units.Length) (units.Force, error) {
+	kp, ka := rankineLevel(s.Friction, true), rankineLevel(s.Friction, false)
+	pp, err := EarthPressureForce(kp, s.UnitWeight, s.Cohesion, top, bottom, 1)
+	if err != nil {
+		return 0, err
+	}
+	pa, err := EarthPressureForce(ka, s.UnitWeight, s.Cohesion, top, bottom, -1)
+	if err != nil {
+		return 0, err
+	}
+	return units.Force(float64(d.Length) * float64(pp.Force-pa.Force)), nil
+}
+
+// teng returns Teng's near-surface resistance for a face reaching depth h.
+func (d Deadman) teng(s Soil, h units.Length) (units.Force, error) {
+	t, err := d.passiveLessActive(s, 0, h)
+	if err != nil || !d.EndEffects {
+		return t, err
 	}
 	kp, ka := rankineLevel(s.Friction, true), rankineLevel(s.Friction, false)
-	pp, err := EarthPressureForce(kp, s.UnitWeight, s.Cohesion, top, d.Depth, 1)
-	if err != nil {
-		return 0, "", err
-	}
-	pa, err := EarthPressureForce(ka, s.UnitWeight, s.Cohesion, top, d.Depth, -1)
-	if err != nil {
-		return 0, "", err
-	}
-	t := float64(d.Length) * float64(pp.Force-pa.Force)
-	if near && d.EndEffects {
-		h := float64(d.Depth)
-		t += TengK0 * float64(s.UnitWeight) * (math.Sqrt(kp) + math.Sqrt(ka)) * h * h * h * math.Tan(float64(s.Friction)) / 3
-		how += ", with end effects"
-	}
-	return units.Force(t), how, nil
+	hh := float64(h)
+	t += units.Force(TengK0 * float64(s.UnitWeight) * (math.Sqrt(kp) + math.Sqrt(ka)) * hh * hh * hh * math.Tan(float64(s.Friction)) / 3)
+	return t, nil
 }
 
 // Check verifies the deadman against the pulls, with result IDs

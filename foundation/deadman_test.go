@@ -1,0 +1,125 @@
+package foundation_test
+
+import (
+	"errors"
+	"math"
+	"testing"
+
+	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/foundation"
+	"github.com/sagspan/sagspan/units"
+)
+
+func testDeadman() foundation.Deadman {
+	return foundation.Deadman{Length: 3, Height: 1, Thickness: 0.3, Depth: 1.5}
+}
+
+func TestDeadmanHand(t *testing.T) {
+	// Teng's method near the surface (from memory), hand calculation, kN
+	// and m, φ 30°, γ 18: Kp 3, Ka 1/3; Pp − Pa = ½·18·1.5²·(3 − 1/3) = 54 kN/m;
+	// T = 3·54 = 162 kN. End effects ⅓·0.4·18·(√3 + √⅓)·1.5³·tan30° = 10.8 kN.
+	r, how, err := testDeadman().Resistance(sand30())
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "Teng", float64(r)/1e3, 162, 1e-9)
+	if how == "" {
+		t.Error("no method text")
+	}
+	d := testDeadman()
+	d.EndEffects = true
+	r, _, _ = d.Resistance(sand30())
+	near(t, "Teng with ends", float64(r)/1e3, 172.8, 1e-9)
+	// Deep deadman, face from 1.5 to 2.0 m: (3 − 1/3)·18·(2² − 1.5²)/2 =
+	// 42 kN/m, ×3 m = 126 kN, more than Teng's value at depth 1 m,
+	// ½·18·1·(8/3)·3 = 72 kN.
+	deep := foundation.Deadman{Length: 3, Height: 0.5, Thickness: 0.3, Depth: 2}
+	r, _, _ = deep.Resistance(sand30())
+	near(t, "deep face", float64(r)/1e3, 126, 1e-9)
+	// Just past the near-surface limit, Height 0.5, Depth 1.01 m: the face
+	// gives (8/3)·9·(1.01² − 0.51²)·3 = 54.6 kN, less than Teng's value at
+	// depth 2·Height = 1 m (72 kN), which governs.
+	deep.Depth = 1.01
+	r, _, _ = deep.Resistance(sand30())
+	near(t, "deep, Teng at 2h", float64(r)/1e3, 72, 1e-9)
+
+	// Pull 60 kN at 20°: pull-out 162/(60 cos20) = 2.873; uplift resisted by
+	// the deadman 24·3·0.3·1 = 21.6 and soil 18·3·0.3·0.5 = 8.1 kN.
+	p := foundation.Pull{Force: 60 * units.Kilonewton, Angle: deg(20)}
+	rs, err := testDeadman().Check([]foundation.Pull{p}, sand30(), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	noNaN(t, rs)
+	po := byID(t, rs, "anchor.deadman.pullout")
+	near(t, "pullout", po.Provided, 162/(60*math.Cos(20*math.Pi/180)), 1e-9)
+	if po.Required != 2 || po.Status != check.Pass {
+		t.Errorf("pullout required %v status %v", po.Required, po.Status)
+	}
+	up := byID(t, rs, "anchor.deadman.uplift")
+	near(t, "uplift", up.Provided, 29.7/(60*math.Sin(20*math.Pi/180)), 1e-9)
+	if up.Status != check.Fail { // 1.447 < 1.5
+		t.Errorf("uplift %v", up.Status)
+	}
+	// Partial (DA2): A1 1.35 on a permanent pull, R2 γR,e 1.4.
+	rs, err = testDeadman().Check([]foundation.Pull{p}, sand30(), &foundation.Basis{PartialFactors: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "DA2 pullout", byID(t, rs, "anchor.deadman.pullout").Provided, 162/1.4/(1.35*60*math.Cos(20*math.Pi/180)), 1e-9)
+	near(t, "EQU uplift", byID(t, rs, "anchor.deadman.uplift").Provided, 0.9*29.7/(1.1*60*math.Sin(20*math.Pi/180)), 1e-9)
+}
+
+func TestDeadmanConsistency(t *testing.T) {
+	// No pull: infinite factors. Deeper or longer: never worse.
+	rs, err := testDeadman().Check(nil, sand30(), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, r := range rs {
+		if !math.IsInf(r.Provided, 1) || r.Status != check.Pass {
+			t.Errorf("%s: %v", r.ID, r.Provided)
+		}
+	}
+	p := []foundation.Pull{{Force: 60e3, Angle: deg(20)}}
+	prev := map[string]float64{}
+	for depth := 1.0; depth <= 3; depth += 0.1 {
+		d := testDeadman()
+		d.Depth = units.Length(depth)
+		rs, err := d.Check(p, sand30(), nil)
+		if err != nil {
+			t.Fatal(err)
+		}
+		noNaN(t, rs)
+		for _, r := range rs {
+			if old, ok := prev[r.ID]; ok && r.Provided < old*(1-1e-12) {
+				t.Errorf("depth %.1f lowered %s from %v to %v", depth, r.ID, old, r.Provided)
+			}
+			prev[r.ID] = r.Provided
+		}
+	}
+	// Cohesion adds resistance.
+	c := sand30()
+	c.Cohesion = 10 * units.Kilopascal
+	r0, _, _ := testDeadman().Resistance(sand30())
+	r1, _, _ := testDeadman().Resistance(c)
+	if r1 <= r0 {
+		t.Errorf("cohesion: %v ≤ %v", r1, r0)
+	}
+}
+
+func TestDeadmanRejects(t *testing.T) {
+	for i, d := range []foundation.Deadman{
+		{Length: 0, Height: 1, Thickness: 0.3, Depth: 1.5},
+		{Length: 3, Height: 2, Thickness: 0.3, Depth: 1.5},
+		{Length: 3, Height: 1, Thickness: units.Length(math.NaN()), Depth: 1.5},
+		{Length: 3, Height: 1, Thickness: 0.3, Depth: 1.5, UnitWeight: -1},
+	} {
+		if _, err := d.Check(nil, sand30(), nil); !errors.Is(err, foundation.ErrInvalid) {
+			t.Errorf("case %d: %v", i, err)
+		}
+	}
+	if _, err := testDeadman().Check([]foundation.Pull{{Force: -5}}, sand30(), nil); !errors.Is(err, foundation.ErrInvalid) {
+		t.Errorf("negative pull: %v", err)
+	}
+}
