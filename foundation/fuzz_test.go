@@ -1,0 +1,65 @@
+package foundation_test
+
+import (
+	"errors"
+	"math"
+	"testing"
+
+	"github.com/sagspan/sagspan/foundation"
+	"github.com/sagspan/sagspan/units"
+)
+
+// FuzzAnchorBlockCheck: any input gives either an error wrapping a
+// sentinel, or results with no NaN; never a panic.
+func FuzzAnchorBlockCheck(f *testing.F) {
+	f.Add(3.0, 2.5, 1.5, 1.5, 0.5, 80e3, 25.0, 2.5, 1.2, 36.0, 0.0, 19e3, false, 1.0, false)
+	f.Add(1.0, 1.0, 3.0, 0.0, 0.0, 60e3, 0.0, 1.0, 3.0, 30.0, 5e3, 18e3, true, 0.0, true)
+	f.Add(0.1, 50.0, 0.2, 10.0, 1.0, 1e9, 89.0, 0.05, 0.1, 0.0, 50e3, 17e3, true, 20.0, true)
+	f.Fuzz(func(t *testing.T, l, w, h, d, mu, force, angle, x, z, phi, c, gamma float64, water bool, dw float64, partial bool) {
+		blk := foundation.AnchorBlock{Length: units.Length(l), Width: units.Length(w), Height: units.Length(h),
+			Depth: units.Length(d), PassiveMobilisation: mu, Groundwater: water, WaterDepth: units.Length(dw)}
+		s := foundation.Soil{UnitWeight: units.UnitWeight(gamma), Friction: deg(phi), Cohesion: units.Pressure(c)}
+		pulls := []foundation.Pull{{Force: units.Force(force), Angle: deg(angle), X: units.Length(x), Z: units.Length(z)},
+			{Force: units.Force(force / 3), Angle: deg(angle), X: units.Length(x), Z: units.Length(z), Variable: true}}
+		rs, err := blk.Check(pulls, s, &foundation.Basis{PartialFactors: partial})
+		if err != nil {
+			if !errors.Is(err, foundation.ErrInvalid) && !errors.Is(err, foundation.ErrOutsideBase) {
+				t.Fatalf("error wraps no sentinel: %v", err)
+			}
+			return
+		}
+		if len(rs) != 4 {
+			t.Fatalf("%d results", len(rs))
+		}
+		for _, r := range rs {
+			for _, v := range []float64{r.Demand, r.Capacity, r.Ratio, r.Provided} {
+				if math.IsNaN(v) {
+					t.Fatalf("%s: NaN in %+v", r.ID, r)
+				}
+			}
+		}
+	})
+}
+
+// FuzzBearingCapacity: any input gives an error or a finite, non-negative qult.
+func FuzzBearingCapacity(f *testing.F) {
+	f.Add(2.0, 2.0, 1.0, 600e3, 50e3, 0.15, 0.0, 30.0, 0.0, 18e3, false, 0.0, 4)
+	f.Add(1.0, 10.0, 0.0, 100e3, 200e3, 0.0, 0.3, 0.0, 50e3, 17e3, true, 0.5, 2)
+	f.Fuzz(func(t *testing.T, b, l, d, v, h, eb, el, phi, c, gamma float64, water bool, dw float64, m int) {
+		in := foundation.BearingInput{B: units.Length(b), L: units.Length(l), Depth: units.Length(d), Vertical: units.Force(v),
+			Horizontal: units.Force(h), EccB: units.Length(eb), EccL: units.Length(el), Groundwater: water, WaterDepth: units.Length(dw)}
+		s := foundation.Soil{UnitWeight: units.UnitWeight(gamma), Friction: deg(phi), Cohesion: units.Pressure(c)}
+		r, err := foundation.BearingCapacity(in, s, foundation.Method(m))
+		if err != nil {
+			if !errors.Is(err, foundation.ErrInvalid) && !errors.Is(err, foundation.ErrOutsideBase) {
+				t.Fatalf("error wraps no sentinel: %v", err)
+			}
+			return
+		}
+		for _, x := range []float64{float64(r.Qult), r.Ic, r.Iq, r.Igamma, r.Sc, r.Sq, r.Sgamma, r.Dc, r.Dq, r.Dgamma} {
+			if math.IsNaN(x) || math.IsInf(x, 0) || x < 0 {
+				t.Fatalf("bad number %v in %+v (input %+v, soil %+v)", x, r, in, s)
+			}
+		}
+	})
+}
