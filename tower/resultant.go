@@ -100,6 +100,9 @@ func Combine(levels []LevelForce, selfWeight units.Force) (Resultant, error) {
 // derived fields recomputed.
 func (r Resultant) withSelfWeight(w units.Force) (Resultant, error) {
 	v := float64(r.Vertical) - float64(r.SelfWeight) + float64(w)
+	if !finite(v) || !finite(float64(w)) {
+		return Resultant{}, invalid("self-weight", w, "gives a vertical force that is not finite")
+	}
 	if !(v > 0) {
 		return Resultant{}, fmt.Errorf("tower: net vertical force on the column base is %v (not downward): "+
 			"the resultant never reaches the base: %w", units.Force(v), ErrLiftOff)

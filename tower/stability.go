@@ -111,6 +111,9 @@ func Stability(r Resultant, c Column, f Footing, sf *StabilityFactors) ([]check.
 	l := f.loads(r, c)
 	a := l.actions()
 	v := float64(a.Vertical)
+	if !finite(v) || !finite(float64(a.Moment)) || !finite(float64(a.Horizontal)) {
+		return nil, invalid("Footing", f.Length, "gives base actions that are not finite (sizes or unit weights too large)")
+	}
 	if !(v > 0) {
 		return nil, fmt.Errorf("tower: net vertical force at the footing base is %v (upward): the footing lifts: %w",
 			a.Vertical, ErrLiftOff)

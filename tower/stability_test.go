@@ -245,3 +245,53 @@ func BenchmarkStability(b *testing.B) {
 	}
 	_ = sink
 }
+
+func FuzzTowerChain(f *testing.F) {
+	f.Add(180e3, 0.2, 185e3, 0.6, 3.2, 0.0, 0.9, 3.5, 2.4, 0.7, 0.0, uint8(0))
+	f.Add(40e3, -0.3, 40e3, 0.7, 4.3, 0.05, 0.5, 2.0, 1.0, 0.4, -0.2, uint8(1))
+	f.Add(1e9, 1.5, 0.0, 0.0, 0.0, 0.0, 0.3, 1.0, 0.3, 0.1, 0.0, uint8(2))
+	f.Fuzz(func(t *testing.T, ts, as, tb, ab, y, off, d, hc, l, th, xc float64, kind uint8) {
+		s := tower.Saddle{Kind: tower.SaddleKind(kind % 4), Height: units.Length(y), Offset: units.Length(off)}
+		lf, err := s.Force(tower.Pull{Tension: units.Force(ts), Angle: units.Angle(as)}, tower.Pull{Tension: units.Force(tb), Angle: units.Angle(ab)})
+		if err != nil {
+			if !errors.Is(err, tower.ErrInvalid) && !errors.Is(err, tower.ErrLiftOff) {
+				t.Fatal(err)
+			}
+			return
+		}
+		col := tower.Column{Depth: units.Length(d), Width: units.Length(d), Height: units.Length(hc)}
+		r, err := tower.Combine([]tower.LevelForce{lf}, 0)
+		if err != nil {
+			return
+		}
+		bad := func(rs ...check.Result) {
+			for _, res := range rs {
+				if math.IsNaN(res.Demand) || math.IsNaN(res.Ratio) || math.IsNaN(res.Capacity) || math.IsNaN(res.Provided) {
+					t.Fatalf("NaN in %+v", res)
+				}
+			}
+		}
+		if res, err := tower.EccentricityCheck(r, col, nil); err == nil {
+			bad(res)
+		}
+		ft := tower.Footing{Length: units.Length(l), Width: units.Length(l), Thickness: units.Length(th), ColumnOffset: units.Length(xc)}
+		if rs, err := tower.Stability(r, col, ft, nil); err == nil {
+			bad(rs...)
+		} else if !errors.Is(err, tower.ErrInvalid) && !errors.Is(err, tower.ErrLiftOff) {
+			t.Fatal(err)
+		}
+	})
+}
+
+func TestStabilityHuge(t *testing.T) {
+	// Sizes that overflow the weights are refused, never turned into Inf or NaN.
+	col := tower.Column{Depth: 1e200, Width: 1e200, Height: 1e200}
+	r := tower.Resultant{Vertical: kN(100)}
+	if _, err := tower.EccentricityCheck(r, col, nil); !errors.Is(err, tower.ErrInvalid) {
+		t.Errorf("eccentricity: %v", err)
+	}
+	ft := tower.Footing{Length: 1e200, Width: 1e200, Thickness: 1e200}
+	if _, err := tower.Stability(r, tower.Column{Depth: 1, Width: 1, Height: 1}, ft, nil); !errors.Is(err, tower.ErrInvalid) {
+		t.Errorf("stability: %v", err)
+	}
+}
