@@ -466,6 +466,9 @@ func (s RCSection) Check(n units.Force, m units.Moment) (check.Result, error) {
 	}
 	md := s.model(m < 0)
 	comp, tens := md.limits()
+	if !finite(comp) || !finite(tens) {
+		return check.Result{}, invalid("RCSection", fmt.Sprintf("%v × %v", s.B, s.H), "gives resistances that are not finite")
+	}
 	const id, title = "tower.column_section", "Column section, axial force and bending"
 	basis := s.basis()
 	var axial check.Result

@@ -326,6 +326,9 @@ func (t Tube) Check(n units.Force, m units.Moment, effLength units.Length) (chec
 	if err != nil {
 		return check.Result{}, err
 	}
+	if !finite(c.pc) || !finite(c.pt) || !finite(c.mc) || c.pc <= 0 || c.mc <= 0 {
+		return check.Result{}, invalid("Tube", t.Size, "gives resistances that are not finite and positive")
+	}
 	nn, mm := float64(n), math.Abs(float64(m))
 	var u float64
 	var basis, note string

@@ -200,3 +200,15 @@ func BenchmarkTubeCheck(b *testing.B) {
 	}
 	_ = sink
 }
+
+func TestHugeSections(t *testing.T) {
+	// Overflowing sizes or strengths are refused, never turned into NaN.
+	tb := tower.Tube{Size: 1e200, Wall: 1e199, Fy: 355 * mpa}
+	if _, err := tb.Check(kN(1), kNm(1), 3); !errors.Is(err, tower.ErrInvalid) {
+		t.Errorf("tube: %v", err)
+	}
+	rc := tower.RCSection{B: 1e200, H: 1e200, Fc: 1e300}
+	if _, err := rc.Check(kN(1), kNm(1)); !errors.Is(err, tower.ErrInvalid) {
+		t.Errorf("RC: %v", err)
+	}
+}
