@@ -1,0 +1,628 @@
+package sagspan
+
+import (
+	"fmt"
+	"math"
+
+	"github.com/sagspan/sagspan/cable"
+	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/foundation"
+	"github.com/sagspan/sagspan/tower"
+	"github.com/sagspan/sagspan/units"
+)
+
+// Options tune a whole-bridge check. A nil *Options means the defaults.
+type Options struct {
+	// ErectionStep is the temperature step of the erection table; zero
+	// means 5 K.
+	ErectionStep float64
+	// StrictComfort fails, rather than flags, natural frequencies in the
+	// ranges walkers excite. Default false: flags.
+	StrictComfort bool
+}
+
+// Side names a bank.
+type Side int
+
+// The banks.
+const (
+	Left Side = iota
+	Right
+)
+
+func (s Side) String() string {
+	if s == Left {
+		return "left"
+	}
+	return "right"
+}
+
+// GroupState is the state of one rope group under one load case.
+type GroupState struct {
+	Group string
+	// Load is the load per horizontal metre in the plane of the ropes (the
+	// vector sum of vertical load and wind when the ropes swing).
+	Load cable.Load
+	// Swing is the angle by which wind turns the plane of the ropes from
+	// the vertical.
+	Swing units.Angle
+	// H is the horizontal tension of the group (all its ropes).
+	H units.Force
+	// Tension and Angle are the span-side tension and angle below
+	// horizontal at each saddle; Backstay and BackstayAngle the backstay's.
+	Tension, Backstay    [2]units.Force
+	Angle, BackstayAngle [2]units.Angle
+	Sag                  units.Length // at midspan below the chord
+	LowX, LowZ           units.Length // lowest point, z from the left saddle
+	LowWithin            bool         // false when the lowest point is a saddle
+	MaxTension           units.Force  // the largest of span and backstay tensions
+	// Slipped reports whether the rope slipped over a sliding saddle.
+	Slipped [2]bool
+	// Saddle is the force on each tower column from this group's saddle.
+	Saddle [2]tower.LevelForce
+	shape  cable.Loaded
+}
+
+// CaseState is the state of the whole bridge under one load case.
+type CaseState struct {
+	Case   LoadCase
+	Groups []GroupState
+	// Tower is the resultant of the saddle forces and column weight at each
+	// column base.
+	Tower [2]tower.Resultant
+}
+
+// ErectionTable is the erection-sag table of one rope group.
+type ErectionTable struct {
+	Group string
+	Rows  []cable.ErectionRow
+}
+
+// Analysis is everything the whole-bridge check found.
+type Analysis struct {
+	Bridge Bridge
+	// Report holds every check result of every case.
+	Report check.Report
+	// Service holds the states under characteristic loads (all factors 1):
+	// clearance, eccentricity, drawing, anchors and footings are checked on
+	// them. Design holds the states under the factored loads of the partial
+	// basis: rope tension (on that basis) and column sections.
+	Service, Design []CaseState
+	Modes           cable.Modes
+	Erection        []ErectionTable
+}
+
+// model is a bridge resolved for analysis.
+type model struct {
+	b      Bridge
+	span   cable.Span
+	groups []group
+	soils  [2]foundation.Soil
+	dead   units.LoadPerLength // walkway dead load per metre, without ropes
+	crowd  units.LoadPerLength // crowd load per metre of walkway
+	wind   units.Pressure
+	psi    float64
+	// ref holds each group's reference state: permanent load at the
+	// reference temperature, hanging at its design sag.
+	ref []cable.State
+}
+
+func newModel(b Bridge) (*model, error) {
+	if err := b.Validate(); err != nil {
+		return nil, err
+	}
+	gs, err := b.groups()
+	if err != nil {
+		return nil, err
+	}
+	m := &model{
+		b: b, span: b.span(), groups: gs,
+		dead:  b.Walkway.dead(),
+		crowd: units.LoadPerLength(float64(b.crowd()) * float64(b.Walkway.Width)),
+		wind:  b.wind(),
+		psi:   orDefault(b.Loads.WindWithCrowd, defaultWindWithCrowd),
+	}
+	for i, bank := range []Bank{b.Banks.Left, b.Banks.Right} {
+		if m.soils[i], err = bank.Soil.soil(); err != nil {
+			return nil, fieldErr("banks."+Side(i).String()+".soil", "%v", err)
+		}
+	}
+	l := float64(b.Site.Span)
+	for _, g := range gs {
+		w0 := g.self + units.LoadPerLength(g.share)*m.dead
+		h0 := units.Force(float64(w0) * l * l / (8 * float64(g.Sag))) // H = w l²/(8 f)
+		m.ref = append(m.ref, cable.State{Load: cable.Load{Uniform: w0}, H: h0, Temperature: b.Climate.Reference})
+	}
+	return m, nil
+}
+
+func (m *model) bank(s Side) Bank {
+	if s == Left {
+		return m.b.Banks.Left
+	}
+	return m.b.Banks.Right
+}
+
+// load returns the in-plane load of group g under case lc and the swing of
+// the rope plane.
+func (m *model) load(g group, lc LoadCase) (cable.Load, units.Angle) {
+	vertical := units.LoadPerLength(lc.GammaG) * (g.self + units.LoadPerLength(g.share)*m.dead)
+	crowd := units.LoadPerLength(lc.GammaQ*g.share) * m.crowd
+	l := m.b.Site.Span
+	load := cable.Load{Uniform: vertical}
+	switch lc.Crowd {
+	case FullSpan:
+		load.Uniform += crowd
+	case LeftHalf:
+		load.Patches = []cable.Patch{{From: 0, To: l / 2, Load: crowd}}
+	case RightHalf:
+		load.Patches = []cable.Patch{{From: l / 2, To: l, Load: crowd}}
+	}
+	var swing units.Angle
+	if lc.Wind && lc.GammaW > 0 && m.wind > 0 {
+		depth := m.b.Walkway.WindDepth
+		if depth == 0 {
+			depth = m.b.Walkway.Depth
+		}
+		face := g.windWidth + units.Length(g.share*orDefault(m.b.Loads.WalkwayDrag, defaultWalkwayDrag))*depth
+		lateral := lc.GammaW * float64(m.wind) * float64(face)
+		swing = units.Angle(math.Atan2(lateral, float64(load.Uniform)))
+		load.Uniform = units.LoadPerLength(math.Hypot(float64(load.Uniform), lateral))
+	}
+	return load, swing
+}
+
+// saddleKind maps the description's saddle kind.
+func saddleKind(s SaddleSpec) tower.SaddleKind {
+	switch s.Kind {
+	case "sliding":
+		return tower.Sliding
+	case "roller":
+		return tower.Roller
+	}
+	return tower.Fixed
+}
+
+// backstayTension returns the backstay tension that balances span-side
+// tension t at angle a over a saddle of the given kind, with backstay angle
+// ab (both below horizontal):
+//
+//	fixed:   T_b = T_s                               (one rope, clamped)
+//	roller:  T_b = T_s cos a / cos ab                (horizontal components balance)
+//	sliding: T_b = T_s                               while |T_s cos a − T_b cos ab| <= μ N,
+//	         else T_b = T_s (cos a − sμ sin a)/(cos ab + sμ sin ab),  s = sign of the unbalance
+//
+// with the normal force N taken as the vertical component, as package tower
+// does (common practice). A slipping rope is assumed to re-balance in the
+// short, stiff backstay, the span-side tension unchanged.
+func backstayTension(kind tower.SaddleKind, mu float64, t units.Force, a, ab units.Angle) (units.Force, bool) {
+	ca, sa := math.Cos(float64(a)), math.Sin(float64(a))
+	cb, sb := math.Cos(float64(ab)), math.Sin(float64(ab))
+	switch kind {
+	case tower.Roller:
+		return units.Force(float64(t) * ca / cb), false
+	case tower.Sliding:
+		unbalance := ca - cb
+		normal := sa + sb
+		if math.Abs(unbalance) <= mu*normal {
+			return t, false
+		}
+		s := math.Copysign(1, unbalance)
+		return units.Force(float64(t) * (ca - s*mu*sa) / (cb + s*mu*sb)), true
+	}
+	return t, false
+}
+
+// analyse returns the state of the bridge under case lc.
+func (m *model) analyse(lc LoadCase) (CaseState, error) {
+	cs := CaseState{Case: lc, Groups: make([]GroupState, len(m.groups))}
+	var levels [2][]tower.LevelForce
+	for i, g := range m.groups {
+		load, swing := m.load(g, lc)
+		st, err := cable.ChangeOfState(m.span, g.elastic, m.ref[i], load, lc.Temperature)
+		if err != nil {
+			return CaseState{}, fmt.Errorf("sagspan: %s, case %q: %w", g.Name, lc.Name, err)
+		}
+		shape, err := cable.NewLoaded(m.span, load, st.H)
+		if err != nil {
+			return CaseState{}, fmt.Errorf("sagspan: %s, case %q: %w", g.Name, lc.Name, err)
+		}
+		gs := GroupState{Group: g.Name, Load: load, Swing: swing, H: st.H, shape: shape}
+		ta, tb := shape.SupportTensions()
+		aa, ab := shape.SupportAngles()
+		gs.Tension = [2]units.Force{ta, tb}
+		gs.Angle = [2]units.Angle{aa, ab}
+		gs.Sag = shape.Sag(m.b.Site.Span / 2)
+		gs.LowX, gs.LowZ, gs.LowWithin = shape.LowPoint()
+		gs.MaxTension = max(ta, tb)
+		cosSwing := math.Cos(float64(swing))
+		for side := Left; side <= Right; side++ {
+			bank := m.bank(side)
+			sk := saddleKind(bank.Tower.Saddle)
+			angleBack := backstayAngle(bank.Backstay, g.Offset)
+			tback, slipped := backstayTension(sk, bank.Tower.Saddle.Friction, gs.Tension[side], gs.Angle[side], angleBack)
+			gs.Backstay[side], gs.BackstayAngle[side], gs.Slipped[side] = tback, angleBack, slipped
+			gs.MaxTension = max(gs.MaxTension, tback)
+			// In elevation, a swung rope's vertical component shrinks by
+			// cos(swing); its horizontal component along the bridge stays.
+			t, a := float64(gs.Tension[side]), float64(gs.Angle[side])
+			h, v := t*math.Cos(a), t*math.Sin(a)*cosSwing
+			spanPull := tower.Pull{Tension: units.Force(math.Hypot(h, v)), Angle: units.Angle(math.Atan2(v, h))}
+			saddle := tower.Saddle{Kind: sk, Friction: bank.Tower.Saddle.Friction, Height: bank.Tower.Height + g.Offset}
+			lf, err := saddle.Force(spanPull, tower.Pull{Tension: tback, Angle: angleBack})
+			if err != nil {
+				return CaseState{}, fmt.Errorf("sagspan: %s saddle, %s, case %q: %w", side, g.Name, lc.Name, err)
+			}
+			gs.Saddle[side] = lf
+			levels[side] = append(levels[side], lf)
+		}
+		cs.Groups[i] = gs
+	}
+	for side := Left; side <= Right; side++ {
+		r, err := tower.Combine(levels[side], m.column(side).Weight())
+		if err != nil {
+			return CaseState{}, fmt.Errorf("sagspan: %s tower, case %q: %w", side, lc.Name, err)
+		}
+		cs.Tower[side] = r
+	}
+	return cs, nil
+}
+
+func (m *model) column(s Side) tower.Column {
+	t := m.bank(s).Tower
+	return tower.Column{Depth: t.Depth, Width: t.Width, Height: t.Height, Facing: t.Facing, UnitWeight: t.UnitWeight}
+}
+
+// Check runs the whole-bridge check: every load case through rope statics,
+// rope capacity, saddle forces, tower eccentricity and column section,
+// footing and anchor checks, flood clearance, natural frequencies and the
+// erection table. It returns an error only for a description that cannot
+// be analysed; checks that fail are results in the report.
+func Check(b Bridge, opts *Options) (*Analysis, error) {
+	if opts == nil {
+		opts = &Options{}
+	}
+	m, err := newModel(b)
+	if err != nil {
+		return nil, err
+	}
+	a := &Analysis{Bridge: b}
+	a.Report.Title = "Whole-bridge check: " + b.Name
+	if err := m.run(a, opts); err != nil {
+		return nil, err
+	}
+	return a, nil
+}
+
+func (m *model) run(a *Analysis, opts *Options) error {
+	cases := m.b.Cases()
+	for _, lc := range cases {
+		svc, err := m.analyse(lc.characteristic(m.psi))
+		if err != nil {
+			return err
+		}
+		design := svc
+		if des := m.designCase(lc); des != svc.Case {
+			if design, err = m.analyse(des); err != nil {
+				return err
+			}
+		}
+		a.Service = append(a.Service, svc)
+		a.Design = append(a.Design, design)
+	}
+	perm := a.Service[0] // the permanent case at the reference temperature
+	for i := range cases {
+		if err := m.checkCase(&a.Report, perm, a.Service[i], a.Design[i]); err != nil {
+			return err
+		}
+	}
+	m.checkClearance(&a.Report, a.Service)
+	if err := m.checkFrequencies(a, perm, opts); err != nil {
+		return err
+	}
+	return m.erection(a, opts)
+}
+
+// designCase returns the case with the factors of the partial-factor basis
+// (EN 1990 set B), whatever the bridge's basis: the column sections are
+// always checked on design actions.
+func (m *model) designCase(lc LoadCase) LoadCase {
+	if m.b.partial() {
+		return lc
+	}
+	gG := orDefault(m.b.Basis.GammaG, defaultGammaG)
+	gQ := orDefault(m.b.Basis.GammaQ, defaultGammaQ)
+	lc.GammaG = gG
+	if lc.Crowd != NoCrowd {
+		lc.GammaQ = gQ
+	}
+	if lc.Wind {
+		lc.GammaW = gQ
+		if lc.Crowd != NoCrowd {
+			lc.GammaW = gQ * m.psi
+		}
+	}
+	return lc
+}
+
+func (m *model) checkCase(rep *check.Report, perm, svc, des CaseState) error {
+	name := svc.Case.Name
+	partial := m.b.partial()
+	for i, g := range m.groups {
+		var basis cable.TensionBasis = cable.GlobalFactor{Factor: m.b.Basis.RopeFactor}
+		t := svc.Groups[i].MaxTension
+		if partial {
+			basis = cable.PartialFactor{GammaR: m.b.Basis.GammaR}
+			t = des.Groups[i].MaxTension
+		}
+		r, err := cable.TensionCheck(t, g.rope, g.Count, basis)
+		if err != nil {
+			return fmt.Errorf("sagspan: %s, case %q: %w", g.Name, name, err)
+		}
+		rep.Add(r.For(g.Name, name))
+	}
+	for side := Left; side <= Right; side++ {
+		bank := m.bank(side)
+		towerName := side.String() + " tower"
+		col := m.column(side)
+		var limit *tower.EccentricityLimit // nil: the kern
+		if e := bank.Tower.Eccentricity; e.Rule == "fraction" {
+			limit = &tower.EccentricityLimit{Fraction: e.Fraction, Offset: e.Offset}
+		}
+		r, err := tower.EccentricityCheck(svc.Tower[side], col, limit)
+		if err != nil {
+			return fmt.Errorf("sagspan: %s, case %q: %w", towerName, name, err)
+		}
+		rep.Add(r.For(towerName, name))
+
+		sec := m.section(side)
+		dr := des.Tower[side]
+		r, err = sec.Check(dr.Vertical, dr.BaseMoment)
+		if err != nil {
+			return fmt.Errorf("sagspan: %s column section, case %q: %w", towerName, name, err)
+		}
+		rep.Add(r.For(towerName, name))
+
+		results, err := m.footing(side, perm.Tower[side], svc.Tower[side])
+		if err != nil {
+			return fmt.Errorf("sagspan: %s footing, case %q: %w", side, name, err)
+		}
+		for _, r := range results {
+			rep.Add(r.For(side.String()+" footing", name))
+		}
+
+		results, err = m.anchor(side, perm, svc)
+		if err != nil {
+			return fmt.Errorf("sagspan: %s anchor, case %q: %w", side, name, err)
+		}
+		for _, r := range results {
+			rep.Add(r.For(side.String()+" anchor", name))
+		}
+	}
+	return nil
+}
+
+// section returns the effective reinforced-concrete section of a column,
+// bending along the bridge, checked to EN 1992-1-1 on design actions.
+func (m *model) section(s Side) tower.RCSection {
+	t := m.bank(s).Tower
+	spec := t.Section
+	sec := tower.RCSection{
+		B: t.Width - 2*t.Facing, H: t.Depth - 2*t.Facing,
+		Fc: spec.Concrete, Fy: spec.Steel, Code: tower.EN1992,
+	}
+	if spec.Bars > 0 {
+		area := units.Area(math.Pi / 4 * float64(spec.BarDiameter) * float64(spec.BarDiameter))
+		sec.Bars = tower.RectangularBars(sec.B, sec.H, spec.Cover, spec.Bars/2, 0, area)
+	}
+	return sec
+}
+
+// share returns the fraction of x that exceeds the permanent value p.
+func share(x, p float64) float64 {
+	if math.Abs(x) == 0 {
+		return 0
+	}
+	return math.Max(0, math.Min(1, (math.Abs(x)-math.Abs(p))/math.Abs(x)))
+}
+
+// footing checks a tower footing under the column-base resultant r, brought
+// down to the underside of the footing; perm is the permanent case's
+// resultant, for the variable share of the partial basis.
+func (m *model) footing(s Side, perm, r tower.Resultant) ([]check.Result, error) {
+	spec := m.bank(s).Tower.Footing
+	f := foundation.Footing{B: spec.Length, L: spec.Width, Thickness: spec.Thickness, Depth: spec.Depth, UnitWeight: m.bank(s).Tower.UnitWeight}
+	moment := func(r tower.Resultant) float64 {
+		return float64(r.BaseMoment) + float64(r.Horizontal)*float64(spec.Thickness) + float64(r.Vertical)*float64(spec.ColumnOffset)
+	}
+	load := foundation.FootingLoad{
+		Vertical:   r.Vertical,
+		Horizontal: r.Horizontal,
+		Moment:     units.Moment(moment(r)),
+		VariableShare: max(
+			share(float64(r.Vertical), float64(perm.Vertical)),
+			share(float64(r.Horizontal), float64(perm.Horizontal)),
+			share(moment(r), moment(perm)),
+		),
+	}
+	return f.Check(load, m.soils[s], foundation.Vesic, m.foundationBasis())
+}
+
+func (m *model) foundationBasis() *foundation.Basis {
+	bs := m.b.Basis
+	return &foundation.Basis{
+		PartialFactors: m.b.partial(),
+		Sliding:        bs.SlidingFactor,
+		Overturning:    bs.OverturningFactor,
+		Uplift:         bs.UpliftFactor,
+		Bearing:        bs.BearingFactor,
+	}
+}
+
+// anchor checks the anchor of one bank under the backstay pulls of every
+// group, split into the permanent case's pull and the rest.
+func (m *model) anchor(s Side, perm, svc CaseState) ([]check.Result, error) {
+	spec := m.bank(s).Anchor
+	basis := m.foundationBasis()
+	x, z := spec.AttachX, spec.AttachZ
+	if x == 0 {
+		x = spec.Length / 2
+	}
+	if z == 0 {
+		z = spec.Height / 3
+	}
+	var pulls []foundation.Pull
+	var total units.Force
+	for i, g := range svc.Groups {
+		t, p := g.Backstay[s], perm.Groups[i].Backstay[s]
+		angle := g.BackstayAngle[s]
+		total += t
+		pulls = append(pulls, foundation.Pull{Force: min(t, p), Angle: angle, X: x, Z: z})
+		if t > p {
+			pulls = append(pulls, foundation.Pull{Force: t - p, Angle: angle, X: x, Z: z, Variable: true})
+		}
+	}
+	soil := m.soils[s]
+	switch spec.Type {
+	case "deadman":
+		d := foundation.Deadman{Length: spec.Width, Height: spec.Height, Thickness: spec.Length, Depth: spec.Depth, UnitWeight: spec.UnitWeight}
+		return d.Check(pulls, soil, basis)
+	case "rock":
+		ra := foundation.RockAnchor{
+			Count: spec.Bars, BarDiameter: spec.BarDiameter, YieldStrength: spec.BarStrength,
+			HoleDiameter: spec.HoleDiameter, BondLength: spec.BondLength, FreeLength: spec.FreeLength,
+			VariableShare: share(float64(total), float64(sumBackstay(perm, s))),
+		}
+		angle := svc.Groups[0].BackstayAngle[s]
+		return ra.Check(total, angle, soil, basis)
+	}
+	blk := foundation.AnchorBlock{
+		Length: spec.Length, Width: spec.Width, Height: spec.Height, Depth: spec.Depth,
+		UnitWeight: spec.UnitWeight, PassiveMobilisation: spec.Passive,
+	}
+	return blk.Check(pulls, soil, basis)
+}
+
+func sumBackstay(cs CaseState, s Side) units.Force {
+	var t units.Force
+	for _, g := range cs.Groups {
+		t += g.Backstay[s]
+	}
+	return t
+}
+
+// walkwayLow returns the lowest elevation of the walkway underside in a
+// case: the lowest walkway-rope point less the walkway depth.
+func (m *model) walkwayLow(cs CaseState) (units.Length, units.Length) {
+	low, at := units.Length(math.Inf(1)), units.Length(0)
+	for i, g := range m.groups {
+		if g.Role != RoleWalkway {
+			continue
+		}
+		gs := cs.Groups[i]
+		x, z := gs.LowX, gs.LowZ
+		if !gs.LowWithin { // the lowest point of the span is then a saddle
+			x, z = 0, 0
+			if m.b.Site.Rise < 0 {
+				x, z = m.b.Site.Span, m.b.Site.Rise
+			}
+		}
+		if z < low {
+			low, at = z, x
+		}
+	}
+	return m.b.Site.LeftSaddle + low - m.b.Walkway.Depth, at
+}
+
+// checkClearance adds, for each case, the clearance of the walkway
+// underside at its lowest point above the design flood, against the
+// freeboard required.
+func (m *model) checkClearance(rep *check.Report, service []CaseState) {
+	site := m.b.Site
+	for _, cs := range service {
+		soffit, x := m.walkwayLow(cs)
+		clear := soffit - site.Flood
+		r := check.Compare("bridge.clearance", "Walkway underside above design flood", units.KindLength,
+			float64(site.Freeboard), float64(clear)).
+			For("walkway", cs.Case.Name).
+			WithBasis("clearance of the lowest walkway underside above the design flood, characteristic loads (common practice)").
+			WithNote(fmt.Sprintf("lowest underside %s at x = %s; flood %s", soffit, x, site.Flood))
+		if clear <= 0 {
+			r.Status, r.Ratio = check.Fail, math.Inf(1)
+			r = r.WithNote("the walkway is at or below the design flood")
+		}
+		rep.Add(r)
+	}
+}
+
+// Comfort ranges of footbridge frequencies (from memory; widely cited, e.g.
+// Živanović, Pavić & Reynolds, J. Sound Vib. 279, 2005): vertical
+// 1.25–2.3 Hz and its second harmonic 2.5–4.6 Hz, lateral 0.5–1.2 Hz.
+var (
+	verticalRanges = [][2]float64{{1.25, 2.3}, {2.5, 4.6}}
+	lateralRanges  = [][2]float64{{0.5, 1.2}}
+)
+
+const comfortBasis = "Irvine–Caughey linear theory of a sagging cable (from memory); " +
+	"critical ranges vertical 1.25–2.3 and 2.5–4.6 Hz, lateral 0.5–1.2 Hz " +
+	"(Živanović, Pavić & Reynolds 2005, from memory); EN 1990 A2.4.3.2 asks for a " +
+	"comfort check below 5 Hz vertical and 2.5 Hz lateral (from memory)"
+
+func comfort(id, title string, f units.Frequency, ranges [][2]float64, strict bool) check.Result {
+	r := check.Value(id, title, units.KindFrequency, float64(f)).For("span", "permanent").WithBasis(comfortBasis)
+	for _, rg := range ranges {
+		if float64(f) >= rg[0] && float64(f) <= rg[1] {
+			r.Status = check.Flag
+			if strict {
+				r.Status, r.Ratio = check.Fail, math.Inf(1)
+			}
+			return r.WithNote(fmt.Sprintf("%s lies in the range %.2f–%.2f Hz that walkers excite: assess the response or change the design", f, rg[0], rg[1]))
+		}
+	}
+	return r
+}
+
+func (m *model) checkFrequencies(a *Analysis, perm CaseState, opts *Options) error {
+	var h units.Force
+	var w units.LoadPerLength
+	var ea units.AxialStiffness
+	sag := units.Length(0)
+	for i, g := range m.groups {
+		h += perm.Groups[i].H
+		w += m.ref[i].Load.Uniform
+		ea += g.elastic.EA
+		if g.Role == RoleWalkway && sag == 0 {
+			sag = g.Sag
+		}
+	}
+	mass := units.MassPerLength(float64(w) / units.StandardGravity)
+	modes, err := cable.Frequencies(m.span, h, mass, sag, ea)
+	if err != nil {
+		return fmt.Errorf("sagspan: natural frequencies: %w", err)
+	}
+	a.Modes = modes
+	a.Report.Add(
+		comfort("bridge.frequency.vertical_antisymmetric", "First in-plane antisymmetric frequency", modes.Antisymmetric, verticalRanges, opts.StrictComfort),
+		comfort("bridge.frequency.vertical_symmetric", "First in-plane symmetric frequency", modes.Symmetric, verticalRanges, opts.StrictComfort),
+		comfort("bridge.frequency.lateral", "First out-of-plane (swing) frequency", modes.Swing, lateralRanges, opts.StrictComfort),
+	)
+	return nil
+}
+
+func (m *model) erection(a *Analysis, opts *Options) error {
+	step := orDefault(opts.ErectionStep, 5)
+	c := m.b.Climate
+	var temps []units.Temperature
+	for t := float64(c.Coldest); t <= float64(c.Hottest)+1e-9; t += step {
+		temps = append(temps, units.Temperature(t))
+	}
+	for _, g := range m.groups {
+		dead := cable.Load{Uniform: units.LoadPerLength(g.share) * m.dead}
+		rows, err := cable.ErectionTable(m.span, g.elastic, g.self, dead, g.Sag, c.Reference, temps)
+		if err != nil {
+			return fmt.Errorf("sagspan: erection table of %s: %w", g.Name, err)
+		}
+		a.Erection = append(a.Erection, ErectionTable{Group: g.Name, Rows: rows})
+	}
+	return nil
+}

@@ -1,0 +1,274 @@
+package sagspan
+
+import (
+	"errors"
+	"fmt"
+	"math"
+
+	"github.com/sagspan/sagspan/units"
+)
+
+// maxSagRatio is the largest dead-load sag ratio accepted: beyond a quarter
+// of the span a rope is no longer a walkway a person can use, and the
+// parabolic rope statics used for load cases lose accuracy (common practice:
+// footbridge sag ratios lie between about 1/25 and 1/8).
+const maxSagRatio = 0.25
+
+// validator gathers the first error found, naming its field.
+type validator struct{ err error }
+
+func (v *validator) fail(field, format string, args ...any) {
+	if v.err == nil {
+		v.err = fieldErr(field, format, args...)
+	}
+}
+
+// positive requires a finite value greater than zero.
+func (v *validator) positive(field string, x float64, k units.Kind) {
+	switch {
+	case math.IsNaN(x) || math.IsInf(x, 0):
+		v.fail(field, "must be a finite number")
+	case x == 0:
+		v.fail(field, "is missing or zero; give a positive %s", k)
+	case x < 0:
+		v.fail(field, "must be positive, got %s", units.Format(x, k))
+	}
+}
+
+// nonNegative requires a finite value of at least zero.
+func (v *validator) nonNegative(field string, x float64, k units.Kind) {
+	switch {
+	case math.IsNaN(x) || math.IsInf(x, 0):
+		v.fail(field, "must be a finite number")
+	case x < 0:
+		v.fail(field, "must not be negative, got %s", units.Format(x, k))
+	}
+}
+
+// finite requires a finite value of any sign.
+func (v *validator) finite(field string, x float64) {
+	if math.IsNaN(x) || math.IsInf(x, 0) {
+		v.fail(field, "must be a finite number")
+	}
+}
+
+// Validate reports the first thing wrong with the description as a
+// *FieldError naming the field, or nil. It checks what can be checked
+// without analysis: presence, signs, orders of temperatures, known names,
+// and geometry that cannot be built (an anchor above its saddle, a sag
+// beyond maxSagRatio of the span).
+func (b Bridge) Validate() error {
+	v := &validator{}
+	s := b.Site
+	v.positive("site.span", float64(s.Span), units.KindLength)
+	v.finite("site.rise", float64(s.Rise))
+	if v.err == nil && math.Abs(float64(s.Rise)) >= float64(s.Span) {
+		v.fail("site.rise", "height difference %s is not less than the span %s", s.Rise, s.Span)
+	}
+	v.finite("site.left_saddle_elevation", float64(s.LeftSaddle))
+	v.finite("site.flood_elevation", float64(s.Flood))
+	v.nonNegative("site.freeboard", float64(s.Freeboard), units.KindLength)
+	for i, p := range s.Ground {
+		v.finite(fmt.Sprintf("site.ground[%d].x", i), float64(p.X))
+		v.finite(fmt.Sprintf("site.ground[%d].z", i), float64(p.Z))
+	}
+
+	c := b.Climate
+	v.positive("climate.reference", float64(c.Reference), units.KindTemperature)
+	v.positive("climate.coldest", float64(c.Coldest), units.KindTemperature)
+	v.positive("climate.hottest", float64(c.Hottest), units.KindTemperature)
+	if v.err == nil && !(c.Coldest <= c.Reference && c.Reference <= c.Hottest) {
+		v.fail("climate", "temperatures must satisfy coldest <= reference <= hottest, got %s, %s, %s",
+			c.Coldest, c.Reference, c.Hottest)
+	}
+	v.nonNegative("climate.wind_speed", float64(c.WindSpeed), units.KindVelocity)
+	v.nonNegative("climate.wind_pressure", float64(c.WindPressure), units.KindPressure)
+
+	w := b.Walkway
+	v.positive("walkway.width", float64(w.Width), units.KindLength)
+	v.nonNegative("walkway.depth", float64(w.Depth), units.KindLength)
+	v.nonNegative("walkway.dead_load", float64(w.DeadLoad), units.KindLoadPerLength)
+	v.nonNegative("walkway.wind_depth", float64(w.WindDepth), units.KindLength)
+	for i, p := range w.Parts {
+		v.positive(fmt.Sprintf("walkway.parts[%d].load", i), float64(p.Load), units.KindLoadPerLength)
+	}
+	if v.err == nil && w.DeadLoad == 0 && len(w.Parts) == 0 {
+		v.fail("walkway.dead_load", "is missing: give the walkway dead load per metre or list its parts")
+	}
+	if v.err == nil && w.DeadLoad != 0 && len(w.Parts) != 0 {
+		v.fail("walkway.parts", "give either dead_load or parts, not both")
+	}
+
+	b.validateRopes(v)
+	b.validateBank(v, "banks.left", b.Banks.Left)
+	b.validateBank(v, "banks.right", b.Banks.Right)
+	b.validateLoads(v)
+	return v.err
+}
+
+func (b Bridge) validateRopes(v *validator) {
+	if len(b.Ropes) == 0 {
+		v.fail("ropes", "is missing: list at least one rope group")
+		return
+	}
+	walkway, shares := 0, 0.0
+	for i, g := range b.Ropes {
+		f := fmt.Sprintf("ropes[%d]", i)
+		switch g.Role {
+		case RoleWalkway:
+			walkway++
+		case RoleHandrail:
+		default:
+			v.fail(f+".role", "unknown role %q; want %q or %q", g.Role, RoleWalkway, RoleHandrail)
+		}
+		if g.Count <= 0 {
+			v.fail(f+".count", "must be at least 1, got %d", g.Count)
+		}
+		v.positive(f+".sag", float64(g.Sag), units.KindLength)
+		if v.err == nil && float64(g.Sag) > maxSagRatio*float64(b.Site.Span) {
+			v.fail(f+".sag", "sag %s is more than %.2f of the span %s: not a physical footbridge",
+				g.Sag, maxSagRatio, b.Site.Span)
+		}
+		v.nonNegative(f+".offset", float64(g.Offset), units.KindLength)
+		if math.IsNaN(g.Share) || g.Share < 0 || g.Share > 1 {
+			v.fail(f+".share", "must lie between 0 and 1, got %v", g.Share)
+		}
+		shares += g.Share
+		if _, err := g.Rope.rope(); err != nil {
+			var fe *FieldError
+			if errors.As(err, &fe) {
+				v.fail(f+".rope."+fe.Field, "%v", fe.Err)
+			} else {
+				v.fail(f+".rope", "%v", err)
+			}
+		}
+	}
+	if walkway == 0 {
+		v.fail("ropes", "no rope group has role %q: nothing carries the walkway", RoleWalkway)
+	}
+	if shares != 0 && math.Abs(shares-1) > 1e-9 {
+		v.fail("ropes", "the load shares of the rope groups add up to %v, not 1", shares)
+	}
+}
+
+func (b Bridge) validateBank(v *validator, f string, k Bank) {
+	t := k.Tower
+	v.positive(f+".tower.height", float64(t.Height), units.KindLength)
+	v.positive(f+".tower.depth", float64(t.Depth), units.KindLength)
+	v.positive(f+".tower.width", float64(t.Width), units.KindLength)
+	v.nonNegative(f+".tower.facing", float64(t.Facing), units.KindLength)
+	if v.err == nil && 2*t.Facing >= t.Depth {
+		v.fail(f+".tower.facing", "facing %s on both faces leaves no effective section of the %s column", t.Facing, t.Depth)
+	}
+	v.nonNegative(f+".tower.unit_weight", float64(t.UnitWeight), units.KindUnitWeight)
+	switch t.Saddle.Kind {
+	case "fixed", "roller":
+	case "sliding":
+		if !(t.Saddle.Friction > 0 && t.Saddle.Friction < 1) {
+			v.fail(f+".tower.saddle.friction", "a sliding saddle needs a friction coefficient between 0 and 1, got %v", t.Saddle.Friction)
+		}
+	default:
+		v.fail(f+".tower.saddle.kind", "unknown saddle kind %q; want fixed, sliding or roller", t.Saddle.Kind)
+	}
+	sec := t.Section
+	v.positive(f+".tower.section.concrete", float64(sec.Concrete), units.KindPressure)
+	if sec.Bars < 0 || sec.Bars%2 != 0 {
+		v.fail(f+".tower.section.bars", "must be an even number (half on each face), got %d", sec.Bars)
+	}
+	if sec.Bars > 0 {
+		v.positive(f+".tower.section.steel", float64(sec.Steel), units.KindPressure)
+		v.positive(f+".tower.section.bar_diameter", float64(sec.BarDiameter), units.KindLength)
+		v.positive(f+".tower.section.cover", float64(sec.Cover), units.KindLength)
+		if v.err == nil && 2*sec.Cover >= t.Depth-2*t.Facing {
+			v.fail(f+".tower.section.cover", "cover %s leaves no room in the effective depth", sec.Cover)
+		}
+	}
+	ft := t.Footing
+	v.positive(f+".tower.footing.length", float64(ft.Length), units.KindLength)
+	v.positive(f+".tower.footing.width", float64(ft.Width), units.KindLength)
+	v.positive(f+".tower.footing.thickness", float64(ft.Thickness), units.KindLength)
+	v.nonNegative(f+".tower.footing.depth", float64(ft.Depth), units.KindLength)
+	v.finite(f+".tower.footing.column_offset", float64(ft.ColumnOffset))
+	if v.err == nil && (ft.Length < t.Depth || ft.Width < t.Width) {
+		v.fail(f+".tower.footing", "footing %s × %s is smaller than the column %s × %s", ft.Length, ft.Width, t.Depth, t.Width)
+	}
+	if v.err == nil && math.Abs(float64(ft.ColumnOffset))+float64(t.Depth)/2 > float64(ft.Length)/2 {
+		v.fail(f+".tower.footing.column_offset", "puts the column beyond the edge of the footing")
+	}
+	e := t.Eccentricity
+	switch e.Rule {
+	case "", "kern":
+	case "fraction":
+		if !(e.Fraction > 0 && e.Fraction <= 1) {
+			v.fail(f+".tower.eccentricity.fraction", "must lie in (0, 1], got %v", e.Fraction)
+		}
+		v.finite(f+".tower.eccentricity.offset", float64(e.Offset))
+	default:
+		v.fail(f+".tower.eccentricity.rule", "unknown rule %q; want kern or fraction", e.Rule)
+	}
+
+	bs := k.Backstay
+	v.positive(f+".backstay.horizontal", float64(bs.Horizontal), units.KindLength)
+	v.finite(f+".backstay.drop", float64(bs.Drop))
+	if v.err == nil && bs.Drop <= 0 {
+		v.fail(f+".backstay.drop", "the anchor must lie below the saddle, got a drop of %s (anchor above the saddle)", bs.Drop)
+	}
+
+	a := k.Anchor
+	switch a.Type {
+	case "block", "deadman":
+		v.positive(f+".anchor.length", float64(a.Length), units.KindLength)
+		v.positive(f+".anchor.width", float64(a.Width), units.KindLength)
+		v.positive(f+".anchor.height", float64(a.Height), units.KindLength)
+		v.positive(f+".anchor.depth", float64(a.Depth), units.KindLength)
+		v.nonNegative(f+".anchor.unit_weight", float64(a.UnitWeight), units.KindUnitWeight)
+		if a.Passive < 0 || a.Passive > 1 || math.IsNaN(a.Passive) {
+			v.fail(f+".anchor.passive", "must lie between 0 and 1, got %v", a.Passive)
+		}
+	case "rock":
+		if a.Bars <= 0 {
+			v.fail(f+".anchor.bars", "a rock anchor needs at least one bar, got %d", a.Bars)
+		}
+		v.positive(f+".anchor.bar_diameter", float64(a.BarDiameter), units.KindLength)
+		v.positive(f+".anchor.bar_strength", float64(a.BarStrength), units.KindPressure)
+		v.positive(f+".anchor.hole_diameter", float64(a.HoleDiameter), units.KindLength)
+		v.positive(f+".anchor.bond_length", float64(a.BondLength), units.KindLength)
+	default:
+		v.fail(f+".anchor.type", "unknown anchor type %q; want block, deadman or rock", a.Type)
+	}
+	if _, err := k.Soil.soil(); err != nil {
+		v.fail(f+".soil", "%v", err)
+	}
+}
+
+func (b Bridge) validateLoads(v *validator) {
+	l := b.Loads
+	v.nonNegative("loads.crowd", float64(l.Crowd), units.KindPressure)
+	for _, x := range []struct {
+		f string
+		x float64
+	}{{"loads.wind_with_crowd", l.WindWithCrowd}, {"loads.rope_drag", l.DragCoefficient}, {"loads.walkway_drag", l.WalkwayDrag}} {
+		if math.IsNaN(x.x) || x.x < 0 || x.x > 10 {
+			v.fail(x.f, "must lie between 0 and 10, got %v", x.x)
+		}
+	}
+	bs := b.Basis
+	switch bs.Method {
+	case "", "allowable", "partial":
+	default:
+		v.fail("basis.method", "unknown method %q; want allowable or partial", bs.Method)
+	}
+	for _, x := range []struct {
+		f string
+		x float64
+	}{
+		{"basis.rope_factor", bs.RopeFactor}, {"basis.sliding_factor", bs.SlidingFactor},
+		{"basis.overturning_factor", bs.OverturningFactor}, {"basis.uplift_factor", bs.UpliftFactor},
+		{"basis.bearing_factor", bs.BearingFactor}, {"basis.gamma_g", bs.GammaG},
+		{"basis.gamma_q", bs.GammaQ}, {"basis.gamma_r", bs.GammaR},
+	} {
+		if math.IsNaN(x.x) || x.x < 0 || (x.x > 0 && x.x < 0.5) || x.x > 20 {
+			v.fail(x.f, "must be zero (default) or a factor between 0.5 and 20, got %v", x.x)
+		}
+	}
+}
