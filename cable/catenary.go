@@ -181,7 +181,7 @@ func newCatenary(s Span, w, h float64) (Catenary, error) {
 	if !finite(a) || !(k < 700) {
 		return Catenary{}, errOutOfRange
 	}
-	u := math.Asinh(float64(s.Rise) / (2 * a * math.Sinh(k)))
+	u := asinh(float64(s.Rise) / (2 * a * math.Sinh(k)))
 	c := Catenary{span: s, w: w, h: h, a: a, x0: l/2 - a*u}
 	va, vb := c.Reactions()
 	ta, tb := c.SupportTensions()

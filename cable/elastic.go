@@ -114,7 +114,7 @@ func (e ElasticCatenary) start() (h, v float64) {
 		if kk, ok := kForLength(L, rise, L0); ok && kk < 700 {
 			hc := w * L / (2 * kk)
 			a := hc / w
-			u := math.Asinh(rise / (2 * a * math.Sinh(kk)))
+			u := asinh(rise / (2 * a * math.Sinh(kk)))
 			vc := hc * math.Sinh((L-(L/2-a*u))/a)
 			p1, p2, _, _, _ := e.residual(h, v, false)
 			q1, q2, _, _, _ := e.residual(hc, vc, false)
@@ -144,24 +144,22 @@ func (e ElasticCatenary) solve() (h, v float64, ok bool) {
 		}
 		t := 1.0
 		var hn, vn, m2 float64
-		var q1, q2 float64
+		var q1, q2, k11, k12, k22 float64
 		accepted := false
 		for ls := 0; ls < 60; ls++ {
 			hn, vn = h+t*dh, v+t*dv
-			if hn > 0 {
-				q1, q2, _, _, _ = e.residual(hn, vn, false)
-				m2 = q1*q1 + q2*q2
-				if m2 < n2 || (m2 <= n2 && math.Sqrt(m2) <= tol) {
-					accepted = true
-					break
-				}
-			}
 			if hn <= 0 {
 				t *= 0.5 * h / (h - hn) // step to halfway towards H = 0
 				if t == 0 {
 					break
 				}
 				continue
+			}
+			q1, q2, k11, k12, k22 = e.residual(hn, vn, true)
+			m2 = q1*q1 + q2*q2
+			if m2 < n2 || (m2 <= n2 && math.Sqrt(m2) <= tol) {
+				accepted = true
+				break
 			}
 			t /= 2
 		}
@@ -171,8 +169,7 @@ func (e ElasticCatenary) solve() (h, v float64, ok bool) {
 		}
 		small := math.Abs(hn-h) <= 1e-15*hn && math.Abs(vn-v) <= 1e-15*(math.Abs(vn)+hn)
 		h, v = hn, vn
-		r1, r2, j11, j12, j22 = e.residual(h, v, true)
-		n2 = r1*r1 + r2*r2
+		r1, r2, j11, j12, j22, n2 = q1, q2, k11, k12, k22, m2
 		if math.Sqrt(n2) <= 1e-14*c || small {
 			return h, v, math.Sqrt(n2) <= tol
 		}

@@ -152,25 +152,24 @@ func (b beam) arcLength(c0, h float64) float64 {
 	return s
 }
 
-// arcLengthDH returns d/dH of arcLength(c0, H):
+// arcLengthDH returns arcLength(c0, H) and its derivative in H:
 //
 //	dS/dH = (1/H) ∫ p (c₀ − p)/√(1+p²) dx,  p = c₀ − Q/H
 //
-// integrated exactly on each piece with the cancellation-free differences.
-func (b beam) arcLengthDH(c0, h float64) float64 {
+// both integrated exactly on each piece with the cancellation-free
+// differences (one asinh per piece serves both).
+func (b beam) arcLengthDH(c0, h float64) (length, deriv float64) {
 	var buf [16]float64
 	xs := b.breaks(buf[:])
-	s := 0.0
 	for i := 1; i < len(xs); i++ {
 		dx := xs[i] - xs[i-1]
 		if dx <= 0 {
 			continue
 		}
 		p0, p1 := c0-b.shear(xs[i-1])/h, c0-b.shear(xs[i])/h
-		a0, a1 := math.Hypot(1, p0), math.Hypot(1, p1)
+		a0, a1 := sqrt1p(p0), sqrt1p(p1)
 		sum := p0 + p1
-		// mean of p/√(1+p²) and of p²/√(1+p²) over [p0, p1]
-		meanP := sum / (a0 + a1)
+		// means over [p0, p1] of √(1+p²), p/√(1+p²) and p²/√(1+p²)
 		first := (a1+a0)/2 + sum*sum/(2*(a1+a0))
 		var asm float64
 		d := p1 - p0
@@ -178,12 +177,18 @@ func (b beam) arcLengthDH(c0, h float64) float64 {
 		case d == 0:
 			asm = 1 / a0
 		case p0*p1 <= 0:
-			asm = math.Asinh(p1*a0-p0*a1) / d
+			asm = asinh(p1*a0-p0*a1) / d
 		default:
-			asm = math.Asinh(d*sum/(p1*a0+p0*a1)) / d
+			x := d * sum / (p1*a0 + p0*a1)
+			if math.Abs(x) < 1e-8 {
+				asm = sum / (p1*a0 + p0*a1) * (1 - x*x/6)
+			} else {
+				asm = asinh(x) / d
+			}
 		}
-		meanP2 := (first - asm) / 2
-		s += dx * (c0*meanP - meanP2)
+		meanP := sum / (a0 + a1)
+		length += dx * (first + asm) / 2
+		deriv += dx * (c0*meanP - (first-asm)/2)
 	}
-	return s / h
+	return length, deriv / h
 }

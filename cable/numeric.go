@@ -6,21 +6,52 @@ import "math"
 // shapes: differences of nearly equal transcendental values computed
 // without cancellation, and a bracketed Newton solver.
 
+// sqrt1p returns √(1+s²), without overflow for huge s.
+func sqrt1p(s float64) float64 {
+	if math.Abs(s) < 1e150 {
+		return math.Sqrt(1 + s*s)
+	}
+	return math.Hypot(1, s)
+}
+
+// asinh returns the inverse hyperbolic sine of x: a series below 0.01 in
+// magnitude (error < 1e-19 relative), ln(x + √(1+x²)) above (math.Log is
+// much faster than the math.Log1p that math.Asinh uses for |x| < 2, and
+// for |x| ≥ 0.01 the argument is at least 1.01, so no precision is lost
+// beyond a few ulps).
+func asinh(x float64) float64 {
+	ax := math.Abs(x)
+	var r float64
+	switch {
+	case ax < 0.01:
+		x2 := ax * ax
+		r = ax * (1 + x2*(-1.0/6+x2*(3.0/40+x2*(-15.0/336+x2*105.0/3456))))
+	case ax < 1e150:
+		r = math.Log(ax + math.Sqrt(1+ax*ax))
+	default:
+		r = math.Asinh(ax)
+	}
+	if x < 0 {
+		return -r
+	}
+	return r
+}
+
 // asinhDiff returns asinh(s1) − asinh(s0) without cancellation, using
 //
 //	asinh s1 − asinh s0 = asinh(s1√(1+s0²) − s0√(1+s1²))
 //	s1√(1+s0²) − s0√(1+s1²) = (s1−s0)(s1+s0)/(s1√(1+s0²) + s0√(1+s1²))  (same signs)
 func asinhDiff(s1, s0 float64) float64 {
-	a0, a1 := math.Hypot(1, s0), math.Hypot(1, s1)
+	a0, a1 := sqrt1p(s0), sqrt1p(s1)
 	if s0*s1 <= 0 {
-		return math.Asinh(s1*a0 - s0*a1)
+		return asinh(s1*a0 - s0*a1)
 	}
-	return math.Asinh((s1 - s0) * (s1 + s0) / (s1*a0 + s0*a1))
+	return asinh((s1 - s0) * (s1 + s0) / (s1*a0 + s0*a1))
 }
 
 // slopeSinDiff returns s1/√(1+s1²) − s0/√(1+s0²) without cancellation.
 func slopeSinDiff(s1, s0 float64) float64 {
-	a0, a1 := math.Hypot(1, s0), math.Hypot(1, s1)
+	a0, a1 := sqrt1p(s0), sqrt1p(s1)
 	if s0*s1 <= 0 {
 		return s1/a1 - s0/a0
 	}
@@ -34,7 +65,7 @@ func slopeSinDiff(s1, s0 float64) float64 {
 // with a = √(1+s²), written so that it stays accurate as s1 → s0, where it
 // tends to √(1+s0²).
 func arcMean(s0, s1 float64) float64 {
-	a0, a1 := math.Hypot(1, s0), math.Hypot(1, s1)
+	a0, a1 := sqrt1p(s0), sqrt1p(s1)
 	d := s1 - s0
 	sum := s1 + s0
 	first := (a1+a0)/2 + sum*sum/(2*(a1+a0))
@@ -43,13 +74,13 @@ func arcMean(s0, s1 float64) float64 {
 	case d == 0:
 		second = 1 / a0
 	case s0*s1 <= 0:
-		second = math.Asinh(s1*a0-s0*a1) / d
+		second = asinh(s1*a0-s0*a1) / d
 	default:
 		x := d * sum / (s1*a0 + s0*a1)
 		if math.Abs(x) < 1e-8 {
 			second = sum / (s1*a0 + s0*a1) * (1 - x*x/6)
 		} else {
-			second = math.Asinh(x) / d
+			second = asinh(x) / d
 		}
 	}
 	return (first + second) / 2
@@ -89,15 +120,60 @@ func cothMinusInv(x float64) float64 {
 }
 
 // newtonBracket finds a root of the increasing function g on [lo, hi],
-// where g(lo) < 0 < g(hi) (not checked), starting from x, taking Newton
-// steps and bisecting whenever a step leaves the bracket. It stops when a
-// step or the bracket is smaller than tol (absolute, in x). ok is false
-// after maxIter steps without convergence.
+// where g(lo) < 0 < g(hi) (not checked; either bound may be infinite),
+// starting from x, taking Newton steps and bisecting whenever a step leaves
+// the bracket. While a side of the bracket is open, steps are limited to 1
+// (a factor e when x is a logarithm). It stops when a step or the bracket
+// is smaller than tol (absolute, in x). ok is false after maxIter steps
+// without convergence or on a NaN.
 func newtonBracket(g func(x float64) (v, dv float64), lo, hi, x, tol float64, maxIter int) (root float64, ok bool) {
 	for i := 0; i < maxIter; i++ {
 		v, dv := g(x)
 		if v == 0 {
 			return x, true
+		}
+		if math.IsNaN(v) {
+			return x, false
+		}
+		if v < 0 {
+			lo = x
+		} else {
+			hi = x
+		}
+		xn := x - v/dv
+		if math.IsInf(lo, -1) || math.IsInf(hi, 1) {
+			if !(xn > lo && xn < hi) || math.Abs(xn-x) > 1 {
+				if v > 0 {
+					xn = x - 1
+				} else {
+					xn = x + 1
+				}
+			}
+		} else if !(xn > lo && xn < hi) {
+			xn = lo + (hi-lo)/2
+		}
+		if math.Abs(xn-x) <= tol || hi-lo <= tol {
+			return xn, true
+		}
+		x = xn
+	}
+	return x, false
+}
+
+// newtonPositive finds the root x > 0 of the increasing function g by
+// Newton's method from x, safeguarded by the bracket the iterates build:
+// a step leaving it bisects the bracket, or halves or doubles x while the
+// bracket is still open on that side. It stops when a step is below tol
+// relative to x. ok is false after maxIter steps or on a NaN.
+func newtonPositive(g func(x float64) (v, dv float64), x, tol float64, maxIter int) (root float64, ok bool) {
+	lo, hi := 0.0, math.Inf(1)
+	for i := 0; i < maxIter; i++ {
+		v, dv := g(x)
+		if v == 0 {
+			return x, true
+		}
+		if math.IsNaN(v) {
+			return x, false
 		}
 		if v < 0 {
 			lo = x
@@ -106,10 +182,17 @@ func newtonBracket(g func(x float64) (v, dv float64), lo, hi, x, tol float64, ma
 		}
 		xn := x - v/dv
 		if !(xn > lo && xn < hi) {
-			xn = lo + (hi-lo)/2
+			switch {
+			case math.IsInf(hi, 1):
+				xn = 2 * x
+			case lo == 0:
+				xn = x / 2
+			default:
+				xn = lo + (hi-lo)/2
+			}
 		}
-		if math.Abs(xn-x) <= tol || hi-lo <= tol {
-			return xn, true
+		if math.Abs(xn-x) <= tol*xn || hi-lo <= tol*xn {
+			return xn, finite(xn)
 		}
 		x = xn
 	}

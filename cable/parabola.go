@@ -59,9 +59,12 @@ func ParabolaWithTension(s Span, w units.LoadPerLength, h units.Force) (Parabola
 func newParabola(s Span, w, h float64) (Parabola, error) {
 	p := Parabola{span: s, w: w, h: h}
 	va, vb := p.Reactions()
-	ta, tb := p.SupportTensions()
 	x0, z0, _ := p.LowPoint()
-	if !allFinite(h, float64(va), float64(vb), float64(ta), float64(tb), float64(p.Length()), float64(p.Sag(s.Length/2)), float64(x0), float64(z0)) {
+	l := float64(s.Length)
+	// finite reactions bound the tensions; finite slopes bound the length
+	bound := h + math.Abs(float64(va)) + math.Abs(float64(vb))
+	slopes := l * (1 + (math.Abs(float64(va))+math.Abs(float64(vb)))/h)
+	if !allFinite(h, bound, slopes, float64(p.Sag(s.Length/2)), float64(x0), float64(z0)) {
 		return Parabola{}, errOutOfRange
 	}
 	return p, nil
