@@ -13,9 +13,9 @@ import (
 // 24 kN/m³ (EN 1991-1-1 Table A.1, from memory; 25 kN/m³ when reinforced).
 const ConcreteUnitWeight = 24 * units.KilonewtonPerCubicMetre
 
-// AnchorBlock is a rectangular concrete gravity block, cast in the ground
-// with its base at Depth below the ground surface, holding one or more
-// backstays.
+// AnchorBlock is a rectangular concrete gravity block, optionally stepped
+// (Steps), cast in the ground with its base at Depth below the ground
+// surface, holding one or more backstays.
 //
 // Frame: origin at the back bottom edge of the block (the base edge
 // farthest from the tower), x horizontal toward the tower (the direction
@@ -43,6 +43,9 @@ type AnchorBlock struct {
 	// and soil below the water table weighs its submerged unit weight.
 	Groundwater bool
 	WaterDepth  units.Length
+	// Steps are concrete parts standing on the block (a stepped block);
+	// none for a plain rectangular block.
+	Steps []Step
 }
 
 func (a AnchorBlock) validate() error {
@@ -68,7 +71,38 @@ func (a AnchorBlock) validate() error {
 			return err
 		}
 	}
+	for i, st := range a.Steps {
+		name := fmt.Sprintf("AnchorBlock.Steps[%d]", i)
+		for _, v := range []float64{float64(st.X0), float64(st.X1), float64(st.Z0), float64(st.Z1), float64(st.Width)} {
+			if err := finite(name, v); err != nil {
+				return err
+			}
+		}
+		if !(0 <= st.X0 && st.X0 < st.X1 && st.X1 <= a.Length) {
+			return invalid(name, "must satisfy 0 ≤ X0 < X1 ≤ Length")
+		}
+		if !(a.Height <= st.Z0 && st.Z0 < st.Z1) {
+			return invalid(name, "must satisfy Height ≤ Z0 < Z1: a step stands on the block")
+		}
+		if !(st.Width > 0 && st.Width <= a.Width) {
+			return invalid(name+".Width", "must be positive and at most the block's width")
+		}
+	}
 	return nil
+}
+
+// contains reports whether the point (x, z) lies within the block or one
+// of its steps.
+func (a AnchorBlock) contains(x, z units.Length) bool {
+	if x >= 0 && x <= a.Length && z >= 0 && z <= a.Height {
+		return true
+	}
+	for _, st := range a.Steps {
+		if x >= st.X0 && x <= st.X1 && z >= st.Z0 && z <= st.Z1 {
+			return true
+		}
+	}
+	return false
 }
 
 // rankineLevel returns Rankine's coefficient for level ground and a
@@ -81,10 +115,27 @@ func rankineLevel(phi units.Angle, passive bool) float64 {
 	return t * t
 }
 
-// blockLoads are the characteristic forces of an anchor block, other than
-// the pulls.
+// Step is a rectangular concrete part standing on an anchor block, making
+// a stepped block, in the block's frame: it spans X0…X1 along the pull,
+// Z0…Z1 in height, and Width across (centred on the block). Steps sit on
+// the block (Z0 ≥ Height) or on one another, and must not overlap; the
+// base stays the block's.
+type Step struct {
+	X0, X1, Z0, Z1 units.Length
+	Width          units.Length
+}
+
+// blockLoads are the characteristic forces of an anchor block or footing,
+// other than the applied loads: the weight of concrete and soil cover with
+// the x of its line of action, and the water's uplift with its x.
 type blockLoads struct {
-	block, cover, buoyancy float64 // weights and the water's uplift, N
+	weight, xw   float64
+	buoyancy, xu float64
+}
+
+// overlap returns the length common to [a0, a1] and [b0, b1], or zero.
+func overlap(a0, a1, b0, b1 float64) float64 {
+	return math.Max(math.Min(a1, b1)-math.Max(a0, b0), 0)
 }
 
 func (a AnchorBlock) loads(s Soil) blockLoads {
@@ -93,21 +144,44 @@ func (a AnchorBlock) loads(s Soil) blockLoads {
 	if gc == 0 {
 		gc = float64(ConcreteUnitWeight)
 	}
-	plan := l * w
-	var r blockLoads
-	r.block = gc * plan * h
-	cover := math.Max(d-h, 0)
-	dw := math.Inf(1)
+	gs, gsub, gw := float64(s.UnitWeight), float64(s.SubmergedWeight()), float64(WaterUnitWeight)
+	// Heights in the block frame: ground at z = d, water table at zw.
+	zw := math.Inf(-1)
 	if a.Groundwater {
-		dw = float64(a.WaterDepth)
+		zw = d - float64(a.WaterDepth)
 	}
-	dry := math.Min(cover, dw)
-	wet := math.Max(cover-dw, 0)
-	r.cover = plan * (float64(s.UnitWeight)*dry + float64(s.SubmergedWeight())*wet)
-	// Submerged height of the block itself.
-	top := d - h
-	sub := math.Min(math.Max(d-math.Max(dw, top), 0), h)
-	r.buoyancy = float64(WaterUnitWeight) * plan * sub
+	var wsum, wmom, usum, umom float64
+	add := func(x0, x1, z0, z1, width float64) {
+		plan := (x1 - x0) * width
+		xc := (x0 + x1) / 2
+		wc := gc * plan * (z1 - z0)
+		u := gw * plan * overlap(z0, z1, math.Inf(-1), zw)
+		wsum += wc
+		wmom += wc * xc
+		usum += u
+		umom += u * xc
+	}
+	// soil adds (sign +1) or removes (−1) soil between z0 and z1 below ground.
+	soil := func(sign, x0, x1, z0, z1, width float64) {
+		plan := (x1 - x0) * width
+		ws := sign * plan * (gs*overlap(z0, z1, math.Max(zw, h), d) + gsub*overlap(z0, z1, h, math.Min(zw, d)))
+		wsum += ws
+		wmom += ws * (x0 + x1) / 2
+	}
+	add(0, l, 0, h, w)
+	soil(1, 0, l, h, d, w)
+	for _, st := range a.Steps {
+		x0, x1, z0, z1, sw := float64(st.X0), float64(st.X1), float64(st.Z0), float64(st.Z1), float64(st.Width)
+		add(x0, x1, z0, z1, sw)
+		soil(-1, x0, x1, z0, z1, sw)
+	}
+	r := blockLoads{weight: wsum, xw: l / 2, buoyancy: usum, xu: l / 2}
+	if wsum > 0 {
+		r.xw = wmom / wsum
+	}
+	if usum > 0 {
+		r.xu = umom / usum
+	}
 	return r
 }
 
@@ -139,19 +213,22 @@ func (a AnchorBlock) earth(s Soil) (pp, pa EarthForce, err error) {
 // "anchor.sliding", "anchor.overturning", "anchor.uplift" and
 // "anchor.bearing". Element and Case are left empty for the caller.
 //
-// With Fx = Σ F cos α, Fz = Σ F sin α, W the block's weight, Ws the soil
-// cover's, U the buoyancy and N = W + Ws − U − Fz:
+// With Fx = Σ F cos α, Fz = Σ F sin α, W the weight of the block and its
+// steps, Ws the soil cover's (less the soil the steps displace), xW their
+// centroid, U the buoyancy at xU and N = W + Ws − U − Fz:
 //
 //	sliding:     driving Fx (+ Pa, active on the back face, when passive is counted)
 //	             resisting N tan δ + μ Pp            (δ = Soil.InterfaceFriction; cohesion ignored)
 //	overturning: about the front toe (x = Length, z = 0)
-//	             driving Σ (Fx·Z + Fz·(Length − X)) + U·Length/2
-//	             resisting (W + Ws)·Length/2         (earth pressures ignored)
+//	             driving Σ (Fx·Z + Fz·(Length − X)) + U·(Length − xU)
+//	             resisting (W + Ws)·(Length − xW)    (earth pressures ignored)
 //	uplift:      driving Fz, resisting W + Ws − U   (side friction ignored)
 //	bearing:     N on the base with eccentricity e = M/N from the base centre,
-//	             M = Σ (Fx·Z + Fz·(Length/2 − X)); earth pressures ignored;
+//	             M = Σ (Fx·Z + Fz·(Length/2 − X)) + (W + Ws)(xW − Length/2) − U(xU − Length/2);
+//	             earth pressures ignored;
 //	             N/A' against qult (EN 1997-1 Annex D) on the effective base B' = Length − 2|e|,
-//	             or the peak contact pressure against Soil.Allowable when one is given.
+//	             or, on the allowable basis, the peak contact pressure against
+//	             Soil.Allowable when one is given.
 //
 // Allowable basis: each factor of safety is required on the driving side
 // (check.Stability) and reported as provided; bearing compares N/A' with
@@ -176,8 +253,8 @@ func (a AnchorBlock) Check(pulls []Pull, s Soil, b *Basis) ([]check.Result, erro
 		return nil, err
 	}
 	for i, p := range pulls {
-		if p.X < 0 || p.X > a.Length || p.Z < 0 || p.Z > a.Height {
-			return nil, invalid(fmt.Sprintf("pulls[%d]", i), "attachment point must lie within the block (0 ≤ X ≤ Length, 0 ≤ Z ≤ Height)")
+		if !a.contains(p.X, p.Z) {
+			return nil, invalid(fmt.Sprintf("pulls[%d]", i), "attachment point must lie within the block or a step")
 		}
 	}
 	bs, err := resolveBasis(b)
@@ -245,7 +322,7 @@ func (a AnchorBlock) sliding(pulls []Pull, s Soil, ld blockLoads, set actionSet,
 		fx += g * x
 		fz += g * z
 	}
-	n := set.gGfav*(ld.block+ld.cover) - set.gG*ld.buoyancy - fz
+	n := set.gGfav*ld.weight - set.gG*ld.buoyancy - fz
 	tanD := math.Tan(float64(sd.InterfaceFriction()))
 	res := math.Max(n, 0) * tanD / set.gRh
 	drive := fx
@@ -282,8 +359,8 @@ func (a AnchorBlock) overturning(pulls []Pull, ld blockLoads, set actionSet, fs 
 			stb -= set.factor(false, p.Variable) * m
 		}
 	}
-	dst += set.gG * ld.buoyancy * l / 2
-	stb += set.gGfav * (ld.block + ld.cover) * l / 2
+	dst += set.gG * ld.buoyancy * (l - ld.xu)
+	stb += set.gGfav * ld.weight * (l - ld.xw)
 	return check.Stability("anchor.overturning", "Anchor block overturning about the front toe", units.KindMoment, dst, stb, fs).
 		WithBasis(basisOf(set, "the restoring moment about the front toe", fs)).
 		WithNote("earth pressures on the front and back faces ignored in overturning"), nil
@@ -300,10 +377,10 @@ func (a AnchorBlock) uplift(pulls []Pull, ld blockLoads, set actionSet, fs float
 		}
 	}
 	if set.allowable {
-		stb += ld.block + ld.cover - ld.buoyancy
+		stb += ld.weight - ld.buoyancy
 	} else {
 		dst += set.gG * ld.buoyancy
-		stb += set.gGfav * (ld.block + ld.cover)
+		stb += set.gGfav * ld.weight
 	}
 	return check.Stability("anchor.uplift", "Anchor block uplift", units.KindForce, dst, stb, fs).
 		WithBasis(basisOf(set, "the block's effective weight", fs)).
@@ -313,8 +390,8 @@ func (a AnchorBlock) uplift(pulls []Pull, ld blockLoads, set actionSet, fs float
 func (a AnchorBlock) bearing(pulls []Pull, s Soil, ld blockLoads, set actionSet, favourable bool, fs float64) (check.Result, error) {
 	const id, title = "anchor.bearing", "Anchor block bearing pressure"
 	l := float64(a.Length)
-	n := set.gG * (ld.block + ld.cover - ld.buoyancy)
-	var h, m float64
+	n := set.gG * (ld.weight - ld.buoyancy)
+	h, m := 0.0, set.gG*(ld.weight*(ld.xw-l/2)-ld.buoyancy*(ld.xu-l/2))
 	for _, p := range pulls {
 		x, z := p.components()
 		g := set.factor(!favourable, p.Variable)

@@ -287,3 +287,65 @@ func TestAnchorBlockRejects(t *testing.T) {
 		t.Errorf("φ 70: %v", err)
 	}
 }
+
+func TestAnchorBlockSteps(t *testing.T) {
+	// A step covering the whole plan is the same as a taller block; with
+	// passive resistance counted only while the ground is at the block's
+	// top (the step's front face is not counted as a passive face).
+	pulls := []foundation.Pull{testPull(), {Force: 20e3, Angle: deg(40), X: 0.5, Z: 0.3, Variable: true}}
+	for _, c := range []struct {
+		depth units.Length
+		mu    float64
+	}{{1.5, 0.5}, {1.5, 0}, {2.5, 0}, {3.5, 0}} {
+		for _, water := range []bool{false, true} {
+			stepped := testBlock()
+			stepped.Depth, stepped.PassiveMobilisation = c.depth, c.mu
+			stepped.Groundwater, stepped.WaterDepth = water, 0.4
+			stepped.Steps = []foundation.Step{{X0: 0, X1: 3, Z0: 1.5, Z1: 2.3, Width: 2.5}}
+			tall := stepped
+			tall.Steps = nil
+			tall.Height = 2.3
+			for _, b := range []*foundation.Basis{nil, {PartialFactors: true}} {
+				rs, err1 := stepped.Check(pulls, testSand(), b)
+				rt, err2 := tall.Check(pulls, testSand(), b)
+				if err1 != nil || err2 != nil {
+					t.Fatal(err1, err2)
+				}
+				for i := range rs {
+					near(t, rs[i].ID+" stepped = tall", rs[i].Ratio, rt[i].Ratio, 1e-12)
+				}
+			}
+		}
+	}
+	// The same step at the back of the block resists overturning better
+	// than at its front, by statics: W·(L − x) about the toe.
+	back, front := testBlock(), testBlock()
+	back.Steps = []foundation.Step{{X0: 0, X1: 1, Z0: 1.5, Z1: 2.5, Width: 2.5}}
+	front.Steps = []foundation.Step{{X0: 2, X1: 3, Z0: 1.5, Z1: 2.5, Width: 2.5}}
+	rb, _ := back.Check([]foundation.Pull{testPull()}, testSand(), nil)
+	rf, _ := front.Check([]foundation.Pull{testPull()}, testSand(), nil)
+	fx, fz := 80*math.Cos(25*math.Pi/180), 80*math.Sin(25*math.Pi/180)
+	dst := fx*1.2 + fz*0.5
+	near(t, "back step", byID(t, rb, "anchor.overturning").Provided, (270*1.5+60*2.5)/dst, 1e-9)
+	near(t, "front step", byID(t, rf, "anchor.overturning").Provided, (270*1.5+60*0.5)/dst, 1e-9)
+	// A pull may attach on a step, not in the air beside it.
+	on := foundation.Pull{Force: 50e3, Angle: deg(20), X: 0.5, Z: 2.4}
+	if _, err := back.Check([]foundation.Pull{on}, testSand(), nil); err != nil {
+		t.Errorf("pull on the step: %v", err)
+	}
+	if _, err := front.Check([]foundation.Pull{on}, testSand(), nil); !errors.Is(err, foundation.ErrInvalid) {
+		t.Errorf("pull beside the step: %v", err)
+	}
+	for i, st := range []foundation.Step{
+		{X0: 1, X1: 0.5, Z0: 1.5, Z1: 2, Width: 1},
+		{X0: 0, X1: 1, Z0: 1, Z1: 2, Width: 1},
+		{X0: 0, X1: 1, Z0: 1.5, Z1: 2, Width: 3},
+		{X0: 0, X1: 4, Z0: 1.5, Z1: 2, Width: 1},
+	} {
+		blk := testBlock()
+		blk.Steps = []foundation.Step{st}
+		if _, err := blk.Check(nil, testSand(), nil); !errors.Is(err, foundation.ErrInvalid) {
+			t.Errorf("bad step %d: %v", i, err)
+		}
+	}
+}

@@ -2,7 +2,7 @@
 // footbridge: soil descriptions and presets, bearing capacity (Terzaghi,
 // Meyerhof, Hansen, Vesić and EN 1997-1 Annex D), contact pressure under
 // eccentric load, Rankine and Coulomb earth pressure, and the checks of
-// gravity anchor blocks, deadmen, grouted rock anchors and tower footings.
+// gravity anchor blocks (plain or stepped), deadmen, grouted rock anchors and tower footings.
 // It takes forces and geometry and knows nothing of ropes or towers.
 //
 // # Sign convention

@@ -86,7 +86,8 @@ func (s actionSet) factorOf(unfavourable bool, share float64) float64 {
 // With W the pad's and soil cover's weight less buoyancy and N = V + W:
 //
 //	bearing:     e = M/N along B; N/A' on B' = B − 2|e| against qult (method m),
-//	             or the peak contact pressure against Soil.Allowable when given
+//	             or, on the allowable basis, the peak contact pressure against
+//	             Soil.Allowable when given
 //	sliding:     driving |H|, resisting N tan δ (cohesion and passive ignored)
 //	overturning: about the base edge the moment turns toward:
 //	             driving |M| (+ |V|·B/2 when V pulls up), resisting (W + V⁺)·B/2
@@ -153,7 +154,7 @@ func (f Footing) bearing(load FootingLoad, s Soil, m Method, ld blockLoads, set 
 	const id, title = "footing.bearing", "Footing bearing pressure"
 	sh := load.VariableShare
 	v := float64(load.Vertical)
-	n := set.gG*(ld.block+ld.cover-ld.buoyancy) + set.factorOf(!favourable == (v > 0), sh)*v
+	n := set.gG*(ld.weight-ld.buoyancy) + set.factorOf(!favourable == (v > 0), sh)*v
 	h := set.factorOf(true, sh) * math.Abs(float64(load.Horizontal))
 	mo := set.factorOf(true, sh) * float64(load.Moment)
 	what := "the ultimate bearing pressure"
@@ -174,7 +175,7 @@ func (f Footing) sliding(load FootingLoad, s Soil, ld blockLoads, set actionSet,
 	sh := load.VariableShare
 	sd := s.factored(set.gPhi, set.gC)
 	v := float64(load.Vertical)
-	n := set.gGfav*(ld.block+ld.cover) - set.gG*ld.buoyancy + set.factorOf(v < 0, sh)*v
+	n := set.gGfav*ld.weight - set.gG*ld.buoyancy + set.factorOf(v < 0, sh)*v
 	tanD := math.Tan(float64(sd.InterfaceFriction()))
 	drive := set.factorOf(true, sh) * math.Abs(float64(load.Horizontal))
 	return check.Stability("footing.sliding", "Footing sliding", units.KindForce, drive, math.Max(n, 0)*tanD/set.gRh, fs).
@@ -188,7 +189,7 @@ func (f Footing) overturning(load FootingLoad, ld blockLoads, set actionSet, fs 
 	half := float64(f.B) / 2
 	v := float64(load.Vertical)
 	dst := set.factorOf(true, sh)*math.Abs(float64(load.Moment)) + set.gG*ld.buoyancy*half
-	stb := set.gGfav * (ld.block + ld.cover) * half
+	stb := set.gGfav * ld.weight * half
 	if v >= 0 {
 		stb += set.factorOf(false, sh) * v * half
 	} else {
