@@ -399,12 +399,7 @@ func (a AnchorBlock) bearing(pulls []Pull, s Soil, ld blockLoads, set actionSet,
 		h += g * x
 		m += g * (x*float64(p.Z) + z*(l/2-float64(p.X)))
 	}
-	what := "the ultimate bearing pressure"
-	if set.allowable && s.Allowable > 0 {
-		what = "the site report's allowable pressure (given)"
-		fs = 1
-	}
-	basis := basisOf(set, what, fs)
+	basis := bearingBasis(set, s, fs)
 	if n <= 0 {
 		return check.Compare(id, title, units.KindPressure, 0, 0).WithBasis(basis).
 			WithNote("the pulls lift the block off its base: uplift governs"), nil
@@ -412,6 +407,14 @@ func (a AnchorBlock) bearing(pulls []Pull, s Soil, ld blockLoads, set actionSet,
 	e := m / n
 	return baseBearing(id, title, basis, a.Length, a.Width, a.Depth, a.Groundwater, a.WaterDepth,
 		units.Force(n), units.Force(h), units.Length(e), s, EC7, set, fs)
+}
+
+// bearingBasis returns the basis text of a bearing result.
+func bearingBasis(set actionSet, s Soil, fs float64) string {
+	if set.allowable && s.Allowable > 0 {
+		return "allowable basis: peak contact pressure against the allowable bearing pressure given by the site report"
+	}
+	return basisOf(set, "the ultimate bearing pressure", fs)
 }
 
 // baseBearing checks a rectangular base of side b along the load

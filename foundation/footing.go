@@ -157,12 +157,7 @@ func (f Footing) bearing(load FootingLoad, s Soil, m Method, ld blockLoads, set 
 	n := set.gG*(ld.weight-ld.buoyancy) + set.factorOf(!favourable == (v > 0), sh)*v
 	h := set.factorOf(true, sh) * math.Abs(float64(load.Horizontal))
 	mo := set.factorOf(true, sh) * float64(load.Moment)
-	what := "the ultimate bearing pressure"
-	if set.allowable && s.Allowable > 0 {
-		what = "the site report's allowable pressure (given)"
-		fs = 1
-	}
-	basis := basisOf(set, what, fs)
+	basis := bearingBasis(set, s, fs)
 	if n <= 0 {
 		return check.Compare(id, title, units.KindPressure, 0, 0).WithBasis(basis).
 			WithNote("net uplift: the footing lifts off its base"), nil
