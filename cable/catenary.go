@@ -124,7 +124,7 @@ func CatenaryWithLength(s Span, w units.LoadPerLength, length units.Length) (Cat
 	if S <= c {
 		return Catenary{}, invalidf("rope length %g m must exceed the chord %g m", S, c)
 	}
-	k, ok := kForLength(float64(s.Length), float64(s.Rise), S)
+	k, ok := kForLength(float64(s.Length), float64(s.Rise), S, 0)
 	if !ok {
 		return Catenary{}, errNoConv("catenary for a given length")
 	}
@@ -134,8 +134,9 @@ func CatenaryWithLength(s Span, w units.LoadPerLength, length units.Length) (Cat
 	return newCatenary(s, float64(w), float64(w)*float64(s.Length)/(2*k))
 }
 
-// kForLength solves sinh k/k = √(S² − h²)/L for k > 0.
-func kForLength(l, h, S float64) (float64, bool) {
+// kForLength solves sinh k/k = √(S² − h²)/L for k > 0, starting from
+// kUp when it is positive (it must then be an upper bound of the root).
+func kForLength(l, h, S, kUp float64) (float64, bool) {
 	c := math.Hypot(l, h)
 	// m − 1 = (√(S²−h²) − L)/L, written without cancellation.
 	root := math.Sqrt((S - h) * (S + h))
@@ -149,18 +150,30 @@ func kForLength(l, h, S float64) (float64, bool) {
 	if k > 2 {
 		k = math.Min(k, target+math.Log(4)+2*math.Log(target+math.Log(4)+1)+1)
 	}
+	if kUp > 0 {
+		k = math.Min(k, kUp)
+	}
+	// Below m − 1 = 0.8 (k < 2) Newton runs on sinh k/k − m directly, which
+	// is convex too and needs no logarithm; above, on its logarithm.
+	direct := mm1 < 0.8
 	for i := 0; i < 200; i++ {
-		var G float64
-		if k > 700 {
-			G = k - math.Ln2 - math.Log(k)
+		var F, dF float64
+		x := sinhcm1(k)
+		if direct {
+			F = x - mm1
+			dF = (1 + x) * cothMinusInv(k)
 		} else {
-			G = math.Log1p(sinhcm1(k))
+			if k > 700 {
+				F = k - math.Ln2 - math.Log(k) - target
+			} else {
+				F = math.Log(1+x) - target // x ≥ 0.8 here: no precision lost
+			}
+			dF = cothMinusInv(k)
 		}
-		dG := cothMinusInv(k)
-		if dG <= 0 {
+		if dF <= 0 {
 			return k, false
 		}
-		kn := k - (G-target)/dG
+		kn := k - F/dF
 		if kn <= 0 {
 			kn = k / 2
 		}

@@ -51,9 +51,9 @@ type ElasticCatenary struct {
 // equations for H and V by Newton's method with a backtracking line
 // search on the squared residual; the Jacobian is the flexibility matrix,
 // symmetric and positive definite, so the Newton direction always reduces
-// the residual. The start is the better (smaller residual) of the
-// inextensible catenary of length L₀ (when L₀ exceeds the chord) and the
-// taut parabolic estimate from the classical cubic
+// the residual. The start is, for a rope longer than the chord, the
+// inextensible catenary of its length stretched by the mean tension;
+// otherwise the taut parabolic estimate from the classical cubic
 //
 //	L₀(1 + H/(EA cos β)) = c + W² cos⁴β c/(24 H²),  tan β = h/L.
 //
@@ -81,17 +81,32 @@ func NewElasticCatenary(s Span, r ElasticRope) (ElasticCatenary, error) {
 	return e, nil
 }
 
-// residual returns x(L₀) − L, z(L₀) − h and, when jac, the Jacobian.
+// residual returns x(L₀) − L, z(L₀) − h and, when jac, the Jacobian (the
+// flexibility matrix, symmetric).
 func (e ElasticCatenary) residual(H, V float64, jac bool) (r1, r2, j11, j12, j22 float64) {
 	L0, EA, w := float64(e.rope.Unstretched), float64(e.rope.EA), float64(e.rope.Weight)
 	W := w * L0
 	s1, s0 := V/H, (V-W)/H
-	ta, tb := math.Hypot(H, V-W), math.Hypot(H, V)
-	ad := asinhDiff(s1, s0)
+	a0, a1 := sqrt1p(s0), sqrt1p(s1)
+	ta, tb := H*a0, H*a1
+	sameSign := s0*s1 > 0
+	// asinh s1 − asinh s0, as in asinhDiff
+	var ad float64
+	if sameSign {
+		ad = asinh((s1 - s0) * (s1 + s0) / (s1*a0 + s0*a1))
+	} else {
+		ad = asinh(s1*a0 - s0*a1)
+	}
 	r1 = H*L0/EA + H/w*ad - float64(e.span.Length)
 	r2 = L0*(V-W/2)/EA + L0*(2*V-W)/(ta+tb) - float64(e.span.Rise)
 	if jac {
-		sd := slopeSinDiff(s1, s0)
+		// s1/a1 − s0/a0, as in slopeSinDiff
+		var sd float64
+		if sameSign {
+			sd = (s1 - s0) * (s1 + s0) / ((s1*a0 + s0*a1) * a0 * a1)
+		} else {
+			sd = s1/a1 - s0/a0
+		}
 		j11 = L0/EA + (ad-sd)/w
 		j12 = -H * L0 * (2*V - W) / ((ta + tb) * ta * tb)
 		j22 = L0/EA + sd/w
@@ -99,31 +114,36 @@ func (e ElasticCatenary) residual(H, V float64, jac bool) (r1, r2, j11, j12, j22
 	return
 }
 
+// start returns the first estimate of H and V: for a rope longer than the
+// chord, the inextensible catenary of its length stretched by the mean
+// tension of that catenary, T̄ ≈ H S/L; otherwise the taut parabolic cubic
+// (see NewElasticCatenary).
 func (e ElasticCatenary) start() (h, v float64) {
 	L, rise := float64(e.span.Length), float64(e.span.Rise)
 	L0, EA, w := float64(e.rope.Unstretched), float64(e.rope.EA), float64(e.rope.Weight)
 	W := w * L0
 	c := math.Hypot(L, rise)
+	if L0 > c {
+		if kk, ok := kForLength(L, rise, L0, 0); ok && kk < 700 {
+			hc := w * L / (2 * kk)
+			stretched := L0 * (1 + hc*L0/(L*EA))
+			if k2, ok := kForLength(L, rise, stretched, kk); ok && k2 < 700 {
+				kk, hc = k2, w*L/(2*k2)
+			}
+			a := hc / w
+			u := asinh(rise / (2 * a * math.Sinh(kk)))
+			vc := hc * math.Sinh((L-(L/2-a*u))/a)
+			if finite(hc) && finite(vc) && hc > 0 {
+				return hc, vc
+			}
+		}
+	}
 	cb := L / c
 	// taut parabolic estimate: H³ + b H² − k = 0
 	b := (L0 - c) * EA * cb / L0
 	k := W * W * cb * cb * cb * cb * c / 24 * EA * cb / L0
 	h = cubicRoot(b, k)
-	v = h*rise/L + W/2
-	if L0 > c {
-		if kk, ok := kForLength(L, rise, L0); ok && kk < 700 {
-			hc := w * L / (2 * kk)
-			a := hc / w
-			u := asinh(rise / (2 * a * math.Sinh(kk)))
-			vc := hc * math.Sinh((L-(L/2-a*u))/a)
-			p1, p2, _, _, _ := e.residual(h, v, false)
-			q1, q2, _, _, _ := e.residual(hc, vc, false)
-			if finite(q1) && finite(q2) && q1*q1+q2*q2 < p1*p1+p2*p2 {
-				h, v = hc, vc
-			}
-		}
-	}
-	return h, v
+	return h, h*rise/L + W/2
 }
 
 func (e ElasticCatenary) solve() (h, v float64, ok bool) {

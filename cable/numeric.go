@@ -98,13 +98,9 @@ func lnSinh(x float64) float64 {
 func sinhcm1(x float64) float64 {
 	if math.Abs(x) < 0.5 {
 		x2 := x * x
-		// Σ x^(2j)/(2j+1)!, j = 1..8
-		t, s := 1.0, 0.0
-		for j := 1; j <= 8; j++ {
-			t *= x2 / float64((2*j)*(2*j+1))
-			s += t
-		}
-		return s
+		// Σ x^(2j)/(2j+1)!, j = 1..8, in Horner form
+		return x2 * (1.0/6 + x2*(1.0/120+x2*(1.0/5040+x2*(1.0/362880+x2*(1.0/39916800+
+			x2*(1.0/6227020800+x2*(1.0/1307674368000+x2*(1.0/355687428096000))))))))
 	}
 	return math.Sinh(x)/x - 1
 }
