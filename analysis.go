@@ -294,33 +294,133 @@ func Check(b Bridge, opts *Options) (*Analysis, error) {
 	return a, nil
 }
 
+// sink receives check results: a check.Report, or a scorer that keeps
+// only what a design search needs.
+type sink interface{ add(check.Result) }
+
+type reportSink struct{ rep *check.Report }
+
+func (s reportSink) add(r check.Result) { s.rep.Add(r) }
+
 func (m *model) run(a *Analysis, opts *Options) error {
-	cases := m.b.Cases()
-	for _, lc := range cases {
-		svc, err := m.analyse(lc.characteristic(m.psi))
-		if err != nil {
+	var err error
+	if a.Service, a.Design, err = m.states(); err != nil {
+		return err
+	}
+	out := reportSink{&a.Report}
+	if err := m.superstructure(out, a.Service, a.Design); err != nil {
+		return err
+	}
+	for side := Left; side <= Right; side++ {
+		bank := m.bank(side)
+		if err := m.footingChecks(out, side, bank.Tower.Footing, a.Service); err != nil {
 			return err
 		}
-		design := svc
-		if des := m.designCase(lc); des != svc.Case {
-			if design, err = m.analyse(des); err != nil {
-				return err
-			}
-		}
-		a.Service = append(a.Service, svc)
-		a.Design = append(a.Design, design)
-	}
-	perm := a.Service[0] // the permanent case at the reference temperature
-	for i := range cases {
-		if err := m.checkCase(&a.Report, perm, a.Service[i], a.Design[i]); err != nil {
+		if err := m.anchorChecks(out, side, bank.Anchor, a.Service); err != nil {
 			return err
 		}
 	}
-	m.checkClearance(&a.Report, a.Service)
-	if err := m.checkFrequencies(a, perm, opts); err != nil {
+	m.checkClearance(out, a.Service)
+	if err := m.checkFrequencies(a, a.Service[0], opts); err != nil {
 		return err
 	}
 	return m.erection(a, opts)
+}
+
+// states analyses every load case under characteristic loads (service)
+// and under the factored loads of the partial basis (design). The first
+// case is the permanent one at the reference temperature.
+func (m *model) states() (service, design []CaseState, err error) {
+	for _, lc := range m.b.Cases() {
+		svc, err := m.analyse(lc.characteristic(m.psi))
+		if err != nil {
+			return nil, nil, err
+		}
+		des := svc
+		if dc := m.designCase(lc); dc != svc.Case {
+			if des, err = m.analyse(dc); err != nil {
+				return nil, nil, err
+			}
+		}
+		service = append(service, svc)
+		design = append(design, des)
+	}
+	return service, design, nil
+}
+
+// superstructure checks, for every case, what the ropes, towers and
+// column sections carry: rope tension, resultant eccentricity, column
+// section.
+func (m *model) superstructure(out sink, service, design []CaseState) error {
+	partial := m.b.partial()
+	for k, svc := range service {
+		des := design[k]
+		name := svc.Case.Name
+		for i, g := range m.groups {
+			var basis cable.TensionBasis = cable.GlobalFactor{Factor: m.b.Basis.RopeFactor}
+			t := svc.Groups[i].MaxTension
+			if partial {
+				basis = cable.PartialFactor{GammaR: m.b.Basis.GammaR}
+				t = des.Groups[i].MaxTension
+			}
+			r, err := cable.TensionCheck(t, g.rope, g.Count, basis)
+			if err != nil {
+				return fmt.Errorf("sagspan: %s, case %q: %w", g.Name, name, err)
+			}
+			out.add(r.For(g.Name, name))
+		}
+		for side := Left; side <= Right; side++ {
+			bank := m.bank(side)
+			towerName := side.String() + " tower"
+			var limit *tower.EccentricityLimit // nil: the kern
+			if e := bank.Tower.Eccentricity; e.Rule == "fraction" {
+				limit = &tower.EccentricityLimit{Fraction: e.Fraction, Offset: e.Offset}
+			}
+			r, err := tower.EccentricityCheck(svc.Tower[side], m.column(side), limit)
+			if err != nil {
+				return fmt.Errorf("sagspan: %s, case %q: %w", towerName, name, err)
+			}
+			out.add(r.For(towerName, name))
+			dr := des.Tower[side]
+			r, err = m.section(side).Check(dr.Vertical, dr.BaseMoment)
+			if err != nil {
+				return fmt.Errorf("sagspan: %s column section, case %q: %w", towerName, name, err)
+			}
+			out.add(r.For(towerName, name))
+		}
+	}
+	return nil
+}
+
+// footingChecks checks the footing spec of one bank's tower under every
+// service case.
+func (m *model) footingChecks(out sink, side Side, spec FootingSpec, service []CaseState) error {
+	element := side.String() + " footing"
+	for _, svc := range service {
+		results, err := m.footing(side, spec, service[0].Tower[side], svc.Tower[side])
+		if err != nil {
+			return fmt.Errorf("sagspan: %s, case %q: %w", element, svc.Case.Name, err)
+		}
+		for _, r := range results {
+			out.add(r.For(element, svc.Case.Name))
+		}
+	}
+	return nil
+}
+
+// anchorChecks checks the anchor spec of one bank under every service case.
+func (m *model) anchorChecks(out sink, side Side, spec AnchorSpec, service []CaseState) error {
+	element := side.String() + " anchor"
+	for _, svc := range service {
+		results, err := m.anchor(side, spec, service[0], svc)
+		if err != nil {
+			return fmt.Errorf("sagspan: %s, case %q: %w", element, svc.Case.Name, err)
+		}
+		for _, r := range results {
+			out.add(r.For(element, svc.Case.Name))
+		}
+	}
+	return nil
 }
 
 // designCase returns the case with the factors of the partial-factor basis
@@ -343,63 +443,6 @@ func (m *model) designCase(lc LoadCase) LoadCase {
 		}
 	}
 	return lc
-}
-
-func (m *model) checkCase(rep *check.Report, perm, svc, des CaseState) error {
-	name := svc.Case.Name
-	partial := m.b.partial()
-	for i, g := range m.groups {
-		var basis cable.TensionBasis = cable.GlobalFactor{Factor: m.b.Basis.RopeFactor}
-		t := svc.Groups[i].MaxTension
-		if partial {
-			basis = cable.PartialFactor{GammaR: m.b.Basis.GammaR}
-			t = des.Groups[i].MaxTension
-		}
-		r, err := cable.TensionCheck(t, g.rope, g.Count, basis)
-		if err != nil {
-			return fmt.Errorf("sagspan: %s, case %q: %w", g.Name, name, err)
-		}
-		rep.Add(r.For(g.Name, name))
-	}
-	for side := Left; side <= Right; side++ {
-		bank := m.bank(side)
-		towerName := side.String() + " tower"
-		col := m.column(side)
-		var limit *tower.EccentricityLimit // nil: the kern
-		if e := bank.Tower.Eccentricity; e.Rule == "fraction" {
-			limit = &tower.EccentricityLimit{Fraction: e.Fraction, Offset: e.Offset}
-		}
-		r, err := tower.EccentricityCheck(svc.Tower[side], col, limit)
-		if err != nil {
-			return fmt.Errorf("sagspan: %s, case %q: %w", towerName, name, err)
-		}
-		rep.Add(r.For(towerName, name))
-
-		sec := m.section(side)
-		dr := des.Tower[side]
-		r, err = sec.Check(dr.Vertical, dr.BaseMoment)
-		if err != nil {
-			return fmt.Errorf("sagspan: %s column section, case %q: %w", towerName, name, err)
-		}
-		rep.Add(r.For(towerName, name))
-
-		results, err := m.footing(side, perm.Tower[side], svc.Tower[side])
-		if err != nil {
-			return fmt.Errorf("sagspan: %s footing, case %q: %w", side, name, err)
-		}
-		for _, r := range results {
-			rep.Add(r.For(side.String()+" footing", name))
-		}
-
-		results, err = m.anchor(side, perm, svc)
-		if err != nil {
-			return fmt.Errorf("sagspan: %s anchor, case %q: %w", side, name, err)
-		}
-		for _, r := range results {
-			rep.Add(r.For(side.String()+" anchor", name))
-		}
-	}
-	return nil
 }
 
 // section returns the effective reinforced-concrete section of a column,
@@ -429,8 +472,7 @@ func share(x, p float64) float64 {
 // footing checks a tower footing under the column-base resultant r, brought
 // down to the underside of the footing; perm is the permanent case's
 // resultant, for the variable share of the partial basis.
-func (m *model) footing(s Side, perm, r tower.Resultant) ([]check.Result, error) {
-	spec := m.bank(s).Tower.Footing
+func (m *model) footing(s Side, spec FootingSpec, perm, r tower.Resultant) ([]check.Result, error) {
 	f := foundation.Footing{B: spec.Length, L: spec.Width, Thickness: spec.Thickness, Depth: spec.Depth, UnitWeight: m.bank(s).Tower.UnitWeight}
 	moment := func(r tower.Resultant) float64 {
 		return float64(r.BaseMoment) + float64(r.Horizontal)*float64(spec.Thickness) + float64(r.Vertical)*float64(spec.ColumnOffset)
@@ -461,8 +503,7 @@ func (m *model) foundationBasis() *foundation.Basis {
 
 // anchor checks the anchor of one bank under the backstay pulls of every
 // group, split into the permanent case's pull and the rest.
-func (m *model) anchor(s Side, perm, svc CaseState) ([]check.Result, error) {
-	spec := m.bank(s).Anchor
+func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Result, error) {
 	basis := m.foundationBasis()
 	x, z := spec.AttachX, spec.AttachZ
 	if x == 0 {
@@ -537,7 +578,7 @@ func (m *model) walkwayLow(cs CaseState) (units.Length, units.Length) {
 // checkClearance adds, for each case, the clearance of the walkway
 // underside at its lowest point above the design flood, against the
 // freeboard required.
-func (m *model) checkClearance(rep *check.Report, service []CaseState) {
+func (m *model) checkClearance(out sink, service []CaseState) {
 	site := m.b.Site
 	for _, cs := range service {
 		soffit, x := m.walkwayLow(cs)
@@ -551,7 +592,7 @@ func (m *model) checkClearance(rep *check.Report, service []CaseState) {
 			r.Status, r.Ratio = check.Fail, math.Inf(1)
 			r = r.WithNote("the walkway is at or below the design flood")
 		}
-		rep.Add(r)
+		out.add(r)
 	}
 }
 

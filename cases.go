@@ -29,14 +29,10 @@ type LoadCase struct {
 	GammaG, GammaQ, GammaW float64
 }
 
-// Default factors of the verification bases.
+// Default load factors of the partial-factor basis. The allowable basis
+// takes its factors of safety from the checking packages' defaults
+// (cable.DefaultGlobalFactor, foundation.Basis), each documented there.
 const (
-	// Allowable basis, global factors of safety.
-	// defaultRopeFactor: 3.0 on the minimum breaking force, the upper end of
-	// older structural-strand allowable practice (2.2–3, from memory), kept
-	// high for ropes over saddles in rural bridges (common practice).
-	defaultRopeFactor = 3.0
-
 	// Partial-factor basis: EN 1990 Table A2.4(B) (from memory, as in
 	// EN 1997-1 Annex A set A1): γG 1.35 unfavourable, γQ 1.5.
 	defaultGammaG = 1.35
