@@ -1,0 +1,502 @@
+package sagspan
+
+import (
+	"context"
+	"fmt"
+	"math"
+	"runtime"
+	"sort"
+	"sync"
+
+	"github.com/sagspan/sagspan/cable"
+	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/units"
+)
+
+// BlockSize is the size of a gravity anchor block tried by a search.
+type BlockSize struct {
+	Length, Width, Height, Depth units.Length
+}
+
+// FootingSize is the plan and thickness of a tower footing tried by a
+// search; its depth below ground stays the bridge's.
+type FootingSize struct {
+	Length, Width, Thickness units.Length
+}
+
+// SearchSpace lists the choices a design search may make, holding the site
+// fixed. An empty list keeps the bridge's own value. Rope choices apply to
+// the first walkway rope group; the sag ratio to every group; anchor and
+// footing sizes to both banks alike (one standard size per bridge).
+type SearchSpace struct {
+	SagRatios []float64
+	Diameters []units.Length
+	Counts    []int
+	Anchors   []BlockSize
+	Footings  []FootingSize
+}
+
+// size returns the number of candidates in the space.
+func (s SearchSpace) size() (ropes, anchors, footings int) {
+	n := func(k int) int { return max(k, 1) }
+	return n(len(s.SagRatios)) * n(len(s.Diameters)) * n(len(s.Counts)), n(len(s.Anchors)), n(len(s.Footings))
+}
+
+// Prices are unit prices of the material quantities, in one currency of
+// the user's choice.
+type Prices struct {
+	RopePerKilogram         float64
+	ConcretePerCubicMetre   float64
+	ExcavationPerCubicMetre float64
+}
+
+// DemoPrices is an invented price list for demonstrations: its numbers are
+// made up and stand for no market, place or time.
+var DemoPrices = Prices{RopePerKilogram: 6, ConcretePerCubicMetre: 180, ExcavationPerCubicMetre: 25}
+
+// SearchSettings tune a design search. A nil *SearchSettings means the
+// defaults.
+type SearchSettings struct {
+	// Workers is the number of goroutines; zero means GOMAXPROCS.
+	Workers int
+	// Prices price the quantities; nil means DemoPrices.
+	Prices *Prices
+	// Progress, when set, is called from the goroutine that called Search
+	// after each group of candidates, with the candidates done and the total.
+	Progress func(done, total int)
+	// NearMisses is how many of the closest infeasible candidates to
+	// explain; zero means 5.
+	NearMisses int
+	// KeepAll keeps every candidate in SearchResult.All. Default false.
+	KeepAll bool
+}
+
+// Design is one candidate of a search: its choices, cost and verdict.
+type Design struct {
+	SagRatio float64
+	Diameter units.Length
+	Count    int
+	Anchor   BlockSize
+	Footing  FootingSize
+	// Cost is the priced quantity of ropes, concrete and excavation.
+	Cost float64
+	// Utilisation is the highest ratio of any check (comfort flags aside).
+	Utilisation float64
+	// Feasible is true when every check passes.
+	Feasible bool
+	// Governing is the worst result: the failure that rules the candidate
+	// out, or the most utilised check of a feasible one.
+	Governing check.Result
+	index     int
+}
+
+// SearchResult is what a design search found.
+type SearchResult struct {
+	// Best is the cheapest feasible design, nil when none is feasible;
+	// Analysis is its full whole-bridge check.
+	Best     *Design
+	Analysis *Analysis
+	// Front is the trade-off of cost against utilisation: the feasible
+	// designs that no cheaper design matches or beats in utilisation,
+	// from cheapest up.
+	Front []Design
+	// NearMisses are the infeasible designs closest to feasible (lowest
+	// utilisation), with the check and case that rule each out.
+	NearMisses []Design
+	// Evaluated and Feasible count the candidates.
+	Evaluated, Feasible int
+	// All holds every candidate in the order of the space, with
+	// SearchSettings.KeepAll.
+	All []Design
+}
+
+// scorer is the sink of the search's fast path: it keeps the verdict and
+// the worst result, not the results themselves.
+type scorer struct {
+	failed bool
+	worst  check.Result
+	max    float64
+	has    bool
+}
+
+func (s *scorer) add(r check.Result) {
+	if r.Status == check.Info || r.Status == check.Flag {
+		return
+	}
+	if !s.has || check.Worse(r, s.worst) {
+		s.worst, s.has = r, true
+	}
+	s.max = math.Max(s.max, r.Ratio)
+	s.failed = s.failed || r.Status == check.Fail
+}
+
+func (s *scorer) merge(t scorer) {
+	if t.has && (!s.has || check.Worse(t.worst, s.worst)) {
+		s.worst, s.has = t.worst, true
+	}
+	s.max = math.Max(s.max, t.max)
+	s.failed = s.failed || t.failed
+}
+
+// ropeChoice is one rope configuration of the space.
+type ropeChoice struct {
+	sag      float64
+	diameter units.Length
+	count    int
+}
+
+func (s SearchSpace) ropeChoices(b Bridge, walkway int) []ropeChoice {
+	sags := s.SagRatios
+	if len(sags) == 0 {
+		sags = []float64{float64(b.Ropes[walkway].Sag) / float64(b.Site.Span)}
+	}
+	ds := s.Diameters
+	if len(ds) == 0 {
+		ds = []units.Length{b.Ropes[walkway].Rope.Diameter}
+	}
+	ns := s.Counts
+	if len(ns) == 0 {
+		ns = []int{b.Ropes[walkway].Count}
+	}
+	var out []ropeChoice
+	for _, sag := range sags {
+		for _, d := range ds {
+			for _, n := range ns {
+				out = append(out, ropeChoice{sag, d, n})
+			}
+		}
+	}
+	return out
+}
+
+// Apply returns the bridge b with the design's choices made.
+func (d Design) Apply(b Bridge) Bridge {
+	walkway := firstWalkway(b)
+	b.Ropes = append([]RopeGroup(nil), b.Ropes...)
+	for i := range b.Ropes {
+		b.Ropes[i].Sag = units.Length(d.SagRatio) * b.Site.Span
+	}
+	b.Ropes[walkway].Rope.Diameter = d.Diameter
+	b.Ropes[walkway].Count = d.Count
+	return b.withSizes(d.Anchor, d.Footing)
+}
+
+// withSizes returns b with anchor and footing sizes a and f at both banks.
+func (b Bridge) withSizes(a BlockSize, f FootingSize) Bridge {
+	for _, bank := range []*Bank{&b.Banks.Left, &b.Banks.Right} {
+		bank.Anchor = a.apply(bank.Anchor)
+		bank.Tower.Footing = f.apply(bank.Tower.Footing)
+	}
+	return b
+}
+
+// apply returns a with this size; the zero size keeps a as it is.
+func (s BlockSize) apply(a AnchorSpec) AnchorSpec {
+	if s != (BlockSize{}) {
+		a.Length, a.Width, a.Height, a.Depth = s.Length, s.Width, s.Height, s.Depth
+	}
+	return a
+}
+
+// apply returns f with this size; the zero size keeps f as it is.
+func (s FootingSize) apply(f FootingSpec) FootingSpec {
+	if s != (FootingSize{}) {
+		f.Length, f.Width, f.Thickness = s.Length, s.Width, s.Thickness
+	}
+	return f
+}
+
+func firstWalkway(b Bridge) int {
+	for i, g := range b.Ropes {
+		if g.Role == RoleWalkway {
+			return i
+		}
+	}
+	return 0
+}
+
+// cost prices the quantities of bridge b: every rope over the span and both
+// backstays, concrete of anchors, footings and columns, excavation for
+// anchors and footings.
+func cost(b Bridge, p Prices) (float64, error) {
+	rope, err := ropeCost(b, p)
+	if err != nil {
+		return 0, err
+	}
+	return rope + columnCost(b, p) + anchorCost(b, p) + footingCost(b, p), nil
+}
+
+// ropeCost prices every rope over the span (its design-sag length) and
+// both backstays.
+func ropeCost(b Bridge, p Prices) (float64, error) {
+	var mass float64
+	for _, g := range b.Ropes {
+		r, err := g.Rope.rope()
+		if err != nil {
+			return 0, err
+		}
+		shape, err := cable.NewParabola(b.span(), 1, g.Sag)
+		if err != nil {
+			return 0, err
+		}
+		length := float64(shape.Length())
+		for _, bank := range []Bank{b.Banks.Left, b.Banks.Right} {
+			length += math.Hypot(float64(bank.Backstay.Horizontal), float64(bank.Backstay.Drop+g.Offset))
+		}
+		mass += float64(g.Count) * float64(r.Mass) * length
+	}
+	return mass * p.RopePerKilogram, nil
+}
+
+func columnCost(b Bridge, p Prices) float64 {
+	var v float64
+	for _, bank := range []Bank{b.Banks.Left, b.Banks.Right} {
+		t := bank.Tower
+		v += float64(t.Depth * t.Width * t.Height)
+	}
+	return v * p.ConcretePerCubicMetre
+}
+
+func anchorCost(b Bridge, p Prices) float64 {
+	var c float64
+	for _, bank := range []Bank{b.Banks.Left, b.Banks.Right} {
+		if a := bank.Anchor; a.Type != "rock" {
+			c += float64(a.Length*a.Width*a.Height)*p.ConcretePerCubicMetre + float64(a.Length*a.Width*a.Depth)*p.ExcavationPerCubicMetre
+		}
+	}
+	return c
+}
+
+func footingCost(b Bridge, p Prices) float64 {
+	var c float64
+	for _, bank := range []Bank{b.Banks.Left, b.Banks.Right} {
+		f := bank.Tower.Footing
+		c += float64(f.Length*f.Width*f.Thickness)*p.ConcretePerCubicMetre + float64(f.Length*f.Width*f.Depth)*p.ExcavationPerCubicMetre
+	}
+	return c
+}
+
+// Search looks for the cheapest design of bridge b, over the choices of
+// space, that passes every check. Every candidate is checked on the full
+// chain; the work is shared so that what a choice cannot change is worked
+// out once: the rope statics, towers, column sections and clearance once
+// per rope configuration, each anchor and footing size once per rope
+// configuration, and a candidate's verdict is then the worst of its parts.
+// Comfort flags do not rule a design out. The answer does not depend on
+// the number of workers: ties in cost go to the candidate listed first.
+//
+// Search returns an error for a bridge that does not validate, a space
+// that asks for anchor sizes on a bank without a block anchor, or when ctx
+// is cancelled.
+func Search(ctx context.Context, b Bridge, space SearchSpace, settings *SearchSettings) (*SearchResult, error) {
+	if settings == nil {
+		settings = &SearchSettings{}
+	}
+	if err := b.Validate(); err != nil {
+		return nil, err
+	}
+	prices := DemoPrices
+	if settings.Prices != nil {
+		prices = *settings.Prices
+	}
+	if len(space.Anchors) > 0 && (b.Banks.Left.Anchor.Type != "block" || b.Banks.Right.Anchor.Type != "block") {
+		return nil, fmt.Errorf("sagspan: search: anchor sizes apply to block anchors; both banks need type \"block\"")
+	}
+	for _, r := range space.SagRatios {
+		if !(r > 0 && r <= maxSagRatio) {
+			return nil, fmt.Errorf("sagspan: search: sag ratio %v outside (0, %v]", r, maxSagRatio)
+		}
+	}
+	walkway := firstWalkway(b)
+	ropes := space.ropeChoices(b, walkway)
+	_, nA, nF := space.size()
+	anchors := space.Anchors
+	if len(anchors) == 0 {
+		anchors = []BlockSize{{}} // keep each bank's own
+	}
+	footings := space.Footings
+	if len(footings) == 0 {
+		footings = []FootingSize{{}}
+	}
+	total := len(ropes) * nA * nF
+	designs := make([]Design, total)
+
+	workers := settings.Workers
+	if workers <= 0 {
+		workers = runtime.GOMAXPROCS(0)
+	}
+	jobs := make(chan int)
+	done := make(chan int)
+	ctx, cancel := context.WithCancel(ctx)
+	defer cancel()
+	var wg sync.WaitGroup
+	for range workers {
+		wg.Add(1)
+		go func() {
+			defer wg.Done()
+			for i := range jobs {
+				evaluate(b, prices, ropes[i], anchors, footings, designs[i*nA*nF:(i+1)*nA*nF], i*nA*nF)
+				select {
+				case done <- nA * nF:
+				case <-ctx.Done():
+					return
+				}
+			}
+		}()
+	}
+	go func() {
+		defer close(jobs)
+		for i := range ropes {
+			select {
+			case jobs <- i:
+			case <-ctx.Done():
+				return
+			}
+		}
+	}()
+	go func() { wg.Wait(); close(done) }()
+	finished := 0
+	for n := range done {
+		finished += n
+		if settings.Progress != nil {
+			settings.Progress(finished, total)
+		}
+	}
+	if err := ctx.Err(); err != nil {
+		return nil, fmt.Errorf("sagspan: search: %w", err)
+	}
+	return summarise(b, designs, settings)
+}
+
+// evaluate scores every candidate of one rope configuration into out,
+// whose first element is candidate number first.
+func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footings []FootingSize, out []Design, first int) {
+	base := Design{SagRatio: rc.sag, Diameter: rc.diameter, Count: rc.count, Anchor: anchors[0], Footing: footings[0]}
+	bb := base.Apply(b)
+	fail := func(err error) {
+		r := check.Value("search.invalid", "Candidate cannot be analysed", units.KindRatio, 0).WithNote(err.Error())
+		r.Status, r.Ratio = check.Fail, math.Inf(1)
+		for i := range out {
+			out[i] = Design{SagRatio: rc.sag, Diameter: rc.diameter, Count: rc.count,
+				Anchor: anchors[i/len(footings)], Footing: footings[i%len(footings)],
+				Cost: math.Inf(1), Utilisation: math.Inf(1), Governing: r, index: first + i}
+		}
+	}
+	m, err := newModel(bb)
+	if err != nil {
+		fail(err)
+		return
+	}
+	service, design, err := m.states()
+	if err != nil {
+		fail(err)
+		return
+	}
+	var superstructure scorer
+	if err := m.superstructure(&superstructure, service, design); err != nil {
+		fail(err)
+		return
+	}
+	m.checkClearance(&superstructure, service)
+
+	fixed, err := ropeCost(bb, prices)
+	if err != nil {
+		fail(err)
+		return
+	}
+	fixed += columnCost(bb, prices)
+
+	anchorScores := make([]scorer, len(anchors))
+	anchorPrices := make([]float64, len(anchors))
+	for j, size := range anchors {
+		anchorPrices[j] = anchorCost(bb.withSizes(size, FootingSize{}), prices)
+		for side := Left; side <= Right; side++ {
+			if err := m.anchorChecks(&anchorScores[j], side, size.apply(m.bank(side).Anchor), service); err != nil {
+				fail(err)
+				return
+			}
+		}
+	}
+	footingScores := make([]scorer, len(footings))
+	footingPrices := make([]float64, len(footings))
+	for k, size := range footings {
+		footingPrices[k] = footingCost(bb.withSizes(BlockSize{}, size), prices)
+		for side := Left; side <= Right; side++ {
+			if err := m.footingChecks(&footingScores[k], side, size.apply(m.bank(side).Tower.Footing), service); err != nil {
+				fail(err)
+				return
+			}
+		}
+	}
+	for j := range anchors {
+		for k := range footings {
+			d := base
+			d.Anchor, d.Footing = anchors[j], footings[k]
+			d.index = first + j*len(footings) + k
+			s := superstructure
+			s.merge(anchorScores[j])
+			s.merge(footingScores[k])
+			d.Feasible, d.Utilisation, d.Governing = !s.failed, s.max, s.worst
+			d.Cost = fixed + anchorPrices[j] + footingPrices[k]
+			out[j*len(footings)+k] = d
+		}
+	}
+}
+
+// summarise picks the best design, the trade-off front and the near misses,
+// and runs the full check of the best design.
+func summarise(b Bridge, designs []Design, settings *SearchSettings) (*SearchResult, error) {
+	res := &SearchResult{Evaluated: len(designs)}
+	if settings.KeepAll {
+		res.All = designs
+	}
+	var feasible, infeasible []Design
+	for _, d := range designs {
+		if d.Feasible {
+			feasible = append(feasible, d)
+		} else {
+			infeasible = append(infeasible, d)
+		}
+	}
+	res.Feasible = len(feasible)
+	sort.Slice(feasible, func(i, j int) bool {
+		a, c := feasible[i], feasible[j]
+		if a.Cost != c.Cost {
+			return a.Cost < c.Cost
+		}
+		return a.index < c.index
+	})
+	lowest := math.Inf(1)
+	for _, d := range feasible {
+		if d.Utilisation < lowest {
+			res.Front = append(res.Front, d)
+			lowest = d.Utilisation
+		}
+	}
+	sort.Slice(infeasible, func(i, j int) bool {
+		a, c := infeasible[i], infeasible[j]
+		if a.Utilisation != c.Utilisation {
+			return a.Utilisation < c.Utilisation
+		}
+		if a.Cost != c.Cost {
+			return a.Cost < c.Cost
+		}
+		return a.index < c.index
+	})
+	n := settings.NearMisses
+	if n <= 0 {
+		n = 5
+	}
+	res.NearMisses = infeasible[:min(n, len(infeasible))]
+	if len(feasible) == 0 {
+		return res, nil
+	}
+	best := feasible[0]
+	res.Best = &best
+	a, err := Check(best.Apply(b), nil)
+	if err != nil {
+		return nil, fmt.Errorf("sagspan: search: full check of the best design: %w", err)
+	}
+	res.Analysis = a
+	return res, nil
+}

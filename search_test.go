@@ -1,0 +1,233 @@
+package sagspan
+
+import (
+	"context"
+	"errors"
+	"math"
+	"runtime"
+	"testing"
+
+	"github.com/google/go-cmp/cmp"
+	"github.com/google/go-cmp/cmp/cmpopts"
+
+	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/units"
+)
+
+func smallSpace() SearchSpace {
+	m := units.Metre
+	return SearchSpace{
+		SagRatios: []float64{1.0 / 22, 1.0 / 18},
+		Diameters: []units.Length{28 * units.Millimetre, 32 * units.Millimetre},
+		Counts:    []int{4, 6},
+		Anchors: []BlockSize{
+			{Length: 3.5 * m, Width: 4 * m, Height: 2.2 * m, Depth: 2.8 * m},
+			{Length: 4.5 * m, Width: 5 * m, Height: 2.6 * m, Depth: 3 * m},
+		},
+		Footings: []FootingSize{
+			{Length: 2.0 * m, Width: 1.8 * m, Thickness: 0.6 * m},
+			{Length: 2.4 * m, Width: 2.0 * m, Thickness: 0.7 * m},
+		},
+	}
+}
+
+// bruteForce runs the full whole-bridge check on one candidate and scores
+// it as the search does: feasible when no check fails (comfort flags
+// aside), utilisation the highest ratio.
+func bruteForce(t *testing.T, b Bridge, d Design) (feasible bool, utilisation, price float64) {
+	a, err := Check(d.Apply(b), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	feasible = true
+	for _, r := range a.Report.Results {
+		if r.Status == check.Info || r.Status == check.Flag {
+			continue
+		}
+		utilisation = math.Max(utilisation, r.Ratio)
+		feasible = feasible && r.Status != check.Fail
+	}
+	price, err = cost(d.Apply(b), DemoPrices)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return feasible, utilisation, price
+}
+
+func TestSearchAgreesWithBruteForce(t *testing.T) {
+	b := Demo()
+	space := smallSpace()
+	res, err := Search(context.Background(), b, space, &SearchSettings{KeepAll: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if res.Evaluated != 32 || len(res.All) != 32 {
+		t.Fatalf("evaluated %d, want 2·2·2·2·2 = 32", res.Evaluated)
+	}
+	var cheapest *Design
+	feasible := 0
+	for i, d := range allCandidates(b, space) {
+		ok, u, c := bruteForce(t, b, d)
+		got := res.All[i]
+		if got.SagRatio != d.SagRatio || got.Anchor != d.Anchor || got.Footing != d.Footing || got.Count != d.Count || got.Diameter != d.Diameter {
+			t.Fatalf("candidate %d is %+v, want %+v", i, got, d)
+		}
+		if ok != got.Feasible || math.Abs(u-got.Utilisation) > 1e-12*math.Max(1, u) || c != got.Cost {
+			t.Errorf("candidate %d: search %v/%.6g/%.6g, brute force %v/%.6g/%.6g", i, got.Feasible, got.Utilisation, got.Cost, ok, u, c)
+		}
+		if ok {
+			feasible++
+			if cheapest == nil || c < cheapest.Cost {
+				d.Cost = c
+				cheapest = &d
+			}
+		}
+	}
+	if feasible != res.Feasible {
+		t.Errorf("search found %d feasible, brute force %d", res.Feasible, feasible)
+	}
+	if feasible == 0 || feasible == len(res.All) {
+		t.Errorf("the test grid should mix feasible and infeasible candidates, has %d of %d feasible", feasible, len(res.All))
+	}
+	if cheapest == nil {
+		if res.Best != nil {
+			t.Fatal("search found a design brute force did not")
+		}
+		return
+	}
+	if res.Best == nil {
+		t.Fatal("search found no feasible design")
+	}
+	if res.Best.Cost != cheapest.Cost || res.Best.Anchor != cheapest.Anchor || res.Best.Footing != cheapest.Footing || res.Best.Count != cheapest.Count {
+		t.Errorf("search best %+v, brute force %+v", *res.Best, *cheapest)
+	}
+	if res.Analysis == nil || res.Analysis.Report.Status() == check.Fail {
+		t.Error("the best design does not pass its full check")
+	}
+	// Every design on the front and every near miss scores as brute force does.
+	for _, d := range append(append([]Design{}, res.Front...), res.NearMisses...) {
+		ok, u, c := bruteForce(t, b, d)
+		if ok != d.Feasible || math.Abs(u-d.Utilisation) > 1e-12*math.Max(1, u) || c != d.Cost {
+			t.Errorf("candidate %+v: search %v/%v/%v, brute force %v/%v/%v", d, d.Feasible, d.Utilisation, d.Cost, ok, u, c)
+		}
+	}
+	for i := 1; i < len(res.Front); i++ {
+		if !(res.Front[i].Cost >= res.Front[i-1].Cost && res.Front[i].Utilisation < res.Front[i-1].Utilisation) {
+			t.Errorf("front not ordered: %v then %v", res.Front[i-1], res.Front[i])
+		}
+	}
+}
+
+// allCandidates lists the candidates of a space in the search's order.
+func allCandidates(b Bridge, s SearchSpace) []Design {
+	var out []Design
+	for _, rc := range s.ropeChoices(b, firstWalkway(b)) {
+		for _, a := range s.Anchors {
+			for _, f := range s.Footings {
+				out = append(out, Design{SagRatio: rc.sag, Diameter: rc.diameter, Count: rc.count, Anchor: a, Footing: f})
+			}
+		}
+	}
+	return out
+}
+
+func TestSearchSameAnswerAnyWorkers(t *testing.T) {
+	b := Demo()
+	one, err := Search(context.Background(), b, smallSpace(), &SearchSettings{Workers: 1})
+	if err != nil {
+		t.Fatal(err)
+	}
+	many, err := Search(context.Background(), b, smallSpace(), &SearchSettings{Workers: 2 * runtime.GOMAXPROCS(0)})
+	if err != nil {
+		t.Fatal(err)
+	}
+	opts := cmp.Options{cmpopts.IgnoreFields(SearchResult{}, "Analysis"), cmp.AllowUnexported(Design{}), cmpopts.EquateNaNs()}
+	if diff := cmp.Diff(one, many, opts); diff != "" {
+		t.Errorf("answers differ with the number of workers (-1 +many):\n%s", diff)
+	}
+}
+
+func TestSearchNothingFeasible(t *testing.T) {
+	b := Demo()
+	space := smallSpace()
+	m := units.Metre
+	space.Anchors = []BlockSize{{Length: 1 * m, Width: 1 * m, Height: 1 * m, Depth: 1 * m}} // far too small
+	res, err := Search(context.Background(), b, space, nil)
+	if err != nil {
+		t.Fatalf("an infeasible site is an answer, not an error: %v", err)
+	}
+	if res.Best != nil || res.Feasible != 0 {
+		t.Fatalf("found %d feasible", res.Feasible)
+	}
+	if len(res.NearMisses) == 0 || res.NearMisses[0].Governing.Status != check.Fail {
+		t.Fatal("no explanation of why nothing passes")
+	}
+	if g := res.NearMisses[0].Governing; g.Element == "" || g.Case == "" {
+		t.Errorf("near miss does not name element and case: %+v", g)
+	}
+}
+
+func TestSearchCancelAndProgress(t *testing.T) {
+	ctx, cancel := context.WithCancel(context.Background())
+	calls := 0
+	_, err := Search(ctx, Demo(), smallSpace(), &SearchSettings{Workers: 1, Progress: func(done, total int) {
+		calls++
+		if done > total {
+			t.Errorf("progress %d of %d", done, total)
+		}
+		cancel()
+	}})
+	if !errors.Is(err, context.Canceled) {
+		t.Errorf("cancelled search returned %v", err)
+	}
+	if calls == 0 {
+		t.Error("no progress reported")
+	}
+}
+
+var sinkSearch *SearchResult
+
+// benchSpace is the grid of BenchmarkSearch: 4 sag ratios × 3 rope
+// diameters × 2 rope counts, 4 × 3 × 2 anchor block sizes and 4 × 3 × 2
+// footing sizes: 24 × 24 × 24 = 13 824 candidates.
+func benchSpace() SearchSpace {
+	m := units.Metre
+	space := SearchSpace{
+		SagRatios: []float64{1.0 / 24, 1.0 / 21, 1.0 / 18, 1.0 / 15},
+		Diameters: []units.Length{28 * units.Millimetre, 32 * units.Millimetre, 36 * units.Millimetre},
+		Counts:    []int{4, 6},
+	}
+	for _, l := range []units.Length{3.5, 4.0, 4.5, 5.0} {
+		for _, w := range []units.Length{4, 4.5, 5} {
+			for _, h := range []units.Length{2.2, 2.6} {
+				space.Anchors = append(space.Anchors, BlockSize{Length: l * m, Width: w * m, Height: h * m, Depth: (h + 0.4) * m})
+			}
+		}
+	}
+	for _, l := range []units.Length{2.0, 2.2, 2.4, 2.6} {
+		for _, w := range []units.Length{1.8, 2.0, 2.2} {
+			for _, t := range []units.Length{0.6, 0.7} {
+				space.Footings = append(space.Footings, FootingSize{Length: l * m, Width: w * m, Thickness: t * m})
+			}
+		}
+	}
+	return space
+}
+
+// BenchmarkSearch reports candidates evaluated per second on the demo
+// bridge over benchSpace. Run with -cpu 1,2.
+func BenchmarkSearch(b *testing.B) {
+	br := Demo()
+	space := benchSpace()
+	b.ReportAllocs()
+	n := 0
+	for b.Loop() {
+		res, err := Search(context.Background(), br, space, nil)
+		if err != nil {
+			b.Fatal(err)
+		}
+		n += res.Evaluated
+		sinkSearch = res
+	}
+	b.ReportMetric(float64(n)/b.Elapsed().Seconds(), "candidates/s")
+}
