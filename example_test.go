@@ -1,0 +1,72 @@
+package sagspan_test
+
+import (
+	"context"
+	"fmt"
+
+	"github.com/sagspan/sagspan"
+	"github.com/sagspan/sagspan/units"
+)
+
+func ExampleCheck() {
+	a, err := sagspan.Check(sagspan.Demo(), nil)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Println("overall:", a.Report.Status())
+	for _, g := range a.Report.Governing() {
+		if g.ID == "cable.tension" || g.ID == "bridge.clearance" {
+			fmt.Printf("%s (%s): %s of %s under %q\n", g.ID, g.Element, g.DemandString(), g.CapacityString(), g.Case)
+		}
+	}
+	// Output:
+	// overall: pass
+	// cable.tension (walkway ropes): 829.5 kN of 1290 kN under "cold with crowd"
+	// cable.tension (handrail ropes): 7.002 kN of 168.0 kN under "wind"
+	// bridge.clearance (walkway): 1.500 m of 4.354 m under "hot with crowd"
+}
+
+func ExampleCrowdPressure() {
+	// EN 1991-2 cl. 5.3.2.1: 2.0 + 120/(L + 30) kN/m², within 2.5..5.0.
+	for _, l := range []units.Length{20, 50, 100, 300} {
+		fmt.Printf("%v: %v\n", l, sagspan.CrowdPressure(l))
+	}
+	// Output:
+	// 20.00 m: 4.400 kPa
+	// 50.00 m: 3.500 kPa
+	// 100.0 m: 2.923 kPa
+	// 300.0 m: 2.500 kPa
+}
+
+func ExampleParse() {
+	_, err := sagspan.Parse([]byte(`{"site": {"span": "-48 m"}}`))
+	fmt.Println(err)
+	// Output: sagspan: bridge description: site.span: must be positive, got -48.00 m
+}
+
+func ExampleSearch() {
+	m := units.Metre
+	space := sagspan.SearchSpace{
+		SagRatios: []float64{1.0 / 20, 1.0 / 18},
+		Counts:    []int{4, 6},
+		Anchors: []sagspan.BlockSize{
+			{Length: 4.5 * m, Width: 5 * m, Height: 2.6 * m, Depth: 3 * m},
+			{Length: 5.5 * m, Width: 6 * m, Height: 2.8 * m, Depth: 3.2 * m},
+		},
+	}
+	res, err := sagspan.Search(context.Background(), sagspan.Demo(), space, nil)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	fmt.Printf("%d candidates, %d feasible\n", res.Evaluated, res.Feasible)
+	if res.Best != nil {
+		d := res.Best
+		fmt.Printf("best: sag 1/%.0f, %d ropes, anchor %v long, cost %.0f, utilisation %.3f\n",
+			1/d.SagRatio, d.Count, d.Anchor.Length, d.Cost, d.Utilisation)
+	}
+	// Output:
+	// 8 candidates, 8 feasible
+	// best: sag 1/20, 4 ropes, anchor 4.500 m long, cost 39007, utilisation 0.914
+}
