@@ -92,18 +92,19 @@ func (e ElasticCatenary) residual(H, V float64, jac bool) (r1, r2, j11, j12, j22
 	sameSign := s0*s1 > 0
 	// asinh s1 − asinh s0, as in asinhDiff
 	var ad float64
+	d := W / H // s1 − s0, exactly
 	if sameSign {
-		ad = asinh((s1 - s0) * (s1 + s0) / (s1*a0 + s0*a1))
+		ad = asinh(d * (s1 + s0) / (s1*a0 + s0*a1))
 	} else {
 		ad = asinh(s1*a0 - s0*a1)
 	}
 	r1 = H*L0/EA + H/w*ad - float64(e.span.Length)
 	r2 = L0*(V-W/2)/EA + L0*(2*V-W)/(ta+tb) - float64(e.span.Rise)
 	if jac {
-		// s1/a1 − s0/a0, as in slopeSinDiff
+		// s1/a1 − s0/a0 without cancellation
 		var sd float64
 		if sameSign {
-			sd = (s1 - s0) * (s1 + s0) / ((s1*a0 + s0*a1) * a0 * a1)
+			sd = d * (s1 + s0) / ((s1*a0 + s0*a1) * a0 * a1)
 		} else {
 			sd = s1/a1 - s0/a0
 		}
@@ -230,13 +231,15 @@ func (e ElasticCatenary) at(s float64) (x, z float64) {
 	EA, w := float64(e.rope.EA), float64(e.rope.Weight)
 	u0 := e.v - w*float64(e.rope.Unstretched)
 	u := u0 + w*s
-	x = e.h*s/EA + e.h/w*asinhDiff(u/e.h, u0/e.h)
+	x = e.h*s/EA + e.h/w*asinhDiff(u/e.h, u0/e.h, w*s/e.h)
 	t0, t := math.Hypot(e.h, u0), math.Hypot(e.h, u)
 	var dt float64
 	if t+t0 > 0 {
-		dt = (u - u0) * (u + u0) / (t + t0) // T(s) − T(0)
+		dt = w * s * (u + u0) / (t + t0) // T(s) − T(0); u − u0 = w s exactly
 	}
-	z = (w*s*s/2+u0*s)/EA + dt/w
+	// (w s²/2 + (V−W) s)/EA written as s (V − w (L₀ − s/2))/EA, which at
+	// s = L₀ is exactly the L₀(V − W/2)/EA of the compatibility equation
+	z = s*(e.v-w*(float64(e.rope.Unstretched)-s/2))/EA + dt/w
 	return x, z
 }
 
@@ -305,7 +308,7 @@ func (e ElasticCatenary) StretchedLength() units.Length {
 	W := w * L0
 	s0, s1 := (e.v-W)/e.h, e.v/e.h
 	// H²/w · (s1 − s0) · mean = H L₀ · mean
-	return units.Length(L0 + e.h*L0*arcMean(s0, s1)/EA)
+	return units.Length(L0 + e.h*L0*arcMean(s0, s1, W/e.h)/EA)
 }
 
 // Strain returns the mean strain (S − L₀)/L₀.
@@ -313,7 +316,7 @@ func (e ElasticCatenary) Strain() float64 {
 	L0 := float64(e.rope.Unstretched)
 	EA, w := float64(e.rope.EA), float64(e.rope.Weight)
 	W := w * L0
-	return e.h * arcMean((e.v-W)/e.h, e.v/e.h) / EA
+	return e.h * arcMean((e.v-W)/e.h, e.v/e.h, W/e.h) / EA
 }
 
 // LowPoint returns the point where V(s) = 0, s = L₀ − V/w, on the curve

@@ -147,7 +147,8 @@ func (b beam) arcLength(c0, h float64) float64 {
 		if dx <= 0 {
 			continue
 		}
-		s += dx * arcMean(c0-b.shear(xs[i-1])/h, c0-b.shear(xs[i])/h)
+		q0, q1 := b.shear(xs[i-1]), b.shear(xs[i])
+		s += dx * arcMean(c0-q0/h, c0-q1/h, (q0-q1)/h)
 	}
 	return s
 }

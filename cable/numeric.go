@@ -37,36 +37,30 @@ func asinh(x float64) float64 {
 	return r
 }
 
-// asinhDiff returns asinh(s1) − asinh(s0) without cancellation, using
+// asinhDiff returns asinh(s1) − asinh(s0) without cancellation, where
+// d = s1 − s0 is passed separately because callers know it more exactly
+// than the difference of the rounded s1 and s0 (s0, s1 may be huge and d
+// small):
 //
 //	asinh s1 − asinh s0 = asinh(s1√(1+s0²) − s0√(1+s1²))
-//	s1√(1+s0²) − s0√(1+s1²) = (s1−s0)(s1+s0)/(s1√(1+s0²) + s0√(1+s1²))  (same signs)
-func asinhDiff(s1, s0 float64) float64 {
+//	s1√(1+s0²) − s0√(1+s1²) = d (s1+s0)/(s1√(1+s0²) + s0√(1+s1²))  (same signs)
+func asinhDiff(s1, s0, d float64) float64 {
 	a0, a1 := sqrt1p(s0), sqrt1p(s1)
 	if s0*s1 <= 0 {
 		return asinh(s1*a0 - s0*a1)
 	}
-	return asinh((s1 - s0) * (s1 + s0) / (s1*a0 + s0*a1))
+	return asinh(d * (s1 + s0) / (s1*a0 + s0*a1))
 }
 
-// slopeSinDiff returns s1/√(1+s1²) − s0/√(1+s0²) without cancellation.
-func slopeSinDiff(s1, s0 float64) float64 {
-	a0, a1 := sqrt1p(s0), sqrt1p(s1)
-	if s0*s1 <= 0 {
-		return s1/a1 - s0/a0
-	}
-	return (s1 - s0) * (s1 + s0) / ((s1*a0 + s0*a1) * a0 * a1)
-}
-
-// arcMean returns the mean of √(1+s²) over s in [s0, s1]:
+// arcMean returns the mean of √(1+s²) over s in [s0, s1], d = s1 − s0
+// (see asinhDiff for why d is passed):
 //
-//	(1/(s1−s0)) ∫ √(1+s²) ds = ½[(a1+a0)/2 + (s1+s0)²/(2(a1+a0))] + ½ (asinh s1 − asinh s0)/(s1−s0)
+//	(1/d) ∫ √(1+s²) ds = ½[(a1+a0)/2 + (s1+s0)²/(2(a1+a0))] + ½ (asinh s1 − asinh s0)/d
 //
-// with a = √(1+s²), written so that it stays accurate as s1 → s0, where it
+// with a = √(1+s²), written so that it stays accurate as d → 0, where it
 // tends to √(1+s0²).
-func arcMean(s0, s1 float64) float64 {
+func arcMean(s0, s1, d float64) float64 {
 	a0, a1 := sqrt1p(s0), sqrt1p(s1)
-	d := s1 - s0
 	sum := s1 + s0
 	first := (a1+a0)/2 + sum*sum/(2*(a1+a0))
 	var second float64

@@ -128,7 +128,7 @@ func (p Parabola) Sag(x units.Length) units.Length {
 // Length returns the exact arc length of the parabola.
 func (p Parabola) Length() units.Length {
 	l := float64(p.span.Length)
-	return units.Length(l * arcMean(p.slope(0), p.slope(l)))
+	return units.Length(l * arcMean(p.slope(0), p.slope(l), p.w*l/p.h))
 }
 
 // LowPoint returns x = L/2 − H h/(w L) and its elevation; the vertex of the
