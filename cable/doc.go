@@ -27,5 +27,6 @@
 // (a parabola, by the general cable theorem H = w L²/(8 f)):
 //
 //	p, err := cable.NewParabola(cable.Span{Length: 100 * units.Metre}, 2*units.KilonewtonPerMetre, 8*units.Metre)
-//	// p.Horizontal() = 312.5 kN; p.SupportTensions() = 319.97 kN at each end.
+//	// p.Horizontal() = 312.5 kN; p.Reactions() = 100 kN at each end;
+//	// p.SupportTensions() = √(312.5² + 100²) = 328.1 kN at each end.
 package cable
