@@ -101,9 +101,11 @@ func ChangeOfState(s Span, e Elastic, from State, to Load, temp units.Temperatur
 	}
 	L, rise := float64(s.Length), float64(s.Rise)
 	c0 := rise / L
+	var xbuf, qbuf [16]float64
+	xs, qs := b2.sections(xbuf[:], qbuf[:])
 	// g(H) = L₀ − [S − ∫T ds/EA], increasing in H.
 	g := func(h float64) (float64, float64) {
-		S, dS := b2.arcLengthDH(c0, h)
+		S, dS := arcLengthDH(xs, qs, c0, h)
 		v := l0 - (S - (h*(L+rise*c0)+d2/h)/ea)
 		dE := ((L + rise*c0) - d2/(h*h)) / ea
 		return v, -(dS - dE)

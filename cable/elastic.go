@@ -51,7 +51,7 @@ type ElasticCatenary struct {
 // equations for H and V by Newton's method with a backtracking line
 // search on the squared residual; the Jacobian is the flexibility matrix,
 // symmetric and positive definite, so the Newton direction always reduces
-// the residual. The start is, for a rope longer than the chord, the
+// the residual. The start is, for a rope much longer than the chord, the
 // inextensible catenary of its length stretched by the mean tension;
 // otherwise the taut parabolic estimate from the classical cubic
 //
@@ -75,7 +75,9 @@ func NewElasticCatenary(s Span, r ElasticRope) (ElasticCatenary, error) {
 	va, vb := e.Reactions()
 	ta, tb := e.SupportTensions()
 	xl, zl, _ := e.LowPoint()
-	if !allFinite(h, float64(va), float64(vb), float64(ta), float64(tb), float64(e.Length()), float64(xl), float64(zl)) {
+	// the stretch ∫T ds/EA is at most L₀ T_max/EA
+	stretch := float64(r.Unstretched) * math.Max(float64(ta), float64(tb)) / float64(r.EA)
+	if !allFinite(h, float64(va), float64(vb), float64(ta), float64(tb), stretch, float64(xl), float64(zl)) {
 		return ElasticCatenary{}, errOutOfRange
 	}
 	return e, nil
@@ -115,10 +117,11 @@ func (e ElasticCatenary) residual(H, V float64, jac bool) (r1, r2, j11, j12, j22
 	return
 }
 
-// start returns the first estimate of H and V: for a rope longer than the
-// chord, the inextensible catenary of its length stretched by the mean
-// tension of that catenary, T̄ ≈ H S/L; otherwise the taut parabolic cubic
-// (see NewElasticCatenary).
+// start returns the first estimate of H and V: for a rope whose slack
+// L₀ − c is more than ten times its estimated stretch, the inextensible
+// catenary of its length stretched by the mean tension of that catenary,
+// T̄ ≈ H S/L (to first order in k); otherwise the taut parabolic cubic (see
+// NewElasticCatenary).
 func (e ElasticCatenary) start() (h, v float64) {
 	L, rise := float64(e.span.Length), float64(e.span.Rise)
 	L0, EA, w := float64(e.rope.Unstretched), float64(e.rope.EA), float64(e.rope.Weight)
@@ -127,15 +130,23 @@ func (e ElasticCatenary) start() (h, v float64) {
 	if L0 > c {
 		if kk, ok := kForLength(L, rise, L0, 0); ok && kk < 700 {
 			hc := w * L / (2 * kk)
-			stretched := L0 * (1 + hc*L0/(L*EA))
-			if k2, ok := kForLength(L, rise, stretched, kk); ok && k2 < 700 {
+			// stretch by the mean tension ≈ H S/L, and move k to first
+			// order: m = √(S² − h²)/L = sinh k/k, dm/dk = (sinh k/k)(coth k − 1/k)
+			dS := L0 * hc * L0 / (L * EA)
+			root := math.Sqrt((L0 - rise) * (L0 + rise))
+			dm := L0 * dS / (L * root)
+			slope := (1 + sinhcm1(kk)) * cothMinusInv(kk)
+			k2 := kk + dm/slope // longer rope: larger k, smaller H
+			// trust this start only when the stretch is small against the
+			// slack; otherwise the parabolic cubic below is the better one
+			if dS < 0.1*(L0-c) && k2 > kk && k2 < 2*kk {
 				kk, hc = k2, w*L/(2*k2)
-			}
-			a := hc / w
-			u := asinh(rise / (2 * a * math.Sinh(kk)))
-			vc := hc * math.Sinh((L-(L/2-a*u))/a)
-			if finite(hc) && finite(vc) && hc > 0 {
-				return hc, vc
+				a := hc / w
+				u := asinh(rise / (2 * a * math.Sinh(kk)))
+				vc := hc * math.Sinh((L-(L/2-a*u))/a)
+				if hc > 0 && finite(hc) && finite(vc) {
+					return hc, vc
+				}
 			}
 		}
 	}

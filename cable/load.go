@@ -153,21 +153,31 @@ func (b beam) arcLength(c0, h float64) float64 {
 	return s
 }
 
-// arcLengthDH returns arcLength(c0, H) and its derivative in H:
+// sections returns the break points of the load (see breaks) and the shear
+// at each, in the buffers when they are large enough.
+func (b beam) sections(xbuf, qbuf []float64) (xs, qs []float64) {
+	xs = b.breaks(xbuf)
+	qs = qbuf[:0]
+	for _, x := range xs {
+		qs = append(qs, b.shear(x))
+	}
+	return xs, qs
+}
+
+// arcLengthDH returns, for the load of sections xs, qs, the arc length
+// arcLength(c0, H) and its derivative in H:
 //
 //	dS/dH = (1/H) ∫ p (c₀ − p)/√(1+p²) dx,  p = c₀ − Q/H
 //
 // both integrated exactly on each piece with the cancellation-free
 // differences (one asinh per piece serves both).
-func (b beam) arcLengthDH(c0, h float64) (length, deriv float64) {
-	var buf [16]float64
-	xs := b.breaks(buf[:])
+func arcLengthDH(xs, qs []float64, c0, h float64) (length, deriv float64) {
 	for i := 1; i < len(xs); i++ {
 		dx := xs[i] - xs[i-1]
 		if dx <= 0 {
 			continue
 		}
-		p0, p1 := c0-b.shear(xs[i-1])/h, c0-b.shear(xs[i])/h
+		p0, p1 := c0-qs[i-1]/h, c0-qs[i]/h
 		a0, a1 := sqrt1p(p0), sqrt1p(p1)
 		sum := p0 + p1
 		// means over [p0, p1] of √(1+p²), p/√(1+p²) and p²/√(1+p²)
