@@ -70,6 +70,10 @@ type CaseState struct {
 	// Tower is the resultant of the saddle forces and column weight at each
 	// column base.
 	Tower [2]tower.Resultant
+	// Lateral is the force across the bridge that wind-swung ropes put on
+	// each tower, and LateralMoment its moment about the column base.
+	Lateral       [2]units.Force
+	LateralMoment [2]units.Moment
 }
 
 // ErectionTable is the erection-sag table of one rope group.
@@ -99,12 +103,18 @@ type model struct {
 	groups []group
 	soils  [2]foundation.Soil
 	dead   units.LoadPerLength // walkway dead load per metre, without ropes
-	crowd  units.LoadPerLength // crowd load per metre of walkway
-	wind   units.Pressure
-	psi    float64
+	// crowd and crowdHalf are the crowd loads per metre of walkway on the
+	// full span and on half of it.
+	crowd, crowdHalf units.LoadPerLength
+	wind             units.Pressure
+	psi              float64
 	// ref holds each group's reference state: permanent load at the
 	// reference temperature, hanging at its design sag.
 	ref []cable.State
+	// spanUnstretched is each group's unstretched span length in the
+	// reference state; backstays are each group's backstays.
+	spanUnstretched []float64
+	backstays       [][2]backstay
 }
 
 func newModel(b Bridge) (*model, error) {
@@ -117,10 +127,11 @@ func newModel(b Bridge) (*model, error) {
 	}
 	m := &model{
 		b: b, span: b.span(), groups: gs,
-		dead:  b.Walkway.dead(),
-		crowd: units.LoadPerLength(float64(b.crowd()) * float64(b.Walkway.Width)),
-		wind:  b.wind(),
-		psi:   orDefault(b.Loads.WindWithCrowd, defaultWindWithCrowd),
+		dead:      b.Walkway.dead(),
+		crowd:     units.LoadPerLength(float64(b.crowd(b.Site.Span)) * float64(b.Walkway.Width)),
+		crowdHalf: units.LoadPerLength(float64(b.crowd(b.Site.Span/2)) * float64(b.Walkway.Width)),
+		wind:      b.wind(),
+		psi:       orDefault(b.Loads.WindWithCrowd, defaultWindWithCrowd),
 	}
 	for i, bank := range []Bank{b.Banks.Left, b.Banks.Right} {
 		if m.soils[i], err = bank.Soil.soil(); err != nil {
@@ -131,9 +142,47 @@ func newModel(b Bridge) (*model, error) {
 	for _, g := range gs {
 		w0 := g.self + units.LoadPerLength(g.share)*m.dead
 		h0 := units.Force(float64(w0) * l * l / (8 * float64(g.Sag))) // H = w l²/(8 f)
-		m.ref = append(m.ref, cable.State{Load: cable.Load{Uniform: w0}, H: h0, Temperature: b.Climate.Reference})
+		ref := cable.State{Load: cable.Load{Uniform: w0}, H: h0, Temperature: b.Climate.Reference}
+		m.ref = append(m.ref, ref)
+		if err := m.reference(g, ref); err != nil {
+			return nil, err
+		}
 	}
 	return m, nil
+}
+
+// reference sets a group's unstretched span length and backstays from its
+// reference state. In it the backstay tension is what the saddle balances
+// with the span-side pull, taking the rope as set with equal tensions on
+// both sides of a fixed or sliding saddle (common practice: the ropes are
+// pulled over the saddles before they are clamped or left to friction).
+func (m *model) reference(g group, ref cable.State) error {
+	shape, err := cable.NewLoaded(m.span, ref.Load, ref.H)
+	if err != nil {
+		return fmt.Errorf("sagspan: %s, reference state: %w", g.Name, err)
+	}
+	// Unstretched length: L₀ = S − (1/EA) ∫T ds with ∫T ds = H (l + h²/l) + D/H,
+	// D = ∫Q² dx = w² l³/12 for the uniform reference load (the small-strain
+	// rule; see cable.ChangeOfState).
+	l, h := float64(m.span.Length), float64(m.span.Rise)
+	w, hh := float64(ref.Load.Uniform), float64(ref.H)
+	integral := hh*(l+h*h/l) + w*w*l*l*l/12/hh
+	m.spanUnstretched = append(m.spanUnstretched, float64(shape.Length())-integral/float64(g.elastic.EA))
+	ta, tb := shape.SupportTensions()
+	aa, ab := shape.SupportAngles()
+	var bss [2]backstay
+	for side, t := range [2]units.Force{ta, tb} {
+		bank := m.bank(Side(side))
+		a := [2]units.Angle{aa, ab}[side]
+		bs := backstay{angle: backstayAngle(bank.Backstay, g.Offset)}
+		bs.chord = units.Length(math.Hypot(float64(bank.Backstay.Horizontal), float64(bank.Backstay.Drop+g.Offset)))
+		hx, v, _ := elevationPull(t, a, 0)
+		t0, _ := saddleBalance(saddleKind(bank.Tower.Saddle), bank.Tower.Saddle.Friction, hx, v, float64(t), bs.angle, 0)
+		bs.unstretched = bs.unstretchedFor(g.elastic, t0)
+		bss[side] = bs
+	}
+	m.backstays = append(m.backstays, bss)
+	return nil
 }
 
 func (m *model) bank(s Side) Bank {
@@ -148,15 +197,16 @@ func (m *model) bank(s Side) Bank {
 func (m *model) load(g group, lc LoadCase) (cable.Load, units.Angle) {
 	vertical := units.LoadPerLength(lc.GammaG) * (g.self + units.LoadPerLength(g.share)*m.dead)
 	crowd := units.LoadPerLength(lc.GammaQ*g.share) * m.crowd
+	half := units.LoadPerLength(lc.GammaQ*g.share) * m.crowdHalf
 	l := m.b.Site.Span
 	load := cable.Load{Uniform: vertical}
 	switch lc.Crowd {
 	case FullSpan:
 		load.Uniform += crowd
 	case LeftHalf:
-		load.Patches = []cable.Patch{{From: 0, To: l / 2, Load: crowd}}
+		load.Patches = []cable.Patch{{From: 0, To: l / 2, Load: half}}
 	case RightHalf:
-		load.Patches = []cable.Patch{{From: l / 2, To: l, Load: crowd}}
+		load.Patches = []cable.Patch{{From: l / 2, To: l, Load: half}}
 	}
 	var swing units.Angle
 	if lc.Wind && lc.GammaW > 0 && m.wind > 0 {
@@ -183,51 +233,156 @@ func saddleKind(s SaddleSpec) tower.SaddleKind {
 	return tower.Fixed
 }
 
-// backstayTension returns the backstay tension that balances span-side
-// tension t at angle a over a saddle of the given kind, with backstay angle
-// ab (both below horizontal):
-//
-//	fixed:   T_b = T_s                               (one rope, clamped)
-//	roller:  T_b = T_s cos a / cos ab                (horizontal components balance)
-//	sliding: T_b = T_s                               while |T_s cos a − T_b cos ab| <= μ N,
-//	         else T_b = T_s (cos a − sμ sin a)/(cos ab + sμ sin ab),  s = sign of the unbalance
-//
-// with the normal force N taken as the vertical component, as package tower
-// does (common practice). A slipping rope is assumed to re-balance in the
-// short, stiff backstay, the span-side tension unchanged.
-func backstayTension(kind tower.SaddleKind, mu float64, t units.Force, a, ab units.Angle) (units.Force, bool) {
-	ca, sa := math.Cos(float64(a)), math.Sin(float64(a))
-	cb, sb := math.Cos(float64(ab)), math.Sin(float64(ab))
-	switch kind {
-	case tower.Roller:
-		return units.Force(float64(t) * ca / cb), false
-	case tower.Sliding:
-		unbalance := ca - cb
-		normal := sa + sb
-		if math.Abs(unbalance) <= mu*normal {
-			return t, false
-		}
-		s := math.Copysign(1, unbalance)
-		return units.Force(float64(t) * (ca - s*mu*sa) / (cb + s*mu*sb)), true
-	}
-	return t, false
+// backstay is one rope group's backstay at one bank: a straight rope from
+// the saddle down to the anchor (its own sag neglected, common practice for
+// short, steep backstays).
+type backstay struct {
+	chord units.Length // saddle to anchor
+	angle units.Angle  // below horizontal at the saddle, above it at the anchor
+	// unstretched is the backstay's unstretched length at the reference
+	// temperature, set by its tension in the reference state.
+	unstretched float64
 }
 
+// tensionAt returns the tension of a backstay whose unstretched length at
+// the reference temperature is l0, at temperature difference dt: a
+// straight elastic rope between fixed points,
+//
+//	T = EA (c / (l0 exp(α dt)) − 1),   zero when that is negative (slack)
+func (bs backstay) tensionAt(e cable.Elastic, dt float64) float64 {
+	t := float64(e.EA) * (float64(bs.chord)/(bs.unstretched*math.Exp(float64(e.Alpha)*dt)) - 1)
+	return math.Max(t, 0)
+}
+
+// unstretchedFor returns the unstretched length, at the rope's present
+// temperature, of the backstay when it carries tension t: c/(1 + T/EA).
+func (bs backstay) unstretchedFor(e cable.Elastic, t float64) float64 {
+	return float64(bs.chord) / (1 + t/float64(e.EA))
+}
+
+// saddleBalance returns the backstay tension over a saddle of the given
+// kind, with the span-side pull given in the elevation plane by its
+// horizontal and vertical components h and v, and the tension held the
+// clamped backstay would carry:
+//
+//	fixed:   T_b = held                 (rope clamped in the saddle; backstay and span are separate ropes)
+//	roller:  T_b = h / cos β            (the saddle rolls: horizontal components balance)
+//	sliding: T_b = held                 while |h − held cos β| <= μ (v + held sin β)
+//	         T_b = (h − sμv)/(cos β + sμ sin β) once the rope slips, s the sign of the unbalance
+//
+// with the normal force taken as the vertical component, as package tower
+// does (common practice). slip, when not zero, forces a sliding saddle to
+// slip in that direction (+1: toward the span). The result's slip is the
+// direction the rope slips, zero when it is held; a roller reports +1.
+func saddleBalance(kind tower.SaddleKind, mu, h, v, held float64, beta units.Angle, slip float64) (t, slipped float64) {
+	cb, sb := math.Cos(float64(beta)), math.Sin(float64(beta))
+	switch kind {
+	case tower.Roller:
+		return h / cb, 1
+	case tower.Sliding:
+		if slip == 0 {
+			unbalance := h - held*cb
+			if math.Abs(unbalance) <= mu*(v+held*sb) {
+				return held, 0
+			}
+			slip = math.Copysign(1, unbalance)
+		}
+		return (h - slip*mu*v) / (cb + slip*mu*sb), slip
+	}
+	return held, 0
+}
+
+// elevationPull returns the components, in the elevation plane, of the
+// span-side rope pull on a saddle: h along the bridge and v down, from the
+// tension t at angle a below horizontal in the rope's plane, which wind has
+// swung by swing from the vertical; lateral is the component across the
+// bridge.
+func elevationPull(t units.Force, a, swing units.Angle) (h, v, lateral float64) {
+	h = float64(t) * math.Cos(float64(a))
+	inPlane := float64(t) * math.Sin(float64(a))
+	return h, inPlane * math.Cos(float64(swing)), inPlane * math.Sin(float64(swing))
+}
+
+// maxFeedIterations bounds the fixed-point iteration on the rope fed over
+// slipping saddles; it converges geometrically since backstays are short
+// beside the span (common practice: a handful of steps).
+const maxFeedIterations = 60
+
 // analyse returns the state of the bridge under case lc.
+//
+// Each rope group's span is a change of state from its reference state
+// (cable.ChangeOfState). Where the rope slips over a saddle (a roller
+// always, a sliding saddle once friction is overcome) rope feeds between
+// backstay and span: the span's unstretched length grows by what the
+// backstays give up, Σ [l0_b,θ − c_b/(1 + T_b/EA)], and the span and
+// backstay tensions are solved together by fixed-point iteration.
 func (m *model) analyse(lc LoadCase) (CaseState, error) {
 	cs := CaseState{Case: lc, Groups: make([]GroupState, len(m.groups))}
 	var levels [2][]tower.LevelForce
+	dt := float64(lc.Temperature - m.b.Climate.Reference)
 	for i, g := range m.groups {
 		load, swing := m.load(g, lc)
-		st, err := cable.ChangeOfState(m.span, g.elastic, m.ref[i], load, lc.Temperature)
+		gs, err := m.solveGroup(i, load, swing, dt, lc.Temperature)
 		if err != nil {
 			return CaseState{}, fmt.Errorf("sagspan: %s, case %q: %w", g.Name, lc.Name, err)
+		}
+		for side := Left; side <= Right; side++ {
+			bank := m.bank(side)
+			h, v, lateral := elevationPull(gs.Tension[side], gs.Angle[side], swing)
+			spanPull := tower.Pull{Tension: units.Force(math.Hypot(h, v)), Angle: units.Angle(math.Atan2(v, h))}
+			saddle := tower.Saddle{Kind: saddleKind(bank.Tower.Saddle), Friction: bank.Tower.Saddle.Friction, Height: bank.Tower.Height + g.Offset}
+			lf, err := saddle.Force(spanPull, tower.Pull{Tension: gs.Backstay[side], Angle: gs.BackstayAngle[side]})
+			if err != nil {
+				return CaseState{}, fmt.Errorf("sagspan: %s saddle, %s, case %q: %w", side, g.Name, lc.Name, err)
+			}
+			gs.Saddle[side] = lf
+			levels[side] = append(levels[side], lf)
+			cs.Lateral[side] += units.Force(lateral)
+			cs.LateralMoment[side] += units.MomentOf(units.Force(lateral), saddle.Height)
+		}
+		cs.Groups[i] = gs
+	}
+	for side := Left; side <= Right; side++ {
+		// The column's own weight carries the permanent load factor of the
+		// case (1 on characteristic loads).
+		r, err := tower.Combine(levels[side], units.Force(lc.GammaG)*m.column(side).Weight())
+		if err != nil {
+			return CaseState{}, fmt.Errorf("sagspan: %s tower, case %q: %w", side, lc.Name, err)
+		}
+		cs.Tower[side] = r
+	}
+	return cs, nil
+}
+
+// solveGroup returns the state of rope group i under load, swung by swing,
+// dt kelvin from the reference temperature.
+func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64, temp units.Temperature) (GroupState, error) {
+	g := m.groups[i]
+	e := g.elastic
+	// The rope fed into the span is passed to the change of state as an
+	// equivalent change of the span's unstretched length, through the
+	// thermal term: exp(α' dθ') = exp(α dt)·(1 + feed/l0,θ).
+	const alphaEq = 1e-5 // any positive coefficient; dθ' follows from it
+	l0 := m.spanUnstretched[i] * math.Exp(float64(e.Alpha)*dt)
+	feed := 0.0
+	// slip records, per side, the direction the rope slips once it has: a
+	// side that slips keeps slipping while the iteration settles, so that
+	// the feed cannot flip between held and slipping.
+	var slip [2]float64
+	var gs GroupState
+	for range maxFeedIterations {
+		eq := cable.Elastic{EA: e.EA, Alpha: alphaEq}
+		grow := float64(e.Alpha)*dt + math.Log1p(feed/l0)
+		eqTemp := m.ref[i].Temperature + units.Temperature(grow/alphaEq)
+		st, err := cable.ChangeOfState(m.span, eq, m.ref[i], load, eqTemp)
+		if err != nil {
+			return GroupState{}, err
 		}
 		shape, err := cable.NewLoaded(m.span, load, st.H)
 		if err != nil {
-			return CaseState{}, fmt.Errorf("sagspan: %s, case %q: %w", g.Name, lc.Name, err)
+			return GroupState{}, err
 		}
-		gs := GroupState{Group: g.Name, Load: load, Swing: swing, H: st.H, shape: shape}
+		gs = GroupState{Group: g.Name, Load: load, Swing: swing, H: st.H, shape: shape}
 		ta, tb := shape.SupportTensions()
 		aa, ab := shape.SupportAngles()
 		gs.Tension = [2]units.Force{ta, tb}
@@ -235,37 +390,26 @@ func (m *model) analyse(lc LoadCase) (CaseState, error) {
 		gs.Sag = shape.Sag(m.b.Site.Span / 2)
 		gs.LowX, gs.LowZ, gs.LowWithin = shape.LowPoint()
 		gs.MaxTension = max(ta, tb)
-		cosSwing := math.Cos(float64(swing))
+		next := 0.0
 		for side := Left; side <= Right; side++ {
 			bank := m.bank(side)
-			sk := saddleKind(bank.Tower.Saddle)
-			angleBack := backstayAngle(bank.Backstay, g.Offset)
-			tback, slipped := backstayTension(sk, bank.Tower.Saddle.Friction, gs.Tension[side], gs.Angle[side], angleBack)
-			gs.Backstay[side], gs.BackstayAngle[side], gs.Slipped[side] = tback, angleBack, slipped
-			gs.MaxTension = max(gs.MaxTension, tback)
-			// In elevation, a swung rope's vertical component shrinks by
-			// cos(swing); its horizontal component along the bridge stays.
-			t, a := float64(gs.Tension[side]), float64(gs.Angle[side])
-			h, v := t*math.Cos(a), t*math.Sin(a)*cosSwing
-			spanPull := tower.Pull{Tension: units.Force(math.Hypot(h, v)), Angle: units.Angle(math.Atan2(v, h))}
-			saddle := tower.Saddle{Kind: sk, Friction: bank.Tower.Saddle.Friction, Height: bank.Tower.Height + g.Offset}
-			lf, err := saddle.Force(spanPull, tower.Pull{Tension: tback, Angle: angleBack})
-			if err != nil {
-				return CaseState{}, fmt.Errorf("sagspan: %s saddle, %s, case %q: %w", side, g.Name, lc.Name, err)
+			bs := m.backstays[i][side]
+			h, v, _ := elevationPull(gs.Tension[side], gs.Angle[side], swing)
+			held := bs.tensionAt(e, dt)
+			tback, dir := saddleBalance(saddleKind(bank.Tower.Saddle), bank.Tower.Saddle.Friction, h, v, held, bs.angle, slip[side])
+			slip[side] = dir
+			gs.Backstay[side], gs.BackstayAngle[side], gs.Slipped[side] = units.Force(tback), bs.angle, dir != 0
+			gs.MaxTension = max(gs.MaxTension, units.Force(tback))
+			if dir != 0 {
+				next += bs.unstretched*math.Exp(float64(e.Alpha)*dt) - bs.unstretchedFor(e, tback)
 			}
-			gs.Saddle[side] = lf
-			levels[side] = append(levels[side], lf)
 		}
-		cs.Groups[i] = gs
-	}
-	for side := Left; side <= Right; side++ {
-		r, err := tower.Combine(levels[side], m.column(side).Weight())
-		if err != nil {
-			return CaseState{}, fmt.Errorf("sagspan: %s tower, case %q: %w", side, lc.Name, err)
+		if math.Abs(next-feed) <= 1e-10*float64(m.span.Length) {
+			return gs, nil
 		}
-		cs.Tower[side] = r
+		feed = next
 	}
-	return cs, nil
+	return GroupState{}, fmt.Errorf("rope fed over the saddles does not settle after %d iterations", maxFeedIterations)
 }
 
 func (m *model) column(s Side) tower.Column {
@@ -387,6 +531,14 @@ func (m *model) superstructure(out sink, service, design []CaseState) error {
 				return fmt.Errorf("sagspan: %s column section, case %q: %w", towerName, name, err)
 			}
 			out.add(r.For(towerName, name))
+			if ml := des.LateralMoment[side]; ml != 0 {
+				// Wind-swung ropes push the column across the bridge.
+				r, err = m.section(side).Turned().Check(dr.Vertical, ml)
+				if err != nil {
+					return fmt.Errorf("sagspan: %s column section across, case %q: %w", towerName, name, err)
+				}
+				out.add(r.For(towerName+", across", name).WithNote("bending across the bridge from wind on the swung ropes"))
+			}
 		}
 	}
 	return nil
@@ -404,8 +556,33 @@ func (m *model) footingChecks(out sink, side Side, spec FootingSpec, service []C
 		for _, r := range results {
 			out.add(r.For(element, svc.Case.Name))
 		}
+		if svc.Lateral[side] == 0 {
+			continue
+		}
+		results, err = m.footingAcross(side, spec, svc)
+		if err != nil {
+			return fmt.Errorf("sagspan: %s across, case %q: %w", element, svc.Case.Name, err)
+		}
+		for _, r := range results {
+			out.add(r.For(element+", across", svc.Case.Name))
+		}
 	}
 	return nil
+}
+
+// footingAcross checks a tower footing across the bridge under the wind
+// pushing the swung ropes sideways: the footing turned, its width along the
+// lateral force. The whole lateral action is variable.
+func (m *model) footingAcross(s Side, spec FootingSpec, svc CaseState) ([]check.Result, error) {
+	f := foundation.Footing{B: spec.Width, L: spec.Length, Thickness: spec.Thickness, Depth: spec.Depth, UnitWeight: m.bank(s).Tower.UnitWeight}
+	lateral := svc.Lateral[s]
+	load := foundation.FootingLoad{
+		Vertical:      svc.Tower[s].Vertical,
+		Horizontal:    lateral,
+		Moment:        svc.LateralMoment[s] + units.MomentOf(lateral, spec.Thickness),
+		VariableShare: 1,
+	}
+	return f.Check(load, m.soils[s], foundation.Vesic, m.foundationBasis())
 }
 
 // anchorChecks checks the anchor spec of one bank under every service case.

@@ -55,10 +55,14 @@ type Climate struct {
 	// Coldest and Hottest bound the rope temperature.
 	Coldest units.Temperature `json:"coldest"`
 	Hottest units.Temperature `json:"hottest"`
-	// WindSpeed is the basic wind speed; WindPressure, when set, is used
-	// instead (the peak velocity pressure on the bridge).
+	// WindSpeed is the basic wind speed; the peak velocity pressure is then
+	// Exposure · ½ρv² (EN 1991-1-4 cl. 4.5). WindPressure, when set, is the
+	// peak velocity pressure itself and is used instead.
 	WindSpeed    units.Velocity `json:"wind_speed,omitempty"`
 	WindPressure units.Pressure `json:"wind_pressure,omitempty"`
+	// Exposure is the exposure factor ce(z) of EN 1991-1-4 cl. 4.5; zero
+	// means 2.5 (open country at 10–15 m, from memory).
+	Exposure float64 `json:"exposure,omitempty"`
 }
 
 // Walkway is the deck the walkers use and the weight it hangs on the ropes.

@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"gonum.org/v1/gonum/floats/scalar"
+	"gonum.org/v1/gonum/integrate/quad"
 	"gonum.org/v1/gonum/mat"
 
 	"github.com/sagspan/sagspan/check"
@@ -246,5 +247,63 @@ func TestLoadScaling(t *testing.T) {
 	}
 	if !sort.StringsAreSorted([]string{}) || len(names) != 10 {
 		t.Errorf("demo bridge has %d cases, want 10 (wind given)", len(names))
+	}
+}
+
+// unstretchedByQuadrature returns the unstretched length of a rope state's
+// span, L₀ = ∫ (1 − T/EA) ds, by gonum's Gauss–Legendre quadrature on each
+// half of the span (the loaded shape is smooth on each), with the slope
+// from a central difference of Z: a route independent of package cable's
+// closed forms.
+func unstretchedByQuadrature(gs GroupState, span units.Length, ea float64) float64 {
+	const h = 1e-4
+	integrand := func(x float64) float64 {
+		dz := (float64(gs.shape.Z(units.Length(x+h))) - float64(gs.shape.Z(units.Length(x-h)))) / (2 * h)
+		ds := math.Sqrt(1 + dz*dz)
+		return ds * (1 - float64(gs.shape.Tension(units.Length(x)))/ea)
+	}
+	l := float64(span)
+	return quad.Fixed(integrand, 0, l/2, 40, quad.Legendre{}, 0) + quad.Fixed(integrand, l/2, l, 40, quad.Legendre{}, 0)
+}
+
+// TestRopeFedOverSaddles checks the rope that slips over a sliding or a
+// roller saddle: whatever the numbers, the rope is conserved. The span and
+// the backstays of the saddles it slips over together keep their
+// unstretched length (scaled by thermal expansion exp(α Δθ)), and a roller
+// balances the horizontal components, T_b cos β = H (statics).
+func TestRopeFedOverSaddles(t *testing.T) {
+	b := Demo() // left saddle sliding, right saddle on rollers
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	m, err := newModel(b)
+	if err != nil {
+		t.Fatal(err)
+	}
+	g := m.groups[0]
+	ea, alpha := float64(g.elastic.EA), float64(g.elastic.Alpha)
+	ref := unstretchedByQuadrature(a.Service[0].Groups[0], b.Site.Span, ea)
+	slips := 0
+	for _, cs := range a.Service {
+		gs := cs.Groups[0]
+		thermal := math.Exp(alpha * float64(cs.Case.Temperature-b.Climate.Reference))
+		got := unstretchedByQuadrature(gs, b.Site.Span, ea)
+		want := ref * thermal
+		for side := Left; side <= Right; side++ {
+			if !gs.Slipped[side] {
+				continue
+			}
+			slips++
+			bs := m.backstays[0][side]
+			got += float64(bs.chord) / (1 + float64(gs.Backstay[side])/ea)
+			want += bs.unstretched * thermal
+		}
+		near(t, cs.Case.Name+": rope conserved", got, want, 1e-9)
+		h, _, _ := elevationPull(gs.Tension[Right], gs.Angle[Right], gs.Swing)
+		near(t, cs.Case.Name+": roller balance", float64(gs.Backstay[Right])*math.Cos(float64(gs.BackstayAngle[Right])), h, 1e-12)
+	}
+	if slips <= len(a.Service) {
+		t.Errorf("only %d slipping saddles over %d cases: the test does not reach the sliding saddle", slips, len(a.Service))
 	}
 }

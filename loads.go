@@ -31,8 +31,9 @@ func WindPressure(v units.Velocity) units.Pressure {
 
 // Defaults of the loads, each with its source.
 const (
-	// defaultWindWithCrowd is ψ0 for wind on buildings, EN 1990 Table A1.1
-	// (from memory); used for wind accompanying the crowd.
+	// defaultWindWithCrowd is the factor on wind accompanying the crowd:
+	// 0.6, ψ0 for wind in EN 1990 Table A1.1 (buildings), kept on the safe
+	// side of the 0.3 of the footbridge table A2.2 (both from memory).
 	defaultWindWithCrowd = 0.6
 	// defaultRopeDrag is the force coefficient of a stranded rope, circular
 	// section in subcritical flow (from memory; EN 1991-1-4 cl. 7.9 gives
@@ -43,20 +44,30 @@ const (
 	defaultWalkwayDrag = 1.8
 )
 
-// crowd returns the crowd pressure the bridge is loaded with.
-func (b Bridge) crowd() units.Pressure {
+// crowd returns the crowd pressure on a loaded length l: the bridge's own
+// value when given, else EN 1991-2 cl. 5.3.2.1 for that length (a crowd on
+// half the span has the higher pressure of the shorter loaded length).
+func (b Bridge) crowd(l units.Length) units.Pressure {
 	if b.Loads.Crowd > 0 {
 		return b.Loads.Crowd
 	}
-	return CrowdPressure(b.Site.Span)
+	return CrowdPressure(l)
 }
 
-// wind returns the wind pressure on the bridge, zero when none is given.
+// defaultExposure is the exposure factor ce(z) applied to the basic
+// velocity pressure when only a wind speed is given: about 2.5 for open
+// country (terrain category II) at 10–15 m above ground, EN 1991-1-4
+// Figure 4.2 (from memory). A gorge can be more exposed: give the peak
+// velocity pressure or the exposure factor of the site.
+const defaultExposure = 2.5
+
+// wind returns the peak wind pressure on the bridge, zero when none is
+// given: the pressure given, or ce · ½ρv² from the wind speed.
 func (b Bridge) wind() units.Pressure {
 	if b.Climate.WindPressure > 0 {
 		return b.Climate.WindPressure
 	}
-	return WindPressure(b.Climate.WindSpeed)
+	return units.Pressure(orDefault(b.Climate.Exposure, defaultExposure)) * WindPressure(b.Climate.WindSpeed)
 }
 
 func orDefault(x, def float64) float64 {

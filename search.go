@@ -71,7 +71,8 @@ type SearchSettings struct {
 	KeepAll bool
 }
 
-// Design is one candidate of a search: its choices, cost and verdict.
+// Design is one candidate of a search: its choices, cost and verdict. A
+// zero choice (sag ratio, diameter, count, size) keeps the bridge's own.
 type Design struct {
 	SagRatio float64
 	Diameter units.Length
@@ -145,18 +146,20 @@ type ropeChoice struct {
 	count    int
 }
 
-func (s SearchSpace) ropeChoices(b Bridge, walkway int) []ropeChoice {
+// ropeChoices lists the rope configurations of the space; an empty list
+// gives the zero choice, which keeps the bridge's own.
+func (s SearchSpace) ropeChoices() []ropeChoice {
 	sags := s.SagRatios
 	if len(sags) == 0 {
-		sags = []float64{float64(b.Ropes[walkway].Sag) / float64(b.Site.Span)}
+		sags = []float64{0}
 	}
 	ds := s.Diameters
 	if len(ds) == 0 {
-		ds = []units.Length{b.Ropes[walkway].Rope.Diameter}
+		ds = []units.Length{0}
 	}
 	ns := s.Counts
 	if len(ns) == 0 {
-		ns = []int{b.Ropes[walkway].Count}
+		ns = []int{0}
 	}
 	var out []ropeChoice
 	for _, sag := range sags {
@@ -173,11 +176,17 @@ func (s SearchSpace) ropeChoices(b Bridge, walkway int) []ropeChoice {
 func (d Design) Apply(b Bridge) Bridge {
 	walkway := firstWalkway(b)
 	b.Ropes = append([]RopeGroup(nil), b.Ropes...)
-	for i := range b.Ropes {
-		b.Ropes[i].Sag = units.Length(d.SagRatio) * b.Site.Span
+	if d.SagRatio != 0 {
+		for i := range b.Ropes {
+			b.Ropes[i].Sag = units.Length(d.SagRatio) * b.Site.Span
+		}
 	}
-	b.Ropes[walkway].Rope.Diameter = d.Diameter
-	b.Ropes[walkway].Count = d.Count
+	if d.Diameter != 0 {
+		b.Ropes[walkway].Rope.Diameter = d.Diameter
+	}
+	if d.Count != 0 {
+		b.Ropes[walkway].Count = d.Count
+	}
 	return b.withSizes(d.Anchor, d.Footing)
 }
 
@@ -307,8 +316,7 @@ func Search(ctx context.Context, b Bridge, space SearchSpace, settings *SearchSe
 			return nil, fmt.Errorf("sagspan: search: sag ratio %v outside (0, %v]", r, maxSagRatio)
 		}
 	}
-	walkway := firstWalkway(b)
-	ropes := space.ropeChoices(b, walkway)
+	ropes := space.ropeChoices()
 	_, nA, nF := space.size()
 	anchors := space.Anchors
 	if len(anchors) == 0 {
@@ -368,63 +376,61 @@ func Search(ctx context.Context, b Bridge, space SearchSpace, settings *SearchSe
 	return summarise(b, designs, settings)
 }
 
-// evaluate scores every candidate of one rope configuration into out,
-// whose first element is candidate number first.
-func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footings []FootingSize, out []Design, first int) {
-	base := Design{SagRatio: rc.sag, Diameter: rc.diameter, Count: rc.count, Anchor: anchors[0], Footing: footings[0]}
-	bb := base.Apply(b)
-	fail := func(err error) {
-		r := check.Value("search.invalid", "Candidate cannot be analysed", units.KindRatio, 0).WithNote(err.Error())
-		r.Status, r.Ratio = check.Fail, math.Inf(1)
-		for i := range out {
-			out[i] = Design{SagRatio: rc.sag, Diameter: rc.diameter, Count: rc.count,
-				Anchor: anchors[i/len(footings)], Footing: footings[i%len(footings)],
-				Cost: math.Inf(1), Utilisation: math.Inf(1), Governing: r, index: first + i}
-		}
-	}
-	m, err := newModel(bb)
-	if err != nil {
-		fail(err)
-		return
-	}
-	service, design, err := m.states()
-	if err != nil {
-		fail(err)
-		return
-	}
-	var superstructure scorer
-	if err := m.superstructure(&superstructure, service, design); err != nil {
-		fail(err)
-		return
-	}
-	m.checkClearance(&superstructure, service)
+// invalid returns a failing result that rules a candidate out because it
+// cannot be analysed.
+func invalid(err error) scorer {
+	r := check.Value("search.invalid", "Candidate cannot be analysed", units.KindRatio, 0).WithNote(err.Error())
+	r.Status, r.Ratio = check.Fail, math.Inf(1)
+	return scorer{failed: true, worst: r, max: math.Inf(1), has: true}
+}
 
-	fixed, err := ropeCost(bb, prices)
+// evaluate scores every candidate of one rope configuration into out,
+// whose first element is candidate number first. An error in one part (the
+// rope configuration, an anchor size, a footing size) rules out only the
+// candidates that have that part.
+func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footings []FootingSize, out []Design, first int) {
+	base := Design{SagRatio: rc.sag, Diameter: rc.diameter, Count: rc.count}
+	bb := base.Apply(b)
+	var superstructure scorer
+	fixed := math.Inf(1)
+	m, service, err := ropeStage(bb, &superstructure)
 	if err != nil {
-		fail(err)
-		return
+		superstructure = invalid(err)
+	} else if fixed, err = ropeCost(bb, prices); err == nil {
+		fixed += columnCost(bb, prices)
+	} else {
+		superstructure = invalid(err)
 	}
-	fixed += columnCost(bb, prices)
 
 	anchorScores := make([]scorer, len(anchors))
 	anchorPrices := make([]float64, len(anchors))
 	for j, size := range anchors {
-		anchorPrices[j] = anchorCost(bb.withSizes(size, FootingSize{}), prices)
-		for side := Left; side <= Right; side++ {
+		sized := bb.withSizes(size, FootingSize{})
+		anchorPrices[j] = anchorCost(sized, prices)
+		if err := sized.Validate(); err != nil {
+			anchorScores[j] = invalid(err)
+			continue
+		}
+		for side := Left; m != nil && side <= Right; side++ {
 			if err := m.anchorChecks(&anchorScores[j], side, size.apply(m.bank(side).Anchor), service); err != nil {
-				fail(err)
-				return
+				anchorScores[j] = invalid(err)
+				break
 			}
 		}
 	}
 	footingScores := make([]scorer, len(footings))
 	footingPrices := make([]float64, len(footings))
 	for k, size := range footings {
-		footingPrices[k] = footingCost(bb.withSizes(BlockSize{}, size), prices)
-		for side := Left; side <= Right; side++ {
+		sized := bb.withSizes(BlockSize{}, size)
+		footingPrices[k] = footingCost(sized, prices)
+		if err := sized.Validate(); err != nil {
+			footingScores[k] = invalid(err)
+			continue
+		}
+		for side := Left; m != nil && side <= Right; side++ {
 			if err := m.footingChecks(&footingScores[k], side, size.apply(m.bank(side).Tower.Footing), service); err != nil {
-				fail(err)
-				return
+				footingScores[k] = invalid(err)
+				break
 			}
 		}
 	}
@@ -441,6 +447,25 @@ func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footi
 			out[j*len(footings)+k] = d
 		}
 	}
+}
+
+// ropeStage analyses a rope configuration: every load case, then the
+// checks a choice of anchor or footing cannot change (ropes, towers, column
+// sections, clearance), into out.
+func ropeStage(b Bridge, out sink) (*model, []CaseState, error) {
+	m, err := newModel(b)
+	if err != nil {
+		return nil, nil, err
+	}
+	service, design, err := m.states()
+	if err != nil {
+		return nil, nil, err
+	}
+	if err := m.superstructure(out, service, design); err != nil {
+		return nil, nil, err
+	}
+	m.checkClearance(out, service)
+	return m, service, nil
 }
 
 // summarise picks the best design, the trade-off front and the near misses,

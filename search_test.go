@@ -25,8 +25,8 @@ func smallSpace() SearchSpace {
 			{Length: 4.5 * m, Width: 5 * m, Height: 2.6 * m, Depth: 3 * m},
 		},
 		Footings: []FootingSize{
-			{Length: 2.0 * m, Width: 1.8 * m, Thickness: 0.6 * m},
-			{Length: 2.4 * m, Width: 2.0 * m, Thickness: 0.7 * m},
+			{Length: 2.0 * m, Width: 2.6 * m, Thickness: 0.6 * m},
+			{Length: 2.4 * m, Width: 3.0 * m, Thickness: 0.7 * m},
 		},
 	}
 }
@@ -35,9 +35,13 @@ func smallSpace() SearchSpace {
 // it as the search does: feasible when no check fails (comfort flags
 // aside), utilisation the highest ratio.
 func bruteForce(t *testing.T, b Bridge, d Design) (feasible bool, utilisation, price float64) {
-	a, err := Check(d.Apply(b), nil)
+	price, err := cost(d.Apply(b), DemoPrices)
 	if err != nil {
 		t.Fatal(err)
+	}
+	a, err := Check(d.Apply(b), nil)
+	if err != nil {
+		return false, math.Inf(1), price // a description that cannot be checked is no design
 	}
 	feasible = true
 	for _, r := range a.Report.Results {
@@ -46,10 +50,6 @@ func bruteForce(t *testing.T, b Bridge, d Design) (feasible bool, utilisation, p
 		}
 		utilisation = math.Max(utilisation, r.Ratio)
 		feasible = feasible && r.Status != check.Fail
-	}
-	price, err = cost(d.Apply(b), DemoPrices)
-	if err != nil {
-		t.Fatal(err)
 	}
 	return feasible, utilisation, price
 }
@@ -121,7 +121,7 @@ func TestSearchAgreesWithBruteForce(t *testing.T) {
 // allCandidates lists the candidates of a space in the search's order.
 func allCandidates(b Bridge, s SearchSpace) []Design {
 	var out []Design
-	for _, rc := range s.ropeChoices(b, firstWalkway(b)) {
+	for _, rc := range s.ropeChoices() {
 		for _, a := range s.Anchors {
 			for _, f := range s.Footings {
 				out = append(out, Design{SagRatio: rc.sag, Diameter: rc.diameter, Count: rc.count, Anchor: a, Footing: f})
@@ -129,6 +129,50 @@ func allCandidates(b Bridge, s SearchSpace) []Design {
 		}
 	}
 	return out
+}
+
+// TestSearchEdgeCases compares the search with brute force where parts of
+// the space cannot be built: an anchor size too short for the backstay's
+// attachment, a footing narrower than its column, an empty size (keep the
+// bridge's own), and no sag ratios (keep every group's own sag).
+func TestSearchEdgeCases(t *testing.T) {
+	b := Demo()
+	b.Banks.Left.Anchor.AttachX = 3 * units.Metre
+	b.Ropes[1].Sag = 2.5 * units.Metre // handrail sag of its own
+	m := units.Metre
+	space := SearchSpace{
+		Counts: []int{6},
+		Anchors: []BlockSize{
+			{Length: 2.5 * m, Width: 5 * m, Height: 2.6 * m, Depth: 3 * m}, // attachment outside the block
+			{},
+			{Length: 4.5 * m, Width: 5 * m, Height: 2.6 * m, Depth: 3 * m},
+		},
+		Footings: []FootingSize{
+			{Length: 0.5 * m, Width: 3 * m, Thickness: 0.7 * m}, // smaller than the column
+			{Length: 2.4 * m, Width: 3 * m, Thickness: 0.7 * m},
+			{},
+		},
+	}
+	res, err := Search(context.Background(), b, space, &SearchSettings{KeepAll: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(res.All) != 9 {
+		t.Fatalf("%d candidates, want 9", len(res.All))
+	}
+	for i, d := range res.All {
+		ok, u, c := bruteForce(t, b, d)
+		if ok != d.Feasible || (ok && math.Abs(u-d.Utilisation) > 1e-12*u) || c != d.Cost {
+			t.Errorf("candidate %d %+v: search %v/%.6g/%.6g (%s), brute force %v/%.6g/%.6g",
+				i, d.Anchor, d.Feasible, d.Utilisation, d.Cost, d.Governing.ID, ok, u, c)
+		}
+	}
+	if res.Best == nil {
+		t.Fatal("no feasible design; the valid sizes should pass")
+	}
+	if got := res.Analysis.Bridge.Ropes[1].Sag; got != 2.5*units.Metre {
+		t.Errorf("the best design's handrail sag is %v, want the bridge's own 2.5 m", got)
+	}
 }
 
 func TestSearchSameAnswerAnyWorkers(t *testing.T) {
@@ -205,7 +249,7 @@ func benchSpace() SearchSpace {
 		}
 	}
 	for _, l := range []units.Length{2.0, 2.2, 2.4, 2.6} {
-		for _, w := range []units.Length{1.8, 2.0, 2.2} {
+		for _, w := range []units.Length{2.6, 2.8, 3.0} {
 			for _, t := range []units.Length{0.6, 0.7} {
 				space.Footings = append(space.Footings, FootingSize{Length: l * m, Width: w * m, Thickness: t * m})
 			}

@@ -83,6 +83,9 @@ func (b Bridge) Validate() error {
 	}
 	v.nonNegative("climate.wind_speed", float64(c.WindSpeed), units.KindVelocity)
 	v.nonNegative("climate.wind_pressure", float64(c.WindPressure), units.KindPressure)
+	if math.IsNaN(c.Exposure) || c.Exposure < 0 || c.Exposure > 10 {
+		v.fail("climate.exposure", "must be zero (default) or an exposure factor up to 10, got %v", c.Exposure)
+	}
 
 	w := b.Walkway
 	v.positive("walkway.width", float64(w.Width), units.KindLength)

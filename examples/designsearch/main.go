@@ -57,7 +57,7 @@ func space() sagspan.SearchSpace {
 		}
 	}
 	for _, l := range []units.Length{1.8, 2.2, 2.6} {
-		for _, w := range []units.Length{1.6, 2.0} {
+		for _, w := range []units.Length{2.6, 3.0} {
 			for _, t := range []units.Length{0.6, 0.8} {
 				s.Footings = append(s.Footings, sagspan.FootingSize{Length: l * m, Width: w * m, Thickness: t * m})
 			}
