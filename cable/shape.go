@@ -45,3 +45,11 @@ func clampX(x, l float64) float64 {
 	}
 	return x
 }
+
+// The shapes of this package.
+var (
+	_ Shape = Parabola{}
+	_ Shape = Catenary{}
+	_ Shape = ElasticCatenary{}
+	_ Shape = Loaded{}
+)
