@@ -690,11 +690,9 @@ func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Re
 		z = spec.Height / 3
 	}
 	var pulls []foundation.Pull
-	var total units.Force
 	for i, g := range svc.Groups {
 		t, p := g.Backstay[s], perm.Groups[i].Backstay[s]
 		angle := g.BackstayAngle[s]
-		total += t
 		pulls = append(pulls, foundation.Pull{Force: min(t, p), Angle: angle, X: x, Z: z})
 		if t > p {
 			pulls = append(pulls, foundation.Pull{Force: t - p, Angle: angle, X: x, Z: z, Variable: true})
@@ -706,27 +704,27 @@ func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Re
 		d := foundation.Deadman{Length: spec.Width, Height: spec.Height, Thickness: spec.Length, Depth: spec.Depth, UnitWeight: spec.UnitWeight}
 		return d.Check(pulls, soil, basis)
 	case "rock":
+		// The bars lie along the resultant of the backstays' pulls.
+		var fx, fz, fxp, fzp float64
+		for i, g := range svc.Groups {
+			c, sn := math.Cos(float64(g.BackstayAngle[s])), math.Sin(float64(g.BackstayAngle[s]))
+			fx, fz = fx+float64(g.Backstay[s])*c, fz+float64(g.Backstay[s])*sn
+			p := perm.Groups[i].Backstay[s]
+			fxp, fzp = fxp+float64(p)*c, fzp+float64(p)*sn
+		}
+		pull, permanent := math.Hypot(fx, fz), math.Hypot(fxp, fzp)
 		ra := foundation.RockAnchor{
 			Count: spec.Bars, BarDiameter: spec.BarDiameter, YieldStrength: spec.BarStrength,
 			HoleDiameter: spec.HoleDiameter, BondLength: spec.BondLength, FreeLength: spec.FreeLength,
-			VariableShare: share(float64(total), float64(sumBackstay(perm, s))),
+			VariableShare: share(pull, permanent),
 		}
-		angle := svc.Groups[0].BackstayAngle[s]
-		return ra.Check(total, angle, soil, basis)
+		return ra.Check(units.Force(pull), units.Angle(math.Atan2(fz, fx)), soil, basis)
 	}
 	blk := foundation.AnchorBlock{
 		Length: spec.Length, Width: spec.Width, Height: spec.Height, Depth: spec.Depth,
 		UnitWeight: spec.UnitWeight, PassiveMobilisation: spec.Passive,
 	}
 	return blk.Check(pulls, soil, basis)
-}
-
-func sumBackstay(cs CaseState, s Side) units.Force {
-	var t units.Force
-	for _, g := range cs.Groups {
-		t += g.Backstay[s]
-	}
-	return t
 }
 
 // walkwayLow returns the lowest elevation of the walkway underside in a
@@ -745,6 +743,7 @@ func (m *model) walkwayLow(cs CaseState) (units.Length, units.Length) {
 				x, z = m.b.Site.Span, m.b.Site.Rise
 			}
 		}
+		z += g.Offset
 		if z < low {
 			low, at = z, x
 		}
@@ -804,15 +803,15 @@ func (m *model) checkFrequencies(a *Analysis, perm CaseState, opts *Options) err
 	var h units.Force
 	var w units.LoadPerLength
 	var ea units.AxialStiffness
-	sag := units.Length(0)
 	for i, g := range m.groups {
 		h += perm.Groups[i].H
 		w += m.ref[i].Load.Uniform
 		ea += g.elastic.EA
-		if g.Role == RoleWalkway && sag == 0 {
-			sag = g.Sag
-		}
 	}
+	// The sag that the total weight and tension hang at, w l²/(8H): the
+	// weighted harmonic mean of the groups' sags.
+	l := float64(m.b.Site.Span)
+	sag := units.Length(float64(w) * l * l / (8 * float64(h)))
 	mass := units.MassPerLength(float64(w) / units.StandardGravity)
 	modes, err := cable.Frequencies(m.span, h, mass, sag, ea)
 	if err != nil {

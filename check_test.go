@@ -307,3 +307,46 @@ func TestRopeFedOverSaddles(t *testing.T) {
 		t.Errorf("only %d slipping saddles over %d cases: the test does not reach the sliding saddle", slips, len(a.Service))
 	}
 }
+
+// TestAnchorTypes runs the chain with a deadman on one bank and grouted
+// rock anchors on the other, and checks that each anchor's own checks are
+// reported for every case.
+func TestAnchorTypes(t *testing.T) {
+	b := Demo()
+	m := units.Metre
+	b.Banks.Left.Anchor = AnchorSpec{Type: "deadman", Length: 1.2 * m, Width: 6 * m, Height: 1.5 * m, Depth: 3 * m}
+	b.Banks.Right.Anchor = AnchorSpec{Type: "rock", Bars: 4, BarDiameter: 32 * units.Millimetre,
+		BarStrength: 500 * units.Megapascal, HoleDiameter: 90 * units.Millimetre, BondLength: 4 * m, FreeLength: 2 * m}
+	b.Banks.Right.Soil = SoilSpec{Preset: "sound rock"}
+	if err := b.Validate(); err != nil {
+		t.Fatal(err)
+	}
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	count := map[string]int{}
+	for _, r := range a.Report.Results {
+		count[r.ID]++
+		if r.Demand != r.Demand || r.Capacity != r.Capacity {
+			t.Errorf("NaN in %s %s", r.ID, r.Case)
+		}
+	}
+	n := len(b.Cases())
+	for _, id := range []string{"anchor.deadman.pullout", "anchor.deadman.uplift", "anchor.rock.steel", "anchor.rock.groutbar", "anchor.rock.groutrock", "anchor.rock.cone"} {
+		if count[id] != n {
+			t.Errorf("%s reported %d times, want once per case (%d)", id, count[id], n)
+		}
+	}
+	// The bars carry the resultant of the backstay pulls: with the
+	// walkway and handrail backstays at different slopes, the steel check's
+	// demand per bar in the permanent case is |Σ T_i (cos β_i, sin β_i)|/4.
+	perm := a.Service[0]
+	var fx, fz float64
+	for _, g := range perm.Groups {
+		fx += float64(g.Backstay[Right]) * math.Cos(float64(g.BackstayAngle[Right]))
+		fz += float64(g.Backstay[Right]) * math.Sin(float64(g.BackstayAngle[Right]))
+	}
+	steel := find(t, a.Report, "anchor.rock.steel", "right anchor", "permanent")
+	near(t, "rock anchor bar pull", steel.Demand, math.Hypot(fx, fz)/4*2.0, 1e-9) // allowable: factor 2.0 on the demand side
+}
