@@ -56,8 +56,9 @@ type GroupState struct {
 	LowX, LowZ           units.Length // lowest point, z from the left saddle
 	LowWithin            bool         // false when the lowest point is a saddle
 	MaxTension           units.Force  // the largest of span and backstay tensions
-	// Slipped reports whether the rope slipped over a sliding saddle.
-	Slipped [2]bool
+	// SaddleMoved reports whether the saddle moved on the column top: a
+	// sliding saddle that slid, or a roller.
+	SaddleMoved [2]bool
 	// Saddle is the force on each tower column from this group's saddle.
 	Saddle [2]tower.LevelForce
 	shape  cable.Loaded
@@ -152,10 +153,8 @@ func newModel(b Bridge) (*model, error) {
 }
 
 // reference sets a group's unstretched span length and backstays from its
-// reference state. In it the backstay tension is what the saddle balances
-// with the span-side pull, taking the rope as set with equal tensions on
-// both sides of a fixed or sliding saddle (common practice: the ropes are
-// pulled over the saddles before they are clamped or left to friction).
+// reference state, the backstay tension being what the saddle balances with
+// the span-side pull.
 func (m *model) reference(g group, ref cable.State) error {
 	shape, err := cable.NewLoaded(m.span, ref.Load, ref.H)
 	if err != nil {
@@ -177,7 +176,7 @@ func (m *model) reference(g group, ref cable.State) error {
 		bs := backstay{angle: backstayAngle(bank.Backstay, g.Offset)}
 		bs.chord = units.Length(math.Hypot(float64(bank.Backstay.Horizontal), float64(bank.Backstay.Drop+g.Offset)))
 		hx, v, _ := elevationPull(t, a, 0)
-		t0, _ := saddleBalance(saddleKind(bank.Tower.Saddle), bank.Tower.Saddle.Friction, hx, v, float64(t), bs.angle, 0)
+		t0, _ := saddleBalance(saddleKind(bank.Tower.Saddle), bank.Tower.Saddle.Friction, float64(t), hx, v, bs.angle, 0)
 		bs.unstretched = bs.unstretchedFor(g.elastic, t0)
 		bss[side] = bs
 	}
@@ -244,16 +243,6 @@ type backstay struct {
 	unstretched float64
 }
 
-// tensionAt returns the tension of a backstay whose unstretched length at
-// the reference temperature is l0, at temperature difference dt: a
-// straight elastic rope between fixed points,
-//
-//	T = EA (c / (l0 exp(α dt)) − 1),   zero when that is negative (slack)
-func (bs backstay) tensionAt(e cable.Elastic, dt float64) float64 {
-	t := float64(e.EA) * (float64(bs.chord)/(bs.unstretched*math.Exp(float64(e.Alpha)*dt)) - 1)
-	return math.Max(t, 0)
-}
-
 // unstretchedFor returns the unstretched length, at the rope's present
 // temperature, of the backstay when it carries tension t: c/(1 + T/EA).
 func (bs backstay) unstretchedFor(e cable.Elastic, t float64) float64 {
@@ -261,35 +250,37 @@ func (bs backstay) unstretchedFor(e cable.Elastic, t float64) float64 {
 }
 
 // saddleBalance returns the backstay tension over a saddle of the given
-// kind, with the span-side pull given in the elevation plane by its
-// horizontal and vertical components h and v, and the tension held the
-// clamped backstay would carry:
+// kind. The rope renders over the saddle's groove, friction there
+// neglected (common practice), so its tension is continuous, T_b = T_s,
+// unless the saddle itself moves on the column top. The span-side pull is
+// given by its tension ts and, in the elevation plane, its horizontal and
+// vertical components h and v:
 //
-//	fixed:   T_b = held                 (rope clamped in the saddle; backstay and span are separate ropes)
-//	roller:  T_b = h / cos β            (the saddle rolls: horizontal components balance)
-//	sliding: T_b = held                 while |h − held cos β| <= μ (v + held sin β)
-//	         T_b = (h − sμv)/(cos β + sμ sin β) once the rope slips, s the sign of the unbalance
+//	fixed:   T_b = T_s                               (the column takes H = h − T_b cos β)
+//	roller:  T_b = h / cos β                         (the saddle rolls until the horizontals balance)
+//	sliding: T_b = T_s    while |h − T_s cos β| <= μ (v + T_s sin β)
+//	         T_b = (h − sμv)/(cos β + sμ sin β)      once the saddle slides, s the sign of the unbalance
 //
 // with the normal force taken as the vertical component, as package tower
-// does (common practice). slip, when not zero, forces a sliding saddle to
-// slip in that direction (+1: toward the span). The result's slip is the
-// direction the rope slips, zero when it is held; a roller reports +1.
-func saddleBalance(kind tower.SaddleKind, mu, h, v, held float64, beta units.Angle, slip float64) (t, slipped float64) {
+// does (common practice). slide, when not zero, holds a sliding saddle
+// sliding in that direction (+1: toward the span); the result's moved is
+// the direction the saddle moved, zero when it stayed (a roller gives +1).
+func saddleBalance(kind tower.SaddleKind, mu, ts, h, v float64, beta units.Angle, slide float64) (t, moved float64) {
 	cb, sb := math.Cos(float64(beta)), math.Sin(float64(beta))
 	switch kind {
 	case tower.Roller:
 		return h / cb, 1
 	case tower.Sliding:
-		if slip == 0 {
-			unbalance := h - held*cb
-			if math.Abs(unbalance) <= mu*(v+held*sb) {
-				return held, 0
+		if slide == 0 {
+			unbalance := h - ts*cb
+			if math.Abs(unbalance) <= mu*(v+ts*sb) {
+				return ts, 0
 			}
-			slip = math.Copysign(1, unbalance)
+			slide = math.Copysign(1, unbalance)
 		}
-		return (h - slip*mu*v) / (cb + slip*mu*sb), slip
+		return (h - slide*mu*v) / (cb + slide*mu*sb), slide
 	}
-	return held, 0
+	return ts, 0
 }
 
 // elevationPull returns the components, in the elevation plane, of the
@@ -303,26 +294,25 @@ func elevationPull(t units.Force, a, swing units.Angle) (h, v, lateral float64) 
 	return h, inPlane * math.Cos(float64(swing)), inPlane * math.Sin(float64(swing))
 }
 
-// maxFeedIterations bounds the fixed-point iteration on the rope fed over
-// slipping saddles; it converges geometrically since backstays are short
-// beside the span (common practice: a handful of steps).
+// maxFeedIterations bounds the iteration on the rope rendered over the
+// saddles; the secant steps settle it in a few.
 const maxFeedIterations = 60
 
 // analyse returns the state of the bridge under case lc.
 //
 // Each rope group's span is a change of state from its reference state
-// (cable.ChangeOfState). Where the rope slips over a saddle (a roller
-// always, a sliding saddle once friction is overcome) rope feeds between
-// backstay and span: the span's unstretched length grows by what the
-// backstays give up, Σ [l0_b,θ − c_b/(1 + T_b/EA)], and the span and
-// backstay tensions are solved together by fixed-point iteration.
+// (cable.ChangeOfState). The rope runs on from the span over the saddles
+// into the backstays, so rope renders between them: the span's unstretched
+// length grows by what the backstays give up, Σ [l0_b,θ − c_b/(1 + T_b/EA)],
+// and the span and backstay tensions are solved together (the anchors and,
+// but for sliding and roller saddles, the saddles fixed).
 func (m *model) analyse(lc LoadCase) (CaseState, error) {
 	cs := CaseState{Case: lc, Groups: make([]GroupState, len(m.groups))}
 	var levels [2][]tower.LevelForce
 	dt := float64(lc.Temperature - m.b.Climate.Reference)
 	for i, g := range m.groups {
 		load, swing := m.load(g, lc)
-		gs, err := m.solveGroup(i, load, swing, dt, lc.Temperature)
+		gs, err := m.solveGroup(i, load, swing, dt)
 		if err != nil {
 			return CaseState{}, fmt.Errorf("sagspan: %s, case %q: %w", g.Name, lc.Name, err)
 		}
@@ -356,31 +346,34 @@ func (m *model) analyse(lc LoadCase) (CaseState, error) {
 
 // solveGroup returns the state of rope group i under load, swung by swing,
 // dt kelvin from the reference temperature.
-func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64, temp units.Temperature) (GroupState, error) {
+//
+// The rope rendered into the span, feed, solves r(feed) = g(feed) − feed = 0
+// where g is the rope the backstays give up once the span hangs with that
+// feed; secant steps from feed = 0, safeguarded by plain iteration.
+func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64) (GroupState, error) {
 	g := m.groups[i]
 	e := g.elastic
-	// The rope fed into the span is passed to the change of state as an
+	// The rope fed into the span reaches the change of state as an
 	// equivalent change of the span's unstretched length, through the
 	// thermal term: exp(α' dθ') = exp(α dt)·(1 + feed/l0,θ).
 	const alphaEq = 1e-5 // any positive coefficient; dθ' follows from it
-	l0 := m.spanUnstretched[i] * math.Exp(float64(e.Alpha)*dt)
-	feed := 0.0
-	// slip records, per side, the direction the rope slips once it has: a
-	// side that slips keeps slipping while the iteration settles, so that
-	// the feed cannot flip between held and slipping.
-	var slip [2]float64
+	thermal := math.Exp(float64(e.Alpha) * dt)
+	l0 := m.spanUnstretched[i] * thermal
+	// slide records the direction a sliding saddle has slid: once it
+	// slides it stays sliding while the iteration settles, so that the
+	// feed cannot flip between held and sliding.
+	var slide [2]float64
 	var gs GroupState
-	for range maxFeedIterations {
+	step := func(feed float64) (float64, error) {
 		eq := cable.Elastic{EA: e.EA, Alpha: alphaEq}
 		grow := float64(e.Alpha)*dt + math.Log1p(feed/l0)
-		eqTemp := m.ref[i].Temperature + units.Temperature(grow/alphaEq)
-		st, err := cable.ChangeOfState(m.span, eq, m.ref[i], load, eqTemp)
+		st, err := cable.ChangeOfState(m.span, eq, m.ref[i], load, m.ref[i].Temperature+units.Temperature(grow/alphaEq))
 		if err != nil {
-			return GroupState{}, err
+			return 0, err
 		}
 		shape, err := cable.NewLoaded(m.span, load, st.H)
 		if err != nil {
-			return GroupState{}, err
+			return 0, err
 		}
 		gs = GroupState{Group: g.Name, Load: load, Swing: swing, H: st.H, shape: shape}
 		ta, tb := shape.SupportTensions()
@@ -390,26 +383,45 @@ func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64
 		gs.Sag = shape.Sag(m.b.Site.Span / 2)
 		gs.LowX, gs.LowZ, gs.LowWithin = shape.LowPoint()
 		gs.MaxTension = max(ta, tb)
-		next := 0.0
+		given := 0.0
 		for side := Left; side <= Right; side++ {
 			bank := m.bank(side)
 			bs := m.backstays[i][side]
 			h, v, _ := elevationPull(gs.Tension[side], gs.Angle[side], swing)
-			held := bs.tensionAt(e, dt)
-			tback, dir := saddleBalance(saddleKind(bank.Tower.Saddle), bank.Tower.Saddle.Friction, h, v, held, bs.angle, slip[side])
-			slip[side] = dir
-			gs.Backstay[side], gs.BackstayAngle[side], gs.Slipped[side] = units.Force(tback), bs.angle, dir != 0
+			tback, dir := saddleBalance(saddleKind(bank.Tower.Saddle), bank.Tower.Saddle.Friction, float64(gs.Tension[side]), h, v, bs.angle, slide[side])
+			slide[side] = dir
+			gs.Backstay[side], gs.BackstayAngle[side], gs.SaddleMoved[side] = units.Force(tback), bs.angle, dir != 0
 			gs.MaxTension = max(gs.MaxTension, units.Force(tback))
-			if dir != 0 {
-				next += bs.unstretched*math.Exp(float64(e.Alpha)*dt) - bs.unstretchedFor(e, tback)
-			}
+			given += bs.unstretched*thermal - bs.unstretchedFor(e, tback)
 		}
-		if math.Abs(next-feed) <= 1e-10*float64(m.span.Length) {
+		return given, nil
+	}
+	tol := 1e-10 * float64(m.span.Length)
+	x0, x1 := 0.0, 0.0
+	g0, err := step(x0)
+	if err != nil {
+		return GroupState{}, err
+	}
+	r0 := g0 - x0
+	x1 = g0
+	for range maxFeedIterations {
+		g1, err := step(x1)
+		if err != nil {
+			return GroupState{}, err
+		}
+		r1 := g1 - x1
+		if math.Abs(r1) <= tol {
 			return gs, nil
 		}
-		feed = next
+		next := g1 // plain iteration
+		if d := r1 - r0; d != 0 {
+			if sec := x1 - r1*(x1-x0)/d; !math.IsNaN(sec) && !math.IsInf(sec, 0) {
+				next = sec
+			}
+		}
+		x0, r0, x1 = x1, r1, next
 	}
-	return GroupState{}, fmt.Errorf("rope fed over the saddles does not settle after %d iterations", maxFeedIterations)
+	return GroupState{}, fmt.Errorf("rope rendered over the saddles does not settle after %d iterations", maxFeedIterations)
 }
 
 func (m *model) column(s Side) tower.Column {

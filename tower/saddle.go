@@ -32,11 +32,12 @@ type SaddleKind int
 
 // The saddle kinds.
 const (
-	// Fixed: the rope is clamped or cannot slip; the column takes the full
-	// unbalanced horizontal force.
+	// Fixed: the saddle is fixed to the column; the column takes the full
+	// unbalanced horizontal force of the two rope pulls.
 	Fixed SaddleKind = iota
-	// Sliding: the rope slips over the saddle once the unbalanced
-	// horizontal force exceeds friction; the column takes at most μ·N.
+	// Sliding: the saddle sits on a bearing plate and slides on it once
+	// the unbalanced horizontal force exceeds friction; the column takes
+	// at most μ·N.
 	Sliding
 	// Roller: the saddle rolls freely; the column takes no horizontal force.
 	Roller
@@ -120,10 +121,10 @@ type LevelForce struct {
 //
 // with N = V. Taking the normal force as the vertical component is the
 // usual simplification for a saddle seat that is horizontal at its crest
-// (common practice). When |H_u| > μN the rope slips over a sliding saddle
-// until its tensions re-balance; the forces returned are those on the
+// (common practice). When |H_u| > μN a sliding saddle slides on its plate
+// until the rope tensions re-balance; the forces returned are those on the
 // column for the tensions given, so the caller should pass the tensions of
-// the slipped state (this package does not re-solve the ropes). On a
+// the slid state (this package does not re-solve the ropes). On a
 // roller the horizontal force is the rolling resistance, taken as
 // negligible.
 //
@@ -162,7 +163,7 @@ func (s Saddle) Force(span, backstay Pull) (LevelForce, error) {
 	return LevelForce{Height: s.Height, Offset: s.Offset, Vertical: units.Force(v), Horizontal: units.Force(h)}, nil
 }
 
-// Slips reports whether the rope slips over this saddle under the given
+// Slips reports whether this saddle moves on the column under the given
 // pulls: true for a sliding saddle when the unbalanced horizontal force
 // exceeds μ·N, and always true for a roller carrying any unbalanced force.
 // It reports false for invalid input (which Force rejects).

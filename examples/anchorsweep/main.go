@@ -5,9 +5,11 @@
 //
 // For each anchor position it runs the whole-bridge check and prints the
 // backstay angle, the resultant's angle and eccentricity at the column base
-// under the worst case, and the governing check of the left bank.
+// under the worst case, and the governing check of the left bank. The left
+// saddle is fixed to its column by default, where the effect is plainest; a
+// sliding saddle caps the horizontal force at friction, a roller removes it.
 //
-//	go run ./examples/anchorsweep [-from 18] [-to 5] [-step 1] [-drop 3.4]
+//	go run ./examples/anchorsweep [-from 18] [-to 5] [-step 1] [-drop 3.4] [-saddle fixed]
 //
 // The bridge and its numbers are invented. The results support, and never
 // replace, the design of a qualified engineer; local codes and licensed
@@ -33,18 +35,20 @@ func main() {
 	to := flag.Float64("to", 5, "last horizontal distance, m")
 	step := flag.Float64("step", 1, "step, m")
 	drop := flag.Float64("drop", 3.4, "drop of the anchor below the saddle, m")
+	saddle := flag.String("saddle", "fixed", "left saddle kind: fixed, sliding or roller")
+	friction := flag.Float64("friction", 0.05, "friction coefficient of a sliding saddle")
 	flag.Parse()
-	if err := sweep(os.Stdout, *from, *to, *step, *drop); err != nil {
+	if err := sweep(os.Stdout, *from, *to, *step, *drop, sagspan.SaddleSpec{Kind: *saddle, Friction: *friction}); err != nil {
 		fmt.Fprintln(os.Stderr, "anchorsweep:", err)
 		os.Exit(1)
 	}
 }
 
-func sweep(w io.Writer, from, to, step, drop float64) error {
+func sweep(w io.Writer, from, to, step, drop float64, saddle sagspan.SaddleSpec) error {
 	if !(step > 0) || from < to || !(to > 0) || !(drop > 0) {
 		return fmt.Errorf("want from >= to > 0, step > 0 and drop > 0; got from %v, to %v, step %v, drop %v", from, to, step, drop)
 	}
-	fmt.Fprintln(w, "Left anchor sweep on the demo bridge (invented site).")
+	fmt.Fprintf(w, "Left anchor sweep on the demo bridge (invented site), left saddle %s.\n", saddle.Kind)
 	fmt.Fprintln(w, check.Caution)
 	fmt.Fprintln(w)
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
@@ -53,6 +57,7 @@ func sweep(w io.Writer, from, to, step, drop float64) error {
 		b := sagspan.Demo()
 		b.Banks.Left.Backstay.Horizontal = units.Length(h)
 		b.Banks.Left.Backstay.Drop = units.Length(drop)
+		b.Banks.Left.Tower.Saddle = saddle
 		a, err := sagspan.Check(b, nil)
 		if err != nil {
 			return err
