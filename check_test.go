@@ -299,7 +299,7 @@ func unstretchedByQuadrature(gs GroupState, span units.Length, ea float64) float
 // T_b cos β = H; a sliding saddle that slides passes μN to the column
 // (statics).
 func TestRopeRenderedOverSaddles(t *testing.T) {
-	b := Demo() // left saddle sliding, right saddle on rollers
+	b := Demo()                                  // left saddle sliding, right saddle on rollers
 	b.Banks.Left.Backstay.Drop = 8 * units.Metre // steep enough for the left saddle to slide
 	a, err := Check(b, nil)
 	if err != nil {
