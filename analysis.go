@@ -37,6 +37,15 @@ func (s Side) String() string {
 	return "right"
 }
 
+// The elements of each bank as reports name them.
+var (
+	towerElement         = [2]string{"left tower", "right tower"}
+	towerAcrossElement   = [2]string{"left tower, across", "right tower, across"}
+	footingElement       = [2]string{"left footing", "right footing"}
+	footingAcrossElement = [2]string{"left footing, across", "right footing, across"}
+	anchorElement        = [2]string{"left anchor", "right anchor"}
+)
+
 // GroupState is the state of one rope group under one load case.
 type GroupState struct {
 	Group string
@@ -112,6 +121,11 @@ type model struct {
 	// ref holds each group's reference state: permanent load at the
 	// reference temperature, hanging at its design sag.
 	ref []cable.State
+	// fbasis is the basis of the anchor and footing checks; its Terse
+	// leaves their text out for a design search.
+	fbasis foundation.Basis
+	// scratch is reused for the results of one footing or anchor check.
+	scratch []check.Result
 	// spanUnstretched is each group's unstretched span length in the
 	// reference state; backstays are each group's backstays.
 	spanUnstretched []float64
@@ -133,6 +147,14 @@ func newModel(b Bridge) (*model, error) {
 		crowdHalf: units.LoadPerLength(float64(b.crowd(b.Site.Span/2)) * float64(b.Walkway.Width)),
 		wind:      b.wind(),
 		psi:       orDefault(b.Loads.WindWithCrowd, defaultWindWithCrowd),
+	}
+	bs := b.Basis
+	m.fbasis = foundation.Basis{
+		PartialFactors: b.partial(),
+		Sliding:        bs.SlidingFactor,
+		Overturning:    bs.OverturningFactor,
+		Uplift:         bs.UpliftFactor,
+		Bearing:        bs.BearingFactor,
 	}
 	for i, bank := range []Bank{b.Banks.Left, b.Banks.Right} {
 		if m.soils[i], err = bank.Soil.soil(); err != nil {
@@ -527,7 +549,7 @@ func (m *model) superstructure(out sink, service, design []CaseState) error {
 		}
 		for side := Left; side <= Right; side++ {
 			bank := m.bank(side)
-			towerName := side.String() + " tower"
+			towerName := towerElement[side]
 			var limit *tower.EccentricityLimit // nil: the kern
 			if e := bank.Tower.Eccentricity; e.Rule == "fraction" {
 				limit = &tower.EccentricityLimit{Fraction: e.Fraction, Offset: e.Offset}
@@ -549,7 +571,7 @@ func (m *model) superstructure(out sink, service, design []CaseState) error {
 				if err != nil {
 					return fmt.Errorf("sagspan: %s column section across, case %q: %w", towerName, name, err)
 				}
-				out.add(r.For(towerName+", across", name).WithNote("bending across the bridge from wind on the swung ropes"))
+				out.add(r.For(towerAcrossElement[side], name).WithNote("bending across the bridge from wind on the swung ropes"))
 			}
 		}
 	}
@@ -559,7 +581,7 @@ func (m *model) superstructure(out sink, service, design []CaseState) error {
 // footingChecks checks the footing spec of one bank's tower under every
 // service case.
 func (m *model) footingChecks(out sink, side Side, spec FootingSpec, service []CaseState) error {
-	element := side.String() + " footing"
+	element := footingElement[side]
 	for _, svc := range service {
 		results, err := m.footing(side, spec, service[0].Tower[side], svc.Tower[side])
 		if err != nil {
@@ -576,7 +598,7 @@ func (m *model) footingChecks(out sink, side Side, spec FootingSpec, service []C
 			return fmt.Errorf("sagspan: %s across, case %q: %w", element, svc.Case.Name, err)
 		}
 		for _, r := range results {
-			out.add(r.For(element+", across", svc.Case.Name))
+			out.add(r.For(footingAcrossElement[side], svc.Case.Name))
 		}
 	}
 	return nil
@@ -594,12 +616,14 @@ func (m *model) footingAcross(s Side, spec FootingSpec, svc CaseState) ([]check.
 		Moment:        svc.LateralMoment[s] + units.MomentOf(lateral, spec.Thickness),
 		VariableShare: 1,
 	}
-	return f.Check(load, m.soils[s], foundation.Vesic, m.foundationBasis())
+	var err error
+	m.scratch, err = f.AppendCheck(m.scratch[:0], load, m.soils[s], foundation.Vesic, m.foundationBasis())
+	return m.scratch, err
 }
 
 // anchorChecks checks the anchor spec of one bank under every service case.
 func (m *model) anchorChecks(out sink, side Side, spec AnchorSpec, service []CaseState) error {
-	element := side.String() + " anchor"
+	element := anchorElement[side]
 	for _, svc := range service {
 		results, err := m.anchor(side, spec, service[0], svc)
 		if err != nil {
@@ -676,19 +700,15 @@ func (m *model) footing(s Side, spec FootingSpec, perm, r tower.Resultant) ([]ch
 			share(moment(r), moment(perm)),
 		),
 	}
-	return f.Check(load, m.soils[s], foundation.Vesic, m.foundationBasis())
+	var err error
+	m.scratch, err = f.AppendCheck(m.scratch[:0], load, m.soils[s], foundation.Vesic, m.foundationBasis())
+	return m.scratch, err
 }
 
-func (m *model) foundationBasis() *foundation.Basis {
-	bs := m.b.Basis
-	return &foundation.Basis{
-		PartialFactors: m.b.partial(),
-		Sliding:        bs.SlidingFactor,
-		Overturning:    bs.OverturningFactor,
-		Uplift:         bs.UpliftFactor,
-		Bearing:        bs.BearingFactor,
-	}
-}
+// foundationBasis returns the verification basis of the anchor and
+// footing checks, held in the model so that the many checks of a design
+// search share it.
+func (m *model) foundationBasis() *foundation.Basis { return &m.fbasis }
 
 // anchor checks the anchor of one bank under the backstay pulls of every
 // group, split into the permanent case's pull and the rest.
@@ -701,7 +721,7 @@ func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Re
 	if z == 0 {
 		z = spec.Height / 3
 	}
-	var pulls []foundation.Pull
+	pulls := make([]foundation.Pull, 0, 2*len(svc.Groups))
 	for i, g := range svc.Groups {
 		t, p := g.Backstay[s], perm.Groups[i].Backstay[s]
 		angle := g.BackstayAngle[s]
@@ -736,7 +756,9 @@ func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Re
 		Length: spec.Length, Width: spec.Width, Height: spec.Height, Depth: spec.Depth,
 		UnitWeight: spec.UnitWeight, PassiveMobilisation: spec.Passive,
 	}
-	return blk.Check(pulls, soil, basis)
+	var err error
+	m.scratch, err = blk.AppendCheck(m.scratch[:0], pulls, soil, basis)
+	return m.scratch, err
 }
 
 // walkwayLow returns the lowest elevation of the walkway underside in a

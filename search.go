@@ -407,7 +407,7 @@ func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footi
 	for j, size := range anchors {
 		sized := bb.withSizes(size, FootingSize{})
 		anchorPrices[j] = anchorCost(sized, prices)
-		if err := sized.Validate(); err != nil {
+		if err := sized.validateBanks(); err != nil {
 			anchorScores[j] = invalid(err)
 			continue
 		}
@@ -423,7 +423,7 @@ func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footi
 	for k, size := range footings {
 		sized := bb.withSizes(BlockSize{}, size)
 		footingPrices[k] = footingCost(sized, prices)
-		if err := sized.Validate(); err != nil {
+		if err := sized.validateBanks(); err != nil {
 			footingScores[k] = invalid(err)
 			continue
 		}
@@ -457,6 +457,7 @@ func ropeStage(b Bridge, out sink) (*model, []CaseState, error) {
 	if err != nil {
 		return nil, nil, err
 	}
+	m.fbasis.Terse = true // scoring only: no result text from the foundation checks
 	service, design, err := m.states()
 	if err != nil {
 		return nil, nil, err
@@ -475,31 +476,32 @@ func summarise(b Bridge, designs []Design, settings *SearchSettings) (*SearchRes
 	if settings.KeepAll {
 		res.All = designs
 	}
-	var feasible, infeasible []Design
-	for _, d := range designs {
+	// Sort indices, not designs: a search may hold many thousands.
+	var feasible, infeasible []int32
+	for i, d := range designs {
 		if d.Feasible {
-			feasible = append(feasible, d)
+			feasible = append(feasible, int32(i))
 		} else {
-			infeasible = append(infeasible, d)
+			infeasible = append(infeasible, int32(i))
 		}
 	}
 	res.Feasible = len(feasible)
 	sort.Slice(feasible, func(i, j int) bool {
-		a, c := feasible[i], feasible[j]
+		a, c := &designs[feasible[i]], &designs[feasible[j]]
 		if a.Cost != c.Cost {
 			return a.Cost < c.Cost
 		}
 		return a.index < c.index
 	})
 	lowest := math.Inf(1)
-	for _, d := range feasible {
-		if d.Utilisation < lowest {
+	for _, i := range feasible {
+		if d := designs[i]; d.Utilisation < lowest {
 			res.Front = append(res.Front, d)
 			lowest = d.Utilisation
 		}
 	}
 	sort.Slice(infeasible, func(i, j int) bool {
-		a, c := infeasible[i], infeasible[j]
+		a, c := &designs[infeasible[i]], &designs[infeasible[j]]
 		if a.Utilisation != c.Utilisation {
 			return a.Utilisation < c.Utilisation
 		}
@@ -512,11 +514,13 @@ func summarise(b Bridge, designs []Design, settings *SearchSettings) (*SearchRes
 	if n <= 0 {
 		n = 5
 	}
-	res.NearMisses = infeasible[:min(n, len(infeasible))]
+	for _, i := range infeasible[:min(n, len(infeasible))] {
+		res.NearMisses = append(res.NearMisses, designs[i])
+	}
 	if len(feasible) == 0 {
 		return res, nil
 	}
-	best := feasible[0]
+	best := designs[feasible[0]]
 	res.Best = &best
 	a, err := Check(best.Apply(b), nil)
 	if err != nil {

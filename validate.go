@@ -17,14 +17,22 @@ const maxSagRatio = 0.25
 // validator gathers the first error found, naming its field.
 type validator struct{ err error }
 
-func (v *validator) fail(field, format string, args ...any) {
+// path is a field's JSON path in two parts, joined only when an error needs
+// it: validation runs in the design search's inner loop.
+type path struct{ prefix, name string }
+
+func at(name string) path { return path{name: name} }
+
+func (p path) String() string { return p.prefix + p.name }
+
+func (v *validator) fail(field path, format string, args ...any) {
 	if v.err == nil {
-		v.err = fieldErr(field, format, args...)
+		v.err = fieldErr(field.String(), format, args...)
 	}
 }
 
 // positive requires a finite value greater than zero.
-func (v *validator) positive(field string, x float64, k units.Kind) {
+func (v *validator) positive(field path, x float64, k units.Kind) {
 	switch {
 	case math.IsNaN(x) || math.IsInf(x, 0):
 		v.fail(field, "must be a finite number")
@@ -36,7 +44,7 @@ func (v *validator) positive(field string, x float64, k units.Kind) {
 }
 
 // nonNegative requires a finite value of at least zero.
-func (v *validator) nonNegative(field string, x float64, k units.Kind) {
+func (v *validator) nonNegative(field path, x float64, k units.Kind) {
 	switch {
 	case math.IsNaN(x) || math.IsInf(x, 0):
 		v.fail(field, "must be a finite number")
@@ -46,7 +54,7 @@ func (v *validator) nonNegative(field string, x float64, k units.Kind) {
 }
 
 // finite requires a finite value of any sign.
-func (v *validator) finite(field string, x float64) {
+func (v *validator) finite(field path, x float64) {
 	if math.IsNaN(x) || math.IsInf(x, 0) {
 		v.fail(field, "must be a finite number")
 	}
@@ -60,58 +68,75 @@ func (v *validator) finite(field string, x float64) {
 func (b Bridge) Validate() error {
 	v := &validator{}
 	s := b.Site
-	v.positive("site.span", float64(s.Span), units.KindLength)
-	v.finite("site.rise", float64(s.Rise))
+	v.positive(at("site.span"), float64(s.Span), units.KindLength)
+	v.finite(at("site.rise"), float64(s.Rise))
 	if v.err == nil && math.Abs(float64(s.Rise)) >= float64(s.Span) {
-		v.fail("site.rise", "height difference %s is not less than the span %s", s.Rise, s.Span)
+		v.fail(at("site.rise"), "height difference %s is not less than the span %s", s.Rise, s.Span)
 	}
-	v.finite("site.left_saddle_elevation", float64(s.LeftSaddle))
-	v.finite("site.flood_elevation", float64(s.Flood))
-	v.nonNegative("site.freeboard", float64(s.Freeboard), units.KindLength)
+	v.finite(at("site.left_saddle_elevation"), float64(s.LeftSaddle))
+	v.finite(at("site.flood_elevation"), float64(s.Flood))
+	v.nonNegative(at("site.freeboard"), float64(s.Freeboard), units.KindLength)
 	for i, p := range s.Ground {
-		v.finite(fmt.Sprintf("site.ground[%d].x", i), float64(p.X))
-		v.finite(fmt.Sprintf("site.ground[%d].z", i), float64(p.Z))
+		v.finite(at(fmt.Sprintf("site.ground[%d].x", i)), float64(p.X))
+		v.finite(at(fmt.Sprintf("site.ground[%d].z", i)), float64(p.Z))
 	}
 
 	c := b.Climate
-	v.positive("climate.reference", float64(c.Reference), units.KindTemperature)
-	v.positive("climate.coldest", float64(c.Coldest), units.KindTemperature)
-	v.positive("climate.hottest", float64(c.Hottest), units.KindTemperature)
+	v.positive(at("climate.reference"), float64(c.Reference), units.KindTemperature)
+	v.positive(at("climate.coldest"), float64(c.Coldest), units.KindTemperature)
+	v.positive(at("climate.hottest"), float64(c.Hottest), units.KindTemperature)
 	if v.err == nil && !(c.Coldest <= c.Reference && c.Reference <= c.Hottest) {
-		v.fail("climate", "temperatures must satisfy coldest <= reference <= hottest, got %s, %s, %s",
+		v.fail(at("climate"), "temperatures must satisfy coldest <= reference <= hottest, got %s, %s, %s",
 			c.Coldest, c.Reference, c.Hottest)
 	}
-	v.nonNegative("climate.wind_speed", float64(c.WindSpeed), units.KindVelocity)
-	v.nonNegative("climate.wind_pressure", float64(c.WindPressure), units.KindPressure)
+	v.nonNegative(at("climate.wind_speed"), float64(c.WindSpeed), units.KindVelocity)
+	v.nonNegative(at("climate.wind_pressure"), float64(c.WindPressure), units.KindPressure)
 	if math.IsNaN(c.Exposure) || c.Exposure < 0 || c.Exposure > 10 {
-		v.fail("climate.exposure", "must be zero (default) or an exposure factor up to 10, got %v", c.Exposure)
+		v.fail(at("climate.exposure"), "must be zero (default) or an exposure factor up to 10, got %v", c.Exposure)
 	}
 
 	w := b.Walkway
-	v.positive("walkway.width", float64(w.Width), units.KindLength)
-	v.nonNegative("walkway.depth", float64(w.Depth), units.KindLength)
-	v.nonNegative("walkway.dead_load", float64(w.DeadLoad), units.KindLoadPerLength)
-	v.nonNegative("walkway.wind_depth", float64(w.WindDepth), units.KindLength)
+	v.positive(at("walkway.width"), float64(w.Width), units.KindLength)
+	v.nonNegative(at("walkway.depth"), float64(w.Depth), units.KindLength)
+	v.nonNegative(at("walkway.dead_load"), float64(w.DeadLoad), units.KindLoadPerLength)
+	v.nonNegative(at("walkway.wind_depth"), float64(w.WindDepth), units.KindLength)
 	for i, p := range w.Parts {
-		v.positive(fmt.Sprintf("walkway.parts[%d].load", i), float64(p.Load), units.KindLoadPerLength)
+		v.positive(at(fmt.Sprintf("walkway.parts[%d].load", i)), float64(p.Load), units.KindLoadPerLength)
 	}
 	if v.err == nil && w.DeadLoad == 0 && len(w.Parts) == 0 {
-		v.fail("walkway.dead_load", "is missing: give the walkway dead load per metre or list its parts")
+		v.fail(at("walkway.dead_load"), "is missing: give the walkway dead load per metre or list its parts")
 	}
 	if v.err == nil && w.DeadLoad != 0 && len(w.Parts) != 0 {
-		v.fail("walkway.parts", "give either dead_load or parts, not both")
+		v.fail(at("walkway.parts"), "give either dead_load or parts, not both")
 	}
 
 	b.validateRopes(v)
 	b.validateBank(v, "banks.left", b.Banks.Left)
 	b.validateBank(v, "banks.right", b.Banks.Right)
+	for _, k := range []struct {
+		f    string
+		soil SoilSpec
+	}{{"banks.left.soil", b.Banks.Left.Soil}, {"banks.right.soil", b.Banks.Right.Soil}} {
+		if _, err := k.soil.soil(); err != nil {
+			v.fail(at(k.f), "%v", err)
+		}
+	}
 	b.validateLoads(v)
+	return v.err
+}
+
+// validateBanks checks the geometry of both banks only: what a design
+// search changes when it tries another anchor or footing size.
+func (b Bridge) validateBanks() error {
+	v := &validator{}
+	b.validateBank(v, "banks.left", b.Banks.Left)
+	b.validateBank(v, "banks.right", b.Banks.Right)
 	return v.err
 }
 
 func (b Bridge) validateRopes(v *validator) {
 	if len(b.Ropes) == 0 {
-		v.fail("ropes", "is missing: list at least one rope group")
+		v.fail(at("ropes"), "is missing: list at least one rope group")
 		return
 	}
 	walkway, shares := 0, 0.0
@@ -122,144 +147,141 @@ func (b Bridge) validateRopes(v *validator) {
 			walkway++
 		case RoleHandrail:
 		default:
-			v.fail(f+".role", "unknown role %q; want %q or %q", g.Role, RoleWalkway, RoleHandrail)
+			v.fail(path{f, ".role"}, "unknown role %q; want %q or %q", g.Role, RoleWalkway, RoleHandrail)
 		}
 		if g.Count <= 0 {
-			v.fail(f+".count", "must be at least 1, got %d", g.Count)
+			v.fail(path{f, ".count"}, "must be at least 1, got %d", g.Count)
 		}
-		v.positive(f+".sag", float64(g.Sag), units.KindLength)
+		v.positive(path{f, ".sag"}, float64(g.Sag), units.KindLength)
 		if v.err == nil && float64(g.Sag) > maxSagRatio*float64(b.Site.Span) {
-			v.fail(f+".sag", "sag %s is more than %.2f of the span %s: not a physical footbridge",
+			v.fail(path{f, ".sag"}, "sag %s is more than %.2f of the span %s: not a physical footbridge",
 				g.Sag, maxSagRatio, b.Site.Span)
 		}
-		v.nonNegative(f+".offset", float64(g.Offset), units.KindLength)
+		v.nonNegative(path{f, ".offset"}, float64(g.Offset), units.KindLength)
 		if math.IsNaN(g.Share) || g.Share < 0 || g.Share > 1 {
-			v.fail(f+".share", "must lie between 0 and 1, got %v", g.Share)
+			v.fail(path{f, ".share"}, "must lie between 0 and 1, got %v", g.Share)
 		}
 		shares += g.Share
 		if _, err := g.Rope.rope(); err != nil {
 			var fe *FieldError
 			if errors.As(err, &fe) {
-				v.fail(f+".rope."+fe.Field, "%v", fe.Err)
+				v.fail(at(f+".rope."+fe.Field), "%v", fe.Err)
 			} else {
-				v.fail(f+".rope", "%v", err)
+				v.fail(path{f, ".rope"}, "%v", err)
 			}
 		}
 	}
 	if walkway == 0 {
-		v.fail("ropes", "no rope group has role %q: nothing carries the walkway", RoleWalkway)
+		v.fail(at("ropes"), "no rope group has role %q: nothing carries the walkway", RoleWalkway)
 	}
 	if shares != 0 && math.Abs(shares-1) > 1e-9 {
-		v.fail("ropes", "the load shares of the rope groups add up to %v, not 1", shares)
+		v.fail(at("ropes"), "the load shares of the rope groups add up to %v, not 1", shares)
 	}
 }
 
 func (b Bridge) validateBank(v *validator, f string, k Bank) {
 	t := k.Tower
-	v.positive(f+".tower.height", float64(t.Height), units.KindLength)
-	v.positive(f+".tower.depth", float64(t.Depth), units.KindLength)
-	v.positive(f+".tower.width", float64(t.Width), units.KindLength)
-	v.nonNegative(f+".tower.facing", float64(t.Facing), units.KindLength)
+	v.positive(path{f, ".tower.height"}, float64(t.Height), units.KindLength)
+	v.positive(path{f, ".tower.depth"}, float64(t.Depth), units.KindLength)
+	v.positive(path{f, ".tower.width"}, float64(t.Width), units.KindLength)
+	v.nonNegative(path{f, ".tower.facing"}, float64(t.Facing), units.KindLength)
 	if v.err == nil && 2*t.Facing >= t.Depth {
-		v.fail(f+".tower.facing", "facing %s on both faces leaves no effective section of the %s column", t.Facing, t.Depth)
+		v.fail(path{f, ".tower.facing"}, "facing %s on both faces leaves no effective section of the %s column", t.Facing, t.Depth)
 	}
-	v.nonNegative(f+".tower.unit_weight", float64(t.UnitWeight), units.KindUnitWeight)
+	v.nonNegative(path{f, ".tower.unit_weight"}, float64(t.UnitWeight), units.KindUnitWeight)
 	switch t.Saddle.Kind {
 	case "fixed", "roller":
 	case "sliding":
 		if !(t.Saddle.Friction > 0 && t.Saddle.Friction < 1) {
-			v.fail(f+".tower.saddle.friction", "a sliding saddle needs a friction coefficient between 0 and 1, got %v", t.Saddle.Friction)
+			v.fail(path{f, ".tower.saddle.friction"}, "a sliding saddle needs a friction coefficient between 0 and 1, got %v", t.Saddle.Friction)
 		}
 	default:
-		v.fail(f+".tower.saddle.kind", "unknown saddle kind %q; want fixed, sliding or roller", t.Saddle.Kind)
+		v.fail(path{f, ".tower.saddle.kind"}, "unknown saddle kind %q; want fixed, sliding or roller", t.Saddle.Kind)
 	}
 	sec := t.Section
-	v.positive(f+".tower.section.concrete", float64(sec.Concrete), units.KindPressure)
+	v.positive(path{f, ".tower.section.concrete"}, float64(sec.Concrete), units.KindPressure)
 	if sec.Bars < 0 || sec.Bars%2 != 0 {
-		v.fail(f+".tower.section.bars", "must be an even number (half on each face), got %d", sec.Bars)
+		v.fail(path{f, ".tower.section.bars"}, "must be an even number (half on each face), got %d", sec.Bars)
 	}
 	if sec.Bars > 0 {
-		v.positive(f+".tower.section.steel", float64(sec.Steel), units.KindPressure)
-		v.positive(f+".tower.section.bar_diameter", float64(sec.BarDiameter), units.KindLength)
-		v.positive(f+".tower.section.cover", float64(sec.Cover), units.KindLength)
+		v.positive(path{f, ".tower.section.steel"}, float64(sec.Steel), units.KindPressure)
+		v.positive(path{f, ".tower.section.bar_diameter"}, float64(sec.BarDiameter), units.KindLength)
+		v.positive(path{f, ".tower.section.cover"}, float64(sec.Cover), units.KindLength)
 		if v.err == nil && 2*sec.Cover >= t.Depth-2*t.Facing {
-			v.fail(f+".tower.section.cover", "cover %s leaves no room in the effective depth", sec.Cover)
+			v.fail(path{f, ".tower.section.cover"}, "cover %s leaves no room in the effective depth", sec.Cover)
 		}
 	}
 	ft := t.Footing
-	v.positive(f+".tower.footing.length", float64(ft.Length), units.KindLength)
-	v.positive(f+".tower.footing.width", float64(ft.Width), units.KindLength)
-	v.positive(f+".tower.footing.thickness", float64(ft.Thickness), units.KindLength)
-	v.nonNegative(f+".tower.footing.depth", float64(ft.Depth), units.KindLength)
-	v.finite(f+".tower.footing.column_offset", float64(ft.ColumnOffset))
+	v.positive(path{f, ".tower.footing.length"}, float64(ft.Length), units.KindLength)
+	v.positive(path{f, ".tower.footing.width"}, float64(ft.Width), units.KindLength)
+	v.positive(path{f, ".tower.footing.thickness"}, float64(ft.Thickness), units.KindLength)
+	v.nonNegative(path{f, ".tower.footing.depth"}, float64(ft.Depth), units.KindLength)
+	v.finite(path{f, ".tower.footing.column_offset"}, float64(ft.ColumnOffset))
 	if v.err == nil && (ft.Length < t.Depth || ft.Width < t.Width) {
-		v.fail(f+".tower.footing", "footing %s × %s is smaller than the column %s × %s", ft.Length, ft.Width, t.Depth, t.Width)
+		v.fail(path{f, ".tower.footing"}, "footing %s × %s is smaller than the column %s × %s", ft.Length, ft.Width, t.Depth, t.Width)
 	}
 	if v.err == nil && math.Abs(float64(ft.ColumnOffset))+float64(t.Depth)/2 > float64(ft.Length)/2 {
-		v.fail(f+".tower.footing.column_offset", "puts the column beyond the edge of the footing")
+		v.fail(path{f, ".tower.footing.column_offset"}, "puts the column beyond the edge of the footing")
 	}
 	e := t.Eccentricity
 	switch e.Rule {
 	case "", "kern":
 	case "fraction":
 		if !(e.Fraction > 0 && e.Fraction <= 1) {
-			v.fail(f+".tower.eccentricity.fraction", "must lie in (0, 1], got %v", e.Fraction)
+			v.fail(path{f, ".tower.eccentricity.fraction"}, "must lie in (0, 1], got %v", e.Fraction)
 		}
-		v.finite(f+".tower.eccentricity.offset", float64(e.Offset))
+		v.finite(path{f, ".tower.eccentricity.offset"}, float64(e.Offset))
 	default:
-		v.fail(f+".tower.eccentricity.rule", "unknown rule %q; want kern or fraction", e.Rule)
+		v.fail(path{f, ".tower.eccentricity.rule"}, "unknown rule %q; want kern or fraction", e.Rule)
 	}
 
 	bs := k.Backstay
-	v.positive(f+".backstay.horizontal", float64(bs.Horizontal), units.KindLength)
-	v.finite(f+".backstay.drop", float64(bs.Drop))
+	v.positive(path{f, ".backstay.horizontal"}, float64(bs.Horizontal), units.KindLength)
+	v.finite(path{f, ".backstay.drop"}, float64(bs.Drop))
 	if v.err == nil && bs.Drop <= 0 {
-		v.fail(f+".backstay.drop", "the anchor must lie below the saddle, got a drop of %s (anchor above the saddle)", bs.Drop)
+		v.fail(path{f, ".backstay.drop"}, "the anchor must lie below the saddle, got a drop of %s (anchor above the saddle)", bs.Drop)
 	}
 
 	a := k.Anchor
 	switch a.Type {
 	case "block", "deadman":
-		v.positive(f+".anchor.length", float64(a.Length), units.KindLength)
-		v.positive(f+".anchor.width", float64(a.Width), units.KindLength)
-		v.positive(f+".anchor.height", float64(a.Height), units.KindLength)
-		v.positive(f+".anchor.depth", float64(a.Depth), units.KindLength)
-		v.nonNegative(f+".anchor.unit_weight", float64(a.UnitWeight), units.KindUnitWeight)
+		v.positive(path{f, ".anchor.length"}, float64(a.Length), units.KindLength)
+		v.positive(path{f, ".anchor.width"}, float64(a.Width), units.KindLength)
+		v.positive(path{f, ".anchor.height"}, float64(a.Height), units.KindLength)
+		v.positive(path{f, ".anchor.depth"}, float64(a.Depth), units.KindLength)
+		v.nonNegative(path{f, ".anchor.unit_weight"}, float64(a.UnitWeight), units.KindUnitWeight)
 		if a.Passive < 0 || a.Passive > 1 || math.IsNaN(a.Passive) {
-			v.fail(f+".anchor.passive", "must lie between 0 and 1, got %v", a.Passive)
+			v.fail(path{f, ".anchor.passive"}, "must lie between 0 and 1, got %v", a.Passive)
 		}
 	case "rock":
 		if a.Bars <= 0 {
-			v.fail(f+".anchor.bars", "a rock anchor needs at least one bar, got %d", a.Bars)
+			v.fail(path{f, ".anchor.bars"}, "a rock anchor needs at least one bar, got %d", a.Bars)
 		}
-		v.positive(f+".anchor.bar_diameter", float64(a.BarDiameter), units.KindLength)
-		v.positive(f+".anchor.bar_strength", float64(a.BarStrength), units.KindPressure)
-		v.positive(f+".anchor.hole_diameter", float64(a.HoleDiameter), units.KindLength)
-		v.positive(f+".anchor.bond_length", float64(a.BondLength), units.KindLength)
+		v.positive(path{f, ".anchor.bar_diameter"}, float64(a.BarDiameter), units.KindLength)
+		v.positive(path{f, ".anchor.bar_strength"}, float64(a.BarStrength), units.KindPressure)
+		v.positive(path{f, ".anchor.hole_diameter"}, float64(a.HoleDiameter), units.KindLength)
+		v.positive(path{f, ".anchor.bond_length"}, float64(a.BondLength), units.KindLength)
 	default:
-		v.fail(f+".anchor.type", "unknown anchor type %q; want block, deadman or rock", a.Type)
-	}
-	if _, err := k.Soil.soil(); err != nil {
-		v.fail(f+".soil", "%v", err)
+		v.fail(path{f, ".anchor.type"}, "unknown anchor type %q; want block, deadman or rock", a.Type)
 	}
 }
 
 func (b Bridge) validateLoads(v *validator) {
 	l := b.Loads
-	v.nonNegative("loads.crowd", float64(l.Crowd), units.KindPressure)
+	v.nonNegative(at("loads.crowd"), float64(l.Crowd), units.KindPressure)
 	for _, x := range []struct {
 		f string
 		x float64
 	}{{"loads.wind_with_crowd", l.WindWithCrowd}, {"loads.rope_drag", l.DragCoefficient}, {"loads.walkway_drag", l.WalkwayDrag}} {
 		if math.IsNaN(x.x) || x.x < 0 || x.x > 10 {
-			v.fail(x.f, "must lie between 0 and 10, got %v", x.x)
+			v.fail(at(x.f), "must lie between 0 and 10, got %v", x.x)
 		}
 	}
 	bs := b.Basis
 	switch bs.Method {
 	case "", "allowable", "partial":
 	default:
-		v.fail("basis.method", "unknown method %q; want allowable or partial", bs.Method)
+		v.fail(at("basis.method"), "unknown method %q; want allowable or partial", bs.Method)
 	}
 	for _, x := range []struct {
 		f string
@@ -271,7 +293,7 @@ func (b Bridge) validateLoads(v *validator) {
 		{"basis.gamma_q", bs.GammaQ}, {"basis.gamma_r", bs.GammaR},
 	} {
 		if math.IsNaN(x.x) || x.x < 0 || (x.x > 0 && x.x < 0.5) || x.x > 20 {
-			v.fail(x.f, "must be zero (default) or a factor between 0.5 and 20, got %v", x.x)
+			v.fail(at(x.f), "must be zero (default) or a factor between 0.5 and 20, got %v", x.x)
 		}
 	}
 }

@@ -243,6 +243,12 @@ func (a AnchorBlock) earth(s Soil) (pp, pa EarthForce, err error) {
 // bearing with a note. Invalid input, or an attachment point outside the
 // block, returns an error wrapping ErrInvalid.
 func (a AnchorBlock) Check(pulls []Pull, s Soil, b *Basis) ([]check.Result, error) {
+	return a.AppendCheck(nil, pulls, s, b)
+}
+
+// AppendCheck is Check appending its results to dst, for callers that
+// check many blocks and reuse one slice (strconv.AppendFloat's pattern).
+func (a AnchorBlock) AppendCheck(dst []check.Result, pulls []Pull, s Soil, b *Basis) ([]check.Result, error) {
 	if err := a.validate(); err != nil {
 		return nil, err
 	}
@@ -264,7 +270,7 @@ func (a AnchorBlock) Check(pulls []Pull, s Soil, b *Basis) ([]check.Result, erro
 	ld := a.loads(s)
 	var slide, over, lift, bear check.Result
 	if !bs.PartialFactors {
-		set := allowableSet()
+		set := bs.allowableSet()
 		if slide, err = a.sliding(pulls, s, ld, set, def(bs.Sliding, 1.5)); err != nil {
 			return nil, err
 		}
@@ -275,7 +281,7 @@ func (a AnchorBlock) Check(pulls []Pull, s Soil, b *Basis) ([]check.Result, erro
 		if bear, err = a.bearing(pulls, s, ld, set, false, def(bs.Bearing, 3)); err != nil {
 			return nil, err
 		}
-		return []check.Result{slide, over, lift, bear}, nil
+		return append(dst, slide, over, lift, bear), nil
 	}
 	equ := bs.equSet()
 	if over, err = a.overturning(pulls, ld, equ, 1); err != nil {
@@ -302,11 +308,22 @@ func (a AnchorBlock) Check(pulls []Pull, s Soil, b *Basis) ([]check.Result, erro
 			first = false
 		}
 	}
-	return []check.Result{slide, over, lift, bear}, nil
+	return append(dst, slide, over, lift, bear), nil
+}
+
+// note returns r with the note appended, or r as it is on a terse basis.
+func (set actionSet) note(r check.Result, note string) check.Result {
+	if set.terse {
+		return r
+	}
+	return r.WithNote(note)
 }
 
 // basisOf returns the basis text of a result.
 func basisOf(set actionSet, what string, fs float64) string {
+	if set.terse {
+		return ""
+	}
 	if set.allowable {
 		return fsBasis(what, fs)
 	}
@@ -335,12 +352,17 @@ func (a AnchorBlock) sliding(pulls []Pull, s Soil, ld blockLoads, set actionSet,
 		}
 		res += mu * float64(pp.Force) / set.gRe
 		drive += set.gG * float64(pa.Force)
-		notes = append(notes, fmt.Sprintf("passive resistance %v mobilised at %.2f; active thrust on the back face %v",
-			pp.Force, mu, pa.Force))
+		if !set.terse {
+			notes = append(notes, fmt.Sprintf("passive resistance %v mobilised at %.2f; active thrust on the back face %v",
+				pp.Force, mu, pa.Force))
+		}
 	}
 	r := check.Stability("anchor.sliding", "Anchor block sliding", units.KindForce, drive, res, fs).
-		WithBasis(basisOf(set, "base friction and mobilised passive resistance", fs)).
-		WithNote(fmt.Sprintf("base friction angle δ = %v on normal force %v; cohesion ignored", sd.InterfaceFriction(), units.Force(n)))
+		WithBasis(basisOf(set, "base friction and mobilised passive resistance", fs))
+	if set.terse {
+		return r, nil
+	}
+	r = r.WithNote(fmt.Sprintf("base friction angle δ = %v on normal force %v; cohesion ignored", sd.InterfaceFriction(), units.Force(n)))
 	for _, n := range notes {
 		r = r.WithNote(n)
 	}
@@ -361,9 +383,9 @@ func (a AnchorBlock) overturning(pulls []Pull, ld blockLoads, set actionSet, fs 
 	}
 	dst += set.gG * ld.buoyancy * (l - ld.xu)
 	stb += set.gGfav * ld.weight * (l - ld.xw)
-	return check.Stability("anchor.overturning", "Anchor block overturning about the front toe", units.KindMoment, dst, stb, fs).
-		WithBasis(basisOf(set, "the restoring moment about the front toe", fs)).
-		WithNote("earth pressures on the front and back faces ignored in overturning"), nil
+	r := check.Stability("anchor.overturning", "Anchor block overturning about the front toe", units.KindMoment, dst, stb, fs).
+		WithBasis(basisOf(set, "the restoring moment about the front toe", fs))
+	return set.note(r, "earth pressures on the front and back faces ignored in overturning"), nil
 }
 
 func (a AnchorBlock) uplift(pulls []Pull, ld blockLoads, set actionSet, fs float64) check.Result {
@@ -382,9 +404,9 @@ func (a AnchorBlock) uplift(pulls []Pull, ld blockLoads, set actionSet, fs float
 		dst += set.gG * ld.buoyancy
 		stb += set.gGfav * ld.weight
 	}
-	return check.Stability("anchor.uplift", "Anchor block uplift", units.KindForce, dst, stb, fs).
-		WithBasis(basisOf(set, "the block's effective weight", fs)).
-		WithNote("side friction on the block ignored")
+	r := check.Stability("anchor.uplift", "Anchor block uplift", units.KindForce, dst, stb, fs).
+		WithBasis(basisOf(set, "the block's effective weight", fs))
+	return set.note(r, "side friction on the block ignored")
 }
 
 func (a AnchorBlock) bearing(pulls []Pull, s Soil, ld blockLoads, set actionSet, favourable bool, fs float64) (check.Result, error) {
@@ -401,8 +423,8 @@ func (a AnchorBlock) bearing(pulls []Pull, s Soil, ld blockLoads, set actionSet,
 	}
 	basis := bearingBasis(set, s, fs)
 	if n <= 0 {
-		return check.Compare(id, title, units.KindPressure, 0, 0).WithBasis(basis).
-			WithNote("the pulls lift the block off its base: uplift governs"), nil
+		return set.note(check.Compare(id, title, units.KindPressure, 0, 0).WithBasis(basis),
+			"the pulls lift the block off its base: uplift governs"), nil
 	}
 	e := m / n
 	return baseBearing(id, title, basis, a.Length, a.Width, a.Depth, a.Groundwater, a.WaterDepth,
@@ -411,6 +433,9 @@ func (a AnchorBlock) bearing(pulls []Pull, s Soil, ld blockLoads, set actionSet,
 
 // bearingBasis returns the basis text of a bearing result.
 func bearingBasis(set actionSet, s Soil, fs float64) string {
+	if set.terse {
+		return ""
+	}
 	if set.allowable && s.Allowable > 0 {
 		return "allowable basis: peak contact pressure against the allowable bearing pressure given by the site report"
 	}
@@ -424,23 +449,29 @@ func baseBearing(id, title, basis string, b, l, depth units.Length, water bool, 
 	n, h units.Force, e units.Length, s Soil, m Method, set actionSet, fs float64) (check.Result, error) {
 	area := float64(b) * float64(l)
 	if math.Abs(float64(e)) >= float64(b)/2 {
-		return check.Compare(id, title, units.KindPressure, float64(n)/area, 0).WithBasis(basis).
-			WithNote(fmt.Sprintf("resultant outside the base: eccentricity %v, half base %v", e, b/2)), nil
+		r := check.Compare(id, title, units.KindPressure, float64(n)/area, 0).WithBasis(basis)
+		if set.terse {
+			return r, nil
+		}
+		return r.WithNote(fmt.Sprintf("resultant outside the base: eccentricity %v, half base %v", e, b/2)), nil
 	}
 	if set.allowable && s.Allowable > 0 {
 		qmax, _, contact, err := ContactPressure(n, e, b, l)
 		if err != nil {
 			return check.Result{}, err
 		}
-		return check.Compare(id, title, units.KindPressure, float64(qmax), float64(s.Allowable)).WithBasis(basis).
-			WithNote(fmt.Sprintf("peak contact pressure; eccentricity %v, contact length %v", e, contact)), nil
+		r := check.Compare(id, title, units.KindPressure, float64(qmax), float64(s.Allowable)).WithBasis(basis)
+		if set.terse {
+			return r, nil
+		}
+		return r.WithNote(fmt.Sprintf("peak contact pressure; eccentricity %v, contact length %v", e, contact)), nil
 	}
 	sd := s.factored(set.gPhi, set.gC)
 	br, err := BearingCapacity(BearingInput{B: b, L: l, Depth: depth, Vertical: n, Horizontal: h, EccB: e,
 		Groundwater: water, WaterDepth: waterDepth}, sd, m)
 	if errors.Is(err, ErrOutsideBase) {
-		return check.Compare(id, title, units.KindPressure, float64(n)/area, 0).WithBasis(basis).
-			WithNote("resultant outside the base"), nil
+		return set.note(check.Compare(id, title, units.KindPressure, float64(n)/area, 0).WithBasis(basis),
+			"resultant outside the base"), nil
 	}
 	if err != nil {
 		return check.Result{}, err
@@ -449,9 +480,12 @@ func baseBearing(id, title, basis string, b, l, depth units.Length, water bool, 
 	if !set.allowable {
 		capacity = float64(br.Qult) / set.gRv
 	}
-	r := check.Compare(id, title, units.KindPressure, float64(n)/float64(br.Area()), capacity).WithBasis(basis).
-		WithNote(fmt.Sprintf("%v: qult %v on effective base %v × %v (eccentricity %v); Nc %.2f, Nq %.2f, Nγ %.2f",
-			br.Method, br.Qult, br.BEff, br.LEff, e, br.Nc, br.Nq, br.Ngamma))
+	r := check.Compare(id, title, units.KindPressure, float64(n)/float64(br.Area()), capacity).WithBasis(basis)
+	if set.terse {
+		return r, nil
+	}
+	r = r.WithNote(fmt.Sprintf("%v: qult %v on effective base %v × %v (eccentricity %v); Nc %.2f, Nq %.2f, Nγ %.2f",
+		br.Method, br.Qult, br.BEff, br.LEff, e, br.Nc, br.Nq, br.Ngamma))
 	for _, note := range br.Notes {
 		r = r.WithNote(note)
 	}

@@ -51,6 +51,11 @@ type Basis struct {
 	GammaRe   float64 // earth resistance: R2 1.4 (DA2), R1 1.0 (DA1) (Table A.13, from memory)
 	GammaA    float64 // anchorage (grout bond) resistance, 1.1 (Table A.12, from memory)
 	GammaS    float64 // steel bar yield, 1.15 (EN 1992-1-1 Table 2.1N, from memory)
+
+	// Terse leaves out the basis and note text of the anchor-block and
+	// footing results, for callers that only score designs (a design
+	// search); every number is the same. Default false.
+	Terse bool
 }
 
 // def returns x, or d when x is zero.
@@ -87,8 +92,8 @@ func resolveBasis(b *Basis) (Basis, error) {
 		{"GammaPhi", r.GammaPhi}, {"GammaC", r.GammaC}, {"GammaRh", r.GammaRh}, {"GammaRv", r.GammaRv},
 		{"GammaRe", r.GammaRe}, {"GammaA", r.GammaA}, {"GammaS", r.GammaS},
 	} {
-		if err := nonNegative("Basis."+f.name, f.v); err != nil {
-			return Basis{}, err
+		if !(f.v >= 0) || math.IsInf(f.v, 0) { // the field's name is built only on error
+			return Basis{}, nonNegative("Basis."+f.name, f.v)
 		}
 	}
 	if r.Approach != DesignApproach1 && r.Approach != DesignApproach2 {
@@ -101,6 +106,7 @@ func resolveBasis(b *Basis) (Basis, error) {
 // resistances, as applied in one check.
 type actionSet struct {
 	label         string
+	terse         bool    // no basis or note text (Basis.Terse)
 	gG, gGfav, gQ float64 // unfavourable permanent, favourable permanent, unfavourable variable
 	gPhi, gC      float64
 	gRh, gRv, gRe float64
@@ -125,16 +131,30 @@ func (s actionSet) factor(unfavourable, variable bool) float64 {
 
 // equSet returns the EQU set (overturning, uplift): M2 on soil strength.
 func (b Basis) equSet() actionSet {
-	return actionSet{
-		label: fmt.Sprintf("EN 1997-1 Annex A, EQU (γG,dst %.2f, γG,stb %.2f, γQ,dst %.2f; M2 γφ' %.2f, γc' %.2f)",
-			def(b.GammaGdst, 1.1), def(b.GammaGstb, 0.9), def(b.GammaQdst, 1.5), def(b.GammaPhi, 1.25), def(b.GammaC, 1.25)),
-		gG: def(b.GammaGdst, 1.1), gGfav: def(b.GammaGstb, 0.9), gQ: def(b.GammaQdst, 1.5),
+	set := actionSet{
+		terse: b.Terse,
+		gG:    def(b.GammaGdst, 1.1), gGfav: def(b.GammaGstb, 0.9), gQ: def(b.GammaQdst, 1.5),
 		gPhi: def(b.GammaPhi, 1.25), gC: def(b.GammaC, 1.25), gRh: 1, gRv: 1, gRe: 1,
 	}
+	if !b.Terse {
+		set.label = fmt.Sprintf("EN 1997-1 Annex A, EQU (γG,dst %.2f, γG,stb %.2f, γQ,dst %.2f; M2 γφ' %.2f, γc' %.2f)",
+			set.gG, set.gGfav, set.gQ, set.gPhi, set.gC)
+	}
+	return set
 }
 
 // geoSets returns the GEO sets of the chosen design approach.
 func (b Basis) geoSets() []actionSet {
+	sets := b.geoSetsLabelled()
+	for i := range sets {
+		if sets[i].terse = b.Terse; b.Terse {
+			sets[i].label = ""
+		}
+	}
+	return sets
+}
+
+func (b Basis) geoSetsLabelled() []actionSet {
 	if b.Approach == DesignApproach1 {
 		rh, rv, re := def(b.GammaRh, 1), def(b.GammaRv, 1), def(b.GammaRe, 1)
 		g1, q1 := def(b.GammaG, 1.35), def(b.GammaQ, 1.5)
@@ -157,8 +177,8 @@ func (b Basis) geoSets() []actionSet {
 
 // allowableSet returns unit factors for the allowable basis: actions and
 // strengths characteristic.
-func allowableSet() actionSet {
-	return actionSet{gG: 1, gGfav: 1, gQ: 1, gPhi: 1, gC: 1, gRh: 1, gRv: 1, gRe: 1, allowable: true}
+func (b Basis) allowableSet() actionSet {
+	return actionSet{gG: 1, gGfav: 1, gQ: 1, gPhi: 1, gC: 1, gRh: 1, gRv: 1, gRe: 1, allowable: true, terse: b.Terse}
 }
 
 // fsNote describes a global factor of safety.

@@ -177,7 +177,7 @@ func (d Deadman) Check(pulls []Pull, s Soil, b *Basis) ([]check.Result, error) {
 	}
 
 	if !bs.PartialFactors {
-		set := allowableSet()
+		set := bs.allowableSet()
 		po, err := pullout(set, def(bs.Pullout, 2))
 		if err != nil {
 			return nil, err

@@ -102,6 +102,12 @@ func (s actionSet) factorOf(unfavourable bool, share float64) float64 {
 // (net uplift) passes bearing with a note while overturning fails.
 // Invalid input returns an error wrapping ErrInvalid.
 func (f Footing) Check(load FootingLoad, s Soil, m Method, b *Basis) ([]check.Result, error) {
+	return f.AppendCheck(nil, load, s, m, b)
+}
+
+// AppendCheck is Check appending its results to dst, for callers that
+// check many footings and reuse one slice.
+func (f Footing) AppendCheck(dst []check.Result, load FootingLoad, s Soil, m Method, b *Basis) ([]check.Result, error) {
 	if err := f.validate(); err != nil {
 		return nil, err
 	}
@@ -121,13 +127,13 @@ func (f Footing) Check(load FootingLoad, s Soil, m Method, b *Basis) ([]check.Re
 	ld := AnchorBlock{Length: f.B, Width: f.L, Height: f.Thickness, Depth: f.Depth, UnitWeight: f.UnitWeight,
 		Groundwater: f.Groundwater, WaterDepth: f.WaterDepth}.loads(s)
 	if !bs.PartialFactors {
-		set := allowableSet()
+		set := bs.allowableSet()
 		bear, err := f.bearing(load, s, m, ld, set, false, def(bs.Bearing, 3))
 		if err != nil {
 			return nil, err
 		}
-		return []check.Result{bear, f.sliding(load, s, ld, set, def(bs.Sliding, 1.5)),
-			f.overturning(load, ld, set, def(bs.Overturning, 2))}, nil
+		return append(dst, bear, f.sliding(load, s, ld, set, def(bs.Sliding, 1.5)),
+			f.overturning(load, ld, set, def(bs.Overturning, 2))), nil
 	}
 	var bear, slide check.Result
 	first := true
@@ -147,7 +153,7 @@ func (f Footing) Check(load FootingLoad, s Soil, m Method, b *Basis) ([]check.Re
 			first = false
 		}
 	}
-	return []check.Result{bear, slide, f.overturning(load, ld, bs.equSet(), 1)}, nil
+	return append(dst, bear, slide, f.overturning(load, ld, bs.equSet(), 1)), nil
 }
 
 func (f Footing) bearing(load FootingLoad, s Soil, m Method, ld blockLoads, set actionSet, favourable bool, fs float64) (check.Result, error) {
@@ -159,8 +165,8 @@ func (f Footing) bearing(load FootingLoad, s Soil, m Method, ld blockLoads, set 
 	mo := set.factorOf(true, sh) * float64(load.Moment)
 	basis := bearingBasis(set, s, fs)
 	if n <= 0 {
-		return check.Compare(id, title, units.KindPressure, 0, 0).WithBasis(basis).
-			WithNote("net uplift: the footing lifts off its base"), nil
+		return set.note(check.Compare(id, title, units.KindPressure, 0, 0).WithBasis(basis),
+			"net uplift: the footing lifts off its base"), nil
 	}
 	return baseBearing(id, title, basis, f.B, f.L, f.Depth, f.Groundwater, f.WaterDepth,
 		units.Force(n), units.Force(h), units.Length(mo/n), s, m, set, fs)
@@ -173,10 +179,13 @@ func (f Footing) sliding(load FootingLoad, s Soil, ld blockLoads, set actionSet,
 	n := set.gGfav*ld.weight - set.gG*ld.buoyancy + set.factorOf(v < 0, sh)*v
 	tanD := math.Tan(float64(sd.InterfaceFriction()))
 	drive := set.factorOf(true, sh) * math.Abs(float64(load.Horizontal))
-	return check.Stability("footing.sliding", "Footing sliding", units.KindForce, drive, math.Max(n, 0)*tanD/set.gRh, fs).
-		WithBasis(basisOf(set, "base friction", fs)).
-		WithNote(fmt.Sprintf("base friction angle δ = %v on normal force %v; cohesion and passive resistance ignored",
-			sd.InterfaceFriction(), units.Force(n)))
+	r := check.Stability("footing.sliding", "Footing sliding", units.KindForce, drive, math.Max(n, 0)*tanD/set.gRh, fs).
+		WithBasis(basisOf(set, "base friction", fs))
+	if set.terse {
+		return r
+	}
+	return r.WithNote(fmt.Sprintf("base friction angle δ = %v on normal force %v; cohesion and passive resistance ignored",
+		sd.InterfaceFriction(), units.Force(n)))
 }
 
 func (f Footing) overturning(load FootingLoad, ld blockLoads, set actionSet, fs float64) check.Result {

@@ -133,3 +133,46 @@ func TestFootingRejects(t *testing.T) {
 		}
 	}
 }
+
+// TestTerseSameNumbers checks that the terse basis changes only the text.
+func TestTerseSameNumbers(t *testing.T) {
+	soil, err := foundation.LookupSoil("dense sand")
+	if err != nil {
+		t.Fatal(err)
+	}
+	f := foundation.Footing{B: 2.4, L: 3, Thickness: 0.7, Depth: 1.2}
+	load := foundation.FootingLoad{Vertical: 300e3, Horizontal: 30e3, Moment: 80e3, VariableShare: 0.6}
+	blk := foundation.AnchorBlock{Length: 4.5, Width: 5, Height: 2.6, Depth: 3, PassiveMobilisation: 0.5}
+	pulls := []foundation.Pull{{Force: 500e3, Angle: 0.2, X: 2, Z: 0.8}, {Force: 300e3, Angle: 0.2, X: 2, Z: 0.8, Variable: true}}
+	for _, partial := range []bool{false, true} {
+		full, terse := &foundation.Basis{PartialFactors: partial}, &foundation.Basis{PartialFactors: partial, Terse: true}
+		a, err := f.Check(load, soil, foundation.Vesic, full)
+		if err != nil {
+			t.Fatal(err)
+		}
+		b, err := f.Check(load, soil, foundation.Vesic, terse)
+		if err != nil {
+			t.Fatal(err)
+		}
+		c, err := blk.Check(pulls, soil, full)
+		if err != nil {
+			t.Fatal(err)
+		}
+		d, err := blk.Check(pulls, soil, terse)
+		if err != nil {
+			t.Fatal(err)
+		}
+		for i := range append(a, c...) {
+			x, y := append(a, c...)[i], append(b, d...)[i]
+			if x.ID != y.ID || x.Demand != y.Demand || x.Capacity != y.Capacity || x.Ratio != y.Ratio || x.Status != y.Status {
+				t.Errorf("partial %v, %s: terse %+v differs from full %+v", partial, x.ID, y, x)
+			}
+			if y.Basis != "" || len(y.Notes) != 0 {
+				t.Errorf("partial %v, %s: terse result carries text", partial, y.ID)
+			}
+			if x.Basis == "" {
+				t.Errorf("partial %v, %s: full result has no basis", partial, x.ID)
+			}
+		}
+	}
+}

@@ -37,6 +37,11 @@ func (p Pull) components() (fx, fz float64) {
 
 func validatePulls(pulls []Pull, needPoint bool) error {
 	for i, p := range pulls {
+		ok := float64(p.Force) >= 0 && !math.IsInf(float64(p.Force), 0) && math.Abs(float64(p.Angle)) <= math.Pi/2 &&
+			(!needPoint || !math.IsNaN(float64(p.X)+float64(p.Z)) && !math.IsInf(float64(p.X)+float64(p.Z), 0))
+		if ok {
+			continue // the field names below are built only on error
+		}
 		name := fmt.Sprintf("pulls[%d]", i)
 		if err := nonNegative(name+".Force", float64(p.Force)); err != nil {
 			return err
