@@ -124,8 +124,9 @@ type model struct {
 	// fbasis is the basis of the anchor and footing checks; its Terse
 	// leaves their text out for a design search.
 	fbasis foundation.Basis
-	// scratch is reused for the results of one footing or anchor check.
+	// scratch and pulls are reused by each footing or anchor check.
 	scratch []check.Result
+	pulls   []foundation.Pull
 	// spanUnstretched is each group's unstretched span length in the
 	// reference state; backstays are each group's backstays.
 	spanUnstretched []float64
@@ -721,7 +722,8 @@ func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Re
 	if z == 0 {
 		z = spec.Height / 3
 	}
-	pulls := make([]foundation.Pull, 0, 2*len(svc.Groups))
+	pulls := m.pulls[:0]
+	defer func() { m.pulls = pulls[:0] }()
 	for i, g := range svc.Groups {
 		t, p := g.Backstay[s], perm.Groups[i].Backstay[s]
 		angle := g.BackstayAngle[s]
