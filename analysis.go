@@ -594,7 +594,7 @@ func (m *model) footingChecks(out sink, side Side, spec FootingSpec, service []C
 		if svc.Lateral[side] == 0 {
 			continue
 		}
-		results, err = m.footingAcross(side, spec, svc)
+		results, err = m.footingAcross(side, spec, service[0].Tower[side], svc)
 		if err != nil {
 			return fmt.Errorf("sagspan: %s across, case %q: %w", element, svc.Case.Name, err)
 		}
@@ -608,14 +608,18 @@ func (m *model) footingChecks(out sink, side Side, spec FootingSpec, service []C
 // footingAcross checks a tower footing across the bridge under the wind
 // pushing the swung ropes sideways: the footing turned, its width along the
 // lateral force. The whole lateral action is variable.
-func (m *model) footingAcross(s Side, spec FootingSpec, svc CaseState) ([]check.Result, error) {
+func (m *model) footingAcross(s Side, spec FootingSpec, perm tower.Resultant, svc CaseState) ([]check.Result, error) {
 	f := foundation.Footing{B: spec.Width, L: spec.Length, Thickness: spec.Thickness, Depth: spec.Depth, UnitWeight: m.bank(s).Tower.UnitWeight}
 	lateral := svc.Lateral[s]
+	moment := svc.LateralMoment[s] + units.MomentOf(lateral, spec.Thickness)
 	load := foundation.FootingLoad{
-		Vertical:      svc.Tower[s].Vertical,
-		Horizontal:    lateral,
-		Moment:        svc.LateralMoment[s] + units.MomentOf(lateral, spec.Thickness),
-		VariableShare: 1,
+		Vertical:           svc.Tower[s].Vertical,
+		Horizontal:         lateral,
+		Moment:             moment,
+		Split:              true,
+		VariableVertical:   svc.Tower[s].Vertical - perm.Vertical,
+		VariableHorizontal: lateral,
+		VariableMoment:     moment,
 	}
 	var err error
 	m.scratch, err = f.AppendCheck(m.scratch[:0], load, m.soils[s], foundation.Vesic, m.foundationBasis())
@@ -675,7 +679,8 @@ func (m *model) section(s Side) tower.RCSection {
 	return sec
 }
 
-// share returns the fraction of x that exceeds the permanent value p.
+// share returns the fraction of x that exceeds the permanent value p (for
+// a rock anchor's pull, which keeps its direction).
 func share(x, p float64) float64 {
 	if math.Abs(x) == 0 {
 		return 0
@@ -688,18 +693,20 @@ func share(x, p float64) float64 {
 // resultant, for the variable share of the partial basis.
 func (m *model) footing(s Side, spec FootingSpec, perm, r tower.Resultant) ([]check.Result, error) {
 	f := foundation.Footing{B: spec.Length, L: spec.Width, Thickness: spec.Thickness, Depth: spec.Depth, UnitWeight: m.bank(s).Tower.UnitWeight}
-	moment := func(r tower.Resultant) float64 {
-		return float64(r.BaseMoment) + float64(r.Horizontal)*float64(spec.Thickness) + float64(r.Vertical)*float64(spec.ColumnOffset)
+	moment := func(r tower.Resultant) units.Moment {
+		return r.BaseMoment + units.MomentOf(r.Horizontal, spec.Thickness) + units.MomentOf(r.Vertical, spec.ColumnOffset)
 	}
+	// Variable parts: what the case adds to the permanent case, component
+	// by component and signed, so that a permanent part the variable one
+	// opposes is factored as favourable on the partial basis.
 	load := foundation.FootingLoad{
-		Vertical:   r.Vertical,
-		Horizontal: r.Horizontal,
-		Moment:     units.Moment(moment(r)),
-		VariableShare: max(
-			share(float64(r.Vertical), float64(perm.Vertical)),
-			share(float64(r.Horizontal), float64(perm.Horizontal)),
-			share(moment(r), moment(perm)),
-		),
+		Vertical:           r.Vertical,
+		Horizontal:         r.Horizontal,
+		Moment:             moment(r),
+		Split:              true,
+		VariableVertical:   r.Vertical - perm.Vertical,
+		VariableHorizontal: r.Horizontal - perm.Horizontal,
+		VariableMoment:     moment(r) - moment(perm),
 	}
 	var err error
 	m.scratch, err = f.AppendCheck(m.scratch[:0], load, m.soils[s], foundation.Vesic, m.foundationBasis())

@@ -38,6 +38,45 @@ type FootingLoad struct {
 	// VariableShare is the fraction of each component due to variable
 	// actions (0 to 1), used only by the partial-factor basis.
 	VariableShare float64
+	// Split, when true, takes the variable part of each component from
+	// VariableVertical, VariableHorizontal and VariableMoment (signed, in
+	// the same convention) instead of VariableShare, the rest of each
+	// component being permanent. Each part is then factored by the side it
+	// acts on, so a permanent part opposing the variable one counts as
+	// favourable (EN 1990 6.4.3.2, from memory). Partial-factor basis only.
+	Split              bool
+	VariableVertical   units.Force
+	VariableHorizontal units.Force
+	VariableMoment     units.Moment
+}
+
+// variable returns the variable parts of the vertical, horizontal and
+// moment components.
+func (ld FootingLoad) variable() (v, h, m float64) {
+	if ld.Split {
+		return float64(ld.VariableVertical), float64(ld.VariableHorizontal), float64(ld.VariableMoment)
+	}
+	return ld.VariableShare * float64(ld.Vertical), ld.VariableShare * float64(ld.Horizontal), ld.VariableShare * float64(ld.Moment)
+}
+
+// design returns the design effect, in direction d (+1 or −1), of a
+// component x of which q is variable: the permanent part x − q and the
+// variable part q are each factored as unfavourable when they act in
+// direction d and as favourable otherwise (a favourable variable part
+// counts zero), and the sum is projected on d.
+func (s actionSet) design(x, q, d float64) float64 {
+	p := x - q
+	return d * (s.factor(p*d > 0, false)*p + s.factor(q*d > 0, true)*q)
+}
+
+// worst returns the larger design effect of a component over both
+// directions, and that direction.
+func (s actionSet) worst(x, q float64) (effect, dir float64) {
+	plus, minus := s.design(x, q, 1), s.design(x, q, -1)
+	if minus > plus {
+		return minus, -1
+	}
+	return plus, 1
 }
 
 func (f Footing) validate() error {
@@ -70,6 +109,14 @@ func (ld FootingLoad) validate() error {
 	}
 	if err := finite("FootingLoad.Moment", float64(ld.Moment)); err != nil {
 		return err
+	}
+	for _, x := range []struct {
+		name string
+		v    float64
+	}{{"FootingLoad.VariableVertical", float64(ld.VariableVertical)}, {"FootingLoad.VariableHorizontal", float64(ld.VariableHorizontal)}, {"FootingLoad.VariableMoment", float64(ld.VariableMoment)}} {
+		if math.IsNaN(x.v) || math.IsInf(x.v, 0) {
+			return finite(x.name, x.v)
+		}
 	}
 	return fraction("FootingLoad.VariableShare", ld.VariableShare)
 }
@@ -158,28 +205,34 @@ func (f Footing) AppendCheck(dst []check.Result, load FootingLoad, s Soil, m Met
 
 func (f Footing) bearing(load FootingLoad, s Soil, m Method, ld blockLoads, set actionSet, favourable bool, fs float64) (check.Result, error) {
 	const id, title = "footing.bearing", "Footing bearing pressure"
-	sh := load.VariableShare
-	v := float64(load.Vertical)
-	n := set.gG*(ld.weight-ld.buoyancy) + set.factorOf(!favourable == (v > 0), sh)*v
-	h := set.factorOf(true, sh) * math.Abs(float64(load.Horizontal))
-	mo := set.factorOf(true, sh) * float64(load.Moment)
+	qv, qh, qm := load.variable()
+	// Downward load presses on the base: unfavourable for bearing, or
+	// favourable in the run that takes it so.
+	down := set.design(float64(load.Vertical), qv, 1)
+	if favourable {
+		down = -set.design(float64(load.Vertical), qv, -1)
+	}
+	n := set.gG*(ld.weight-ld.buoyancy) + down
+	h, _ := set.worst(float64(load.Horizontal), qh)
+	mo, dir := set.worst(float64(load.Moment), qm)
+	mo *= dir
 	basis := bearingBasis(set, s, fs)
 	if n <= 0 {
 		return set.note(check.Compare(id, title, units.KindPressure, 0, 0).WithBasis(basis),
 			"net uplift: the footing lifts off its base"), nil
 	}
 	return baseBearing(id, title, basis, f.B, f.L, f.Depth, f.Groundwater, f.WaterDepth,
-		units.Force(n), units.Force(h), units.Length(mo/n), s, m, set, fs)
+		units.Force(n), units.Force(math.Max(h, 0)), units.Length(mo/n), s, m, set, fs)
 }
 
 func (f Footing) sliding(load FootingLoad, s Soil, ld blockLoads, set actionSet, fs float64) check.Result {
-	sh := load.VariableShare
+	qv, qh, _ := load.variable()
 	sd := s.factored(set.gPhi, set.gC)
-	v := float64(load.Vertical)
-	n := set.gGfav*ld.weight - set.gG*ld.buoyancy + set.factorOf(v < 0, sh)*v
+	// The downward load holds the footing: favourable.
+	n := set.gGfav*ld.weight - set.gG*ld.buoyancy - set.design(float64(load.Vertical), qv, -1)
 	tanD := math.Tan(float64(sd.InterfaceFriction()))
-	drive := set.factorOf(true, sh) * math.Abs(float64(load.Horizontal))
-	r := check.Stability("footing.sliding", "Footing sliding", units.KindForce, drive, math.Max(n, 0)*tanD/set.gRh, fs).
+	drive, _ := set.worst(float64(load.Horizontal), qh)
+	r := check.Stability("footing.sliding", "Footing sliding", units.KindForce, math.Max(drive, 0), math.Max(n, 0)*tanD/set.gRh, fs).
 		WithBasis(basisOf(set, "base friction", fs))
 	if set.terse {
 		return r
@@ -189,15 +242,18 @@ func (f Footing) sliding(load FootingLoad, s Soil, ld blockLoads, set actionSet,
 }
 
 func (f Footing) overturning(load FootingLoad, ld blockLoads, set actionSet, fs float64) check.Result {
-	sh := load.VariableShare
+	qv, _, qm := load.variable()
 	half := float64(f.B) / 2
-	v := float64(load.Vertical)
-	dst := set.factorOf(true, sh)*math.Abs(float64(load.Moment)) + set.gG*ld.buoyancy*half
+	mo, _ := set.worst(float64(load.Moment), qm)
+	dst := math.Max(mo, 0) + set.gG*ld.buoyancy*half
 	stb := set.gGfav * ld.weight * half
-	if v >= 0 {
-		stb += set.factorOf(false, sh) * v * half
+	// The vertical load restores when it presses down and overturns when
+	// it pulls up; each part is factored as favourable when it presses
+	// down (the net factored value then decides the side).
+	if down := -set.design(float64(load.Vertical), qv, -1); down >= 0 {
+		stb += down * half
 	} else {
-		dst -= set.factorOf(true, sh) * v * half
+		dst -= down * half
 	}
 	return check.Stability("footing.overturning", "Footing overturning about the base edge", units.KindMoment, dst, stb, fs).
 		WithBasis(basisOf(set, "the restoring moment about the base edge", fs))

@@ -176,3 +176,48 @@ func TestTerseSameNumbers(t *testing.T) {
 		}
 	}
 }
+
+// TestSplitOpposingMoment checks the permanent/variable split when the
+// variable moment reverses a small permanent one. EN 1997-1 Annex A
+// Table A.1 (EQU): γG,stb 0.9 on a favourable permanent action, γQ,dst 1.5
+// on an unfavourable variable one. Permanent +3.66 kN·m, variable
+// −20.96 kN·m (total −17.30): the destabilising design moment is
+// 1.5·20.96 − 0.9·3.66 = 28.146 kN·m (hand calculation).
+func TestSplitOpposingMoment(t *testing.T) {
+	soil, err := foundation.LookupSoil("dense sand")
+	if err != nil {
+		t.Fatal(err)
+	}
+	f := foundation.Footing{B: 2.4, L: 3, Thickness: 0.7, Depth: 0.7} // no soil cover, no buoyancy
+	load := foundation.FootingLoad{Moment: -17.30e3, Split: true, VariableMoment: -20.96e3}
+	res, err := f.Check(load, soil, foundation.Vesic, &foundation.Basis{PartialFactors: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	over := res[2]
+	if over.ID != "footing.overturning" {
+		t.Fatalf("third result is %s", over.ID)
+	}
+	want := 1.5*20.96e3 - 0.9*3.66e3
+	if math.Abs(over.Demand-want) > 1e-9*want {
+		t.Errorf("EQU destabilising moment %v, want %v", over.Demand, want)
+	}
+	// Taken as one permanent moment (VariableShare 0) the favourable
+	// permanent part is lost and the design moment is only 1.1·17.30.
+	shared := foundation.FootingLoad{Moment: -17.30e3}
+	res2, err := f.Check(shared, soil, foundation.Vesic, &foundation.Basis{PartialFactors: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !(res2[2].Demand < over.Demand) {
+		t.Errorf("shared-factor moment %v is not below the split %v", res2[2].Demand, over.Demand)
+	}
+	// On the allowable basis the split changes nothing.
+	a, _ := f.Check(load, soil, foundation.Vesic, nil)
+	b, _ := f.Check(foundation.FootingLoad{Moment: -17.30e3}, soil, foundation.Vesic, nil)
+	for i := range a {
+		if a[i].Demand != b[i].Demand || a[i].Capacity != b[i].Capacity {
+			t.Errorf("allowable %s: split %v/%v, plain %v/%v", a[i].ID, a[i].Demand, a[i].Capacity, b[i].Demand, b[i].Capacity)
+		}
+	}
+}
