@@ -170,11 +170,17 @@ type TowerSpec struct {
 	Eccentricity EccentricitySpec `json:"eccentricity,omitempty"`
 }
 
-// SaddleSpec says how the ropes sit on the tower.
+// SaddleSpec says how the ropes sit on the tower. The rope renders over
+// the saddle's groove with its tension continuous in every kind; the kind
+// says how the saddle itself is held on the column:
+//
+//	fixed:   bolted to the column, which takes the whole unbalanced horizontal force
+//	sliding: on a bearing plate; it slides once the unbalance exceeds Friction × the vertical force
+//	roller:  on rollers; the column takes no horizontal force
 type SaddleSpec struct {
 	// Kind is "fixed", "sliding" or "roller".
 	Kind string `json:"kind"`
-	// Friction is the friction coefficient of a sliding saddle.
+	// Friction is the friction coefficient of a sliding saddle's plate.
 	Friction float64 `json:"friction,omitempty"`
 }
 
