@@ -805,7 +805,7 @@ func (m *model) checkClearance(out sink, service []CaseState) {
 		r := check.Compare("bridge.clearance", "Walkway underside above design flood", units.KindLength,
 			float64(site.Freeboard), float64(clear)).
 			For("walkway", cs.Case.Name).
-			WithBasis("clearance of the lowest walkway underside above the design flood, characteristic loads (common practice)").
+			WithBasis("clearance of the lowest walkway underside above the design flood, characteristic loads; in wind the sag in the swung plane is taken as vertical, which is conservative (common practice)").
 			WithNote(fmt.Sprintf("lowest underside %s at x = %s; flood %s", soffit, x, site.Flood))
 		if clear <= 0 {
 			r.Status, r.Ratio = check.Fail, math.Inf(1)
