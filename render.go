@@ -4,8 +4,6 @@ import (
 	"encoding/json"
 	"fmt"
 	"io"
-	"strings"
-	"text/tabwriter"
 
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/units"
@@ -18,7 +16,7 @@ func (a *Analysis) WriteText(w io.Writer, opts *check.RenderOptions) error {
 	if err := a.Report.WriteText(w, opts); err != nil {
 		return err
 	}
-	return a.writeExtras(w, false)
+	return a.writeExtras(w, check.Text)
 }
 
 // WriteMarkdown writes the full report as Markdown, with the same content
@@ -27,34 +25,10 @@ func (a *Analysis) WriteMarkdown(w io.Writer, opts *check.RenderOptions) error {
 	if err := a.Report.WriteMarkdown(w, opts); err != nil {
 		return err
 	}
-	return a.writeExtras(w, true)
+	return a.writeExtras(w, check.Markdown)
 }
 
-// table writes rows as an aligned text table or a Markdown table.
-func table(w io.Writer, md bool, heading string, head []string, rows [][]string) error {
-	var b strings.Builder
-	if md {
-		fmt.Fprintf(&b, "## %s\n\n| %s |\n|%s\n", heading, strings.Join(head, " | "), strings.Repeat("---|", len(head)))
-		for _, r := range rows {
-			fmt.Fprintf(&b, "| %s |\n", strings.Join(r, " | "))
-		}
-		b.WriteString("\n")
-		_, err := io.WriteString(w, b.String())
-		return err
-	}
-	fmt.Fprintf(&b, "%s\n\n", heading)
-	tw := tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
-	fmt.Fprintln(tw, strings.Join(head, "\t"))
-	for _, r := range rows {
-		fmt.Fprintln(tw, strings.Join(r, "\t"))
-	}
-	tw.Flush()
-	b.WriteString("\n")
-	_, err := io.WriteString(w, b.String())
-	return err
-}
-
-func (a *Analysis) writeExtras(w io.Writer, md bool) error {
+func (a *Analysis) writeExtras(w io.Writer, f check.Format) error {
 	var rows [][]string
 	for _, cs := range a.Service {
 		for _, g := range cs.Groups {
@@ -65,12 +39,12 @@ func (a *Analysis) writeExtras(w io.Writer, md bool) error {
 			})
 		}
 	}
-	if err := table(w, md, "Rope states, characteristic loads",
+	if err := check.WriteTable(w, f, "Rope states, characteristic loads",
 		[]string{"Case", "Group", "H", "Max tension", "Angle left", "Angle right", "Midspan sag", "Lowest rope point"}, rows); err != nil {
 		return err
 	}
 	m := a.Modes
-	if err := table(w, md, "Natural frequencies (permanent load)", []string{"Mode", "Frequency"}, [][]string{
+	if err := check.WriteTable(w, f, "Natural frequencies (permanent load)", []string{"Mode", "Frequency"}, [][]string{
 		{"first out-of-plane (swing)", m.Swing.String()},
 		{"first in-plane antisymmetric", m.Antisymmetric.String()},
 		{"first in-plane symmetric", m.Symmetric.String()},
@@ -84,7 +58,7 @@ func (a *Analysis) writeExtras(w io.Writer, md bool) error {
 			rows = append(rows, []string{r.Temperature.String(), r.Sag.String(), r.H.String()})
 		}
 		heading := "Erection table: " + et.Group + " (bare ropes, midspan sag below the chord)"
-		if err := table(w, md, heading, []string{"Rope temperature", "Sag to set", "H of the group"}, rows); err != nil {
+		if err := check.WriteTable(w, f, heading, []string{"Rope temperature", "Sag to set", "H of the group"}, rows); err != nil {
 			return err
 		}
 	}

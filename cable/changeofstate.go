@@ -57,6 +57,26 @@ func unstretched(s Span, b beam, d, h, ea float64) float64 {
 	return b.arcLength(c0, h) - (h*(L+rise*c0)+d/h)/ea
 }
 
+// validateChange checks the inputs of a change of state.
+func validateChange(s Span, e Elastic, from State, to Load, temp units.Temperature) error {
+	if err := from.Load.Validate(s); err != nil {
+		return err
+	}
+	if err := to.Validate(s); err != nil {
+		return err
+	}
+	if err := e.validate(); err != nil {
+		return err
+	}
+	if err := positive("horizontal tension", float64(from.H)); err != nil {
+		return err
+	}
+	if err := validTemperature("start temperature", from.Temperature); err != nil {
+		return err
+	}
+	return validTemperature("temperature", temp)
+}
+
 // ChangeOfState returns the state under load to at temperature temp of the
 // same rope (same unstretched length) that carries from. It is exact for
 // inextensible-geometry funicular shapes (Loaded) of any load pattern and
@@ -73,22 +93,7 @@ func unstretched(s Span, b beam, d, h, ea float64) float64 {
 // a rope too slack or too stiff for float64 gives ErrInvalid; failure to
 // bracket or converge gives ErrNoConvergence.
 func ChangeOfState(s Span, e Elastic, from State, to Load, temp units.Temperature) (State, error) {
-	if err := from.Load.Validate(s); err != nil {
-		return State{}, err
-	}
-	if err := to.Validate(s); err != nil {
-		return State{}, err
-	}
-	if err := e.validate(); err != nil {
-		return State{}, err
-	}
-	if err := positive("horizontal tension", float64(from.H)); err != nil {
-		return State{}, err
-	}
-	if err := validTemperature("start temperature", from.Temperature); err != nil {
-		return State{}, err
-	}
-	if err := validTemperature("temperature", temp); err != nil {
+	if err := validateChange(s, e, from, to, temp); err != nil {
 		return State{}, err
 	}
 	ea := float64(e.EA)
@@ -154,23 +159,8 @@ func ChangeOfStateCubic(s Span, e Elastic, from State, to units.LoadPerLength, t
 	if len(from.Load.Patches) > 0 {
 		return State{}, invalidf("the cubic takes a uniform load only; use ChangeOfState for patches")
 	}
-	if err := from.Load.Validate(s); err != nil {
-		return State{}, err
-	}
 	toLoad := Load{Uniform: to}
-	if err := toLoad.Validate(s); err != nil {
-		return State{}, err
-	}
-	if err := e.validate(); err != nil {
-		return State{}, err
-	}
-	if err := positive("horizontal tension", float64(from.H)); err != nil {
-		return State{}, err
-	}
-	if err := validTemperature("start temperature", from.Temperature); err != nil {
-		return State{}, err
-	}
-	if err := validTemperature("temperature", temp); err != nil {
+	if err := validateChange(s, e, from, toLoad, temp); err != nil {
 		return State{}, err
 	}
 	L := float64(s.Length)

@@ -163,101 +163,124 @@ func bases(results []Result) [][2]string {
 	return out
 }
 
-// WriteText renders the report as aligned plain text.
-func (r Report) WriteText(w io.Writer, opts *RenderOptions) error {
-	if opts == nil {
-		opts = &RenderOptions{}
-	}
-	ew := &errWriter{w: w}
-	title := r.Title
-	if title == "" {
-		title = "Check report"
-	}
-	fmt.Fprintf(ew, "%s\n%s\n\n%s\n\n", title, strings.Repeat("=", len([]rune(title))), Caution)
-	fmt.Fprintf(ew, "Overall: %s (%d results)\n\n", r.Status(), len(r.Results))
-	table := func(heading string, results []Result) {
-		fmt.Fprintf(ew, "%s\n\n", heading)
-		tw := tabwriter.NewWriter(ew, 0, 0, 2, ' ', 0)
-		fmt.Fprintln(tw, strings.Join(columns, "\t"))
-		for _, res := range results {
-			fmt.Fprintln(tw, strings.Join(row(res), "\t"))
+// Format is a plain-text layout a report can be rendered in.
+type Format int
+
+// The formats.
+const (
+	Text     Format = iota // aligned plain text
+	Markdown               // GitHub-flavoured Markdown
+)
+
+// WriteTable writes a titled table in format f: columns aligned with
+// spaces in Text, a pipe table in Markdown (pipes in cells escaped).
+func WriteTable(w io.Writer, f Format, heading string, head []string, rows [][]string) error {
+	var b strings.Builder
+	if f == Markdown {
+		fmt.Fprintf(&b, "## %s\n\n| %s |\n|%s\n", heading, strings.Join(head, " | "), strings.Repeat("---|", len(head)))
+		for _, r := range rows {
+			cells := make([]string, len(r))
+			for i, c := range r {
+				cells[i] = strings.ReplaceAll(c, "|", `\|`)
+			}
+			fmt.Fprintf(&b, "| %s |\n", strings.Join(cells, " | "))
+		}
+	} else {
+		fmt.Fprintf(&b, "%s\n\n", heading)
+		tw := tabwriter.NewWriter(&b, 0, 0, 2, ' ', 0)
+		fmt.Fprintln(tw, strings.Join(head, "\t"))
+		for _, r := range rows {
+			fmt.Fprintln(tw, strings.Join(r, "\t"))
 		}
 		tw.Flush()
-		fmt.Fprintln(ew)
 	}
-	gov := r.Governing()
-	table("Governing cases", gov)
-	notes := false
-	for _, res := range gov {
-		for _, n := range res.Notes {
-			if !notes {
-				fmt.Fprintf(ew, "Notes\n\n")
-				notes = true
-			}
-			fmt.Fprintf(ew, "- %s (%s): %s\n", res.ID, res.Element, n)
+	b.WriteString("\n")
+	_, err := io.WriteString(w, b.String())
+	return err
+}
+
+// writeList writes a titled bullet list in format f; nothing when empty.
+// Each item is a code (a check ID) and its text.
+func writeList(w io.Writer, f Format, heading string, items [][2]string) error {
+	if len(items) == 0 {
+		return nil
+	}
+	var b strings.Builder
+	if f == Markdown {
+		fmt.Fprintf(&b, "## %s\n\n", heading)
+	} else {
+		fmt.Fprintf(&b, "%s\n\n", heading)
+	}
+	for _, it := range items {
+		code := it[0]
+		if f == Markdown {
+			code = "`" + code + "`"
 		}
+		fmt.Fprintf(&b, "- %s: %s\n", code, it[1])
 	}
-	if notes {
-		fmt.Fprintln(ew)
+	b.WriteString("\n")
+	_, err := io.WriteString(w, b.String())
+	return err
+}
+
+func rows(results []Result) [][]string {
+	out := make([][]string, len(results))
+	for i, res := range results {
+		out[i] = row(res)
 	}
-	if b := bases(gov); len(b) > 0 {
-		fmt.Fprintf(ew, "Basis\n\n")
-		for _, kb := range b {
-			fmt.Fprintf(ew, "- %s: %s\n", kb[0], kb[1])
-		}
-		fmt.Fprintln(ew)
-	}
-	if opts.All {
-		table("All results", r.Results)
-	}
-	return ew.err
+	return out
+}
+
+// WriteText renders the report as aligned plain text.
+func (r Report) WriteText(w io.Writer, opts *RenderOptions) error {
+	return r.write(w, Text, opts)
 }
 
 // WriteMarkdown renders the report as GitHub-flavoured Markdown.
 func (r Report) WriteMarkdown(w io.Writer, opts *RenderOptions) error {
+	return r.write(w, Markdown, opts)
+}
+
+// write renders the report: title, caution, overall status, the governing
+// results, their notes and bases, and every result with opts.All.
+func (r Report) write(w io.Writer, f Format, opts *RenderOptions) error {
 	if opts == nil {
 		opts = &RenderOptions{}
 	}
-	ew := &errWriter{w: w}
 	title := r.Title
 	if title == "" {
 		title = "Check report"
 	}
-	fmt.Fprintf(ew, "# %s\n\n> %s\n\n**Overall: %s** (%d results)\n\n", title, Caution, r.Status(), len(r.Results))
-	table := func(heading string, results []Result) {
-		fmt.Fprintf(ew, "## %s\n\n| %s |\n|%s\n", heading, strings.Join(columns, " | "),
-			strings.Repeat("---|", len(columns)))
-		for _, res := range results {
-			cells := row(res)
-			for i, c := range cells {
-				cells[i] = strings.ReplaceAll(c, "|", `\|`)
-			}
-			fmt.Fprintf(ew, "| %s |\n", strings.Join(cells, " | "))
-		}
-		fmt.Fprintln(ew)
+	var head string
+	if f == Markdown {
+		head = fmt.Sprintf("# %s\n\n> %s\n\n**Overall: %s** (%d results)\n\n", title, Caution, r.Status(), len(r.Results))
+	} else {
+		head = fmt.Sprintf("%s\n%s\n\n%s\n\nOverall: %s (%d results)\n\n",
+			title, strings.Repeat("=", len([]rune(title))), Caution, r.Status(), len(r.Results))
+	}
+	if _, err := io.WriteString(w, head); err != nil {
+		return err
 	}
 	gov := r.Governing()
-	table("Governing cases", gov)
-	var notes []string
+	if err := WriteTable(w, f, "Governing cases", columns, rows(gov)); err != nil {
+		return err
+	}
+	var notes [][2]string
 	for _, res := range gov {
 		for _, n := range res.Notes {
-			notes = append(notes, fmt.Sprintf("- `%s` (%s): %s", res.ID, res.Element, n))
+			notes = append(notes, [2]string{res.ID, "(" + res.Element + ") " + n})
 		}
 	}
-	if len(notes) > 0 {
-		fmt.Fprintf(ew, "## Notes\n\n%s\n\n", strings.Join(notes, "\n"))
+	if err := writeList(w, f, "Notes", notes); err != nil {
+		return err
 	}
-	if b := bases(gov); len(b) > 0 {
-		fmt.Fprintf(ew, "## Basis\n\n")
-		for _, kb := range b {
-			fmt.Fprintf(ew, "- `%s`: %s\n", kb[0], kb[1])
-		}
-		fmt.Fprintln(ew)
+	if err := writeList(w, f, "Basis", bases(gov)); err != nil {
+		return err
 	}
 	if opts.All {
-		table("All results", r.Results)
+		return WriteTable(w, f, "All results", columns, rows(r.Results))
 	}
-	return ew.err
+	return nil
 }
 
 // reportJSON is the stable JSON form of a Report.
@@ -291,19 +314,4 @@ func (r Report) WriteJSON(w io.Writer) error {
 	}
 	_, err = w.Write(append(b, '\n'))
 	return err
-}
-
-// errWriter keeps the first write error so rendering code can stay linear.
-type errWriter struct {
-	w   io.Writer
-	err error
-}
-
-func (e *errWriter) Write(p []byte) (int, error) {
-	if e.err != nil {
-		return 0, e.err
-	}
-	n, err := e.w.Write(p)
-	e.err = err
-	return n, err
 }
