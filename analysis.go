@@ -191,7 +191,7 @@ func (m *model) superstructure(out sink, service, design []CaseState) error {
 			var basis cable.TensionBasis = cable.GlobalFactor{Factor: m.b.Basis.RopeFactor}
 			t := svc.Groups[i].MaxTension
 			if partial {
-				basis = cable.PartialFactor{GammaR: m.b.Basis.GammaR}
+				basis = cable.PartialFactor{GammaR: m.b.Basis.GammaR, Ke: m.b.Basis.RopeEfficiency}
 				t = des.Groups[i].MaxTension
 			}
 			r, err := cable.TensionCheck(t, g.rope, g.Count, basis)

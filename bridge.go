@@ -300,4 +300,25 @@ type Basis struct {
 	GammaQ float64 `json:"gamma_q,omitempty"`
 	// GammaR is the rope resistance factor of EN 1993-1-11; zero → default.
 	GammaR float64 `json:"gamma_r,omitempty"`
+	// RopeEfficiency is the termination efficiency k_e of EN 1993-1-11;
+	// zero → cable.DefaultKe.
+	RopeEfficiency float64 `json:"rope_efficiency,omitempty"`
+
+	// Ground checks on the partial basis, EN 1997-1 Annex A; zero → the
+	// recommended values documented in foundation.Basis.
+	Approach  string  `json:"approach,omitempty"` // "DA2" (default) or "DA1"
+	GammaGdst float64 `json:"gamma_g_dst,omitempty"`
+	GammaGstb float64 `json:"gamma_g_stb,omitempty"`
+	GammaQdst float64 `json:"gamma_q_dst,omitempty"`
+	GammaPhi  float64 `json:"gamma_phi,omitempty"`
+	GammaC    float64 `json:"gamma_c,omitempty"`
+	GammaRh   float64 `json:"gamma_rh,omitempty"`
+	GammaRv   float64 `json:"gamma_rv,omitempty"`
+	GammaRe   float64 `json:"gamma_re,omitempty"`
+
+	// Column sections, EN 1992-1-1; zero → the values documented in
+	// tower.RCSection (γc 1.5, γs 1.15, αcc 1.0).
+	GammaConcrete float64 `json:"gamma_concrete,omitempty"`
+	GammaSteel    float64 `json:"gamma_steel,omitempty"`
+	AlphaCC       float64 `json:"alpha_cc,omitempty"`
 }

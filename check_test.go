@@ -3,6 +3,7 @@ package sagspan
 import (
 	"math"
 	"sort"
+	"strings"
 	"testing"
 
 	"gonum.org/v1/gonum/floats/scalar"
@@ -141,25 +142,8 @@ func TestLevelSpanByHand(t *testing.T) {
 	// solved for L(H₂; w₀+q) = L(H₁; w₀) by bisection.
 	crowd := 3.5e3 * 1.0
 	near(t, "EN 1991-2 crowd pressure", float64(CrowdPressure(50)), 3.5e3, 1e-12)
-	ea := 4 * 100e9 * 0.460 * 26 * 26 * 1e-6
-	chord := math.Hypot(10, 3)
-	total := func(h, w float64) float64 {
-		n := w * l / (8 * h)
-		s := l/2*math.Sqrt(1+16*n*n) + l*math.Asinh(4*n)/(8*n)
-		tb := math.Hypot(h, w*l/2)
-		return s - (h*l+w*w*l*l*l/(12*h))/ea + 2*chord/(1+tb/ea)
-	}
-	target := total(h0, w0)
-	lo, hi := h0, 10*h0
-	for range 200 {
-		mid := (lo + hi) / 2
-		if total(mid, w0+crowd) > target { // too long: more tension
-			lo = mid
-		} else {
-			hi = mid
-		}
-	}
-	h2 := (lo + hi) / 2
+	ea := levelEA
+	h2 := levelSolve(h0, w0, w0+crowd)
 	full := a.Service[1]
 	if full.Case.Name != "crowd, full span" {
 		t.Fatalf("second case %q", full.Case.Name)
@@ -197,6 +181,75 @@ func TestLevelSpanByHand(t *testing.T) {
 
 	// Swing frequency.
 	near(t, "swing frequency", float64(a.Modes.Swing), math.Sqrt(h0/(w0/g))/(2*l), 1e-6)
+}
+
+// levelEA is the axial stiffness of testdata/level.json's four 26 mm
+// 6x36-IWRC ropes: E 100 GPa (from memory, as in package cable) on the
+// metallic area 0.460 d² (SOURCES §2).
+const levelEA = 4 * 100e9 * 0.460 * 26 * 26 * 1e-6
+
+// levelLength returns the total unstretched rope length of
+// testdata/level.json (span 50 m and two 10 m × 3 m backstays over fixed
+// saddles, tension continuous) hanging with H under w per metre:
+//
+//	L(H) = S(H) − (H l + w² l³/(12 H))/EA + 2 c/(1 + T_b/EA)
+//	S = (l/2)√(1+16n²) + l asinh(4n)/(8n),  n = w l/(8H)
+//
+// S is the closed form of the level parabola's length (standard texts;
+// Hicks, Civil Engineering Formulas, ch. 10, gives its series), the stretch
+// is ∫T ds/EA by statics, T_b = √(H² + (w l/2)²), c = √(10² + 3²).
+func levelLength(h, w float64) float64 {
+	const l = 50.0
+	n := w * l / (8 * h)
+	s := l/2*math.Sqrt(1+16*n*n) + l*math.Asinh(4*n)/(8*n)
+	tb := math.Hypot(h, w*l/2)
+	return s - (h*l+w*w*l*l*l/(12*h))/levelEA + 2*math.Hypot(10, 3)/(1+tb/levelEA)
+}
+
+// levelSolve returns H under load w2 of the level bridge's rope that hangs
+// with H1 under w1, by bisection on levelLength (same temperature).
+func levelSolve(h1, w1, w2 float64) float64 {
+	target := levelLength(h1, w1)
+	lo, hi := h1/10, 100*h1
+	for range 200 {
+		mid := (lo + hi) / 2
+		if levelLength(mid, w2) > target { // too long: more tension
+			lo = mid
+		} else {
+			hi = mid
+		}
+	}
+	return (lo + hi) / 2
+}
+
+// TestPartialBasisByHand checks the partial-factor basis on
+// testdata/level.json. The ropes are analysed under factored loads (the
+// rope is non-linear: factor the loads, then solve), γG = 1.35 (EN 1990
+// Table A2.4(B), from memory); the resistance is EN 1993-1-11 cl. 6.2
+// (from memory, SOURCES §2): F_Rd = k_e F_min/(1.5 γ_R), k_e 0.9 and
+// γ_R 0.90 by default, for each of the four ropes.
+func TestPartialBasisByHand(t *testing.T) {
+	b := loadTestBridge(t, "level.json")
+	b.Basis.Method = "partial"
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	const g, l, f = 9.80665, 50.0, 2.5
+	ropeWeight := 4 * 0.409 * 26 * 26 / 100 * g
+	n := f / l
+	w0 := 1000 + ropeWeight*(1+8*n*n/3-32*math.Pow(n, 4)/5+256*math.Pow(n, 6)/7)
+	h0 := w0 * l * l / (8 * f)
+	h := levelSolve(h0, w0, 1.35*w0)
+	want := math.Hypot(h, 1.35*w0*l/2)
+	rope := find(t, a.Report, "cable.tension", "walkway ropes", "permanent")
+	near(t, "design rope tension, permanent", rope.Demand, want, 1e-6)
+	near(t, "F_Rd of four ropes", rope.Capacity, 4*0.9*0.356*26*26*1770/(1.5*0.9), 1e-9)
+	for _, r := range a.Report.Results {
+		if r.ID == "anchor.sliding" && !strings.Contains(r.Basis, "EN 1997-1 Annex A") {
+			t.Fatalf("anchor sliding on the partial basis cites %q", r.Basis)
+		}
+	}
 }
 
 // TestMirroredBridge checks that a bridge mirrored end for end (banks

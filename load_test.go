@@ -59,6 +59,9 @@ func TestBadDescriptions(t *testing.T) {
 		{"unknown soil", func(m map[string]any) { obj(m, "banks", "right", "soil")["preset"] = "moon dust" }, "banks.right.soil", "moon dust"},
 		{"zero rope count", func(m map[string]any) { m["ropes"].([]any)[0].(map[string]any)["count"] = 0 }, "ropes[0].count", "at least 1"},
 		{"unknown anchor", func(m map[string]any) { obj(m, "banks", "left", "anchor")["type"] = "tree" }, "banks.left.anchor.type", "unknown anchor type"},
+		{"span beyond a footbridge", func(m map[string]any) { obj(m, "site")["span"] = "5 km" }, "site.span", "beyond"},
+		{"temperature out of this world", func(m map[string]any) { obj(m, "climate")["hottest"] = "1e6 C" }, "climate.hottest", "outside"},
+		{"unknown design approach", func(m map[string]any) { obj(m, "basis")["approach"] = "DA9" }, "basis.approach", "unknown design approach"},
 		{"bad basis", func(m map[string]any) { obj(m, "basis")["method"] = "vibes" }, "basis.method", "unknown method"},
 		{"not JSON", nil, "", "want an object"},
 	}

@@ -61,6 +61,19 @@ func newModel(b Bridge) (*model, error) {
 		Overturning:    bs.OverturningFactor,
 		Uplift:         bs.UpliftFactor,
 		Bearing:        bs.BearingFactor,
+		GammaGdst:      bs.GammaGdst,
+		GammaGstb:      bs.GammaGstb,
+		GammaQdst:      bs.GammaQdst,
+		GammaG:         bs.GammaG,
+		GammaQ:         bs.GammaQ,
+		GammaPhi:       bs.GammaPhi,
+		GammaC:         bs.GammaC,
+		GammaRh:        bs.GammaRh,
+		GammaRv:        bs.GammaRv,
+		GammaRe:        bs.GammaRe,
+	}
+	if bs.Approach == "DA1" {
+		m.fbasis.Approach = foundation.DesignApproach1
 	}
 	for i, bank := range []Bank{b.Banks.Left, b.Banks.Right} {
 		if m.soils[i], err = bank.Soil.soil(); err != nil {
@@ -184,6 +197,7 @@ func (m *model) section(s Side) tower.RCSection {
 	sec := tower.RCSection{
 		B: t.Width - 2*t.Facing, H: t.Depth - 2*t.Facing,
 		Fc: spec.Concrete, Fy: spec.Steel, Code: tower.EN1992,
+		GammaC: m.b.Basis.GammaConcrete, GammaS: m.b.Basis.GammaSteel, AlphaCC: m.b.Basis.AlphaCC,
 	}
 	if spec.Bars > 0 {
 		area := units.Area(math.Pi / 4 * float64(spec.BarDiameter) * float64(spec.BarDiameter))

@@ -144,7 +144,8 @@ func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64
 	// The rope fed into the span reaches the change of state as an
 	// equivalent change of the span's unstretched length, through the
 	// thermal term: exp(α' dθ') = exp(α dt)·(1 + feed/l0,θ).
-	const alphaEq = 1e-5 // any positive coefficient; dθ' follows from it
+	// Any positive coefficient serves; it is chosen so that dθ' stays
+	// within ±100 K, keeping the equivalent temperature absolute-positive.
 	thermal := math.Exp(float64(e.Alpha) * dt)
 	l0 := m.spanUnstretched[i] * thermal
 	// slide records the direction a sliding saddle has slid: once it
@@ -153,8 +154,9 @@ func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64
 	var slide [2]float64
 	var gs GroupState
 	step := func(feed float64) (float64, error) {
-		eq := cable.Elastic{EA: e.EA, Alpha: alphaEq}
 		grow := float64(e.Alpha)*dt + math.Log1p(feed/l0)
+		alphaEq := math.Max(1e-5, math.Abs(grow)/100)
+		eq := cable.Elastic{EA: e.EA, Alpha: units.ThermalExpansion(alphaEq)}
 		st, err := cable.ChangeOfState(m.span, eq, m.ref[i], load, m.ref[i].Temperature+units.Temperature(grow/alphaEq))
 		if err != nil {
 			return 0, err

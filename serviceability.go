@@ -108,9 +108,15 @@ func (m *model) checkFrequencies(a *Analysis, perm CaseState, opts *Options) err
 	return nil
 }
 
+// maxErectionRows bounds the erection table.
+const maxErectionRows = 1000
+
 func (m *model) erection(a *Analysis, opts *Options) error {
 	step := orDefault(opts.ErectionStep, 5)
 	c := m.b.Climate
+	if rows := float64(c.Hottest-c.Coldest) / step; rows > maxErectionRows || math.IsNaN(step) {
+		return fmt.Errorf("sagspan: erection step %v K gives %.0f rows; give a step of at least %.2f K", step, rows, float64(c.Hottest-c.Coldest)/maxErectionRows)
+	}
 	var temps []units.Temperature
 	for t := float64(c.Coldest); t <= float64(c.Hottest)+1e-9; t += step {
 		temps = append(temps, units.Temperature(t))

@@ -8,6 +8,22 @@ import (
 	"github.com/sagspan/sagspan/units"
 )
 
+// Bounds of a footbridge description, beyond which the methods here are
+// not meant to be used (common practice for the trade sagspan serves).
+const (
+	maxSpan = 1000 * units.Metre // footbridge spans are 20–250 m; well beyond stays out
+	// Rope temperatures lie within these in any climate a footbridge meets.
+	minTemperature = units.Temperature(273.15 - 100)
+	maxTemperature = units.Temperature(273.15 + 100)
+)
+
+// Material bounds of column sections.
+const (
+	maxConcrete   = 90 * units.Megapascal  // fck of C90/105, EN 1992-1-1 Table 3.1
+	maxSteel      = 600 * units.Megapascal // fyk, EN 1992-1-1 3.2.2(3)
+	maxSteelRatio = 0.08                   // As/Ac at laps, EN 1992-1-1 9.5.2(3) (from memory)
+)
+
 // maxSagRatio is the largest dead-load sag ratio accepted: beyond a quarter
 // of the span a rope is no longer a walkway a person can use, and the
 // parabolic rope statics used for load cases lose accuracy (common practice:
@@ -69,6 +85,9 @@ func (b Bridge) Validate() error {
 	v := &validator{}
 	s := b.Site
 	v.positive(at("site.span"), float64(s.Span), units.KindLength)
+	if v.err == nil && s.Span > maxSpan {
+		v.fail(at("site.span"), "%s is beyond the %s this library is made for", s.Span, maxSpan)
+	}
 	v.finite(at("site.rise"), float64(s.Rise))
 	if v.err == nil && math.Abs(float64(s.Rise)) >= float64(s.Span) {
 		v.fail(at("site.rise"), "height difference %s is not less than the span %s", s.Rise, s.Span)
@@ -85,6 +104,14 @@ func (b Bridge) Validate() error {
 	v.positive(at("climate.reference"), float64(c.Reference), units.KindTemperature)
 	v.positive(at("climate.coldest"), float64(c.Coldest), units.KindTemperature)
 	v.positive(at("climate.hottest"), float64(c.Hottest), units.KindTemperature)
+	for _, t := range []struct {
+		f string
+		t units.Temperature
+	}{{"climate.reference", c.Reference}, {"climate.coldest", c.Coldest}, {"climate.hottest", c.Hottest}} {
+		if v.err == nil && (t.t < minTemperature || t.t > maxTemperature) {
+			v.fail(at(t.f), "%s is outside %s to %s", t.t, minTemperature, maxTemperature)
+		}
+	}
 	if v.err == nil && !(c.Coldest <= c.Reference && c.Reference <= c.Hottest) {
 		v.fail(at("climate"), "temperatures must satisfy coldest <= reference <= hottest, got %s, %s, %s",
 			c.Coldest, c.Reference, c.Hottest)
@@ -185,8 +212,8 @@ func (b Bridge) validateBank(v *validator, f string, k Bank) {
 	v.positive(path{f, ".tower.depth"}, float64(t.Depth), units.KindLength)
 	v.positive(path{f, ".tower.width"}, float64(t.Width), units.KindLength)
 	v.nonNegative(path{f, ".tower.facing"}, float64(t.Facing), units.KindLength)
-	if v.err == nil && 2*t.Facing >= t.Depth {
-		v.fail(path{f, ".tower.facing"}, "facing %s on both faces leaves no effective section of the %s column", t.Facing, t.Depth)
+	if v.err == nil && 2*t.Facing >= min(t.Depth, t.Width) {
+		v.fail(path{f, ".tower.facing"}, "facing %s on both faces leaves no effective section of the %s × %s column", t.Facing, t.Depth, t.Width)
 	}
 	v.nonNegative(path{f, ".tower.unit_weight"}, float64(t.UnitWeight), units.KindUnitWeight)
 	switch t.Saddle.Kind {
@@ -200,6 +227,9 @@ func (b Bridge) validateBank(v *validator, f string, k Bank) {
 	}
 	sec := t.Section
 	v.positive(path{f, ".tower.section.concrete"}, float64(sec.Concrete), units.KindPressure)
+	if v.err == nil && sec.Concrete > maxConcrete {
+		v.fail(path{f, ".tower.section.concrete"}, "%s is above the %s of the strongest concrete class in EN 1992-1-1 Table 3.1", sec.Concrete, maxConcrete)
+	}
 	if sec.Bars < 0 || sec.Bars%2 != 0 {
 		v.fail(path{f, ".tower.section.bars"}, "must be an even number (half on each face), got %d", sec.Bars)
 	}
@@ -207,8 +237,17 @@ func (b Bridge) validateBank(v *validator, f string, k Bank) {
 		v.positive(path{f, ".tower.section.steel"}, float64(sec.Steel), units.KindPressure)
 		v.positive(path{f, ".tower.section.bar_diameter"}, float64(sec.BarDiameter), units.KindLength)
 		v.positive(path{f, ".tower.section.cover"}, float64(sec.Cover), units.KindLength)
-		if v.err == nil && 2*sec.Cover >= t.Depth-2*t.Facing {
-			v.fail(path{f, ".tower.section.cover"}, "cover %s leaves no room in the effective depth", sec.Cover)
+		if v.err == nil && 2*sec.Cover >= min(t.Depth, t.Width)-2*t.Facing {
+			v.fail(path{f, ".tower.section.cover"}, "cover %s leaves no room in the effective section", sec.Cover)
+		}
+		if v.err == nil && sec.Steel > maxSteel {
+			v.fail(path{f, ".tower.section.steel"}, "%s is above the %s of reinforcing steel (EN 1992-1-1 3.2.2(3): fyk 400 to 600 MPa)", sec.Steel, maxSteel)
+		}
+		bars := float64(sec.Bars) * math.Pi / 4 * float64(sec.BarDiameter) * float64(sec.BarDiameter)
+		gross := float64(t.Depth-2*t.Facing) * float64(t.Width-2*t.Facing)
+		if v.err == nil && bars > maxSteelRatio*gross {
+			v.fail(path{f, ".tower.section.bar_diameter"}, "%d bars of %s are %.1f %% of the section, above the %.0f %% EN 1992-1-1 9.5.2(3) allows at laps (from memory)",
+				sec.Bars, sec.BarDiameter, 100*bars/gross, 100*maxSteelRatio)
 		}
 	}
 	ft := t.Footing
@@ -283,6 +322,19 @@ func (b Bridge) validateLoads(v *validator) {
 	default:
 		v.fail(at("basis.method"), "unknown method %q; want allowable or partial", bs.Method)
 	}
+	switch bs.Approach {
+	case "", "DA1", "DA2":
+	default:
+		v.fail(at("basis.approach"), "unknown design approach %q; want DA1 or DA2", bs.Approach)
+	}
+	for _, x := range []struct {
+		f string
+		x float64
+	}{{"basis.rope_efficiency", bs.RopeEfficiency}, {"basis.alpha_cc", bs.AlphaCC}} {
+		if math.IsNaN(x.x) || x.x < 0 || x.x > 1 {
+			v.fail(at(x.f), "must be zero (default) or a factor up to 1, got %v", x.x)
+		}
+	}
 	for _, x := range []struct {
 		f string
 		x float64
@@ -291,6 +343,10 @@ func (b Bridge) validateLoads(v *validator) {
 		{"basis.overturning_factor", bs.OverturningFactor}, {"basis.uplift_factor", bs.UpliftFactor},
 		{"basis.bearing_factor", bs.BearingFactor}, {"basis.gamma_g", bs.GammaG},
 		{"basis.gamma_q", bs.GammaQ}, {"basis.gamma_r", bs.GammaR},
+		{"basis.gamma_g_dst", bs.GammaGdst}, {"basis.gamma_g_stb", bs.GammaGstb}, {"basis.gamma_q_dst", bs.GammaQdst},
+		{"basis.gamma_phi", bs.GammaPhi}, {"basis.gamma_c", bs.GammaC}, {"basis.gamma_rh", bs.GammaRh},
+		{"basis.gamma_rv", bs.GammaRv}, {"basis.gamma_re", bs.GammaRe},
+		{"basis.gamma_concrete", bs.GammaConcrete}, {"basis.gamma_steel", bs.GammaSteel},
 	} {
 		if math.IsNaN(x.x) || x.x < 0 || (x.x > 0 && x.x < 0.5) || x.x > 20 {
 			v.fail(at(x.f), "must be zero (default) or a factor between 0.5 and 20, got %v", x.x)
