@@ -144,8 +144,6 @@ func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64
 	// The rope fed into the span reaches the change of state as an
 	// equivalent change of the span's unstretched length, through the
 	// thermal term: exp(α' dθ') = exp(α dt)·(1 + feed/l0,θ).
-	// Any positive coefficient serves; it is chosen so that dθ' stays
-	// within ±100 K, keeping the equivalent temperature absolute-positive.
 	thermal := math.Exp(float64(e.Alpha) * dt)
 	l0 := m.spanUnstretched[i] * thermal
 	// slide records the direction a sliding saddle has slid: once it
@@ -155,6 +153,8 @@ func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64
 	var gs GroupState
 	step := func(feed float64) (float64, error) {
 		grow := float64(e.Alpha)*dt + math.Log1p(feed/l0)
+		// Any positive α' serves; this one keeps dθ' within ±100 K, so the
+		// equivalent temperature stays an absolute temperature.
 		alphaEq := math.Max(1e-5, math.Abs(grow)/100)
 		eq := cable.Elastic{EA: e.EA, Alpha: units.ThermalExpansion(alphaEq)}
 		st, err := cable.ChangeOfState(m.span, eq, m.ref[i], load, m.ref[i].Temperature+units.Temperature(grow/alphaEq))
