@@ -40,7 +40,8 @@ func (m *model) footingChecks(out sink, side Side, spec FootingSpec, service []C
 // pushing the swung ropes sideways: the footing turned, its width along the
 // lateral force. The whole lateral action is variable.
 func (m *model) footingAcross(s Side, spec FootingSpec, perm tower.Resultant, svc CaseState) ([]check.Result, error) {
-	f := foundation.Footing{B: spec.Width, L: spec.Length, Thickness: spec.Thickness, Depth: spec.Depth, UnitWeight: m.bank(s).Tower.UnitWeight}
+	f := m.padOf(s, spec)
+	f.B, f.L = spec.Width, spec.Length // turned: B along the lateral force
 	lateral := svc.Lateral[s]
 	moment := svc.LateralMoment[s] + units.MomentOf(lateral, spec.Thickness)
 	load := foundation.FootingLoad{
@@ -85,7 +86,7 @@ func share(x, p float64) float64 {
 // down to the underside of the footing; perm is the permanent case's
 // resultant, for the variable share of the partial basis.
 func (m *model) footing(s Side, spec FootingSpec, perm, r tower.Resultant) ([]check.Result, error) {
-	f := foundation.Footing{B: spec.Length, L: spec.Width, Thickness: spec.Thickness, Depth: spec.Depth, UnitWeight: m.bank(s).Tower.UnitWeight}
+	f := m.padOf(s, spec)
 	moment := func(r tower.Resultant) units.Moment {
 		return r.BaseMoment + units.MomentOf(r.Horizontal, spec.Thickness) + units.MomentOf(r.Vertical, spec.ColumnOffset)
 	}
@@ -161,4 +162,12 @@ func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Re
 	var err error
 	m.scratch, err = blk.AppendCheck(m.scratch[:0], pulls, soil, basis)
 	return m.scratch, err
+}
+
+// padOf returns the footing of one bank's tower for package foundation:
+// B along the bridge, the column's footprint free of soil cover.
+func (m *model) padOf(s Side, spec FootingSpec) foundation.Footing {
+	t := m.bank(s).Tower
+	return foundation.Footing{B: spec.Length, L: spec.Width, Thickness: spec.Thickness, Depth: spec.Depth,
+		UnitWeight: t.UnitWeight, Footprint: units.Area(float64(t.Depth) * float64(t.Width))}
 }

@@ -36,6 +36,12 @@ func ErectionTable(s Span, e Elastic, bare units.LoadPerLength, dead Load, desig
 			return nil, err
 		}
 	}
+	if err := e.validate(); err != nil {
+		return nil, err
+	}
+	if err := validTemperature("reference temperature", ref); err != nil {
+		return nil, err
+	}
 	finished, err := LoadedWithSag(s, full, designSag)
 	if err != nil {
 		return nil, err

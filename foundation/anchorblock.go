@@ -278,7 +278,7 @@ func (a AnchorBlock) AppendCheck(dst []check.Result, pulls []Pull, s Soil, b *Ba
 			return nil, err
 		}
 		lift = a.uplift(pulls, ld, set, def(bs.Uplift, 1.5))
-		if bear, err = a.bearing(pulls, s, ld, set, false, def(bs.Bearing, 3)); err != nil {
+		if bear, err = a.bearing(pulls, s, ld, set, false, false, def(bs.Bearing, 3)); err != nil {
 			return nil, err
 		}
 		return append(dst, slide, over, lift, bear), nil
@@ -297,8 +297,11 @@ func (a AnchorBlock) AppendCheck(dst []check.Result, pulls []Pull, s Soil, b *Ba
 		if first || r.Ratio > slide.Ratio {
 			slide = r
 		}
-		for _, fav := range []bool{false, true} {
-			r, err := a.bearing(pulls, s, ld, set, fav, 1)
+		// Pulls unfavourable or favourable, with the block's weight
+		// unfavourable (γG) or favourable (γG,inf): the light block under
+		// full pulls gives the largest inclination and eccentricity.
+		for _, c := range [][2]bool{{false, false}, {true, false}, {false, true}} {
+			r, err := a.bearing(pulls, s, ld, set, c[0], c[1], 1)
 			if err != nil {
 				return nil, err
 			}
@@ -331,7 +334,7 @@ func basisOf(set actionSet, what string, fs float64) string {
 }
 
 func (a AnchorBlock) sliding(pulls []Pull, s Soil, ld blockLoads, set actionSet, fs float64) (check.Result, error) {
-	sd := s.factored(set.gPhi, set.gC)
+	sd := s.factored(set)
 	var fx, fz float64
 	for _, p := range pulls {
 		x, z := p.components()
@@ -409,11 +412,15 @@ func (a AnchorBlock) uplift(pulls []Pull, ld blockLoads, set actionSet, fs float
 	return set.note(r, "side friction on the block ignored")
 }
 
-func (a AnchorBlock) bearing(pulls []Pull, s Soil, ld blockLoads, set actionSet, favourable bool, fs float64) (check.Result, error) {
+func (a AnchorBlock) bearing(pulls []Pull, s Soil, ld blockLoads, set actionSet, favourable, lightBlock bool, fs float64) (check.Result, error) {
 	const id, title = "anchor.bearing", "Anchor block bearing pressure"
 	l := float64(a.Length)
-	n := set.gG * (ld.weight - ld.buoyancy)
-	h, m := 0.0, set.gG*(ld.weight*(ld.xw-l/2)-ld.buoyancy*(ld.xu-l/2))
+	gw := set.gG
+	if lightBlock {
+		gw = set.gGfav
+	}
+	n := gw * (ld.weight - ld.buoyancy)
+	h, m := 0.0, gw*(ld.weight*(ld.xw-l/2)-ld.buoyancy*(ld.xu-l/2))
 	for _, p := range pulls {
 		x, z := p.components()
 		g := set.factor(!favourable, p.Variable)
@@ -466,7 +473,7 @@ func baseBearing(id, title, basis string, b, l, depth units.Length, water bool, 
 		}
 		return r.WithNote(fmt.Sprintf("peak contact pressure; eccentricity %v, contact length %v", e, contact)), nil
 	}
-	sd := s.factored(set.gPhi, set.gC)
+	sd := s.factored(set)
 	br, err := BearingCapacity(BearingInput{B: b, L: l, Depth: depth, Vertical: n, Horizontal: h, EccB: e,
 		Groundwater: water, WaterDepth: waterDepth}, sd, m)
 	if errors.Is(err, ErrOutsideBase) {

@@ -46,6 +46,7 @@ type Basis struct {
 	GammaQA2  float64 // GEO set A2 unfavourable variable, 1.3 (Table A.3)
 	GammaPhi  float64 // set M2 on tan φ', 1.25 (Tables A.2, A.4); EQU and DA1 combination 2
 	GammaC    float64 // set M2 on c', 1.25 (Tables A.2, A.4)
+	GammaCu   float64 // set M2 on cu (soil with zero friction angle), 1.4 (Tables A.2, A.4)
 	GammaRh   float64 // sliding resistance: R2 1.1 (DA2), R1 1.0 (DA1) (Table A.5)
 	GammaRv   float64 // bearing resistance: R2 1.4 (DA2), R1 1.0 (DA1) (Table A.5)
 	GammaRe   float64 // earth resistance: R2 1.4 (DA2), R1 1.0 (DA1) (Table A.13, from memory)
@@ -89,7 +90,7 @@ func resolveBasis(b *Basis) (Basis, error) {
 	}{
 		{"GammaGdst", r.GammaGdst}, {"GammaGstb", r.GammaGstb}, {"GammaQdst", r.GammaQdst},
 		{"GammaG", r.GammaG}, {"GammaQ", r.GammaQ}, {"GammaGA2", r.GammaGA2}, {"GammaQA2", r.GammaQA2},
-		{"GammaPhi", r.GammaPhi}, {"GammaC", r.GammaC}, {"GammaRh", r.GammaRh}, {"GammaRv", r.GammaRv},
+		{"GammaPhi", r.GammaPhi}, {"GammaC", r.GammaC}, {"GammaCu", r.GammaCu}, {"GammaRh", r.GammaRh}, {"GammaRv", r.GammaRv},
 		{"GammaRe", r.GammaRe}, {"GammaA", r.GammaA}, {"GammaS", r.GammaS},
 	} {
 		if !(f.v >= 0) || math.IsInf(f.v, 0) { // the field's name is built only on error
@@ -108,7 +109,7 @@ type actionSet struct {
 	label         string
 	terse         bool    // no basis or note text (Basis.Terse)
 	gG, gGfav, gQ float64 // unfavourable permanent, favourable permanent, unfavourable variable
-	gPhi, gC      float64
+	gPhi, gC, gCu float64
 	gRh, gRv, gRe float64
 	allowable     bool
 }
@@ -118,6 +119,8 @@ type actionSet struct {
 // left out, factor 0).
 func (s actionSet) factor(unfavourable, variable bool) float64 {
 	switch {
+	case s.allowable:
+		return 1 // the allowable basis takes every action as it is
 	case unfavourable && variable:
 		return s.gQ
 	case unfavourable:
@@ -134,7 +137,7 @@ func (b Basis) equSet() actionSet {
 	set := actionSet{
 		terse: b.Terse,
 		gG:    def(b.GammaGdst, 1.1), gGfav: def(b.GammaGstb, 0.9), gQ: def(b.GammaQdst, 1.5),
-		gPhi: def(b.GammaPhi, 1.25), gC: def(b.GammaC, 1.25), gRh: 1, gRv: 1, gRe: 1,
+		gPhi: def(b.GammaPhi, 1.25), gC: def(b.GammaC, 1.25), gCu: def(b.GammaCu, 1.4), gRh: 1, gRv: 1, gRe: 1,
 	}
 	if !b.Terse {
 		set.label = fmt.Sprintf("EN 1997-1 Annex A, EQU (γG,dst %.2f, γG,stb %.2f, γQ,dst %.2f; M2 γφ' %.2f, γc' %.2f)",
@@ -162,23 +165,23 @@ func (b Basis) geoSetsLabelled() []actionSet {
 		p, c := def(b.GammaPhi, 1.25), def(b.GammaC, 1.25)
 		return []actionSet{
 			{label: fmt.Sprintf("EN 1997-1 Annex A, DA1 combination 1 (A1 γG %.2f, γQ %.2f; M1; R1 γR,h %.2f, γR,v %.2f, γR,e %.2f)", g1, q1, rh, rv, re),
-				gG: g1, gGfav: 1, gQ: q1, gPhi: 1, gC: 1, gRh: rh, gRv: rv, gRe: re},
+				gG: g1, gGfav: 1, gQ: q1, gPhi: 1, gC: 1, gCu: 1, gRh: rh, gRv: rv, gRe: re},
 			{label: fmt.Sprintf("EN 1997-1 Annex A, DA1 combination 2 (A2 γG %.2f, γQ %.2f; M2 γφ' %.2f, γc' %.2f; R1)", g2, q2, p, c),
-				gG: g2, gGfav: 1, gQ: q2, gPhi: p, gC: c, gRh: rh, gRv: rv, gRe: re},
+				gG: g2, gGfav: 1, gQ: q2, gPhi: p, gC: c, gCu: def(b.GammaCu, 1.4), gRh: rh, gRv: rv, gRe: re},
 		}
 	}
 	g, q := def(b.GammaG, 1.35), def(b.GammaQ, 1.5)
 	rh, rv, re := def(b.GammaRh, 1.1), def(b.GammaRv, 1.4), def(b.GammaRe, 1.4)
 	return []actionSet{{
 		label: fmt.Sprintf("EN 1997-1 Annex A, DA2 (A1 γG %.2f, γQ %.2f; M1; R2 γR,h %.2f, γR,v %.2f, γR,e %.2f)", g, q, rh, rv, re),
-		gG:    g, gGfav: 1, gQ: q, gPhi: 1, gC: 1, gRh: rh, gRv: rv, gRe: re,
+		gG:    g, gGfav: 1, gQ: q, gPhi: 1, gC: 1, gCu: 1, gRh: rh, gRv: rv, gRe: re,
 	}}
 }
 
 // allowableSet returns unit factors for the allowable basis: actions and
 // strengths characteristic.
 func (b Basis) allowableSet() actionSet {
-	return actionSet{gG: 1, gGfav: 1, gQ: 1, gPhi: 1, gC: 1, gRh: 1, gRv: 1, gRe: 1, allowable: true, terse: b.Terse}
+	return actionSet{gG: 1, gGfav: 1, gQ: 1, gPhi: 1, gC: 1, gCu: 1, gRh: 1, gRv: 1, gRe: 1, allowable: true, terse: b.Terse}
 }
 
 // fsNote describes a global factor of safety.

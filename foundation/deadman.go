@@ -145,7 +145,7 @@ func (d Deadman) Check(pulls []Pull, s Soil, b *Basis) ([]check.Result, error) {
 	weight := gd*plan*float64(d.Height) + float64(s.UnitWeight)*plan*float64(d.Depth-d.Height)
 
 	pullout := func(set actionSet, fs float64) (check.Result, error) {
-		sd := s.factored(set.gPhi, set.gC)
+		sd := s.factored(set)
 		t, how, err := d.Resistance(sd)
 		if err != nil {
 			return check.Result{}, err

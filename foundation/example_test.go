@@ -80,7 +80,7 @@ func ExampleAnchorBlock_Check() {
 	// anchor.sliding         provided  0.98 required 1.00 ratio 1.023 FAIL
 	// anchor.overturning     provided  1.99 required 1.00 ratio 0.503 pass
 	// anchor.uplift          provided  4.22 required 1.00 ratio 0.237 pass
-	// anchor.bearing         63.63 kPa of 650.9 kPa ratio 0.098 pass
+	// anchor.bearing         51.43 kPa of 227.3 kPa ratio 0.226 pass
 }
 
 func ExampleDeadman_Check() {

@@ -15,9 +15,13 @@ type Footing struct {
 	// B is the side along the bridge (x), L the side across it.
 	B, L units.Length
 	// Thickness of the pad; Depth of its base below ground. Soil over the
-	// pad (Depth − Thickness, over the whole plan area, the column's
-	// footprint neglected) is counted as weight.
+	// pad (Depth − Thickness, over the plan area less Footprint) is counted
+	// as weight.
 	Thickness, Depth units.Length
+	// Footprint is the plan area of the column standing on the pad, where
+	// there is no soil cover (its weight comes with the load); zero means
+	// none.
+	Footprint units.Area
 	// UnitWeight of the pad; zero → ConcreteUnitWeight (24 kN/m³).
 	UnitWeight units.UnitWeight
 	// Groundwater is true when the water table lies WaterDepth below
@@ -63,20 +67,36 @@ func (ld FootingLoad) variable() (v, h, m float64) {
 // component x of which q is variable: the permanent part x − q and the
 // variable part q are each factored as unfavourable when they act in
 // direction d and as favourable otherwise (a favourable variable part
-// counts zero), and the sum is projected on d.
+// counts zero), and the sum is projected on d. This treats the favourable
+// and unfavourable parts of the load as individual actions, as EN 1990
+// Table A2.4(A) asks for static equilibrium (EQU; from memory).
 func (s actionSet) design(x, q, d float64) float64 {
 	p := x - q
 	return d * (s.factor(p*d > 0, false)*p + s.factor(q*d > 0, true)*q)
 }
 
-// worst returns the larger design effect of a component over both
-// directions, and that direction.
-func (s actionSet) worst(x, q float64) (effect, dir float64) {
-	plus, minus := s.design(x, q, 1), s.design(x, q, -1)
-	if minus > plus {
-		return minus, -1
+// loadState is the tower load with its partial factors applied: one
+// factor on every component of the permanent part (one source, EN 1990
+// 6.4.3.1(4) note, from memory) and one on every component of the
+// variable part (present or absent as a whole).
+type loadState struct{ v, h, m float64 }
+
+// states returns the design load states to try: on the allowable basis the
+// load as given; on a partial-factor set, the permanent part unfavourable
+// or favourable with the variable part present or absent.
+func (s actionSet) states(ld FootingLoad) []loadState {
+	if s.allowable {
+		return []loadState{{float64(ld.Vertical), float64(ld.Horizontal), float64(ld.Moment)}}
 	}
-	return plus, 1
+	qv, qh, qm := ld.variable()
+	pv, ph, pm := float64(ld.Vertical)-qv, float64(ld.Horizontal)-qh, float64(ld.Moment)-qm
+	var out []loadState
+	for _, gp := range []float64{s.gG, s.gGfav} {
+		for _, gq := range []float64{s.gQ, 0} {
+			out = append(out, loadState{gp*pv + gq*qv, gp*ph + gq*qh, gp*pm + gq*qm})
+		}
+	}
+	return out
 }
 
 func (f Footing) validate() error {
@@ -121,11 +141,6 @@ func (ld FootingLoad) validate() error {
 	return fraction("FootingLoad.VariableShare", ld.VariableShare)
 }
 
-// factorOf returns the factor on a load of which share is variable.
-func (s actionSet) factorOf(unfavourable bool, share float64) float64 {
-	return (1-share)*s.factor(unfavourable, false) + share*s.factor(unfavourable, true)
-}
-
 // Check verifies the footing under the tower load on soil s with the
 // bearing-capacity method m, with result IDs "footing.bearing",
 // "footing.sliding" and "footing.overturning".
@@ -139,10 +154,13 @@ func (s actionSet) factorOf(unfavourable bool, share float64) float64 {
 //	overturning: about the base edge the moment turns toward:
 //	             driving |M| (+ |V|·B/2 when V pulls up), resisting (W + V⁺)·B/2
 //
-// Allowable basis: factors of safety 3.0 (bearing), 1.5 (sliding), 2.0
-// (overturning) unless set in b. Partial basis: overturning in EQU,
-// sliding and bearing in GEO by the chosen design approach, the vertical
-// load taken both unfavourable and favourable; the worse is reported.
+// Allowable basis: the load as given, factors of safety 3.0 (bearing),
+// 1.5 (sliding), 2.0 (overturning) unless set in b. Partial basis:
+// overturning in EQU, sliding and bearing in GEO by the chosen design
+// approach, each under every load state (the permanent part of the tower
+// load unfavourable or favourable, its variable part present or absent,
+// and for bearing the pad's weight unfavourable or favourable); the worst
+// is reported.
 //
 // Special cases: no horizontal load or moment gives a provided factor of
 // +Inf; a resultant outside the base fails bearing with a note; N ≤ 0
@@ -173,9 +191,20 @@ func (f Footing) AppendCheck(dst []check.Result, load FootingLoad, s Soil, m Met
 	}
 	ld := AnchorBlock{Length: f.B, Width: f.L, Height: f.Thickness, Depth: f.Depth, UnitWeight: f.UnitWeight,
 		Groundwater: f.Groundwater, WaterDepth: f.WaterDepth}.loads(s)
+	if f.Footprint > 0 {
+		// No soil cover where the column stands: take its share off the
+		// cover, which lies uniformly over the plan.
+		gc := float64(f.UnitWeight)
+		if gc == 0 {
+			gc = float64(ConcreteUnitWeight)
+		}
+		plan := float64(f.B) * float64(f.L)
+		cover := ld.weight - gc*plan*float64(f.Thickness)
+		ld.weight -= cover * math.Min(float64(f.Footprint)/plan, 1)
+	}
 	if !bs.PartialFactors {
 		set := bs.allowableSet()
-		bear, err := f.bearing(load, s, m, ld, set, false, def(bs.Bearing, 3))
+		bear, err := f.bearing(load, s, m, ld, set, def(bs.Bearing, 3))
 		if err != nil {
 			return nil, err
 		}
@@ -183,74 +212,96 @@ func (f Footing) AppendCheck(dst []check.Result, load FootingLoad, s Soil, m Met
 			f.overturning(load, ld, set, def(bs.Overturning, 2))), nil
 	}
 	var bear, slide check.Result
-	first := true
-	for _, set := range bs.geoSets() {
+	for i, set := range bs.geoSets() {
 		r := f.sliding(load, s, ld, set, 1)
-		if first || r.Ratio > slide.Ratio {
+		if i == 0 || r.Ratio > slide.Ratio {
 			slide = r
 		}
-		for _, fav := range []bool{false, true} {
-			r, err := f.bearing(load, s, m, ld, set, fav, 1)
-			if err != nil {
-				return nil, err
-			}
-			if first || r.Ratio > bear.Ratio {
-				bear = r
-			}
-			first = false
+		r, err := f.bearing(load, s, m, ld, set, 1)
+		if err != nil {
+			return nil, err
+		}
+		if i == 0 || r.Ratio > bear.Ratio {
+			bear = r
 		}
 	}
 	return append(dst, bear, slide, f.overturning(load, ld, bs.equSet(), 1)), nil
 }
 
-func (f Footing) bearing(load FootingLoad, s Soil, m Method, ld blockLoads, set actionSet, favourable bool, fs float64) (check.Result, error) {
+// bearing checks the base pressure under every design load state and
+// weight factor (the pad and its cover unfavourable or favourable) and
+// keeps the worst.
+func (f Footing) bearing(load FootingLoad, s Soil, m Method, ld blockLoads, set actionSet, fs float64) (check.Result, error) {
 	const id, title = "footing.bearing", "Footing bearing pressure"
-	qv, qh, qm := load.variable()
-	// Downward load presses on the base: unfavourable for bearing, or
-	// favourable in the run that takes it so.
-	down := set.design(float64(load.Vertical), qv, 1)
-	if favourable {
-		down = -set.design(float64(load.Vertical), qv, -1)
-	}
-	n := set.gG*(ld.weight-ld.buoyancy) + down
-	h, _ := set.worst(float64(load.Horizontal), qh)
-	mo, dir := set.worst(float64(load.Moment), qm)
-	mo *= dir
 	basis := bearingBasis(set, s, fs)
-	if n <= 0 {
-		return set.note(check.Compare(id, title, units.KindPressure, 0, 0).WithBasis(basis),
-			"net uplift: the footing lifts off its base"), nil
+	weights := []float64{set.gG}
+	if set.gGfav != set.gG {
+		weights = append(weights, set.gGfav)
 	}
-	return baseBearing(id, title, basis, f.B, f.L, f.Depth, f.Groundwater, f.WaterDepth,
-		units.Force(n), units.Force(math.Max(h, 0)), units.Length(mo/n), s, m, set, fs)
+	var worst check.Result
+	first := true
+	for _, st := range set.states(load) {
+		for _, gw := range weights {
+			n := gw*(ld.weight-ld.buoyancy) + st.v
+			var r check.Result
+			if n <= 0 {
+				r = set.note(check.Compare(id, title, units.KindPressure, 0, 0).WithBasis(basis),
+					"net uplift: the footing lifts off its base")
+			} else {
+				var err error
+				r, err = baseBearing(id, title, basis, f.B, f.L, f.Depth, f.Groundwater, f.WaterDepth,
+					units.Force(n), units.Force(math.Abs(st.h)), units.Length(st.m/n), s, m, set, fs)
+				if err != nil {
+					return check.Result{}, err
+				}
+			}
+			if first || r.Ratio > worst.Ratio {
+				worst, first = r, false
+			}
+		}
+	}
+	return worst, nil
 }
 
+// sliding checks base friction under every design load state, the pad's
+// weight favourable, and keeps the worst.
 func (f Footing) sliding(load FootingLoad, s Soil, ld blockLoads, set actionSet, fs float64) check.Result {
-	qv, qh, _ := load.variable()
-	sd := s.factored(set.gPhi, set.gC)
-	// The downward load holds the footing: favourable.
-	n := set.gGfav*ld.weight - set.gG*ld.buoyancy - set.design(float64(load.Vertical), qv, -1)
+	sd := s.factored(set)
 	tanD := math.Tan(float64(sd.InterfaceFriction()))
-	drive, _ := set.worst(float64(load.Horizontal), qh)
-	r := check.Stability("footing.sliding", "Footing sliding", units.KindForce, math.Max(drive, 0), math.Max(n, 0)*tanD/set.gRh, fs).
-		WithBasis(basisOf(set, "base friction", fs))
-	if set.terse {
-		return r
+	var worst check.Result
+	var normal float64
+	for i, st := range set.states(load) {
+		n := set.gGfav*ld.weight - set.gG*ld.buoyancy + st.v
+		r := check.Stability("footing.sliding", "Footing sliding", units.KindForce, math.Abs(st.h), math.Max(n, 0)*tanD/set.gRh, fs)
+		if i == 0 || r.Ratio > worst.Ratio {
+			worst, normal = r, n
+		}
 	}
-	return r.WithNote(fmt.Sprintf("base friction angle δ = %v on normal force %v; cohesion and passive resistance ignored",
-		sd.InterfaceFriction(), units.Force(n)))
+	worst = worst.WithBasis(basisOf(set, "base friction", fs))
+	if set.terse {
+		return worst
+	}
+	return worst.WithNote(fmt.Sprintf("base friction angle δ = %v on normal force %v; cohesion and passive resistance ignored",
+		sd.InterfaceFriction(), units.Force(normal)))
 }
 
+// overturning checks the moment about the base edge the load turns the
+// footing toward. On the allowable basis the load is taken as given; in
+// EQU each part of each component is factored by the side it acts on
+// (destabilising moment parts unfavourable, a downward load favourable),
+// the favourable and unfavourable parts counting as individual actions.
 func (f Footing) overturning(load FootingLoad, ld blockLoads, set actionSet, fs float64) check.Result {
-	qv, _, qm := load.variable()
 	half := float64(f.B) / 2
-	mo, _ := set.worst(float64(load.Moment), qm)
+	qv, _, qm := load.variable()
+	v, mx := float64(load.Vertical), float64(load.Moment)
+	mo := math.Max(set.design(mx, qm, 1), set.design(mx, qm, -1))
+	down := -set.design(v, qv, -1) // downward parts favourable, upward unfavourable
+	if set.allowable {
+		mo, down = math.Abs(mx), v
+	}
 	dst := math.Max(mo, 0) + set.gG*ld.buoyancy*half
 	stb := set.gGfav * ld.weight * half
-	// The vertical load restores when it presses down and overturns when
-	// it pulls up; each part is factored as favourable when it presses
-	// down (the net factored value then decides the side).
-	if down := -set.design(float64(load.Vertical), qv, -1); down >= 0 {
+	if down >= 0 {
 		stb += down * half
 	} else {
 		dst -= down * half

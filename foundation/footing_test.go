@@ -212,9 +212,12 @@ func TestSplitOpposingMoment(t *testing.T) {
 	if !(res2[2].Demand < over.Demand) {
 		t.Errorf("shared-factor moment %v is not below the split %v", res2[2].Demand, over.Demand)
 	}
-	// On the allowable basis the split changes nothing.
-	a, _ := f.Check(load, soil, foundation.Vesic, nil)
-	b, _ := f.Check(foundation.FootingLoad{Moment: -17.30e3}, soil, foundation.Vesic, nil)
+	// On the allowable basis the split changes nothing, whatever the
+	// parts' signs: every action is taken as it is.
+	mixed := foundation.FootingLoad{Vertical: 800e3, Horizontal: 150e3, Moment: 300e3, Split: true,
+		VariableVertical: 200e3, VariableHorizontal: -100e3, VariableMoment: -50e3}
+	a, _ := f.Check(mixed, soil, foundation.Vesic, nil)
+	b, _ := f.Check(foundation.FootingLoad{Vertical: 800e3, Horizontal: 150e3, Moment: 300e3}, soil, foundation.Vesic, nil)
 	for i := range a {
 		if a[i].Demand != b[i].Demand || a[i].Capacity != b[i].Capacity {
 			t.Errorf("allowable %s: split %v/%v, plain %v/%v", a[i].ID, a[i].Demand, a[i].Capacity, b[i].Demand, b[i].Capacity)

@@ -166,3 +166,8 @@ func (r RockAnchor) Check(pull units.Force, angle units.Angle, s Soil, b *Basis)
 			WithBasis(equ.label).WithNote(notes),
 	}, nil
 }
+
+// factorOf returns the factor on a load of which share is variable.
+func (s actionSet) factorOf(unfavourable bool, share float64) float64 {
+	return (1-share)*s.factor(unfavourable, false) + share*s.factor(unfavourable, true)
+}

@@ -103,14 +103,20 @@ func (s Soil) InterfaceFriction() units.Angle {
 	return units.Angle(k) * s.Friction
 }
 
-// factored returns s with its strength divided by partial factors:
+// factored returns s with its strength divided by the set's partial
+// factors:
 //
-//	tan φ'd = tan φ' / γφ,   c'd = c' / γc
+//	tan φ'd = tan φ' / γφ,   c'd = c' / γc,   cu,d = cu / γcu (Friction zero)
 //
-// (EN 1997-1 cl. 2.4.6.2, set M2 values in Annex A.)
-func (s Soil) factored(gPhi, gC float64) Soil {
-	s.Friction = units.Angle(math.Atan(math.Tan(float64(s.Friction)) / gPhi))
-	s.Cohesion /= units.Pressure(gC)
+// (EN 1997-1 cl. 2.4.6.2, set M2 values in Annex A: γφ' 1.25, γc' 1.25,
+// γcu 1.4.)
+func (s Soil) factored(set actionSet) Soil {
+	if s.Friction == 0 {
+		s.Cohesion /= units.Pressure(set.gCu)
+		return s
+	}
+	s.Friction = units.Angle(math.Atan(math.Tan(float64(s.Friction)) / set.gPhi))
+	s.Cohesion /= units.Pressure(set.gC)
 	return s
 }
 

@@ -172,6 +172,7 @@ func (t Tube) slenderness() float64 {
 // resistance, with a note on the section class or compactness.
 type tubeCaps struct {
 	pc, pt, mc float64 // design buckling, design squash/tension, design moment
+	mcb        float64 // EN 1993: moment resistance with γM1, for eq. 6.61
 	chi, lam   float64 // EN: χ and λ̄; AISC: Fcr/Fy and Lc/r
 	class      int     // EN section class; AISC 1 compact, 2 noncompact
 }
@@ -217,6 +218,7 @@ func (t Tube) caps(lc float64) (tubeCaps, error) {
 			mn = math.Min(mn, mp)
 		}
 		c.mc = 0.90 * mn
+		c.mcb = c.mc
 		return c, nil
 	}
 	// EN 1993-1-1 Table 5.2 (from memory): ε = √(235/fy).
@@ -252,7 +254,8 @@ func (t Tube) caps(lc float64) (tubeCaps, error) {
 	c.chi, c.lam = ChiEN1993(lam, alpha), lam
 	c.pc = c.chi * a * fy / g1
 	c.pt = a * fy / g0
-	c.mc = wmod * fy / g0
+	c.mc = wmod * fy / g0  // cross-section resistance, 6.2 (γM0)
+	c.mcb = wmod * fy / g1 // member resistance in 6.3.3 eq. 6.61 (γM1)
 	return c, nil
 }
 
@@ -361,7 +364,7 @@ func (t Tube) Check(n units.Force, m units.Moment, effLength units.Length) (chec
 			} else {
 				k = math.Min(1+0.6*c.lam*nr, 1+0.6*nr)
 			}
-			u = math.Max(lin, nr+k*mm/c.mc)
+			u = math.Max(lin, nr+k*mm/c.mcb)
 		}
 		curve := "a (hot-finished)"
 		if t.ColdFormed {

@@ -143,6 +143,17 @@ func TestTubeCheck(t *testing.T) {
 	if err != nil || !near(got.Demand, want, 1e-9) {
 		t.Errorf("EN 6.61: %+v (%v), want %g", got, err, want)
 	}
+	// With γM1 = 1.1 (γM0 1.0) eq. 6.61 divides both N_Rk and M_Rk by γM1
+	// (EN 1993-1-1 6.3.3(4)): N_Ed/(χN_Rk/γM1) + k M_Ed/(M_Rk/γM1), k with
+	// n = N_Ed/(χ N_Rk/γM1).
+	m1 := chs
+	m1.GammaM1 = 1.1
+	n1 := 0.4 * 1.1
+	k1 := math.Min(1+(lam-0.2)*n1, 1+0.8*n1)
+	g1, err := m1.Check(units.Force(ned), units.Moment(med), 6)
+	if want1 := n1 + k1*0.3*1.1; err != nil || !near(g1.Demand, want1, 1e-9) {
+		t.Errorf("EN 6.61, γM1 1.1: %+v (%v), want %g", g1, err, want1)
+	}
 	// Cold-formed (curve c) is weaker in buckling.
 	cf := chs
 	cf.ColdFormed = true
