@@ -1,0 +1,64 @@
+package main
+
+import (
+	"bytes"
+	"encoding/json"
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+func TestRun(t *testing.T) {
+	var out, errOut bytes.Buffer
+	if code := run(nil, &out, &errOut); code != 0 {
+		t.Fatalf("demo: exit %d, stderr %s", code, errOut.String())
+	}
+	if !strings.Contains(out.String(), "never replace") || !strings.Contains(out.String(), "Erection table") {
+		t.Error("the text report lacks the caution or the erection table")
+	}
+
+	out.Reset()
+	if code := run([]string{"-format", "json"}, &out, &errOut); code != 0 {
+		t.Fatalf("json: exit %d", code)
+	}
+	var doc map[string]any
+	if err := json.Unmarshal(out.Bytes(), &doc); err != nil {
+		t.Fatalf("json output does not parse: %v", err)
+	}
+
+	dir := t.TempDir()
+	bad := filepath.Join(dir, "bad.json")
+	if err := os.WriteFile(bad, []byte(`{"site": {"span": "-3 m"}}`), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	errOut.Reset()
+	if code := run([]string{bad}, &out, &errOut); code != 1 || !strings.Contains(errOut.String(), "site.span") {
+		t.Errorf("bad description: exit %d, stderr %q", code, errOut.String())
+	}
+	if code := run([]string{"-format", "pdf"}, &out, &errOut); code != 1 {
+		t.Errorf("unknown format: exit %d", code)
+	}
+
+	// A bridge that fails a check exits 2.
+	out.Reset()
+	if code := run([]string{"-demo-json"}, &out, &errOut); code != 0 {
+		t.Fatal("demo-json failed")
+	}
+	failing := strings.Replace(out.String(), `"count": 6`, `"count": 1`, 1)
+	path := filepath.Join(dir, "thin.json")
+	if err := os.WriteFile(path, []byte(failing), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	if code := run([]string{path}, &out, &errOut); code != 2 {
+		t.Errorf("a bridge with one walkway rope: exit %d, want 2", code)
+	}
+
+	svg := filepath.Join(dir, "b.svg")
+	if code := run([]string{"-svg", svg}, &out, &errOut); code != 0 {
+		t.Fatalf("svg: exit %d", code)
+	}
+	if b, err := os.ReadFile(svg); err != nil || !bytes.Contains(b, []byte("<svg")) {
+		t.Errorf("no SVG written: %v", err)
+	}
+}
