@@ -314,6 +314,28 @@ func (a AnchorBlock) AppendCheck(dst []check.Result, pulls []Pull, s Soil, b *Ba
 	return append(dst, slide, over, lift, bear), nil
 }
 
+// baseShear returns the shear resistance of a base of area area under
+// normal force n: n tan δ on a soil with friction, or, on an undrained soil
+// (no friction angle), A cu on the base, EN 1997-1 6.5.3(12) (from memory;
+// the effective area is taken as the whole base).
+func baseShear(n, tanD float64, s Soil, area float64) float64 {
+	if s.Friction == 0 {
+		if n <= 0 {
+			return 0
+		}
+		return area * float64(s.Cohesion)
+	}
+	return math.Max(n, 0) * tanD
+}
+
+// shearNote describes the base shear resistance baseShear used.
+func shearNote(s Soil, n float64, ignored string) string {
+	if s.Friction == 0 {
+		return fmt.Sprintf("undrained: cu %v over the whole base", s.Cohesion)
+	}
+	return fmt.Sprintf("base friction angle δ = %v on normal force %v; %s", s.InterfaceFriction(), units.Force(n), ignored)
+}
+
 // note returns r with the note appended, or r as it is on a terse basis.
 func (set actionSet) note(r check.Result, note string) check.Result {
 	if set.terse {
@@ -344,7 +366,7 @@ func (a AnchorBlock) sliding(pulls []Pull, s Soil, ld blockLoads, set actionSet,
 	}
 	n := set.gGfav*ld.weight - set.gG*ld.buoyancy - fz
 	tanD := math.Tan(float64(sd.InterfaceFriction()))
-	res := math.Max(n, 0) * tanD / set.gRh
+	res := baseShear(n, tanD, sd, float64(a.Length)*float64(a.Width)) / set.gRh
 	drive := fx
 	mu := a.PassiveMobilisation
 	var notes []string
@@ -365,7 +387,7 @@ func (a AnchorBlock) sliding(pulls []Pull, s Soil, ld blockLoads, set actionSet,
 	if set.terse {
 		return r, nil
 	}
-	r = r.WithNote(fmt.Sprintf("base friction angle δ = %v on normal force %v; cohesion ignored", sd.InterfaceFriction(), units.Force(n)))
+	r = r.WithNote(shearNote(sd, n, "cohesion ignored"))
 	for _, n := range notes {
 		r = r.WithNote(n)
 	}

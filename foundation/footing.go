@@ -272,7 +272,8 @@ func (f Footing) sliding(load FootingLoad, s Soil, ld blockLoads, set actionSet,
 	var normal float64
 	for i, st := range set.states(load) {
 		n := set.gGfav*ld.weight - set.gG*ld.buoyancy + st.v
-		r := check.Stability("footing.sliding", "Footing sliding", units.KindForce, math.Abs(st.h), math.Max(n, 0)*tanD/set.gRh, fs)
+		res := baseShear(n, tanD, sd, float64(f.B)*float64(f.L)) / set.gRh
+		r := check.Stability("footing.sliding", "Footing sliding", units.KindForce, math.Abs(st.h), res, fs)
 		if i == 0 || r.Ratio > worst.Ratio {
 			worst, normal = r, n
 		}
@@ -281,8 +282,7 @@ func (f Footing) sliding(load FootingLoad, s Soil, ld blockLoads, set actionSet,
 	if set.terse {
 		return worst
 	}
-	return worst.WithNote(fmt.Sprintf("base friction angle δ = %v on normal force %v; cohesion and passive resistance ignored",
-		sd.InterfaceFriction(), units.Force(normal)))
+	return worst.WithNote(shearNote(sd, normal, "cohesion and passive resistance ignored"))
 }
 
 // overturning checks the moment about the base edge the load turns the

@@ -224,3 +224,20 @@ func TestSplitOpposingMoment(t *testing.T) {
 		}
 	}
 }
+
+// TestUndrainedSliding: on a soil with no friction angle the base resists
+// sliding by A·cu (EN 1997-1 6.5.3(12), from memory): 2 m × 2 m × 40 kPa =
+// 160 kN against 40 kN, factor 4.
+func TestUndrainedSliding(t *testing.T) {
+	clay := foundation.Soil{Name: "undrained clay", UnitWeight: 18 * units.KilonewtonPerCubicMetre, Cohesion: 40 * units.Kilopascal}
+	f := foundation.Footing{B: 2, L: 2, Thickness: 0.6, Depth: 1}
+	rs, err := f.Check(foundation.FootingLoad{Vertical: 300e3, Horizontal: 40e3}, clay, foundation.Terzaghi, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, r := range rs {
+		if r.ID == "footing.sliding" && math.Abs(r.Provided-4) > 1e-12 {
+			t.Errorf("undrained sliding factor %v, want 4", r.Provided)
+		}
+	}
+}
