@@ -1,8 +1,6 @@
 package cable
 
 import (
-	"math"
-
 	"github.com/sagspan/sagspan/units"
 )
 
@@ -182,21 +180,7 @@ func arcLengthDH(xs, qs []float64, c0, h float64) (length, deriv float64) {
 		sum := p0 + p1
 		// means over [p0, p1] of √(1+p²), p/√(1+p²) and p²/√(1+p²)
 		first := (a1+a0)/2 + sum*sum/(2*(a1+a0))
-		var asm float64
-		d := p1 - p0
-		switch {
-		case d == 0:
-			asm = 1 / a0
-		case p0*p1 <= 0:
-			asm = asinh(p1*a0-p0*a1) / d
-		default:
-			x := d * sum / (p1*a0 + p0*a1)
-			if math.Abs(x) < 1e-8 {
-				asm = sum / (p1*a0 + p0*a1) * (1 - x*x/6)
-			} else {
-				asm = asinh(x) / d
-			}
-		}
+		asm := asinhSlope(p0, p1, a0, a1, p1-p0)
 		meanP := sum / (a0 + a1)
 		length += dx * (first + asm) / 2
 		deriv += dx * (c0*meanP - (first-asm)/2)

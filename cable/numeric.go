@@ -63,21 +63,26 @@ func arcMean(s0, s1, d float64) float64 {
 	a0, a1 := sqrt1p(s0), sqrt1p(s1)
 	sum := s1 + s0
 	first := (a1+a0)/2 + sum*sum/(2*(a1+a0))
-	var second float64
+	return (first + asinhSlope(s0, s1, a0, a1, d)) / 2
+}
+
+// asinhSlope returns (asinh s1 − asinh s0)/d, d = s1 − s0, a = √(1+s²),
+// without cancellation: the difference taken by the asinh addition
+// formula, its small-argument series near d = 0, and 1/a0 at d = 0 (the
+// derivative).
+func asinhSlope(s0, s1, a0, a1, d float64) float64 {
 	switch {
 	case d == 0:
-		second = 1 / a0
+		return 1 / a0
 	case s0*s1 <= 0:
-		second = asinh(s1*a0-s0*a1) / d
-	default:
-		x := d * sum / (s1*a0 + s0*a1)
-		if math.Abs(x) < 1e-8 {
-			second = sum / (s1*a0 + s0*a1) * (1 - x*x/6)
-		} else {
-			second = asinh(x) / d
-		}
+		return asinh(s1*a0-s0*a1) / d
 	}
-	return (first + second) / 2
+	sum := s0 + s1
+	x := d * sum / (s1*a0 + s0*a1)
+	if math.Abs(x) < 1e-8 {
+		return sum / (s1*a0 + s0*a1) * (1 - x*x/6)
+	}
+	return asinh(x) / d
 }
 
 // lnSinh returns ln(sinh x) for x > 0 without overflow.
