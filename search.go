@@ -379,7 +379,7 @@ func Search(ctx context.Context, b Bridge, space SearchSpace, settings *SearchSe
 // invalid returns a failing result that rules a candidate out because it
 // cannot be analysed.
 func invalid(err error) scorer {
-	r := check.Value("search.invalid", "Candidate cannot be analysed", units.KindRatio, 0).WithNote(err.Error())
+	r := check.Record("search.invalid", "Candidate cannot be analysed", units.KindRatio, 0).WithNote(err.Error())
 	r.Status, r.Ratio = check.Fail, math.Inf(1)
 	return scorer{failed: true, worst: r, max: math.Inf(1), has: true}
 }

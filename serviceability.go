@@ -68,7 +68,7 @@ const comfortBasis = "Irvine–Caughey linear theory of a sagging cable (from me
 	"comfort check below 5 Hz vertical and 2.5 Hz lateral (from memory)"
 
 func comfort(id, title string, f units.Frequency, ranges [][2]float64, strict bool) check.Result {
-	r := check.Value(id, title, units.KindFrequency, float64(f)).For("span", "permanent").WithBasis(comfortBasis)
+	r := check.Record(id, title, units.KindFrequency, float64(f)).For("span", "permanent").WithBasis(comfortBasis)
 	for _, rg := range ranges {
 		if float64(f) >= rg[0] && float64(f) <= rg[1] {
 			r.Status = check.Flag

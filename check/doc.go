@@ -4,9 +4,16 @@
 // and renders them as aligned text, Markdown and JSON.
 //
 // Convention: ratio = demand / capacity, and a ratio of at most 1 passes.
-// Stability checks with a required factor of safety put the factor on the
-// demand side (demand = required factor × driving action, capacity =
-// resisting action) and also report the factor provided, resisting/driving.
+// Stability checks speak in their own terms: demand is the driving action,
+// capacity the resisting action, and the factor of safety provided
+// (resisting/driving) is set against the one required, ratio =
+// required/provided. A result that only reports a value (Record) has no
+// capacity and no ratio.
+//
+// Every result carries its named intermediate quantities as Values
+// (symbol, meaning, SI value, kind), so that a program can tabulate the
+// terms of any check by name without knowing the check and without
+// parsing its notes. Notes are kept for what is not a number.
 //
 // Values are held in SI (see package units) with their units.Kind, and are
 // formatted only when rendered.

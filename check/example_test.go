@@ -52,3 +52,25 @@ func ExampleReport_Governing() {
 	// |---|---|---|---|---|---|---|---|
 	// | cable.tension | ropes | crowd full | 90.00 kN | 100.0 kN | 0.900 |  | pass |
 }
+
+func ExampleResult_Value() {
+	// A program reads a check's intermediate quantities by symbol, without
+	// knowing the check or parsing its notes.
+	r := check.Compare("anchor.bearing", "Anchor bearing", units.KindPressure, 80e3, 335e3).
+		WithValues(
+			check.Of("N", "normal force on the base", units.Force(1.408e6)),
+			check.Of("e", "eccentricity of the base reaction", units.Length(0.4835)),
+		)
+	if e, ok := r.Value("e"); ok {
+		fmt.Printf("%s: %.4f %s\n", e.Meaning, e.Value, e.Kind.SI())
+	}
+	for _, v := range r.Values {
+		fmt.Println(v)
+	}
+	fmt.Println(r)
+	// Output:
+	// eccentricity of the base reaction: 0.4835 m
+	// N = 1408 kN (normal force on the base)
+	// e = 483.5 mm (eccentricity of the base reaction)
+	// anchor.bearing: 80.00 kPa against 335.0 kPa, ratio 0.239, pass
+}

@@ -93,12 +93,12 @@ func (r Report) Failures() []Result {
 }
 
 // Worst returns the governing result with the highest ratio among those
-// that carry a limit (not Info), and false when there is none.
+// that carry a limit (not NoLimit), and false when there is none.
 func (r Report) Worst() (Result, bool) {
 	var worst Result
 	found := false
 	for _, res := range r.Results {
-		if res.Status == Info {
+		if res.NoLimit {
 			continue
 		}
 		if !found || Worse(res, worst) {
@@ -141,7 +141,7 @@ var columns = []string{"Check", "Element", "Case", "Demand", "Capacity", "Ratio"
 
 func row(res Result) []string {
 	ratio := ratioString(res.Ratio)
-	if res.Status == Info {
+	if res.NoLimit {
 		ratio = ""
 	}
 	return []string{res.ID, res.Element, res.Case, res.DemandString(), res.CapacityString(),
@@ -223,6 +223,26 @@ func writeList(w io.Writer, f Format, heading string, items [][2]string) error {
 	return err
 }
 
+// details lists, for each result, its values on one line and then each
+// note.
+func details(results []Result) [][2]string {
+	var out [][2]string
+	for _, res := range results {
+		where := "(" + res.Element + ") "
+		if len(res.Values) > 0 {
+			vs := make([]string, len(res.Values))
+			for i, v := range res.Values {
+				vs[i] = v.String()
+			}
+			out = append(out, [2]string{res.ID, where + strings.Join(vs, "; ")})
+		}
+		for _, n := range res.Notes {
+			out = append(out, [2]string{res.ID, where + n})
+		}
+	}
+	return out
+}
+
 func rows(results []Result) [][]string {
 	out := make([][]string, len(results))
 	for i, res := range results {
@@ -265,13 +285,7 @@ func (r Report) write(w io.Writer, f Format, opts *RenderOptions) error {
 	if err := WriteTable(w, f, "Governing cases", columns, rows(gov)); err != nil {
 		return err
 	}
-	var notes [][2]string
-	for _, res := range gov {
-		for _, n := range res.Notes {
-			notes = append(notes, [2]string{res.ID, "(" + res.Element + ") " + n})
-		}
-	}
-	if err := writeList(w, f, "Notes", notes); err != nil {
+	if err := writeList(w, f, "Values and notes", details(gov)); err != nil {
 		return err
 	}
 	if err := writeList(w, f, "Basis", bases(gov)); err != nil {

@@ -99,7 +99,7 @@ func sampleReport() Report {
 	}
 	r.Add(Advisory("cable.frequency.vertical", "First vertical frequency", units.KindFrequency, 2.0, 1.25).
 		For("span", "permanent").WithNote("in the range walkers excite vertically"))
-	r.Add(Value("cable.sag", "Dead-load sag", units.KindLength, 2.4).For("walkway ropes", "permanent"))
+	r.Add(Record("cable.sag", "Dead-load sag", units.KindLength, 2.4).For("walkway ropes", "permanent"))
 	return r
 }
 
@@ -181,4 +181,67 @@ func TestRenderEmpty(t *testing.T) {
 	buf.Reset()
 	require.NoError(t, Report{}.WriteText(&buf, nil))
 	assert.Contains(t, buf.String(), "Overall: info")
+}
+
+func TestStabilityTerms(t *testing.T) {
+	// Driving 894 kN against resisting 1435 kN with required factor 1.5:
+	// provided 1435/894 = 1.6051, ratio 1.5/1.6051 = 0.9345 (arithmetic
+	// of the definitions in check.Stability).
+	r := Stability("anchor.sliding", "Sliding", units.KindForce, 894e3, 1435e3, 1.5)
+	assert.Equal(t, 894e3, r.Demand, "demand is the driving action, not the factored one")
+	assert.Equal(t, 1435e3, r.Capacity)
+	assert.InDelta(t, 1435.0/894, r.Provided, 1e-12)
+	assert.InDelta(t, 1.5*894/1435, r.Ratio, 1e-12)
+	assert.Equal(t, Pass, r.Status)
+	assert.Equal(t, Fail, Stability("x", "x", units.KindForce, 1000e3, 1435e3, 1.5).Status)
+	assert.Equal(t, Fail, Stability("x", "x", units.KindForce, math.NaN(), 1435e3, 1.5).Status)
+}
+
+func TestRecordHasNoLimit(t *testing.T) {
+	r := Record("bridge.frequency", "Frequency", units.KindFrequency, 0.29)
+	assert.True(t, r.NoLimit)
+	assert.Equal(t, "", r.CapacityString())
+	b, err := json.Marshal(r)
+	require.NoError(t, err)
+	assert.Contains(t, string(b), `"capacity":null`)
+	assert.Contains(t, string(b), `"ratio":null`)
+	_, found := (&Report{Results: []Result{r}}).Worst()
+	assert.False(t, found, "a value with no limit is never the worst check")
+}
+
+func TestValues(t *testing.T) {
+	r := Compare("anchor.bearing", "Bearing", units.KindPressure, 80e3, 335e3).
+		WithValues(Of("N", "normal force on the base", units.Force(1.408e6)), Of("e", "eccentricity", units.Length(0.48)))
+	r2 := r.WithValues(Of("e", "eccentricity", units.Length(0.5)), Of("m", "inclination exponent", units.Ratio(1.6)))
+	require.Len(t, r.Values, 2, "WithValues does not change its receiver")
+	require.Len(t, r2.Values, 3, "a repeated symbol replaces the value")
+	e, ok := r2.Value("e")
+	require.True(t, ok)
+	assert.Equal(t, 0.5, e.Value)
+	assert.Equal(t, units.KindLength, e.Kind)
+	_, ok = r2.Value("nothing")
+	assert.False(t, ok)
+	b, err := json.Marshal(r2)
+	require.NoError(t, err)
+	var back struct {
+		Values []struct {
+			Symbol, Meaning, Unit, Kind string
+			Value                       float64
+		}
+	}
+	require.NoError(t, json.Unmarshal(b, &back))
+	require.Len(t, back.Values, 3)
+	assert.Equal(t, "N", back.Values[0].Symbol)
+	assert.Equal(t, 1.408e6, back.Values[0].Value)
+	assert.Equal(t, "N", back.Values[0].Unit)
+	assert.Equal(t, "inclination exponent", back.Values[2].Meaning)
+	assert.Equal(t, "N = 1408 kN (normal force on the base)", r2.Values[0].String())
+}
+
+func TestResultString(t *testing.T) {
+	r := Compare("tower.eccentricity", "Eccentricity", units.KindLength, 0.07721, 0.1167).For("left tower", "crowd, left half")
+	assert.Equal(t, "tower.eccentricity, left tower, crowd, left half: 77.21 mm against 116.7 mm, ratio 0.662, pass", r.String())
+	s := Stability("anchor.sliding", "Sliding", units.KindForce, 894e3, 1435e3, 1.5).For("left anchor", "")
+	assert.Equal(t, "anchor.sliding, left anchor: driving 894.0 kN, resisting 1435 kN, factor of safety 1.61 / 1.50, ratio 0.934, pass", s.String())
+	assert.Equal(t, "f, span: 0.2900 Hz, info", Record("f", "f", units.KindFrequency, 0.29).For("span", "").String())
 }

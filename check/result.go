@@ -2,7 +2,9 @@ package check
 
 import (
 	"encoding/json"
+	"fmt"
 	"math"
+	"strings"
 
 	"github.com/sagspan/sagspan/units"
 )
@@ -17,19 +19,30 @@ type Result struct {
 	Element string
 	// Case is the load case or combination that produced the result.
 	Case string
-	// Demand and Capacity are in SI, of kind Kind.
+	// Demand and Capacity are in SI, of kind Kind. For a stability check
+	// (Required > 0) they are the driving and the resisting action.
 	Demand, Capacity float64
 	Kind             units.Kind
-	// Ratio is Demand/Capacity; at most 1 passes.
+	// Ratio is the utilisation; at most 1 passes. It is Demand/Capacity,
+	// and Required/Provided for a stability check.
 	Ratio float64
 	// Status is the verdict.
 	Status Status
+	// NoLimit marks a result that reports a value with no limit to meet
+	// (see Record): it has no capacity and no ratio, and JSON writes both
+	// as null.
+	NoLimit bool
 	// Required and Provided are the factors of safety of a stability check
-	// (zero for other checks). Provided is +Inf when nothing drives failure.
+	// (zero for other checks): Provided = resisting/driving, +Inf when
+	// nothing drives failure.
 	Required, Provided float64
 	// Basis names the method and its published source, or "common practice".
 	Basis string
-	// Notes carry anything a reader needs to trust or act on the result.
+	// Values are the check's named intermediate quantities, in the order
+	// the method meets them.
+	Values []Value
+	// Notes carry what a reader needs to trust or act on the result and
+	// that is not a number: assumptions, simplifications, advice.
 	Notes []string
 }
 
@@ -49,16 +62,20 @@ func Compare(id, title string, kind units.Kind, demand, capacity float64) Result
 }
 
 // Stability returns the result of a stability check (overturning, sliding,
-// uplift) with a required factor of safety:
+// uplift) in its own terms, with a required factor of safety:
 //
-//	demand   = required · driving
-//	capacity = resisting
+//	demand   = driving action
+//	capacity = resisting action
 //	provided = resisting / driving   (+Inf when driving <= 0)
+//	ratio    = required / provided   (utilisation; at most 1 passes)
 //
-// so that ratio = required/provided and ratio <= 1 passes.
+// Special cases as Compare: a NaN action fails with a note.
 func Stability(id, title string, kind units.Kind, driving, resisting, required float64) Result {
-	r := Compare(id, title, kind, required*driving, resisting)
-	r.Required = required
+	r := Result{ID: id, Title: title, Kind: kind, Demand: driving, Capacity: resisting, Required: required}
+	r.Ratio, r.Status = ratio(required*driving, resisting)
+	if math.IsNaN(driving) || math.IsNaN(resisting) || math.IsNaN(required) {
+		r.Notes = append(r.Notes, "driving or resisting action is not a number: the calculation behind this check is broken")
+	}
 	r.Provided = math.Inf(1)
 	if driving > 0 {
 		r.Provided = resisting / driving
@@ -76,9 +93,10 @@ func Advisory(id, title string, kind units.Kind, demand, capacity float64) Resul
 	return r
 }
 
-// Value returns an Info result reporting a value with no limit.
-func Value(id, title string, kind units.Kind, value float64) Result {
-	return Result{ID: id, Title: title, Kind: kind, Demand: value, Status: Info}
+// Record returns an Info result reporting a value with no limit: it has no
+// capacity and no ratio (NoLimit).
+func Record(id, title string, kind units.Kind, value float64) Result {
+	return Result{ID: id, Title: title, Kind: kind, Demand: value, Status: Info, NoLimit: true}
 }
 
 func ratio(demand, capacity float64) (float64, Status) {
@@ -122,13 +140,41 @@ func (r Result) Passed() bool { return r.Status != Fail }
 // engineering units.
 func (r Result) DemandString() string { return units.Format(r.Demand, r.Kind) }
 
-// CapacityString formats the capacity in engineering units; an Info result
-// has none and gives "".
+// CapacityString formats the capacity in engineering units; a result with
+// no limit has none and gives "".
 func (r Result) CapacityString() string {
-	if r.Status == Info {
+	if r.NoLimit {
 		return ""
 	}
 	return units.Format(r.Capacity, r.Kind)
+}
+
+// String formats the result on one line for people:
+//
+//	tower.eccentricity, left tower, crowd, left half: 77.21 mm against 116.7 mm, ratio 0.662, pass
+//
+// A stability check shows its driving and resisting actions and factors;
+// a result with no limit shows its value.
+func (r Result) String() string {
+	var b strings.Builder
+	b.WriteString(r.ID)
+	for _, s := range []string{r.Element, r.Case} {
+		if s != "" {
+			b.WriteString(", ")
+			b.WriteString(s)
+		}
+	}
+	b.WriteString(": ")
+	switch {
+	case r.NoLimit:
+		fmt.Fprintf(&b, "%s, %s", r.DemandString(), r.Status)
+	case r.Required != 0:
+		fmt.Fprintf(&b, "driving %s, resisting %s, factor of safety %s, ratio %s, %s",
+			r.DemandString(), r.CapacityString(), factorString(r), ratioString(r.Ratio), r.Status)
+	default:
+		fmt.Fprintf(&b, "%s against %s, ratio %s, %s", r.DemandString(), r.CapacityString(), ratioString(r.Ratio), r.Status)
+	}
+	return b.String()
 }
 
 // resultJSON is the stable JSON form of a Result: SI values with their unit,
@@ -146,6 +192,7 @@ type resultJSON struct {
 	Required *float64 `json:"required_factor,omitempty"`
 	Provided *float64 `json:"provided_factor,omitempty"`
 	Basis    string   `json:"basis,omitempty"`
+	Values   []Value  `json:"values,omitempty"`
 	Notes    []string `json:"notes,omitempty"`
 }
 
@@ -158,12 +205,16 @@ func finite(x float64) *float64 {
 }
 
 // MarshalJSON writes r with SI values; an unbounded ratio or provided
-// factor is written as null.
+// factor, and the capacity and ratio of a result with no limit, are
+// written as null.
 func (r Result) MarshalJSON() ([]byte, error) {
 	j := resultJSON{
 		ID: r.ID, Title: r.Title, Element: r.Element, Case: r.Case,
 		Demand: finite(r.Demand), Capacity: finite(r.Capacity), Unit: r.Kind.SI(),
-		Ratio: finite(r.Ratio), Status: r.Status, Basis: r.Basis, Notes: r.Notes,
+		Ratio: finite(r.Ratio), Status: r.Status, Basis: r.Basis, Values: r.Values, Notes: r.Notes,
+	}
+	if r.NoLimit {
+		j.Capacity, j.Ratio = nil, nil
 	}
 	if r.Required != 0 {
 		j.Required = finite(r.Required)

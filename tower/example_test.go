@@ -74,8 +74,8 @@ func ExampleStability() {
 	a := ft.Actions(r, col)
 	fmt.Printf("base: V %v, H %v, M %v\n", a.Vertical, a.Horizontal, a.Moment)
 	// Output:
-	// tower.overturning    191.1 kN·m 418.6 kN·m  ratio 0.457  pass
-	// tower.sliding          36.75 kN   174.4 kN  ratio 0.211  pass
+	// tower.overturning    95.55 kN·m 418.6 kN·m  ratio 0.457  pass
+	// tower.sliding          24.50 kN   174.4 kN  ratio 0.211  pass
 	// tower.base_pressure   122.4 kPa  200.0 kPa  ratio 0.612  pass
 	// tower.base_resultant   273.9 mm    1.200 m  ratio 0.228  pass
 	// base: V 348.8 kN, H 24.50 kN, M 95.55 kN·m

@@ -188,7 +188,7 @@ func Stability(r Resultant, c Column, f Footing, sf *StabilityFactors) ([]check.
 		if qa > 0 {
 			bp = check.Compare("tower.base_pressure", "Footing contact pressure", units.KindPressure, qmax, float64(qa))
 		} else {
-			bp = check.Value("tower.base_pressure", "Footing contact pressure", units.KindPressure, qmax)
+			bp = check.Record("tower.base_pressure", "Footing contact pressure", units.KindPressure, qmax)
 		}
 		bp = bp.WithBasis(pbasis).WithNote(fmt.Sprintf("e = %v %s; %s", units.Length(ae), sideOf(e), shape))
 	}
