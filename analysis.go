@@ -69,6 +69,9 @@ type GroupState struct {
 	// Saddle is the force on each tower column from this group's saddle.
 	Saddle [2]tower.LevelForce
 	shape  cable.Loaded
+	// feed is the rope rendered into the span from the backstays, a start
+	// for nearby states.
+	feed float64
 }
 
 // CaseState is the state of the whole bridge under one load case.
@@ -134,72 +137,90 @@ type reportSink struct{ rep *check.Report }
 func (s reportSink) add(r check.Result) { s.rep.Add(r) }
 
 func (m *model) run(a *Analysis, opts *Options) error {
-	var err error
-	if a.Service, a.Design, err = m.states(); err != nil {
-		return err
+	cases := m.b.Cases()
+	for _, lc := range cases {
+		svc, des, err := m.pair(lc, nil)
+		if err != nil {
+			return err
+		}
+		a.Service = append(a.Service, svc)
+		a.Design = append(a.Design, des)
 	}
+	perm := a.Service[0]
 	out := reportSink{&a.Report}
-	if err := m.superstructure(out, a.Service, a.Design); err != nil {
+	for k := range cases {
+		if err := m.checkCase(out, perm, a.Service[k], a.Design[k]); err != nil {
+			return err
+		}
+	}
+	for _, fam := range m.b.LoadedLengths() {
+		found, _, err := m.searchLength(out, perm, fam, true)
+		if err != nil {
+			return err
+		}
+		for _, p := range found {
+			a.Service = append(a.Service, p[0])
+			a.Design = append(a.Design, p[1])
+		}
+	}
+	if err := m.grooveChecks(out); err != nil {
 		return err
 	}
-	for side := Left; side <= Right; side++ {
-		bank := m.bank(side)
-		if err := m.footingChecks(out, side, bank.Tower.Footing, a.Service); err != nil {
-			return err
-		}
-		if err := m.anchorChecks(out, side, bank.Anchor, a.Service); err != nil {
-			return err
-		}
-	}
-	m.checkClearance(out, a.Service)
-	if err := m.checkFrequencies(a, a.Service[0], opts); err != nil {
+	if err := m.checkFrequencies(a, perm, opts); err != nil {
 		return err
 	}
 	return m.erection(a, opts)
 }
 
-// states analyses every load case under characteristic loads (service)
-// and under the factored loads of the partial basis (design). The first
-// case is the permanent one at the reference temperature.
-func (m *model) states() (service, design []CaseState, err error) {
-	for _, lc := range m.b.Cases() {
-		svc, err := m.analyse(lc.characteristic(m.psi))
-		if err != nil {
-			return nil, nil, err
-		}
-		des := svc
-		if dc := m.designCase(lc); dc != svc.Case {
-			if des, err = m.analyse(dc); err != nil {
-				return nil, nil, err
-			}
-		}
-		service = append(service, svc)
-		design = append(design, des)
+// checkCase adds every check of one case: rope tension, towers and column
+// sections, footings and anchors, and in the persistent situation the flood
+// clearance and the walkway gradient. perm is the permanent case, whose
+// actions the footing and anchor checks split off as permanent.
+func (m *model) checkCase(out sink, perm, svc, des CaseState) error {
+	if err := m.ropeChecks(out, svc, des, true); err != nil {
+		return err
 	}
-	return service, design, nil
+	if err := m.structureChecks(out, svc, des); err != nil {
+		return err
+	}
+	return m.groundChecks(out, perm, svc)
 }
 
-// superstructure checks, for every case, what the ropes, towers and
-// column sections carry: rope tension, resultant eccentricity, column
-// section.
+// structureChecks adds the checks of one case that no foundation size
+// changes: towers and column sections, and in the persistent situation the
+// flood clearance and the walkway gradient (not the ropes).
+func (m *model) structureChecks(out sink, svc, des CaseState) error {
+	if err := m.superstructure(out, []CaseState{svc}, []CaseState{des}); err != nil {
+		return err
+	}
+	if svc.Case.Situation == Persistent {
+		m.checkClearance(out, []CaseState{svc})
+		m.checkGradient(out, svc)
+	}
+	return nil
+}
+
+// groundChecks adds the footing and anchor checks of one case at both
+// banks.
+func (m *model) groundChecks(out sink, perm, svc CaseState) error {
+	for side := Left; side <= Right; side++ {
+		bank := m.bank(side)
+		if err := m.footingChecks(out, side, bank.Tower.Footing, perm, []CaseState{svc}); err != nil {
+			return err
+		}
+		if err := m.anchorChecks(out, side, bank.Anchor, perm, []CaseState{svc}); err != nil {
+			return err
+		}
+	}
+	return nil
+}
+
+// superstructure checks, for every case, what the towers and column
+// sections carry: resultant eccentricity, column section.
 func (m *model) superstructure(out sink, service, design []CaseState) error {
-	partial := m.b.partial()
 	for k, svc := range service {
 		des := design[k]
 		name := svc.Case.Name
-		for i, g := range m.groups {
-			var basis cable.TensionBasis = cable.GlobalFactor{Factor: m.b.Basis.RopeFactor}
-			t := svc.Groups[i].MaxTension
-			if partial {
-				basis = cable.PartialFactor{GammaR: m.b.Basis.GammaR, Ke: m.b.Basis.RopeEfficiency}
-				t = des.Groups[i].MaxTension
-			}
-			r, err := cable.TensionCheck(t, g.rope, g.Count, basis)
-			if err != nil {
-				return fmt.Errorf("sagspan: %s, case %q: %w", g.Name, name, err)
-			}
-			out.add(r.For(g.Name, name))
-		}
 		for side := Left; side <= Right; side++ {
 			bank := m.bank(side)
 			towerName := towerElement[side]

@@ -22,9 +22,9 @@ func ExampleCheck() {
 	}
 	// Output:
 	// overall: pass
-	// cable.tension (walkway ropes): 800.8 kN of 1290 kN under "cold with crowd"
-	// cable.tension (handrail ropes): 11.06 kN of 168.0 kN under "wind"
-	// bridge.clearance (walkway): 1.500 m of 4.160 m under "hot with crowd"
+	// cable.tension (walkway ropes): 147.6 kN of 193.6 kN under "crowd 0.91 L at midspan, coldest rope"
+	// cable.tension (handrail ropes): 6.279 kN of 75.61 kN under "wind, coldest rope"
+	// bridge.clearance (walkway): 1.500 m of 4.039 m under "crowd 0.46 L at midspan, hottest rope"
 }
 
 func ExampleCrowdPressure() {
@@ -67,6 +67,6 @@ func ExampleSearch() {
 			1/d.SagRatio, d.Count, d.Anchor.Length, d.Cost, d.Utilisation)
 	}
 	// Output:
-	// 8 candidates, 8 feasible
-	// best: sag 1/20, 4 ropes, anchor 4.500 m long, cost 39756, utilisation 0.875
+	// 8 candidates, 2 feasible
+	// best: sag 1/20, 6 ropes, anchor 4.500 m long, cost 44990, utilisation 0.939
 }

@@ -18,11 +18,7 @@ type model struct {
 	groups []group
 	soils  [2]foundation.Soil
 	dead   units.LoadPerLength // walkway dead load per metre, without ropes
-	// crowd and crowdHalf are the crowd loads per metre of walkway on the
-	// full span and on half of it.
-	crowd, crowdHalf units.LoadPerLength
-	wind             units.Pressure
-	psi              float64
+	wind   units.Pressure
 	// ref holds each group's reference state: permanent load at the
 	// reference temperature, hanging at its design sag.
 	ref []cable.State
@@ -36,6 +32,13 @@ type model struct {
 	// reference state; backstays are each group's backstays.
 	spanUnstretched []float64
 	backstays       [][2]backstay
+	// refLength and refIntegral are each group's span length and ∫T ds in
+	// the reference state.
+	refLength, refIntegral []float64
+	// states holds the group states solved so far, by their input: a group
+	// that carries no crowd hangs alike under every crowd, and a case's
+	// service and design states often share groups.
+	states map[stateKey]GroupState
 }
 
 func newModel(b Bridge) (*model, error) {
@@ -48,11 +51,8 @@ func newModel(b Bridge) (*model, error) {
 	}
 	m := &model{
 		b: b, span: b.span(), groups: gs,
-		dead:      b.Walkway.dead(),
-		crowd:     units.LoadPerLength(float64(b.crowd(b.Site.Span)) * float64(b.Walkway.Width)),
-		crowdHalf: units.LoadPerLength(float64(b.crowd(b.Site.Span/2)) * float64(b.Walkway.Width)),
-		wind:      b.wind(),
-		psi:       orDefault(b.Loads.WindWithCrowd, defaultWindWithCrowd),
+		dead: b.Walkway.dead(),
+		wind: b.wind(),
 	}
 	bs := b.Basis
 	m.fbasis = foundation.Basis{
@@ -108,6 +108,8 @@ func (m *model) reference(g group, ref cable.State) error {
 	w, hh := float64(ref.Load.Uniform), float64(ref.H)
 	integral := hh*(l+h*h/l) + w*w*l*l*l/12/hh
 	m.spanUnstretched = append(m.spanUnstretched, float64(shape.Length())-integral/float64(g.elastic.EA))
+	m.refLength = append(m.refLength, float64(shape.Length()))
+	m.refIntegral = append(m.refIntegral, integral)
 	ta, tb := shape.SupportTensions()
 	aa, ab := shape.SupportAngles()
 	var bss [2]backstay
@@ -133,60 +135,70 @@ func (m *model) bank(s Side) Bank {
 }
 
 // load returns the in-plane load of group g under case lc and the swing of
-// the rope plane.
+// the rope plane:
+//
+//	vertical  γG (w_rope + s g_walkway) [+ γQ ψ s q(a) b on the crowd's stretch]
+//	lateral   γW ψW q_p (Σ c_f d + s c_f,walkway h_walkway)
+//	lift      γW ψW s c_f,z q_p b          (upward, when the case lifts the walkway)
+//
+// with s the group's share of the walkway, q(a) the crowd pressure of the
+// loaded length a, b the walkway width. The rope plane swings to carry the
+// vector sum of the uniform vertical load and the wind, so the uniform
+// in-plane load is √(vertical² + lateral²). A crowd stretch that is not the
+// whole span stays a vertical patch in the swung plane: it is taken whole
+// in the plane (more than its in-plane component, which is conservative for
+// tensions). In the construction stage the walkway's dead load lies only on
+// the placed stretch.
 func (m *model) load(g group, lc LoadCase) (cable.Load, units.Angle) {
-	vertical := units.LoadPerLength(lc.GammaG) * (g.self + units.LoadPerLength(g.share)*m.dead)
-	crowd := units.LoadPerLength(lc.GammaQ*g.share) * m.crowd
-	half := units.LoadPerLength(lc.GammaQ*g.share) * m.crowdHalf
 	l := m.b.Site.Span
-	load := cable.Load{Uniform: vertical}
-	switch lc.Crowd {
-	case FullSpan:
-		load.Uniform += crowd
-	case LeftHalf:
-		load.Patches = []cable.Patch{{From: 0, To: l / 2, Load: half}}
-	case RightHalf:
-		load.Patches = []cable.Patch{{From: l / 2, To: l, Load: half}}
+	gG := units.LoadPerLength(lc.GammaG)
+	load := cable.Load{Uniform: gG * g.self}
+	walkway := gG * units.LoadPerLength(g.share) * m.dead
+	if lc.Situation == Construction {
+		if deck := clip(lc.Deck, l); !deck.Empty() && walkway > 0 {
+			load.Patches = append(load.Patches, cable.Patch{From: deck.From, To: deck.To, Load: walkway})
+		}
+	} else {
+		load.Uniform += walkway
+	}
+	if crowd := clip(lc.Crowd, l); lc.GammaQ*lc.CrowdFactor*g.share > 0 && !crowd.Empty() {
+		q := lc.CrowdPressure
+		if q == 0 {
+			q = m.b.crowd(crowd.Length())
+		}
+		w := units.LoadPerLength(lc.GammaQ * lc.CrowdFactor * g.share * float64(q) * float64(m.b.Walkway.Width))
+		if crowd.Length() >= l {
+			load.Uniform += w
+		} else {
+			load.Patches = append(load.Patches, cable.Patch{From: crowd.From, To: crowd.To, Load: w})
+		}
 	}
 	var swing units.Angle
-	if lc.Wind && lc.GammaW > 0 && m.wind > 0 {
+	if f := lc.GammaW * lc.Wind; f > 0 && m.wind > 0 {
 		depth := m.b.Walkway.WindDepth
 		if depth == 0 {
 			depth = m.b.Walkway.Depth
 		}
 		face := g.windWidth + units.Length(g.share*orDefault(m.b.Loads.WalkwayDrag, defaultWalkwayDrag))*depth
-		lateral := lc.GammaW * float64(m.wind) * float64(face)
-		swing = units.Angle(math.Atan2(lateral, float64(load.Uniform)))
-		load.Uniform = units.LoadPerLength(math.Hypot(float64(load.Uniform), lateral))
+		lateral := f * float64(m.wind) * float64(face)
+		vertical := float64(load.Uniform)
+		if lc.Lift {
+			vertical -= f * g.share * float64(m.b.lift())
+		}
+		swing = units.Angle(math.Atan2(lateral, vertical))
+		load.Uniform = units.LoadPerLength(math.Hypot(vertical, lateral))
 	}
 	return load, swing
+}
+
+// clip returns the part of s within the span [0, l].
+func clip(s Stretch, l units.Length) Stretch {
+	return Stretch{From: max(s.From, 0), To: min(s.To, l)}
 }
 
 func (m *model) column(s Side) tower.Column {
 	t := m.bank(s).Tower
 	return tower.Column{Depth: t.Depth, Width: t.Width, Height: t.Height, Facing: t.Facing, UnitWeight: t.UnitWeight}
-}
-
-// designCase returns the case with the factors of the partial-factor basis
-// (EN 1990 set B), whatever the bridge's basis: the column sections are
-// always checked on design actions.
-func (m *model) designCase(lc LoadCase) LoadCase {
-	if m.b.partial() {
-		return lc
-	}
-	gG := orDefault(m.b.Basis.GammaG, defaultGammaG)
-	gQ := orDefault(m.b.Basis.GammaQ, defaultGammaQ)
-	lc.GammaG = gG
-	if lc.Crowd != NoCrowd {
-		lc.GammaQ = gQ
-	}
-	if lc.Wind {
-		lc.GammaW = gQ
-		if lc.Crowd != NoCrowd {
-			lc.GammaW = gQ * m.psi
-		}
-	}
-	return lc
 }
 
 // section returns the effective reinforced-concrete section of a column,

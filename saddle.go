@@ -95,15 +95,24 @@ const maxFeedIterations = 60
 // and the span and backstay tensions are solved together (the anchors and,
 // but for sliding and roller saddles, the saddles fixed).
 func (m *model) analyse(lc LoadCase) (CaseState, error) {
+	return m.analyseFrom(lc, nil)
+}
+
+// analyseFrom is analyse with the rope fed over the saddles in a nearby
+// state as the start of each group's iteration (warm, nil for none).
+func (m *model) analyseFrom(lc LoadCase, warm *CaseState) (CaseState, error) {
 	cs := CaseState{Case: lc, Groups: make([]GroupState, len(m.groups))}
 	var levels [2][]tower.LevelForce
-	dt := float64(lc.Temperature - m.b.Climate.Reference)
 	for i, g := range m.groups {
-		load, swing := m.load(g, lc)
-		gs, err := m.solveGroup(i, load, swing, dt)
+		in := m.solveInput(g, lc)
+		if warm != nil {
+			in.feed = warm.Groups[i].feed
+		}
+		gs, err := m.groupState(i, in)
 		if err != nil {
 			return CaseState{}, fmt.Errorf("sagspan: %s, case %q: %w", g.Name, lc.Name, err)
 		}
+		swing := in.swing
 		for side := Left; side <= Right; side++ {
 			bank := m.bank(side)
 			h, v, lateral := elevationPull(gs.Tension[side], gs.Angle[side], swing)
@@ -132,27 +141,73 @@ func (m *model) analyse(lc LoadCase) (CaseState, error) {
 	return cs, nil
 }
 
-// solveGroup returns the state of rope group i under load, swung by swing,
-// dt kelvin from the reference temperature.
+// solveInput is what a rope group's state is solved for.
+type solveInput struct {
+	load  cable.Load
+	swing units.Angle
+	// dt and dtBackstay are the rope temperatures of the span and of the
+	// backstays, in kelvin from the reference.
+	dt, dtBackstay float64
+	// intact is the fraction of the group's ropes left (1 but with a rope
+	// broken): the group's stiffness falls with it, the unstretched lengths
+	// of the ropes left stay theirs.
+	intact float64
+	// scale multiplies every unstretched length of the group: 1 but for new
+	// rope before its constructional stretch (the erection table).
+	scale float64
+	// feed starts the iteration on the rope rendered over the saddles.
+	feed float64
+}
+
+// solveInput returns the input of group g's state under case lc.
+func (m *model) solveInput(g group, lc LoadCase) solveInput {
+	load, swing := m.load(g, lc)
+	in := solveInput{load: load, swing: swing, intact: 1, scale: 1,
+		dt: float64(lc.Temperature - m.b.Climate.Reference)}
+	in.dtBackstay = in.dt
+	if lc.BackstayTemperature != 0 {
+		in.dtBackstay = float64(lc.BackstayTemperature - m.b.Climate.Reference)
+	}
+	if lc.Broken > 0 && lc.BrokenGroup == g.Name && g.Count > lc.Broken {
+		in.intact = float64(g.Count-lc.Broken) / float64(g.Count)
+	}
+	return in
+}
+
+// solveGroup returns the state of rope group i under the input's load,
+// swing, temperatures and ropes.
 //
 // The rope rendered into the span, feed, solves r(feed) = g(feed) − feed = 0
 // where g is the rope the backstays give up once the span hangs with that
-// feed; secant steps from feed = 0, safeguarded by plain iteration.
-func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64) (GroupState, error) {
+// feed; secant steps from the input's feed, safeguarded by plain iteration.
+func (m *model) solveGroup(i int, in solveInput) (GroupState, error) {
+	load, swing, dt := in.load, in.swing, in.dt
 	g := m.groups[i]
 	e := g.elastic
 	// The rope fed into the span reaches the change of state as an
 	// equivalent change of the span's unstretched length, through the
 	// thermal term: exp(α' dθ') = exp(α dt)·(1 + feed/l0,θ).
-	thermal := math.Exp(float64(e.Alpha) * dt)
+	thermal := math.Exp(float64(e.Alpha)*dt) * in.scale
+	thermalBackstay := math.Exp(float64(e.Alpha)*in.dtBackstay) * in.scale
 	l0 := m.spanUnstretched[i] * thermal
-	// slide records the direction a sliding saddle has slid: once it
-	// slides it stays sliding while the iteration settles, so that the
-	// feed cannot flip between held and sliding.
+	// With ropes broken the change of state, which measures the reference
+	// state's unstretched length with the group's present stiffness, is
+	// corrected to the unstretched length the ropes left really have.
+	var correct float64
+	if in.intact != 1 {
+		e.EA *= units.AxialStiffness(in.intact)
+		correct = math.Log(m.spanUnstretched[i] / (m.refLength[i] - m.refIntegral[i]/float64(e.EA)))
+	}
+	// slide records the direction a sliding saddle slides. Every sliding
+	// saddle is first held (as a fixed one); it slides only if the settled
+	// held state asks more of its plate than friction gives, and the state
+	// is then solved again with it sliding that way. Deciding on settled
+	// states, never during the iteration, makes the answer independent of
+	// where the iteration starts.
 	var slide [2]float64
 	var gs GroupState
 	step := func(feed float64) (float64, error) {
-		grow := float64(e.Alpha)*dt + math.Log1p(feed/l0)
+		grow := float64(e.Alpha)*dt + math.Log(in.scale) + correct + math.Log1p(feed/l0)
 		// Any positive α' serves; this one keeps dθ' within ±100 K, so the
 		// equivalent temperature stays an absolute temperature.
 		alphaEq := math.Max(1e-5, math.Abs(grow)/100)
@@ -178,38 +233,68 @@ func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64
 			bank := m.bank(side)
 			bs := m.backstays[i][side]
 			h, v, _ := elevationPull(gs.Tension[side], gs.Angle[side], swing)
-			tback, dir := saddleBalance(saddleKind(bank.Tower.Saddle), bank.Tower.Saddle.Friction, float64(gs.Tension[side]), h, v, bs.angle, slide[side])
-			slide[side] = dir
+			kind := saddleKind(bank.Tower.Saddle)
+			if kind == tower.Sliding && slide[side] == 0 {
+				kind = tower.Fixed // held
+			}
+			tback, dir := saddleBalance(kind, bank.Tower.Saddle.Friction, float64(gs.Tension[side]), h, v, bs.angle, slide[side])
 			gs.Backstay[side], gs.BackstayAngle[side], gs.SaddleMoved[side] = units.Force(tback), bs.angle, dir != 0
 			gs.MaxTension = max(gs.MaxTension, units.Force(tback))
-			given += bs.unstretched*thermal - bs.unstretchedFor(e, tback)
+			given += bs.unstretched*thermalBackstay - bs.unstretchedFor(e, tback)
 		}
+		gs.feed = feed
 		return given, nil
 	}
 	tol := 1e-10 * float64(m.span.Length)
-	x0, x1 := 0.0, 0.0
-	g0, err := step(x0)
-	if err != nil {
+	settle := func(x0 float64) error {
+		g0, err := step(x0)
+		if err != nil {
+			return err
+		}
+		r0 := g0 - x0
+		x1 := g0
+		for range maxFeedIterations {
+			g1, err := step(x1)
+			if err != nil {
+				return err
+			}
+			r1 := g1 - x1
+			if math.Abs(r1) <= tol {
+				return nil
+			}
+			next := g1 // plain iteration
+			if d := r1 - r0; d != 0 {
+				if sec := x1 - r1*(x1-x0)/d; !math.IsNaN(sec) && !math.IsInf(sec, 0) {
+					next = sec
+				}
+			}
+			x0, r0, x1 = x1, r1, next
+		}
+		return fmt.Errorf("rope rendered over the saddles does not settle after %d iterations", maxFeedIterations)
+	}
+	if err := settle(in.feed); err != nil {
 		return GroupState{}, err
 	}
-	r0 := g0 - x0
-	x1 = g0
-	for range maxFeedIterations {
-		g1, err := step(x1)
-		if err != nil {
-			return GroupState{}, err
-		}
-		r1 := g1 - x1
-		if math.Abs(r1) <= tol {
-			return gs, nil
-		}
-		next := g1 // plain iteration
-		if d := r1 - r0; d != 0 {
-			if sec := x1 - r1*(x1-x0)/d; !math.IsNaN(sec) && !math.IsInf(sec, 0) {
-				next = sec
+	// A held sliding saddle whose plate needs more than friction slides;
+	// with one sliding the other may then need to, hence the second round.
+	for range 2 {
+		again := false
+		for side := Left; side <= Right; side++ {
+			saddle := m.bank(side).Tower.Saddle
+			if saddleKind(saddle) != tower.Sliding || slide[side] != 0 {
+				continue
+			}
+			h, v, _ := elevationPull(gs.Tension[side], gs.Angle[side], swing)
+			if _, dir := saddleBalance(tower.Sliding, saddle.Friction, float64(gs.Tension[side]), h, v, m.backstays[i][side].angle, 0); dir != 0 {
+				slide[side], again = dir, true
 			}
 		}
-		x0, r0, x1 = x1, r1, next
+		if !again {
+			return gs, nil
+		}
+		if err := settle(gs.feed); err != nil {
+			return GroupState{}, err
+		}
 	}
-	return GroupState{}, fmt.Errorf("rope rendered over the saddles does not settle after %d iterations", maxFeedIterations)
+	return gs, nil
 }

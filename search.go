@@ -393,7 +393,7 @@ func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footi
 	bb := base.Apply(b)
 	var superstructure scorer
 	fixed := math.Inf(1)
-	m, service, err := ropeStage(bb, &superstructure)
+	m, perm, service, err := ropeStage(bb, &superstructure)
 	if err != nil {
 		superstructure = invalid(err)
 	} else if fixed, err = ropeCost(bb, prices); err == nil {
@@ -412,7 +412,7 @@ func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footi
 			continue
 		}
 		for side := Left; m != nil && side <= Right; side++ {
-			if err := m.anchorChecks(&anchorScores[j], side, size.apply(m.bank(side).Anchor), service); err != nil {
+			if err := m.anchorChecks(&anchorScores[j], side, size.apply(m.bank(side).Anchor), perm, service); err != nil {
 				anchorScores[j] = invalid(err)
 				break
 			}
@@ -428,7 +428,7 @@ func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footi
 			continue
 		}
 		for side := Left; m != nil && side <= Right; side++ {
-			if err := m.footingChecks(&footingScores[k], side, size.apply(m.bank(side).Tower.Footing), service); err != nil {
+			if err := m.footingChecks(&footingScores[k], side, size.apply(m.bank(side).Tower.Footing), perm, service); err != nil {
 				footingScores[k] = invalid(err)
 				break
 			}
@@ -449,24 +449,45 @@ func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footi
 	}
 }
 
-// ropeStage analyses a rope configuration: every load case, then the
-// checks a choice of anchor or footing cannot change (ropes, towers, column
-// sections, clearance), into out.
-func ropeStage(b Bridge, out sink) (*model, []CaseState, error) {
+// ropeStage analyses a rope configuration: every load case and every
+// stretch of the loaded-length searches, then the checks a choice of anchor
+// or footing cannot change (ropes, saddles, towers, column sections,
+// clearance, gradient), into out. It returns the permanent state and the
+// characteristic state of every case and stretch, on which the anchor and
+// footing checks of each size are then run: the whole-bridge check finds
+// each of those checks' governing stretch among the same states.
+func ropeStage(b Bridge, out sink) (*model, CaseState, []CaseState, error) {
 	m, err := newModel(b)
 	if err != nil {
-		return nil, nil, err
+		return nil, CaseState{}, nil, err
 	}
 	m.fbasis.Terse = true // scoring only: no result text from the foundation checks
-	service, design, err := m.states()
-	if err != nil {
-		return nil, nil, err
+	var service []CaseState
+	for _, lc := range b.Cases() {
+		svc, des, err := m.pair(lc, nil)
+		if err != nil {
+			return nil, CaseState{}, nil, err
+		}
+		if err := m.ropeChecks(out, svc, des, true); err != nil {
+			return nil, CaseState{}, nil, err
+		}
+		if err := m.structureChecks(out, svc, des); err != nil {
+			return nil, CaseState{}, nil, err
+		}
+		service = append(service, svc)
 	}
-	if err := m.superstructure(out, service, design); err != nil {
-		return nil, nil, err
+	perm := service[0]
+	for _, fam := range b.LoadedLengths() {
+		_, tried, err := m.searchLength(out, perm, fam, false)
+		if err != nil {
+			return nil, CaseState{}, nil, err
+		}
+		service = append(service, tried...)
 	}
-	m.checkClearance(out, service)
-	return m, service, nil
+	if err := m.grooveChecks(out); err != nil {
+		return nil, CaseState{}, nil, err
+	}
+	return m, perm, service, nil
 }
 
 // summarise picks the best design, the trade-off front and the near misses,
