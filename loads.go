@@ -127,7 +127,9 @@ func (b Bridge) crowdInAccident() float64 {
 	return orDefault(b.Loads.CrowdInAccident, defaultCrowdInAccident)
 }
 
-func (b Bridge) sunDifference() float64 { return orDefault(b.Loads.SunDifference, defaultSunDifference) }
+func (b Bridge) sunDifference() float64 {
+	return orDefault(b.Loads.SunDifference, defaultSunDifference)
+}
 
 func (b Bridge) constructionLoad() units.Pressure {
 	return units.Pressure(orDefault(float64(b.Loads.ConstructionLoad), float64(defaultConstructionLoad)))

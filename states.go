@@ -10,10 +10,10 @@ import (
 // crowd it does not carry, the same group in a case's service and design
 // states) is solved once.
 type stateKey struct {
-	group                 int
-	uniform               units.LoadPerLength
-	patches               [3]cable.Patch
-	swing                 units.Angle
+	group                  int
+	uniform                units.LoadPerLength
+	patches                [3]cable.Patch
+	swing                  units.Angle
 	dt, dtb, intact, scale float64
 }
 

@@ -29,15 +29,15 @@ import (
 // Each point is a full pair of states (characteristic and design loads),
 // each group's iteration started from the nearest point's.
 const (
-	sweepPoints     = 6
-	refineTol       = 1.0 / 400
-	refineGain      = 2e-4
+	sweepPoints = 6
+	refineTol   = 1.0 / 400
+	refineGain  = 2e-4
 	// proxyGain is refineGain for the drivers of the footing and anchor
 	// checks, which are evaluated on every point found.
 	proxyGain = 1e-3
 	// trustWidth is the widest bracket, as a fraction of the span, on which
 	// a parabola's verdict that the maximum is found is taken.
-	trustWidth = 1.0
+	trustWidth      = 1.0
 	maxRefineRounds = 16
 	// minRefined is the utilisation below which a check's maximum is not
 	// refined: it is found on the points the other checks bring.
