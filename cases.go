@@ -10,7 +10,8 @@ import (
 // Stretch is a part of the span between two abscissae measured from the
 // left saddle. The zero Stretch is empty.
 type Stretch struct {
-	From, To units.Length
+	From units.Length `json:"from"`
+	To   units.Length `json:"to"`
 }
 
 // Length returns the length of the stretch, zero when it is empty.

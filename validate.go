@@ -149,6 +149,7 @@ func (b Bridge) Validate() error {
 		}
 	}
 	b.validateLoads(v)
+	b.validateCaseSpecs(v)
 	return v.err
 }
 
