@@ -87,10 +87,17 @@ type CaseState struct {
 	LateralMoment [2]units.Moment
 }
 
-// ErectionTable is the erection-sag table of one rope group.
+// ErectionTable is the erection-sag table of one rope group: the sag and
+// horizontal tension of the bare ropes at each rope temperature of the
+// site's range, from the chain's own rope model.
 type ErectionTable struct {
 	Group string
 	Rows  []cable.ErectionRow
+	// Hold says what the crew holds fixed while setting the sag.
+	Hold string
+	// ConstructionalStretch is the strain the new rope is expected to take
+	// under the walkway, allowed for in the sags.
+	ConstructionalStretch float64
 }
 
 // Analysis is everything the whole-bridge check found.

@@ -61,6 +61,9 @@ func (a *Analysis) writeExtras(w io.Writer, f check.Format) error {
 		if err := check.WriteTable(w, f, heading, []string{"Rope temperature", "Sag to set", "H of the group"}, rows); err != nil {
 			return err
 		}
+		if _, err := fmt.Fprintf(w, "%s\n\n", et.Hold); err != nil {
+			return err
+		}
 	}
 	return nil
 }
@@ -100,8 +103,10 @@ type modesJSON struct {
 }
 
 type erectionJSON struct {
-	Group string       `json:"group"`
-	Rows  [][3]float64 `json:"rows_k_m_n"` // temperature K, sag m, H N
+	Group   string       `json:"group"`
+	Rows    [][3]float64 `json:"rows_k_m_n"` // temperature K, sag m, H N
+	Hold    string       `json:"hold"`
+	Stretch float64      `json:"constructional_stretch"`
 }
 
 // MarshalJSON writes the analysis with SI values: the report, the rope
@@ -124,7 +129,7 @@ func (a *Analysis) MarshalJSON() ([]byte, error) {
 	}
 	out.Modes = modesJSON{float64(a.Modes.Swing), float64(a.Modes.Antisymmetric), float64(a.Modes.Symmetric), a.Modes.LambdaSq}
 	for _, et := range a.Erection {
-		e := erectionJSON{Group: et.Group}
+		e := erectionJSON{Group: et.Group, Hold: et.Hold, Stretch: et.ConstructionalStretch}
 		for _, r := range et.Rows {
 			e.Rows = append(e.Rows, [3]float64{float64(r.Temperature), float64(r.Sag), float64(r.H)})
 		}
