@@ -31,7 +31,7 @@ type model struct {
 	fbasis foundation.Basis
 	// scratch and pulls are reused by each footing or anchor check.
 	scratch []check.Result
-	pulls   []foundation.Pull
+	pulls   []foundation.AnchorPull
 	// spanUnstretched is each group's unstretched span length in the
 	// reference state; backstays are each group's backstays.
 	spanUnstretched []float64
