@@ -90,12 +90,10 @@ func (m *model) checkFrequencies(a *Analysis, perm CaseState, opts *Options) err
 		w += m.ref[i].Load.Uniform
 		ea += g.elastic.EA
 	}
-	// The sag that the total weight and tension hang at, w l²/(8H): the
-	// weighted harmonic mean of the groups' sags.
-	l := float64(m.b.Site.Span)
-	sag := units.Length(float64(w) * l * l / (8 * float64(h)))
+	// The bridge hangs at the sag its total weight and tension give,
+	// w l²/(8H): the weighted harmonic mean of the groups' sags.
 	mass := units.MassPerLength(float64(w) / units.StandardGravity)
-	modes, err := cable.Frequencies(m.span, h, mass, sag, ea)
+	modes, err := cable.Frequencies(m.span, h, mass, ea)
 	if err != nil {
 		return fmt.Errorf("sagspan: natural frequencies: %w", err)
 	}

@@ -149,13 +149,14 @@ func ExampleTensionCheck() {
 }
 
 func ExampleFrequencies() {
-	m, err := cable.Frequencies(cable.Span{Length: 100}, 245.25*units.Kilonewton, 100*units.KilogramPerMetre, 5*units.Metre, 1e9)
+	// 100 kg/m over a 100 m level span under H 245.2 kN hangs at 5 m sag.
+	m, err := cable.Frequencies(cable.Span{Length: 100}, 245.166*units.Kilonewton, 100*units.KilogramPerMetre, 1e9)
 	if err != nil {
 		fmt.Println(err)
 		return
 	}
-	fmt.Printf("swing %.4f Hz, antisymmetric %.4f Hz, symmetric %.4f Hz, λ² %.1f\n", float64(m.Swing), float64(m.Antisymmetric), float64(m.Symmetric), m.LambdaSq)
-	// Output: swing 0.2476 Hz, antisymmetric 0.4952 Hz, symmetric 0.7033 Hz, λ² 639.6
+	fmt.Printf("sag %.3f m, swing %.4f Hz, antisymmetric %.4f Hz, symmetric %.4f Hz, λ² %.1f\n", float64(m.Sag), float64(m.Swing), float64(m.Antisymmetric), float64(m.Symmetric), m.LambdaSq)
+	// Output: sag 5.000 m, swing 0.2476 Hz, antisymmetric 0.4951 Hz, symmetric 0.7032 Hz, λ² 639.7
 }
 
 // kN returns f in kilonewtons, for printing.
