@@ -103,9 +103,9 @@ func TestSymmetricModeCurve(t *testing.T) {
 func TestFrequenciesInvalid(t *testing.T) {
 	sp := cable.Span{Length: 100}
 	for _, c := range []struct {
-		what    string
-		h, m  float64
-		ea    float64
+		what string
+		h, m float64
+		ea   float64
 	}{
 		{"zero H", 0, 1, 1}, {"zero mass", 1, 0, 1}, {"zero EA", 1, 1, 0},
 		{"NaN H", math.NaN(), 1, 1}, {"Inf EA", 1, 1, math.Inf(1)}, {"negative mass", 1, -1, 1},
