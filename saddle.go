@@ -171,8 +171,8 @@ func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64
 		gs.Tension = [2]units.Force{ta, tb}
 		gs.Angle = [2]units.Angle{aa, ab}
 		gs.Sag = shape.Sag(m.b.Site.Span / 2)
-		gs.LowX, gs.LowZ, gs.LowWithin = shape.LowPoint()
-		gs.MaxTension = max(ta, tb)
+		gs.LowX, gs.LowZ = shape.LowPoint()
+		gs.MaxTension = shape.MaxTension()
 		given := 0.0
 		for side := Left; side <= Right; side++ {
 			bank := m.bank(side)

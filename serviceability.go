@@ -18,14 +18,7 @@ func (m *model) walkwayLow(cs CaseState) (units.Length, units.Length) {
 			continue
 		}
 		gs := cs.Groups[i]
-		x, z := gs.LowX, gs.LowZ
-		if !gs.LowWithin { // the lowest point of the span is then a saddle
-			x, z = 0, 0
-			if m.b.Site.Rise < 0 {
-				x, z = m.b.Site.Span, m.b.Site.Rise
-			}
-		}
-		z += g.Offset
+		x, z := gs.LowX, gs.LowZ+g.Offset
 		if z < low {
 			low, at = z, x
 		}

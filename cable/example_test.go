@@ -18,7 +18,7 @@ func ExampleNewParabola() {
 	va, vb := p.Reactions()
 	ta, tb := p.SupportTensions()
 	a, b := p.SupportAngles()
-	x, z, within := p.LowPoint()
+	x, z, within := p.Vertex()
 	fmt.Printf("H %.1f kN\n", kN(p.Horizontal()))
 	fmt.Printf("V_A %.2f kN, V_B %.2f kN\n", kN(va), kN(vb))
 	fmt.Printf("T_A %.2f kN, T_B %.2f kN\n", kN(ta), kN(tb))
@@ -86,7 +86,7 @@ func ExampleNewLoaded() {
 		fmt.Println(err)
 		return
 	}
-	x, _, _ := l.LowPoint()
+	x, _, _ := l.Vertex()
 	ta, tb := l.SupportTensions()
 	fmt.Printf("sag at quarter spans %.3f m and %.3f m\n", float64(l.Sag(15)), float64(l.Sag(45)))
 	fmt.Printf("low point %.2f m from A; T_A %.2f kN, T_B %.2f kN\n", float64(x), kN(ta), kN(tb))

@@ -18,7 +18,7 @@ func TestParabolaReferences(t *testing.T) {
 	}
 	va, vb := p.Reactions()
 	ta, tb := p.SupportTensions()
-	x0, _, within := p.LowPoint()
+	x0, _, within := p.Vertex()
 	for _, c := range []struct {
 		what      string
 		got, want float64
@@ -74,7 +74,7 @@ func TestParabolaConsistency(t *testing.T) {
 		L := float64(c.span.Length)
 		checkShape(t, "parabola", p, float64(c.w)*L, float64(c.w)*L*L/2)
 		approx(t, "midspan sag", float64(p.Sag(c.span.Length/2)), float64(c.sag), 1e-12)
-		if _, _, within := p.LowPoint(); within == c.outside {
+		if _, _, within := p.Vertex(); within == c.outside {
 			t.Errorf("low point within = %v for %+v", within, c.span)
 		}
 		m, err := cable.NewParabola(c.span.Mirror(), c.w, c.sag)
