@@ -9,7 +9,7 @@ import (
 )
 
 func TestParabolaReferences(t *testing.T) {
-	// SOURCES §1 [D] (computed from the same closed forms, so here only the
+	// [D] (computed by hand from the same closed forms, so here only the
 	// length is checked by a different route: quadrature in checkShape and
 	// the values below are a regression on the formulas).
 	p, err := cable.NewParabola(cable.Span{Length: 100, Rise: 10}, 2*units.KilonewtonPerMetre, 8)
@@ -37,7 +37,8 @@ func TestParabolaReferences(t *testing.T) {
 		t.Error("low point should be within the span")
 	}
 
-	// SOURCES §1 [R]: w 2 N/m, l 100 m, sag 5 m → H = 500 N.
+	// General cable theorem H = w l²/(8 f) (Hicks, Civil Engineering
+	// Formulas, ch. 10, [M] for the attribution): w 2 N/m, l 100 m, sag 5 m → H = 500 N.
 	q, err := cable.NewParabola(cable.Span{Length: 100}, 2, 5)
 	if err != nil {
 		t.Fatal(err)
