@@ -71,27 +71,23 @@ func TestRenderDemo(t *testing.T) {
 		t.Errorf("JSON does not carry the analysis: %+v", back.Report.Status)
 	}
 	// A program reads a check's terms by symbol, without parsing notes.
+	type value struct {
+		Symbol string   `json:"symbol"`
+		Value  *float64 `json:"value"`
+		Unit   string   `json:"unit"`
+	}
 	var gov []struct {
-		ID     string `json:"id"`
-		Values []struct {
-			Symbol string   `json:"symbol"`
-			Value  *float64 `json:"value"`
-			Unit   string   `json:"unit"`
-		} `json:"values"`
+		ID     string  `json:"id"`
+		Values []value `json:"values"`
 	}
 	for _, raw := range back.Report.Governing {
-		var r struct {
-			ID     string `json:"id"`
-			Values []struct {
-				Symbol string   `json:"symbol"`
-				Value  *float64 `json:"value"`
-				Unit   string   `json:"unit"`
-			} `json:"values"`
-		}
-		if err := json.Unmarshal(raw, &r); err != nil {
+		gov = append(gov, struct {
+			ID     string  `json:"id"`
+			Values []value `json:"values"`
+		}{})
+		if err := json.Unmarshal(raw, &gov[len(gov)-1]); err != nil {
 			t.Fatal(err)
 		}
-		gov = append(gov, r)
 	}
 	clearance := false
 	for _, r := range gov {
