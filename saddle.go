@@ -107,9 +107,9 @@ func (m *model) analyse(lc LoadCase) (CaseState, error) {
 		for side := Left; side <= Right; side++ {
 			bank := m.bank(side)
 			h, v, lateral := elevationPull(gs.Tension[side], gs.Angle[side], swing)
-			spanPull := tower.Pull{Tension: units.Force(math.Hypot(h, v)), Angle: units.Angle(math.Atan2(v, h))}
+			spanPull := tower.RopePull{Tension: units.Force(math.Hypot(h, v)), Angle: units.Angle(math.Atan2(v, h))}
 			saddle := tower.Saddle{Kind: saddleKind(bank.Tower.Saddle), Friction: bank.Tower.Saddle.Friction, Height: bank.Tower.Height + g.Offset}
-			lf, err := saddle.Force(spanPull, tower.Pull{Tension: gs.Backstay[side], Angle: gs.BackstayAngle[side]})
+			lf, err := saddle.Force(spanPull, tower.RopePull{Tension: gs.Backstay[side], Angle: gs.BackstayAngle[side]})
 			if err != nil {
 				return CaseState{}, fmt.Errorf("sagspan: %s saddle, %s, case %q: %w", side, g.Name, lc.Name, err)
 			}

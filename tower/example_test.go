@@ -12,8 +12,8 @@ import (
 func ExampleSaddle_Force() {
 	walk := tower.Saddle{Kind: tower.Fixed, Height: 3.2 * units.Metre}
 	lf, err := walk.Force(
-		tower.Pull{Tension: 180 * units.Kilonewton, Angle: units.FromDegrees(12)},
-		tower.Pull{Tension: 185 * units.Kilonewton, Angle: units.FromDegrees(35)})
+		tower.RopePull{Tension: 180 * units.Kilonewton, Angle: units.FromDegrees(12)},
+		tower.RopePull{Tension: 185 * units.Kilonewton, Angle: units.FromDegrees(35)})
 	if err != nil {
 		fmt.Println(err)
 		return
@@ -21,8 +21,8 @@ func ExampleSaddle_Force() {
 	fmt.Printf("walkway: V %v down, H %v toward the span\n", lf.Vertical, lf.Horizontal)
 
 	rail := tower.Saddle{Kind: tower.Sliding, Friction: 0.15, Height: 4.3 * units.Metre}
-	span := tower.Pull{Tension: 40 * units.Kilonewton, Angle: units.FromDegrees(10)}
-	back := tower.Pull{Tension: 40 * units.Kilonewton, Angle: units.FromDegrees(40)}
+	span := tower.RopePull{Tension: 40 * units.Kilonewton, Angle: units.FromDegrees(10)}
+	back := tower.RopePull{Tension: 40 * units.Kilonewton, Angle: units.FromDegrees(40)}
 	lf, _ = rail.Force(span, back)
 	fmt.Printf("handrail: V %v down, H %v toward the span, slips %v\n", lf.Vertical, lf.Horizontal, rail.Slips(span, back))
 	// Output:

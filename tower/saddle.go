@@ -7,15 +7,15 @@ import (
 	"github.com/sagspan/sagspan/units"
 )
 
-// Pull is the pull of one rope on a saddle: the rope tension where it
+// RopePull is the pull of one rope on a saddle: the rope tension where it
 // leaves the saddle and the rope's angle there, measured below horizontal
 // (negative when the rope rises as it leaves the saddle).
-type Pull struct {
+type RopePull struct {
 	Tension units.Force
 	Angle   units.Angle
 }
 
-func (p Pull) validate(name string) error {
+func (p RopePull) validate(name string) error {
 	if t := float64(p.Tension); !finite(t) || t < 0 {
 		return nonNegative(name+".Tension", p.Tension)
 	}
@@ -132,14 +132,14 @@ type LevelForce struct {
 // that V < 0, lifts off a sliding or roller saddle and gives ErrLiftOff; a
 // fixed (clamped) saddle passes the upward force to the column. Tensions
 // must be finite and ≥ 0, angles strictly between −90° and 90°.
-func (s Saddle) Force(span, backstay Pull) (LevelForce, error) {
+func (s Saddle) Force(span, backstay RopePull) (LevelForce, error) {
 	if err := s.validate(); err != nil {
 		return LevelForce{}, err
 	}
-	if err := span.validate("span Pull"); err != nil {
+	if err := span.validate("span RopePull"); err != nil {
 		return LevelForce{}, err
 	}
-	if err := backstay.validate("backstay Pull"); err != nil {
+	if err := backstay.validate("backstay RopePull"); err != nil {
 		return LevelForce{}, err
 	}
 	ss, cs := math.Sincos(float64(span.Angle))
@@ -167,7 +167,7 @@ func (s Saddle) Force(span, backstay Pull) (LevelForce, error) {
 // pulls: true for a sliding saddle when the unbalanced horizontal force
 // exceeds μ·N, and always true for a roller carrying any unbalanced force.
 // It reports false for invalid input (which Force rejects).
-func (s Saddle) Slips(span, backstay Pull) bool {
+func (s Saddle) Slips(span, backstay RopePull) bool {
 	if s.validate() != nil || span.validate("") != nil || backstay.validate("") != nil {
 		return false
 	}

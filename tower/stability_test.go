@@ -252,7 +252,7 @@ func FuzzTowerChain(f *testing.F) {
 	f.Add(1e9, 1.5, 0.0, 0.0, 0.0, 0.0, 0.3, 1.0, 0.3, 0.1, 0.0, uint8(2))
 	f.Fuzz(func(t *testing.T, ts, as, tb, ab, y, off, d, hc, l, th, xc float64, kind uint8) {
 		s := tower.Saddle{Kind: tower.SaddleKind(kind % 4), Height: units.Length(y), Offset: units.Length(off)}
-		lf, err := s.Force(tower.Pull{Tension: units.Force(ts), Angle: units.Angle(as)}, tower.Pull{Tension: units.Force(tb), Angle: units.Angle(ab)})
+		lf, err := s.Force(tower.RopePull{Tension: units.Force(ts), Angle: units.Angle(as)}, tower.RopePull{Tension: units.Force(tb), Angle: units.Angle(ab)})
 		if err != nil {
 			if !errors.Is(err, tower.ErrInvalid) && !errors.Is(err, tower.ErrLiftOff) {
 				t.Fatal(err)
