@@ -770,21 +770,26 @@ func (s RCSection) Check(n units.Force, m units.Moment) (check.Result, error) {
 	} else {
 		axial = check.Compare(id, title, units.KindForce, -float64(n), -tens)
 	}
+	vals := [5]check.Value{
+		check.Of("N_Ed", "design axial force (compression +)", n),
+		check.Of("M_Ed", "design moment", m),
+		check.Of("N_Rd", "axial resistance in compression", units.Force(comp)),
+		check.Of("N_Rd,t", "axial resistance in tension (negative)", units.Force(tens)),
+	}
 	axial = axial.WithBasis(basis)
 	if axial.Ratio > 1 || m == 0 {
-		return axial.WithNote(fmt.Sprintf("axial %v against capacity %v (compression) / %v (tension)",
-			n, units.Force(comp), units.Force(tens))), nil
+		return axial.WithValues(vals[:4]...).WithNote("the axial force governs"), nil
 	}
 	mc, ok := md.momentAt(float64(n))
 	if !ok {
 		return check.Result{}, fmt.Errorf("tower: axial force %v not reached on the interaction curve: %w", n, ErrUnsupported)
 	}
-	bend := check.Compare(id, title, units.KindMoment, math.Abs(float64(m)), mc).WithBasis(basis).
-		WithNote(fmt.Sprintf("moment capacity %v at axial force %v; axial ratio %.3f", units.Moment(mc), n, axial.Ratio))
+	vals[4] = check.Of("M_Rd", "moment resistance at N_Ed", units.Moment(mc))
+	bend := check.Compare(id, title, units.KindMoment, math.Abs(float64(m)), mc).WithBasis(basis)
 	if axial.Ratio > bend.Ratio {
-		return axial.WithNote(fmt.Sprintf("bending ratio %.3f (capacity %v)", bend.Ratio, units.Moment(mc))), nil
+		return axial.WithValues(vals[:]...).WithNote("the axial force governs"), nil
 	}
-	return bend, nil
+	return bend.WithValues(vals[:]...), nil
 }
 
 func (s RCSection) basis() string {
