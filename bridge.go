@@ -8,7 +8,10 @@ import (
 // the rope groups, both banks, the loads and the verification basis. It is
 // plain data with JSON tags; load one from a file with Load, check it with
 // Check. In JSON a quantity may be a bare SI number or a string with its
-// unit ("48 m", "3.2 kN/m").
+// unit ("48 m", "3.2 kN/m"), except where a bare number is ambiguous:
+// temperatures, angles and the fields tagged `unit:"mm"` (diameters,
+// cover, facing) must carry their unit. A field whose JSON tag lacks
+// omitempty is required.
 type Bridge struct {
 	Name    string      `json:"name"`
 	Site    Site        `json:"site"`
@@ -16,8 +19,8 @@ type Bridge struct {
 	Walkway Walkway     `json:"walkway"`
 	Ropes   []RopeGroup `json:"ropes"`
 	Banks   Banks       `json:"banks"`
-	Loads   Loads       `json:"loads"`
-	Basis   Basis       `json:"basis"`
+	Loads   Loads       `json:"loads,omitempty"`
+	Basis   Basis       `json:"basis,omitempty"`
 }
 
 // Site is the crossing: the span between the walkway saddles and the
@@ -30,8 +33,9 @@ type Site struct {
 	Rise units.Length `json:"rise"`
 	// LeftSaddle is the elevation of the left walkway-rope saddle.
 	LeftSaddle units.Length `json:"left_saddle_elevation"`
-	// Flood is the elevation of the design flood.
-	Flood units.Length `json:"flood_elevation"`
+	// Flood is the elevation of the design flood, or "none" where no
+	// flood reaches the bridge.
+	Flood Level `json:"flood_elevation"`
 	// Freeboard is the clearance required between the design flood and the
 	// underside of the walkway at its lowest point.
 	Freeboard units.Length `json:"freeboard"`
@@ -122,7 +126,7 @@ type RopeSpec struct {
 	// Construction names the catalogue construction, such as "6x36-IWRC".
 	Construction string `json:"construction,omitempty"`
 	// Diameter is the nominal rope diameter.
-	Diameter units.Length `json:"diameter"`
+	Diameter units.Length `json:"diameter" unit:"mm"`
 	// Grade is the rope grade (nominal wire tensile strength), such as "1770 MPa".
 	Grade units.Pressure `json:"grade,omitempty"`
 
@@ -159,7 +163,7 @@ type TowerSpec struct {
 	Width units.Length `json:"width"`
 	// Facing is the thickness of non-structural facing (masonry, formwork)
 	// on each face, left out of the effective section.
-	Facing units.Length `json:"facing,omitempty"`
+	Facing units.Length `json:"facing,omitempty" unit:"mm"`
 	// UnitWeight of the column and footing; zero means 24 kN/m³.
 	UnitWeight units.UnitWeight `json:"unit_weight,omitempty"`
 	Saddle     SaddleSpec       `json:"saddle"`
@@ -190,8 +194,8 @@ type SectionSpec struct {
 	Concrete    units.Pressure `json:"concrete"` // characteristic cylinder strength
 	Steel       units.Pressure `json:"steel,omitempty"`
 	Bars        int            `json:"bars,omitempty"`
-	BarDiameter units.Length   `json:"bar_diameter,omitempty"`
-	Cover       units.Length   `json:"cover,omitempty"` // to the bar centres
+	BarDiameter units.Length   `json:"bar_diameter,omitempty" unit:"mm"`
+	Cover       units.Length   `json:"cover,omitempty" unit:"mm"` // to the bar centres
 }
 
 // FootingSpec is the spread footing under a tower column.
@@ -250,9 +254,9 @@ type AnchorSpec struct {
 
 	// Rock anchor bars.
 	Bars         int            `json:"bars,omitempty"`
-	BarDiameter  units.Length   `json:"bar_diameter,omitempty"`
+	BarDiameter  units.Length   `json:"bar_diameter,omitempty" unit:"mm"`
 	BarStrength  units.Pressure `json:"bar_strength,omitempty"`
-	HoleDiameter units.Length   `json:"hole_diameter,omitempty"`
+	HoleDiameter units.Length   `json:"hole_diameter,omitempty" unit:"mm"`
 	BondLength   units.Length   `json:"bond_length,omitempty"`
 	FreeLength   units.Length   `json:"free_length,omitempty"`
 }

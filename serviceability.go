@@ -40,12 +40,19 @@ func (m *model) checkClearance(out sink, service []CaseState) {
 	site := m.b.Site
 	for _, cs := range service {
 		soffit, x := m.walkwayLow(cs)
-		clear := soffit - site.Flood
+		if site.Flood.None {
+			out.add(check.Record("bridge.clearance", "Walkway underside above design flood", units.KindLength, float64(soffit)).
+				For("walkway", cs.Case.Name).
+				WithBasis("elevation of the lowest walkway underside, characteristic loads (common practice)").
+				WithNote(fmt.Sprintf("nothing to check: the description declares no design flood (site.flood_elevation \"none\"); lowest underside at x = %s", x)))
+			continue
+		}
+		clear := soffit - site.Flood.Z
 		r := check.Compare("bridge.clearance", "Walkway underside above design flood", units.KindLength,
 			float64(site.Freeboard), float64(clear)).
 			For("walkway", cs.Case.Name).
 			WithBasis("clearance of the lowest walkway underside above the design flood, characteristic loads; in wind the sag in the swung plane is taken as vertical, which is conservative (common practice)").
-			WithNote(fmt.Sprintf("lowest underside %s at x = %s; flood %s", soffit, x, site.Flood))
+			WithNote(fmt.Sprintf("lowest underside %s at x = %s; flood %s", soffit, x, site.Flood.Z))
 		if clear <= 0 {
 			r.Status, r.Ratio = check.Fail, math.Inf(1)
 			r = r.WithNote("the walkway is at or below the design flood")

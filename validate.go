@@ -93,7 +93,7 @@ func (b Bridge) Validate() error {
 		v.fail(at("site.rise"), "height difference %s is not less than the span %s", s.Rise, s.Span)
 	}
 	v.finite(at("site.left_saddle_elevation"), float64(s.LeftSaddle))
-	v.finite(at("site.flood_elevation"), float64(s.Flood))
+	v.finite(at("site.flood_elevation"), float64(s.Flood.Z))
 	v.nonNegative(at("site.freeboard"), float64(s.Freeboard), units.KindLength)
 	for i, p := range s.Ground {
 		v.finite(at(fmt.Sprintf("site.ground[%d].x", i)), float64(p.X))

@@ -151,9 +151,9 @@ func numberSlip(number, rest string) string {
 }
 
 // Example returns x written with the unit a person would use for a
-// quantity of kind k, as a quoted JSON string: "20 mm" for a length below
-// 1 m, "-10 C" for a temperature, "30 deg" for an angle. It is the
-// suggestion an error about a missing unit gives.
+// quantity of kind k, as a quoted JSON string: "12 m" for a length, "-10 C"
+// for a temperature, "30 deg" for an angle. It is the suggestion an error
+// about a missing unit gives.
 func Example(x float64, k Kind) string {
 	switch k {
 	case KindTemperature:
@@ -161,11 +161,19 @@ func Example(x float64, k Kind) string {
 	case KindAngle:
 		return strconv.Quote(strconv.FormatFloat(x, 'g', -1, 64) + " deg")
 	}
-	if k < 0 || int(k) >= len(kinds) {
+	u, ok := exampleUnits[k]
+	if !ok {
 		return strconv.Quote(strconv.FormatFloat(x, 'g', -1, 64))
 	}
-	shows := kinds[k].shows
-	return strconv.Quote(strconv.FormatFloat(x, 'g', -1, 64) + " " + shows[len(shows)-1].symbol)
+	return strconv.Quote(strconv.FormatFloat(x, 'g', -1, 64) + " " + u)
+}
+
+// exampleUnits are the units Example writes each kind in.
+var exampleUnits = map[Kind]string{
+	KindLength: "m", KindForce: "kN", KindPressure: "kPa", KindMass: "kg", KindArea: "mm2",
+	KindVolume: "m3", KindLoadPerLength: "kN/m", KindUnitWeight: "kN/m3", KindMoment: "kN m",
+	KindAxialStiffness: "MN", KindThermalExpansion: "/K", KindMassPerLength: "kg/m",
+	KindVelocity: "m/s", KindFrequency: "Hz",
 }
 
 // Parse reads a quantity of type T from s: a number followed by a unit
