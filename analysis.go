@@ -1,8 +1,6 @@
 package sagspan
 
 import (
-	"fmt"
-
 	"github.com/sagspan/sagspan/cable"
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/tower"
@@ -196,7 +194,7 @@ func (m *model) superstructure(out sink, service, design []CaseState) error {
 			}
 			r, err := cable.TensionCheck(t, g.rope, g.Count, basis)
 			if err != nil {
-				return fmt.Errorf("sagspan: %s, case %q: %w", g.Name, name, err)
+				return fieldErr("basis", "%s, case %q: %w; check the rope factors of the basis", g.Name, name, err)
 			}
 			out.add(r.For(g.Name, name))
 		}
@@ -209,20 +207,20 @@ func (m *model) superstructure(out sink, service, design []CaseState) error {
 			}
 			r, err := tower.EccentricityCheck(svc.Tower[side], m.column(side), limit)
 			if err != nil {
-				return fmt.Errorf("sagspan: %s, case %q: %w", towerName, name, err)
+				return m.bankErr(side, "tower.eccentricity", name, err)
 			}
 			out.add(r.For(towerName, name))
 			dr := des.Tower[side]
 			r, err = m.section(side).Check(dr.Vertical, dr.BaseMoment)
 			if err != nil {
-				return fmt.Errorf("sagspan: %s column section, case %q: %w", towerName, name, err)
+				return m.bankErr(side, "tower.section", name, err)
 			}
 			out.add(r.For(towerName, name))
 			if ml := des.LateralMoment[side]; ml != 0 {
 				// Wind-swung ropes push the column across the bridge.
 				r, err = m.section(side).Turned().Check(dr.Vertical, ml)
 				if err != nil {
-					return fmt.Errorf("sagspan: %s column section across, case %q: %w", towerName, name, err)
+					return m.bankErr(side, "tower.section", name+", across the bridge", err)
 				}
 				out.add(r.For(towerAcrossElement[side], name).WithNote("bending across the bridge from wind on the swung ropes"))
 			}

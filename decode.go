@@ -383,9 +383,8 @@ func (d *decoder) object(n *jnode, v reflect.Value, path string) error {
 	for _, m := range n.members {
 		p := join(path, m.key)
 		if first, dup := seen[m.key]; dup {
-			l1, _ := place(d.data, first.off)
-			l2, _ := place(d.data, m.off)
-			return d.fail(m.val, p, fmt.Errorf("given twice (lines %d and %d); keep one", l1, l2))
+			l, c := place(d.data, first.off)
+			return d.fail(m.val, p, fmt.Errorf("given twice (first at line %d, column %d); keep one", l, c))
 		}
 		seen[m.key] = m
 		f, ok := known[m.key]

@@ -76,3 +76,52 @@ func parent(p string) string {
 	}
 	return ""
 }
+
+// Errors raised during the analysis are traced back to the field of the
+// description that caused them, with advice where there is an obvious one.
+// Each names where in the analysis it arose (a rope group, a bank, a load
+// case) and wraps the checking package's error.
+
+// deadLoadField returns the field that sets the walkway dead load.
+func (b Bridge) deadLoadField() string {
+	if len(b.Walkway.Parts) > 0 {
+		return "walkway.parts"
+	}
+	return "walkway.dead_load"
+}
+
+// groupErr traces an error from the statics of rope group i under case lc.
+func (m *model) groupErr(i int, lc LoadCase, err error) error {
+	g := fmt.Sprintf("ropes[%d]", i)
+	name := m.b.Ropes[i].Name
+	where := fmt.Sprintf("%s, case %q", name, lc.Name)
+	msg := err.Error()
+	switch {
+	case strings.Contains(msg, "strains the rope") && lc.Crowd == NoCrowd && !lc.Wind && lc.Temperature == m.b.Climate.Reference:
+		return fieldErr(m.b.deadLoadField(), "%s: %w; the walkway's own weight strains the %s beyond what the rope model covers: lighten the walkway (%s) or use larger or more ropes (%s.rope.diameter, %s.count)",
+			where, err, name, m.b.deadLoadField(), g, g)
+	case strings.Contains(msg, "strains the rope"):
+		return fieldErr(g+".rope", "%s: %w; the ropes strain beyond what the rope model covers: use larger or more ropes (%s.rope.diameter, %s.count) or a larger sag (%s.sag)",
+			where, err, g, g, g)
+	case strings.Contains(msg, "overflows"), strings.Contains(msg, "does not settle"), strings.Contains(msg, "converge"):
+		return fieldErr(g+".sag", "%s: %w; the rope statics find no state: the sag %s is too small or too large for the span %s and the load; give a sag near 1/12 to 1/20 of the span",
+			where, err, m.b.Ropes[i].Sag, m.b.Site.Span)
+	}
+	return fieldErr(g, "%s: %w", where, err)
+}
+
+// bankErr traces an error from part of one bank ("tower.saddle",
+// "tower.section", "tower.footing", "anchor") under the named case.
+func (m *model) bankErr(side Side, part, caseName string, err error) error {
+	field := "banks." + side.String() + "." + part
+	advice := ""
+	switch part {
+	case "tower.footing":
+		advice = "; check the footing's size and depth (" + field + ") and the soil (banks." + side.String() + ".soil)"
+	case "anchor":
+		advice = "; check the anchor's size and depth (" + field + ") and the soil (banks." + side.String() + ".soil)"
+	case "tower.section":
+		advice = "; check the column size (banks." + side.String() + ".tower.depth, width), its concrete and bars"
+	}
+	return fieldErr(field, "%s side, case %q: %w%s", side, caseName, err, advice)
+}

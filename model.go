@@ -1,7 +1,6 @@
 package sagspan
 
 import (
-	"fmt"
 	"math"
 
 	"github.com/sagspan/sagspan/cable"
@@ -81,13 +80,13 @@ func newModel(b Bridge) (*model, error) {
 		}
 	}
 	l := float64(b.Site.Span)
-	for _, g := range gs {
+	for i, g := range gs {
 		w0 := g.self + units.LoadPerLength(g.share)*m.dead
 		h0 := units.Force(float64(w0) * l * l / (8 * float64(g.Sag))) // H = w l²/(8 f)
 		ref := cable.State{Load: cable.Load{Uniform: w0}, H: h0, Temperature: b.Climate.Reference}
 		m.ref = append(m.ref, ref)
 		if err := m.reference(g, ref); err != nil {
-			return nil, err
+			return nil, m.groupErr(i, LoadCase{Name: "reference state", Temperature: b.Climate.Reference}, err)
 		}
 	}
 	return m, nil
@@ -99,7 +98,7 @@ func newModel(b Bridge) (*model, error) {
 func (m *model) reference(g group, ref cable.State) error {
 	shape, err := cable.NewLoaded(m.span, ref.Load, ref.H)
 	if err != nil {
-		return fmt.Errorf("sagspan: %s, reference state: %w", g.Name, err)
+		return err
 	}
 	// Unstretched length: L₀ = S − (1/EA) ∫T ds with ∫T ds = H (l + h²/l) + D/H,
 	// D = ∫Q² dx = w² l³/12 for the uniform reference load (the small-strain

@@ -102,7 +102,7 @@ func (m *model) analyse(lc LoadCase) (CaseState, error) {
 		load, swing := m.load(g, lc)
 		gs, err := m.solveGroup(i, load, swing, dt)
 		if err != nil {
-			return CaseState{}, fmt.Errorf("sagspan: %s, case %q: %w", g.Name, lc.Name, err)
+			return CaseState{}, m.groupErr(i, lc, err)
 		}
 		for side := Left; side <= Right; side++ {
 			bank := m.bank(side)
@@ -111,7 +111,7 @@ func (m *model) analyse(lc LoadCase) (CaseState, error) {
 			saddle := tower.Saddle{Kind: saddleKind(bank.Tower.Saddle), Friction: bank.Tower.Saddle.Friction, Height: bank.Tower.Height + g.Offset}
 			lf, err := saddle.Force(spanPull, tower.Pull{Tension: gs.Backstay[side], Angle: gs.BackstayAngle[side]})
 			if err != nil {
-				return CaseState{}, fmt.Errorf("sagspan: %s saddle, %s, case %q: %w", side, g.Name, lc.Name, err)
+				return CaseState{}, m.bankErr(side, "tower.saddle", lc.Name, fmt.Errorf("%s: %w", g.Name, err))
 			}
 			gs.Saddle[side] = lf
 			levels[side] = append(levels[side], lf)
@@ -125,7 +125,7 @@ func (m *model) analyse(lc LoadCase) (CaseState, error) {
 		// case (1 on characteristic loads).
 		r, err := tower.Combine(levels[side], units.Force(lc.GammaG)*m.column(side).Weight())
 		if err != nil {
-			return CaseState{}, fmt.Errorf("sagspan: %s tower, case %q: %w", side, lc.Name, err)
+			return CaseState{}, m.bankErr(side, "tower", lc.Name, err)
 		}
 		cs.Tower[side] = r
 	}

@@ -104,7 +104,7 @@ func (m *model) checkFrequencies(a *Analysis, perm CaseState, opts *Options) err
 	mass := units.MassPerLength(float64(w) / units.StandardGravity)
 	modes, err := cable.Frequencies(m.span, h, mass, sag, ea)
 	if err != nil {
-		return fmt.Errorf("sagspan: natural frequencies: %w", err)
+		return fieldErr("ropes", "natural frequencies: %w; check the sags and rope sizes", err)
 	}
 	a.Modes = modes
 	a.Report.Add(
@@ -132,7 +132,7 @@ func (m *model) erection(a *Analysis, opts *Options) error {
 		dead := cable.Load{Uniform: units.LoadPerLength(g.share) * m.dead}
 		rows, err := cable.ErectionTable(m.span, g.elastic, g.self, dead, g.Sag, c.Reference, temps)
 		if err != nil {
-			return fmt.Errorf("sagspan: erection table of %s: %w", g.Name, err)
+			return fieldErr("ropes", "erection table of %s: %w; check its sag, rope and the climate's temperatures", g.Name, err)
 		}
 		a.Erection = append(a.Erection, ErectionTable{Group: g.Name, Rows: rows})
 	}
