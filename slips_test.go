@@ -31,11 +31,11 @@ func TestSlips(t *testing.T) {
 		{"bare rope diameter", `"diameter": "32 mm"`, `"diameter": 20`, nil, false,
 			`sagspan: bridge description: ropes[0].rope.diameter: units: a bare 20 is ambiguous for a length; write it with its unit, such as "20 mm" (line 42, column 57)`},
 		{"tower of 200 m", `"height": "2.4 m"`, `"height": "200 m"`, nil, false,
-			`sagspan: bridge description: banks.left.tower.height: 200.0 m is outside the plausible range 500.0 mm to 60.00 m (line 57, column 19)`},
+			`sagspan: bridge description: banks.left.tower.height: 200.0 m is outside the plausible range 0.5000 m to 60.00 m (line 57, column 19)`},
 		{"ten million ropes", `"count": 6`, `"count": 10000000`, nil, false,
 			`sagspan: bridge description: ropes[0].count: 1e+07 is outside the plausible range 1 to 50 (line 41, column 16)`},
 		{"backstay of 1 mm", `"horizontal": "16 m"`, `"horizontal": "1 mm"`, nil, false,
-			`sagspan: bridge description: banks.left.backstay.horizontal: 1.000 mm is outside the plausible range 500.0 mm to 300.0 m (line 65, column 34)`},
+			`sagspan: bridge description: banks.left.backstay.horizontal: 1.000 mm is outside the plausible range 0.5000 m to 300.0 m (line 65, column 34)`},
 		// The last one won.
 		{"key given twice", `"coldest": "-10 C",`, `"coldest": "-10 C", "coldest": "-20 C",`, nil, false,
 			`sagspan: bridge description: climate.coldest: given twice (first at line 24, column 5); keep one (line 24, column 36)`},

@@ -372,8 +372,15 @@ func (l limit) format(x float64) string {
 	return units.Format(x, l.kind)
 }
 
-// String gives the range as the field reference and errors write it.
-func (l limit) String() string { return l.format(l.lo) + " to " + l.format(l.hi) }
+// String gives the range as the field reference and errors write it,
+// both ends in one unit.
+func (l limit) String() string {
+	if l.plain {
+		return l.format(l.lo) + " to " + l.format(l.hi)
+	}
+	lo, hi := units.FormatPair(l.lo, l.hi, l.kind)
+	return lo + " to " + hi
+}
 
 // limits holds the plausible range of every number in a description, by Go
 // type and field name ("RopeSpec.Diameter"). A field tagged omitempty whose

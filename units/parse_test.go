@@ -182,6 +182,26 @@ func TestFormat(t *testing.T) {
 	}
 }
 
+func TestFormatPair(t *testing.T) {
+	tests := []struct {
+		a, b   float64
+		kind   Kind
+		wa, wb string
+	}{
+		{0, 140.4e3, KindForce, "0 kN", "140.4 kN"},
+		{0.9, 1.2, KindLength, "0.9000 m", "1.200 m"},
+		{0.0772, 0.1167, KindLength, "77.20 mm", "116.7 mm"},
+		{263.15, 303.15, KindTemperature, "-10.00 °C", "30.00 °C"},
+		{0, 0, KindMoment, "0 N·m", "0 N·m"},
+	}
+	for _, tt := range tests {
+		a, b := FormatPair(tt.a, tt.b, tt.kind)
+		if a != tt.wa || b != tt.wb {
+			t.Errorf("FormatPair(%v, %v, %s) = %q, %q; want %q, %q", tt.a, tt.b, tt.kind, a, b, tt.wa, tt.wb)
+		}
+	}
+}
+
 // TestRoundTrip checks that every formatted value parses back to itself
 // within the four significant figures Format keeps.
 func TestRoundTrip(t *testing.T) {
