@@ -90,6 +90,9 @@ type ErectionTable struct {
 // Analysis is everything the whole-bridge check found.
 type Analysis struct {
 	Bridge Bridge
+	// Source names the description the bridge was read from, such as its
+	// file name, for the report's design basis; the caller sets it.
+	Source string
 	// Report holds every check result of every case.
 	Report check.Report
 	// Service holds the states under characteristic loads (all factors 1):

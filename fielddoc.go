@@ -82,11 +82,7 @@ func walkValues(v reflect.Value, p string, leaf func(fieldInfo, reflect.Value)) 
 // between the walkway-rope saddles." gives "the horizontal distance between
 // the walkway-rope saddles".
 func meaning(doc, goName string) string {
-	s := doc
-	if i := strings.Index(s, ". "); i >= 0 {
-		s = s[:i]
-	}
-	s = strings.TrimSuffix(s, ".")
+	s := firstSentence(doc)
 	for _, verb := range []string{" is ", " are ", " sets ", " says ", " names ", " holds ", " picks "} {
 		if rest, ok := strings.CutPrefix(s, goName+verb); ok {
 			if verb == " is " || verb == " are " {
@@ -96,6 +92,29 @@ func meaning(doc, goName string) string {
 		}
 	}
 	return s
+}
+
+// firstSentence returns s up to its first full stop that ends a sentence:
+// one followed by a space and a capital letter ("cl. 4.5" does not end one).
+func firstSentence(s string) string {
+	for i := 0; i+2 < len(s); i++ {
+		if s[i] == '.' && s[i+1] == ' ' && s[i+2] >= 'A' && s[i+2] <= 'Z' {
+			return s[:i]
+		}
+	}
+	return strings.TrimSuffix(s, ".")
+}
+
+// words turns a Go name into words: "UnitWeight" gives "unit weight".
+func words(name string) string {
+	var b strings.Builder
+	for i, r := range name {
+		if i > 0 && r >= 'A' && r <= 'Z' {
+			b.WriteByte(' ')
+		}
+		b.WriteString(strings.ToLower(string(r)))
+	}
+	return b.String()
 }
 
 // formatLeaf writes the value of a leaf field for people: a quantity in
