@@ -1,8 +1,6 @@
 package sagspan
 
 import (
-	"fmt"
-
 	"github.com/sagspan/sagspan/cable"
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/tower"
@@ -104,6 +102,9 @@ type ErectionTable struct {
 // Analysis is everything the whole-bridge check found.
 type Analysis struct {
 	Bridge Bridge
+	// Source names the description the bridge was read from, such as its
+	// file name, for the report's design basis; the caller sets it.
+	Source string
 	// Report holds every check result of every case.
 	Report check.Report
 	// Service holds the states under characteristic loads (all factors 1):
@@ -220,7 +221,7 @@ func (m *model) superstructure(out sink, service, design []CaseState) error {
 			}
 			r, err := cable.TensionCheck(t, g.rope, g.Count, basis)
 			if err != nil {
-				return fmt.Errorf("sagspan: %s, case %q: %w", g.Name, name, err)
+				return fieldErr("basis", "%s, case %q: %w; check the rope factors of the basis", g.Name, name, err)
 			}
 			out.add(r.For(g.Name, name))
 		}
