@@ -18,6 +18,7 @@ type Bridge struct {
 	Banks   Banks       `json:"banks"`
 	Loads   Loads       `json:"loads"`
 	Basis   Basis       `json:"basis"`
+	Comfort ComfortSpec `json:"comfort,omitempty"`
 }
 
 // Site is the crossing: the span between the walkway saddles and the

@@ -43,13 +43,7 @@ func (a *Analysis) writeExtras(w io.Writer, f check.Format) error {
 		[]string{"Case", "Group", "H", "Max tension", "Angle left", "Angle right", "Midspan sag", "Lowest rope point"}, rows); err != nil {
 		return err
 	}
-	m := a.Modes
-	if err := check.WriteTable(w, f, "Natural frequencies (permanent load)", []string{"Mode", "Frequency"}, [][]string{
-		{"first out-of-plane (swing)", m.Swing.String()},
-		{"first in-plane antisymmetric", m.Antisymmetric.String()},
-		{"first in-plane symmetric", m.Symmetric.String()},
-		{"Irvine's λ²", fmt.Sprintf("%.1f", m.LambdaSq)},
-	}); err != nil {
+	if err := a.writeComfort(w, f); err != nil {
 		return err
 	}
 	for _, et := range a.Erection {

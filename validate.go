@@ -149,6 +149,7 @@ func (b Bridge) Validate() error {
 		}
 	}
 	b.validateLoads(v)
+	b.validateComfort(v)
 	return v.err
 }
 
