@@ -292,12 +292,3 @@ func (m Model) elements(s *Settings, maxFreq float64) (int, error) {
 	n := int(math.Ceil(math.Pi * k / (2 * math.Sqrt(6*autoModeError))))
 	return min(max(n, MinElements), MaxElements), nil
 }
-
-// modeError returns the estimated relative error (reading low) of a mode
-// of k half-waves on a lumped chain of n elements: for a taut string the
-// chain gives sin(θ)/θ of the exact frequency, θ = πk/(2n), so the error
-// is 1 − sin θ/θ ≈ θ²/6.
-func modeError(k, n int) float64 {
-	th := math.Pi * float64(k) / (2 * float64(n))
-	return 1 - math.Sin(th)/th
-}

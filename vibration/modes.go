@@ -69,8 +69,10 @@ type Mode struct {
 	// model they add up to its moving mass.
 	Effective [3]units.Mass
 	// Error is the estimated relative discretisation error of Frequency,
-	// which the lumped chain reads low: 1 − sin θ/θ, θ = πk/(2n), k half-
-	// waves and n elements (exact for a taut string).
+	// which the lumped chain reads low: 1 − sin θ/θ with θ from the main
+	// motion c along the stations, sin²θ = Σ(Δc)²/(4Σc²); for a taut
+	// string's mode of k half-waves on n elements θ = πk/(2n) and the
+	// estimate is exact.
 	Error float64
 	// Walkway is the walkway's cross-section motion at each station, in
 	// the scaling of ModalMass; nil when the model has no walkway.
@@ -143,9 +145,10 @@ func (m Model) Modes(s *Settings) (Modal, error) {
 	}
 	for i, md := range modes {
 		if md.Error > maxModeError {
-			need := int(math.Ceil(math.Pi * float64(md.HalfWaves) / (2 * math.Sqrt(6*maxModeError))))
-			return Modal{}, invalidf("mesh too coarse: mode %d (%s, %s, %d half-waves) would read about %.0f %% low with %d elements; use at least %d or lower the cut-off frequency",
-				i+1, md.Frequency, md.Label(), md.HalfWaves, 100*md.Error, n, need)
+			// the error grows as 1/n²
+			need := int(math.Ceil(float64(n) * math.Sqrt(md.Error/maxModeError)))
+			return Modal{}, invalidf("mesh too coarse: mode %d (%s, %s) would read about %.0f %% low with %d elements; use at least %d or lower the cut-off frequency",
+				i+1, md.Frequency, md.Label(), 100*md.Error, n, need)
 		}
 	}
 	out := Modal{Modes: modes, Elements: n, Mass: units.Mass(sys.totalMass()), Span: m.Span, Width: m.Walkway.Width}
@@ -384,7 +387,7 @@ func (s *system) mode(f float64, x []float64) Mode {
 		md.Symmetric = mirror(series) > 0
 	}
 	md.HalfWaves = halfWaves(series)
-	md.Error = modeError(md.HalfWaves, n)
+	md.Error = waveError(series)
 
 	// Scale: the largest displacement of the walking surface in the
 	// mode's direction is 1.
@@ -465,6 +468,33 @@ func (s *system) scale(md Mode) float64 {
 		}
 	}
 	return big
+}
+
+// waveError returns the estimated discretisation error of a mode whose
+// main motion along the stations is c: 1 − sin θ/θ, sin²θ = Σ(Δc)²/(4Σc²),
+// which for c_j = sin(πkj/n) gives θ = πk/(2n), the lumped chain's exact
+// error for a taut string.
+func waveError(c []float64) float64 {
+	var num, den float64
+	for j := 1; j < len(c); j++ {
+		d := c[j] - c[j-1]
+		num += d * d
+	}
+	for _, v := range c {
+		den += v * v
+	}
+	if den == 0 {
+		return 0
+	}
+	s := math.Sqrt(num/den) / 2
+	if s >= 1 {
+		return 1 - 2/math.Pi // θ = π/2, the shortest wave the mesh holds
+	}
+	th := math.Asin(s)
+	if th == 0 {
+		return 0
+	}
+	return 1 - s/th
 }
 
 // mirror returns Σ c_k c_{n−k} / Σ c_k²: +1 for a series symmetric about
