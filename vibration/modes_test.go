@@ -88,7 +88,7 @@ const antisymmetricDeparture = -40 / (math.Pi * math.Pi)
 func TestDepartureCoefficientByQuadrature(t *testing.T) {
 	k := 2 * math.Pi
 	a := func(x float64) float64 { return 8*x - 4 } // z'/ε on L = 1
-	u := func(x float64) float64 { // u/ε = −k∫₀ˣ a cos(kξ) dξ
+	u := func(x float64) float64 {                  // u/ε = −k∫₀ˣ a cos(kξ) dξ
 		return -k * quad.Fixed(func(s float64) float64 { return a(s) * math.Cos(k*s) }, 0, x, 40, nil, 0)
 	}
 	bigU := func(x float64) float64 { return quad.Fixed(u, 0, x, 40, nil, 0) }
