@@ -68,12 +68,20 @@ type GroupState struct {
 	Tension, Backstay    [2]units.Force
 	Angle, BackstayAngle [2]units.Angle
 	Sag                  units.Length // at midspan below the chord
-	LowX, LowZ           units.Length // lowest point, z from the left saddle
-	LowWithin            bool         // false when the lowest point is a saddle
+	LowX, LowZ           units.Length // lowest point within the span, z from the left saddle
 	MaxTension           units.Force  // the largest of span and backstay tensions
 	// SaddleMoved reports whether the saddle moved on the column top: a
-	// sliding saddle that slid, or a roller.
+	// sliding saddle that slid, or a roller; Travel is how far it moved
+	// from its place in the reference state, toward the span positive.
 	SaddleMoved [2]bool
+	Travel      [2]units.Length
+	// Held is the backstay tension had neither the rope nor the saddle
+	// moved from the reference state (the backstay's own unstretched length
+	// over its chord); Unbalance the horizontal force the ropes would then
+	// put on the saddle, toward the span: for a sliding saddle, its
+	// unbalance before friction.
+	Held      [2]units.Force
+	Unbalance [2]units.Force
 	// Saddle is the force on each tower column from this group's saddle.
 	Saddle [2]tower.LevelForce
 	shape  cable.Loaded
@@ -86,10 +94,13 @@ type CaseState struct {
 	// Tower is the resultant of the saddle forces and column weight at each
 	// column base.
 	Tower [2]tower.Resultant
-	// Lateral is the force across the bridge that wind-swung ropes put on
-	// each tower, and LateralMoment its moment about the column base.
+	// Lateral is the force across the bridge that wind-swung ropes and wind
+	// on the column face put on each tower, and LateralMoment its moment
+	// about the column base; ColumnWind is the part from wind on the
+	// column face.
 	Lateral       [2]units.Force
 	LateralMoment [2]units.Moment
+	ColumnWind    [2]units.Force
 }
 
 // ErectionTable is the erection-sag table of one rope group.
@@ -145,24 +156,37 @@ type reportSink struct{ rep *check.Report }
 func (s reportSink) add(r check.Result) { s.rep.Add(r) }
 
 func (m *model) run(a *Analysis, opts *Options) error {
-	var err error
-	if a.Service, a.Design, err = m.states(); err != nil {
-		return err
-	}
-	out := reportSink{&a.Report}
-	if err := m.superstructure(out, a.Service, a.Design); err != nil {
-		return err
-	}
-	for side := Left; side <= Right; side++ {
-		bank := m.bank(side)
-		if err := m.footingChecks(out, side, bank.Tower.Footing, a.Service); err != nil {
+	// Each variant of groove behaviour (one, unless the description leaves
+	// a fixed saddle's groove open) is analysed and checked in full; the
+	// report keeps each check's worst variant. The states kept are the
+	// first variant's (free grooves where not given).
+	var all merged
+	for k, v := range m.variants() {
+		m.grooves = v.grooves
+		service, design, err := m.states()
+		if err != nil {
 			return err
 		}
-		if err := m.anchorChecks(out, side, bank.Anchor, a.Service); err != nil {
+		if k == 0 {
+			a.Service, a.Design = service, design
+		}
+		out := labelSink{&all, v.label}
+		if err := m.superstructure(out, service, design); err != nil {
 			return err
 		}
+		for side := Left; side <= Right; side++ {
+			bank := m.bank(side)
+			if err := m.footingChecks(out, side, bank.Tower.Footing, service); err != nil {
+				return err
+			}
+			if err := m.anchorChecks(out, side, bank.Anchor, service); err != nil {
+				return err
+			}
+		}
+		m.checkClearance(out, service)
 	}
-	m.checkClearance(out, a.Service)
+	m.grooves = m.variants()[0].grooves
+	a.Report.Add(all.results...)
 	if err := m.comfort(a, a.Service[0], opts); err != nil {
 		return err
 	}
@@ -212,30 +236,8 @@ func (m *model) superstructure(out sink, service, design []CaseState) error {
 			out.add(r.For(g.Name, name))
 		}
 		for side := Left; side <= Right; side++ {
-			bank := m.bank(side)
-			towerName := towerElement[side]
-			var limit *tower.EccentricityLimit // nil: the kern
-			if e := bank.Tower.Eccentricity; e.Rule == "fraction" {
-				limit = &tower.EccentricityLimit{Fraction: e.Fraction, Offset: e.Offset}
-			}
-			r, err := tower.EccentricityCheck(svc.Tower[side], m.column(side), limit)
-			if err != nil {
-				return fmt.Errorf("sagspan: %s, case %q: %w", towerName, name, err)
-			}
-			out.add(r.For(towerName, name))
-			dr := des.Tower[side]
-			r, err = m.section(side).Check(dr.Vertical, dr.BaseMoment)
-			if err != nil {
-				return fmt.Errorf("sagspan: %s column section, case %q: %w", towerName, name, err)
-			}
-			out.add(r.For(towerName, name))
-			if ml := des.LateralMoment[side]; ml != 0 {
-				// Wind-swung ropes push the column across the bridge.
-				r, err = m.section(side).Turned().Check(dr.Vertical, ml)
-				if err != nil {
-					return fmt.Errorf("sagspan: %s column section across, case %q: %w", towerName, name, err)
-				}
-				out.add(r.For(towerAcrossElement[side], name).WithNote("bending across the bridge from wind on the swung ropes"))
+			if err := m.towerChecks(out, side, svc, des, service[0]); err != nil {
+				return err
 			}
 		}
 	}

@@ -98,9 +98,9 @@ type Comfort struct {
 }
 
 // closedForm returns the Irvine–Caughey frequencies of the whole rope
-// system in the permanent state: total H, mass and EA, at the sag the total
-// weight and tension hang at, w l²/(8H) (the weighted harmonic mean of the
-// groups' sags).
+// system in the permanent state: total H, mass and EA; the bridge hangs at
+// the sag its total weight and tension give, w l²/(8H) (the weighted
+// harmonic mean of the groups' sags).
 func (m *model) closedForm(perm CaseState) (cable.Modes, error) {
 	var h units.Force
 	var w units.LoadPerLength
@@ -110,10 +110,8 @@ func (m *model) closedForm(perm CaseState) (cable.Modes, error) {
 		w += m.ref[i].Load.Uniform
 		ea += g.elastic.EA
 	}
-	l := float64(m.b.Site.Span)
-	sag := units.Length(float64(w) * l * l / (8 * float64(h)))
 	mass := units.MassPerLength(float64(w) / units.StandardGravity)
-	modes, err := cable.Frequencies(m.span, h, mass, sag, ea)
+	modes, err := cable.Frequencies(m.span, h, mass, ea)
 	if err != nil {
 		return cable.Modes{}, fmt.Errorf("sagspan: natural frequencies: %w", err)
 	}
