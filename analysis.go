@@ -5,6 +5,7 @@ import (
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/tower"
 	"github.com/sagspan/sagspan/units"
+	"github.com/sagspan/sagspan/vibration"
 )
 
 // Options tune a whole-bridge check. A nil *Options means the defaults.
@@ -12,9 +13,16 @@ type Options struct {
 	// ErectionStep is the temperature step of the erection table; zero
 	// means 5 K.
 	ErectionStep float64
-	// StrictComfort fails, rather than flags, natural frequencies in the
-	// ranges walkers excite. Default false: flags.
+	// StrictComfort fails, rather than flags, what the comfort assessment
+	// finds: accelerations under walkers beyond their limits and crowds
+	// beyond the lock-in number (with SkipComfort, frequencies in the
+	// ranges walkers excite). Default false: flags.
 	StrictComfort bool
+	// SkipComfort leaves out the modal analysis and the walkers' response,
+	// keeping the closed-form frequencies: for a fast check. Default false.
+	SkipComfort bool
+	// Modal tunes the modal analysis; nil means its defaults.
+	Modal *vibration.Settings
 }
 
 // Side names a bank.
@@ -112,8 +120,11 @@ type Analysis struct {
 	// them. Design holds the states under the factored loads of the partial
 	// basis: rope tension (on that basis) and column sections.
 	Service, Design []CaseState
-	Modes           cable.Modes
-	Erection        []ErectionTable
+	// Modes are the closed-form frequencies of Irvine & Caughey; Comfort
+	// the modal analysis and walkers' response (nil when switched off).
+	Modes    cable.Modes
+	Comfort  *Comfort
+	Erection []ErectionTable
 }
 
 // Check runs the whole-bridge check: every load case through rope statics,
@@ -177,7 +188,7 @@ func (m *model) run(a *Analysis, opts *Options) error {
 	}
 	m.grooves = m.variants()[0].grooves
 	a.Report.Add(all.results...)
-	if err := m.checkFrequencies(a, a.Service[0], opts); err != nil {
+	if err := m.comfort(a, a.Service[0], opts); err != nil {
 		return err
 	}
 	return m.erection(a, opts)

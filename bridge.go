@@ -29,6 +29,9 @@ type Bridge struct {
 	Loads Loads `json:"loads,omitempty"`
 	// Basis chooses how the checks are verified and their factors.
 	Basis Basis `json:"basis,omitempty"`
+	// Comfort sets the modal analysis and the walkers' response; every
+	// field left out takes its default.
+	Comfort ComfortSpec `json:"comfort,omitempty"`
 }
 
 // Site is the crossing: the span between the walkway saddles and the

@@ -166,6 +166,7 @@ func (b Bridge) Validate() error {
 		}
 	}
 	b.validateLoads(v)
+	b.validateComfort(v)
 	return v.err
 }
 
@@ -564,6 +565,8 @@ var limits = map[string]limit{
 	"SoilSpec.Friction":   between(0*units.Degree, 50*units.Degree),
 	"SoilSpec.Cohesion":   between(0*units.Pascal, 2*units.Megapascal),
 	"SoilSpec.Allowable":  between(10*units.Kilopascal, 20*units.Megapascal),
+
+	"ComfortSpec.Damping": plain(0.001, maxDamping), // 0.1 % to 20 % of critical
 
 	"Loads.Crowd":           between(1*units.Kilopascal, 10*units.Kilopascal),
 	"Loads.WindWithCrowd":   plain(0, 1),
