@@ -1,12 +1,11 @@
 package sagspan
 
 import (
-	"fmt"
-
 	"github.com/sagspan/sagspan/cable"
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/tower"
 	"github.com/sagspan/sagspan/units"
+	"github.com/sagspan/sagspan/vibration"
 )
 
 // Options tune a whole-bridge check. A nil *Options means the defaults.
@@ -14,9 +13,16 @@ type Options struct {
 	// ErectionStep is the temperature step of the erection table; zero
 	// means 5 K.
 	ErectionStep float64
-	// StrictComfort fails, rather than flags, natural frequencies in the
-	// ranges walkers excite. Default false: flags.
+	// StrictComfort fails, rather than flags, what the comfort assessment
+	// finds: accelerations under walkers beyond their limits and crowds
+	// beyond the lock-in number (with SkipComfort, frequencies in the
+	// ranges walkers excite). Default false: flags.
 	StrictComfort bool
+	// SkipComfort leaves out the modal analysis and the walkers' response,
+	// keeping the closed-form frequencies: for a fast check. Default false.
+	SkipComfort bool
+	// Modal tunes the modal analysis; nil means its defaults.
+	Modal *vibration.Settings
 }
 
 // Side names a bank.
@@ -60,12 +66,20 @@ type GroupState struct {
 	Tension, Backstay    [2]units.Force
 	Angle, BackstayAngle [2]units.Angle
 	Sag                  units.Length // at midspan below the chord
-	LowX, LowZ           units.Length // lowest point, z from the left saddle
-	LowWithin            bool         // false when the lowest point is a saddle
+	LowX, LowZ           units.Length // lowest point within the span, z from the left saddle
 	MaxTension           units.Force  // the largest of span and backstay tensions
 	// SaddleMoved reports whether the saddle moved on the column top: a
-	// sliding saddle that slid, or a roller.
+	// sliding saddle that slid, or a roller; Travel is how far it moved
+	// from its place in the reference state, toward the span positive.
 	SaddleMoved [2]bool
+	Travel      [2]units.Length
+	// Held is the backstay tension had neither the rope nor the saddle
+	// moved from the reference state (the backstay's own unstretched length
+	// over its chord); Unbalance the horizontal force the ropes would then
+	// put on the saddle, toward the span: for a sliding saddle, its
+	// unbalance before friction.
+	Held      [2]units.Force
+	Unbalance [2]units.Force
 	// Saddle is the force on each tower column from this group's saddle.
 	Saddle [2]tower.LevelForce
 	shape  cable.Loaded
@@ -81,10 +95,13 @@ type CaseState struct {
 	// Tower is the resultant of the saddle forces and column weight at each
 	// column base.
 	Tower [2]tower.Resultant
-	// Lateral is the force across the bridge that wind-swung ropes put on
-	// each tower, and LateralMoment its moment about the column base.
+	// Lateral is the force across the bridge that wind-swung ropes and wind
+	// on the column face put on each tower, and LateralMoment its moment
+	// about the column base; ColumnWind is the part from wind on the
+	// column face.
 	Lateral       [2]units.Force
 	LateralMoment [2]units.Moment
+	ColumnWind    [2]units.Force
 }
 
 // ErectionTable is the erection-sag table of one rope group: the sag and
@@ -103,6 +120,9 @@ type ErectionTable struct {
 // Analysis is everything the whole-bridge check found.
 type Analysis struct {
 	Bridge Bridge
+	// Source names the description the bridge was read from, such as its
+	// file name, for the report's design basis; the caller sets it.
+	Source string
 	// Report holds every check result of every case.
 	Report check.Report
 	// Service holds the states under characteristic loads (all factors 1):
@@ -110,8 +130,11 @@ type Analysis struct {
 	// them. Design holds the states under the factored loads of the partial
 	// basis: rope tension (on that basis) and column sections.
 	Service, Design []CaseState
-	Modes           cable.Modes
-	Erection        []ErectionTable
+	// Modes are the closed-form frequencies of Irvine & Caughey; Comfort
+	// the modal analysis and walkers' response (nil when switched off).
+	Modes    cable.Modes
+	Comfort  *Comfort
+	Erection []ErectionTable
 }
 
 // Check runs the whole-bridge check: every load case through rope statics,
@@ -144,61 +167,112 @@ type reportSink struct{ rep *check.Report }
 func (s reportSink) add(r check.Result) { s.rep.Add(r) }
 
 func (m *model) run(a *Analysis, opts *Options) error {
-	cases := m.b.Cases()
-	for _, lc := range cases {
-		svc, des, err := m.pair(lc, nil)
+	// Each variant of groove behaviour (one, unless the description leaves
+	// a fixed saddle's groove open) is analysed and checked in full; the
+	// report keeps each check's worst variant. The states kept are the
+	// first variant's (free grooves where not given).
+	var all merged
+	for k, v := range m.variants() {
+		m.grooves = v.grooves
+		service, design, err := m.checkAll(labelSink{&all, v.label}, true)
 		if err != nil {
 			return err
 		}
-		a.Service = append(a.Service, svc)
-		a.Design = append(a.Design, des)
-	}
-	perm := a.Service[0]
-	out := reportSink{&a.Report}
-	for k := range cases {
-		if err := m.checkCase(out, perm, a.Service[k], a.Design[k]); err != nil {
-			return err
+		if k == 0 {
+			a.Service, a.Design = service, design
 		}
 	}
-	for _, fam := range m.b.LoadedLengths() {
-		found, _, err := m.searchLength(out, perm, fam, true)
-		if err != nil {
-			return err
-		}
-		for _, p := range found {
-			a.Service = append(a.Service, p[0])
-			a.Design = append(a.Design, p[1])
-		}
-	}
-	if err := m.grooveChecks(out); err != nil {
+	m.grooves = m.variants()[0].grooves
+	a.Report.Add(all.results...)
+	if err := m.grooveChecks(reportSink{&a.Report}); err != nil {
 		return err
 	}
-	if err := m.checkFrequencies(a, perm, opts); err != nil {
+	if err := m.comfort(a, a.Service[0], opts); err != nil {
 		return err
 	}
 	return m.erection(a, opts)
 }
 
-// checkCase adds every check of one case: rope tension, towers and column
-// sections, footings and anchors, and in the persistent situation the flood
-// clearance and the walkway gradient. perm is the permanent case, whose
-// actions the footing and anchor checks split off as permanent.
-func (m *model) checkCase(out sink, perm, svc, des CaseState) error {
-	if err := m.ropeChecks(out, svc, des, true); err != nil {
-		return err
+// checkAll analyses every load case and every loaded-length family in the
+// variant of groove behaviour set, and adds their checks to out (the
+// footing and anchor checks with ground). It returns the states of the
+// cases and of the governing stretches, characteristic and design; the
+// first is the permanent case.
+func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, err error) {
+	// The uplift checks of the cases with wind lifting the walkway follow
+	// the permanent case's checks in the report.
+	var uplift collected
+	for _, lc := range m.b.Cases() {
+		svc, des, ok, err := m.caseStates(&uplift, lc)
+		if err != nil {
+			return nil, nil, err
+		}
+		if ok {
+			service = append(service, svc)
+			design = append(design, des)
+		}
 	}
-	if err := m.structureChecks(out, svc, des); err != nil {
-		return err
+	perm := service[0]
+	for k := range service {
+		if k == 1 || len(service) == 1 {
+			for _, r := range uplift {
+				out.add(r)
+			}
+		}
+		if err := m.ropeChecks(out, service[k], design[k], true); err != nil {
+			return nil, nil, err
+		}
+		if err := m.structureChecks(out, perm, service[k], design[k]); err != nil {
+			return nil, nil, err
+		}
+		if ground {
+			if err := m.groundChecks(out, perm, service[k]); err != nil {
+				return nil, nil, err
+			}
+		}
 	}
-	return m.groundChecks(out, perm, svc)
+	for _, fam := range m.b.LoadedLengths() {
+		found, _, err := m.searchLength(out, perm, fam, ground)
+		if err != nil {
+			return nil, nil, err
+		}
+		for _, p := range found {
+			service = append(service, p[0])
+			design = append(design, p[1])
+		}
+	}
+	return service, design, nil
+}
+
+// collected keeps the results it is given, in order.
+type collected []check.Result
+
+func (c *collected) add(r check.Result) { *c = append(*c, r) }
+
+// caseStates returns the states of case lc, characteristic and design,
+// and false when the wind lifts the walkway so that it has none; a case
+// with wind lifting the walkway adds its uplift check to out.
+func (m *model) caseStates(out sink, lc LoadCase) (svc, des CaseState, ok bool, err error) {
+	if lc.Lift {
+		r, lifted := m.upliftCheck(lc)
+		out.add(r)
+		if lifted {
+			return CaseState{}, CaseState{}, false, nil
+		}
+	}
+	svc, des, err = m.pair(lc, nil)
+	return svc, des, err == nil, err
 }
 
 // structureChecks adds the checks of one case that no foundation size
-// changes: towers and column sections, and in the persistent situation the
-// flood clearance and the walkway gradient (not the ropes).
-func (m *model) structureChecks(out sink, svc, des CaseState) error {
-	if err := m.superstructure(out, []CaseState{svc}, []CaseState{des}); err != nil {
-		return err
+// changes, but for the ropes: towers and column members, and in the
+// persistent situation the flood clearance and the walkway gradient. perm
+// is the permanent case, for creep in the columns.
+func (m *model) structureChecks(out sink, perm, svc, des CaseState) error {
+	for side := Left; side <= Right; side++ {
+		if err := m.towerChecks(out, side, svc, des, perm); err != nil {
+			return err
+		}
 	}
 	if svc.Case.Situation == Persistent {
 		m.checkClearance(out, []CaseState{svc})
@@ -208,7 +282,8 @@ func (m *model) structureChecks(out sink, svc, des CaseState) error {
 }
 
 // groundChecks adds the footing and anchor checks of one case at both
-// banks.
+// banks; perm is the permanent case, whose actions they split off as
+// permanent.
 func (m *model) groundChecks(out sink, perm, svc CaseState) error {
 	for side := Left; side <= Right; side++ {
 		bank := m.bank(side)
@@ -217,43 +292,6 @@ func (m *model) groundChecks(out sink, perm, svc CaseState) error {
 		}
 		if err := m.anchorChecks(out, side, bank.Anchor, perm, []CaseState{svc}); err != nil {
 			return err
-		}
-	}
-	return nil
-}
-
-// superstructure checks, for every case, what the towers and column
-// sections carry: resultant eccentricity, column section.
-func (m *model) superstructure(out sink, service, design []CaseState) error {
-	for k, svc := range service {
-		des := design[k]
-		name := svc.Case.Name
-		for side := Left; side <= Right; side++ {
-			bank := m.bank(side)
-			towerName := towerElement[side]
-			var limit *tower.EccentricityLimit // nil: the kern
-			if e := bank.Tower.Eccentricity; e.Rule == "fraction" {
-				limit = &tower.EccentricityLimit{Fraction: e.Fraction, Offset: e.Offset}
-			}
-			r, err := tower.EccentricityCheck(svc.Tower[side], m.column(side), limit)
-			if err != nil {
-				return fmt.Errorf("sagspan: %s, case %q: %w", towerName, name, err)
-			}
-			out.add(r.For(towerName, name))
-			dr := des.Tower[side]
-			r, err = m.section(side).Check(dr.Vertical, dr.BaseMoment)
-			if err != nil {
-				return fmt.Errorf("sagspan: %s column section, case %q: %w", towerName, name, err)
-			}
-			out.add(r.For(towerName, name))
-			if ml := des.LateralMoment[side]; ml != 0 {
-				// Wind-swung ropes push the column across the bridge.
-				r, err = m.section(side).Turned().Check(dr.Vertical, ml)
-				if err != nil {
-					return fmt.Errorf("sagspan: %s column section across, case %q: %w", towerName, name, err)
-				}
-				out.add(r.For(towerAcrossElement[side], name).WithNote("bending across the bridge from wind on the swung ropes"))
-			}
 		}
 	}
 	return nil

@@ -5,18 +5,6 @@ import (
 	"testing"
 )
 
-// levelLengthEA is levelLength with the group's stiffness ea: the total
-// unstretched rope of testdata/level.json's span and two backstays over
-// fixed saddles hanging with H under w per metre (formulas beside
-// levelLength).
-func levelLengthEA(h, w, ea float64) float64 {
-	const l = 50.0
-	n := w * l / (8 * h)
-	s := l/2*math.Sqrt(1+16*n*n) + l*math.Asinh(4*n)/(8*n)
-	tb := math.Hypot(h, w*l/2)
-	return s - (h*l+w*w*l*l*l/(12*h))/ea + 2*math.Hypot(10, 3)/(1+tb/ea)
-}
-
 // TestBrokenRopeByHand checks the accidental case of one walkway rope
 // broken on the symmetric level bridge (testdata/level.json: four 26 mm
 // ropes over fixed saddles, one temperature), by hand:

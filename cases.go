@@ -10,8 +10,10 @@ import (
 // Stretch is a part of the span between two abscissae measured from the
 // left saddle. The zero Stretch is empty.
 type Stretch struct {
+	// From is where the stretch begins, from the left saddle.
 	From units.Length `json:"from"`
-	To   units.Length `json:"to"`
+	// To is where it ends, from the left saddle; beyond From.
+	To units.Length `json:"to"`
 }
 
 // Length returns the length of the stretch, zero when it is empty.
@@ -92,6 +94,73 @@ func (lc LoadCase) crowded() bool { return !lc.Crowd.Empty() && lc.CrowdFactor >
 
 // windy reports whether the wind acts in this case.
 func (lc LoadCase) windy() bool { return lc.Wind > 0 }
+
+// describe says in words what acts in the case: the crowd and where, the
+// wind, the rope temperatures, ropes broken, the situation.
+func (lc LoadCase) describe(b Bridge) string {
+	var parts []string
+	if lc.Situation == Construction {
+		parts = append(parts, "bare ropes, walkway placed "+lc.Deck.describe(b.Site.Span))
+	}
+	switch {
+	case lc.crowded() && lc.CrowdPressure > 0:
+		parts = append(parts, fmt.Sprintf("%s on %s", lc.CrowdPressure, lc.Crowd.describe(b.Site.Span)))
+	case lc.crowded():
+		q := b.crowd(lc.Crowd.Length())
+		parts = append(parts, fmt.Sprintf("crowd %s on %s", q, lc.Crowd.describe(b.Site.Span)))
+		if lc.CrowdFactor != 1 {
+			parts[len(parts)-1] += fmt.Sprintf(" × ψ %.2g", lc.CrowdFactor)
+		}
+	default:
+		parts = append(parts, "no crowd")
+	}
+	if lc.windy() {
+		w := fmt.Sprintf("wind × %.2g", lc.Wind)
+		if lc.Lift {
+			w += " with its upward force on the walkway"
+		}
+		parts = append(parts, w)
+	}
+	t := "ropes at " + lc.Temperature.String()
+	if lc.BackstayTemperature != 0 && lc.BackstayTemperature != lc.Temperature {
+		t = "span ropes at " + lc.Temperature.String() + ", backstays at " + lc.BackstayTemperature.String()
+	}
+	parts = append(parts, t)
+	if lc.Broken > 0 {
+		parts = append(parts, fmt.Sprintf("%d rope of %s broken", lc.Broken, lc.BrokenGroup))
+	}
+	if lc.Situation != Persistent {
+		parts = append(parts, lc.Situation.String()+" situation")
+	}
+	return strings.Join(parts, ", ")
+}
+
+// describe says where the stretch lies on a span of length l.
+func (s Stretch) describe(l units.Length) string {
+	switch {
+	case s.From <= 0 && s.To >= l:
+		return "the whole span"
+	case s.From <= 0:
+		return fmt.Sprintf("%s from the left saddle", s.To)
+	case s.To >= l:
+		return fmt.Sprintf("%s to the right saddle", l-s.From)
+	}
+	return fmt.Sprintf("%s to %s from the left saddle", s.From, s.To)
+}
+
+// describe says what the family searches.
+func (f LoadedLength) describe(b Bridge) string {
+	var where []string
+	for _, p := range f.Placements {
+		where = append(where, p.String())
+	}
+	what := "crowd (EN 1991-2 5.3.2.1 pressure of each loaded length, or the description's own)"
+	if f.deck() {
+		what = fmt.Sprintf("walkway placed on the bare ropes with %s of crew and tools on it", f.Base.CrowdPressure)
+	}
+	return fmt.Sprintf("%s on every loaded length %s; ropes at %s; each check reports its worst stretch (%d lengths swept per placement, refined to %.2g of the span)",
+		what, strings.Join(where, ", "), f.Base.Temperature, sweepPoints, refineTol)
+}
 
 // Placement says where a searched stretch lies on the span.
 type Placement int
@@ -402,7 +471,11 @@ func (b Bridge) defaultNames() []string {
 //
 // The permanent load is always present.
 type CaseSpec struct {
-	Name    string             `json:"name"`
+	// Name names the case in the report; it must differ from every other
+	// case's.
+	Name string `json:"name"`
+	// Actions maps each variable action present ("crowd", "wind", "lift")
+	// to its combination factor: 1 when it leads, ψ when it accompanies.
 	Actions map[string]float64 `json:"actions,omitempty"`
 	// Crowd places the crowd; zero means the whole span.
 	Crowd Stretch `json:"crowd,omitempty"`

@@ -47,8 +47,8 @@ func TestBadCaseDescriptions(t *testing.T) {
 			obj(m, "basis")["rope_efficiency"] = 0.85
 		}, "basis.termination", "not both"},
 		{"an unknown bank to place the deck from", func(m map[string]any) { loads(m)["deck_from"] = "middle" }, "loads.deck_from", "unknown bank"},
-		{"a negative groove", func(m map[string]any) { obj(m, "banks", "left", "tower", "saddle")["groove_diameter"] = "-900 mm" }, "banks.left.tower.saddle.groove_diameter", "negative"},
-		{"a dynamic factor below 1", func(m map[string]any) { loads(m)["break_dynamic"] = 0.5 }, "loads.break_dynamic", "between 1 and 3"},
+		{"a negative groove", func(m map[string]any) { obj(m, "banks", "left", "tower", "saddle")["groove_diameter"] = "-900 mm" }, "banks.left.tower.saddle.groove_diameter", "outside the plausible range"},
+		{"a dynamic factor below 1", func(m map[string]any) { loads(m)["break_dynamic"] = 0.5 }, "loads.break_dynamic", "outside the plausible range"},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {

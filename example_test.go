@@ -21,10 +21,10 @@ func ExampleCheck() {
 		}
 	}
 	// Output:
-	// overall: pass
-	// cable.tension (walkway ropes): 147.6 kN of 193.6 kN under "crowd 0.91 L at midspan, coldest rope"
-	// cable.tension (handrail ropes): 6.279 kN of 75.61 kN under "wind, coldest rope"
-	// bridge.clearance (walkway): 1.500 m of 4.039 m under "crowd 0.46 L at midspan, hottest rope"
+	// overall: flag
+	// cable.tension (walkway ropes): 147.7 kN of 193.6 kN under "crowd 0.90 L at midspan, coldest rope"
+	// cable.tension (handrail ropes): 5.223 kN of 75.61 kN under "wind, coldest rope"
+	// bridge.clearance (walkway): 1.500 m of 4.042 m under "crowd 0.46 L at midspan, hottest rope"
 }
 
 func ExampleCrowdPressure() {
@@ -40,9 +40,10 @@ func ExampleCrowdPressure() {
 }
 
 func ExampleParse() {
-	_, err := sagspan.Parse([]byte(`{"site": {"span": "-48 m"}}`))
+	// A decimal comma is a slip, not 72 m.
+	_, err := sagspan.Parse([]byte(`{"site": {"span": "72,5 m"}}`))
 	fmt.Println(err)
-	// Output: sagspan: bridge description: site.span: must be positive, got -48.00 m
+	// Output: sagspan: bridge description: site.span: units: "72,5 m": "72,5 m" has a comma in the number; write it with a decimal point and no thousands separator, such as "72.5 m" (line 1, column 19)
 }
 
 func ExampleSearch() {
@@ -68,5 +69,5 @@ func ExampleSearch() {
 	}
 	// Output:
 	// 8 candidates, 2 feasible
-	// best: sag 1/20, 6 ropes, anchor 4.500 m long, cost 44990, utilisation 0.939
+	// best: sag 1/20, 6 ropes, anchor 4.500 m long, cost 45958, utilisation 0.976
 }

@@ -1,7 +1,6 @@
 package sagspan
 
 import (
-	"fmt"
 	"math"
 
 	"github.com/sagspan/sagspan/cable"
@@ -27,17 +26,18 @@ type model struct {
 	fbasis foundation.Basis
 	// scratch and pulls are reused by each footing or anchor check.
 	scratch []check.Result
-	pulls   []foundation.Pull
+	pulls   []foundation.AnchorPull
 	// spanUnstretched is each group's unstretched span length in the
 	// reference state; backstays are each group's backstays.
 	spanUnstretched []float64
 	backstays       [][2]backstay
-	// refLength and refIntegral are each group's span length and ∫T ds in
-	// the reference state.
-	refLength, refIntegral []float64
-	// states holds the group states solved so far, by their input: a group
-	// that carries no crowd hangs alike under every crowd, and a case's
-	// service and design states often share groups.
+	// grooves is the groove behaviour of each bank's saddle in the
+	// variant being analysed (see variants).
+	grooves [2]tower.Groove
+	// states holds the group states solved so far, by their input (and the
+	// variant's grooves): a group that carries no crowd hangs alike under
+	// every crowd, and a case's service and design states often share
+	// groups.
 	states map[stateKey]GroupState
 }
 
@@ -81,13 +81,13 @@ func newModel(b Bridge) (*model, error) {
 		}
 	}
 	l := float64(b.Site.Span)
-	for _, g := range gs {
+	for i, g := range gs {
 		w0 := g.self + units.LoadPerLength(g.share)*m.dead
 		h0 := units.Force(float64(w0) * l * l / (8 * float64(g.Sag))) // H = w l²/(8 f)
 		ref := cable.State{Load: cable.Load{Uniform: w0}, H: h0, Temperature: b.Climate.Reference}
 		m.ref = append(m.ref, ref)
 		if err := m.reference(g, ref); err != nil {
-			return nil, err
+			return nil, m.groupErr(i, LoadCase{Name: "reference state", Temperature: b.Climate.Reference}, err)
 		}
 	}
 	return m, nil
@@ -99,17 +99,15 @@ func newModel(b Bridge) (*model, error) {
 func (m *model) reference(g group, ref cable.State) error {
 	shape, err := cable.NewLoaded(m.span, ref.Load, ref.H)
 	if err != nil {
-		return fmt.Errorf("sagspan: %s, reference state: %w", g.Name, err)
+		return err
 	}
-	// Unstretched length: L₀ = S − (1/EA) ∫T ds with ∫T ds = H (l + h²/l) + D/H,
-	// D = ∫Q² dx = w² l³/12 for the uniform reference load (the small-strain
-	// rule; see cable.ChangeOfState).
-	l, h := float64(m.span.Length), float64(m.span.Rise)
-	w, hh := float64(ref.Load.Uniform), float64(ref.H)
-	integral := hh*(l+h*h/l) + w*w*l*l*l/12/hh
-	m.spanUnstretched = append(m.spanUnstretched, float64(shape.Length())-integral/float64(g.elastic.EA))
-	m.refLength = append(m.refLength, float64(shape.Length()))
-	m.refIntegral = append(m.refIntegral, integral)
+	// Unstretched length by Hooke's law on the unstretched length, the law
+	// of every rope model here (see package cable).
+	l0, err := cable.UnstretchedLength(m.span, g.elastic.EA, ref.Load, ref.H)
+	if err != nil {
+		return err
+	}
+	m.spanUnstretched = append(m.spanUnstretched, float64(l0))
 	ta, tb := shape.SupportTensions()
 	aa, ab := shape.SupportAngles()
 	var bss [2]backstay
@@ -118,9 +116,14 @@ func (m *model) reference(g group, ref cable.State) error {
 		a := [2]units.Angle{aa, ab}[side]
 		bs := backstay{angle: backstayAngle(bank.Backstay, g.Offset)}
 		bs.chord = units.Length(math.Hypot(float64(bank.Backstay.Horizontal), float64(bank.Backstay.Drop+g.Offset)))
-		hx, v, _ := elevationPull(t, a, 0)
-		t0, _ := saddleBalance(saddleKind(bank.Tower.Saddle), bank.Tower.Saddle.Friction, float64(t), hx, v, bs.angle, 0)
-		bs.unstretched = bs.unstretchedFor(g.elastic, t0)
+		// The rope was set over the saddle with its tension continuous
+		// (held = T_s), then clamped or left to grip: the backstay's
+		// reference tension is what the saddle holds from there.
+		bal, err := m.saddle(Side(side), g, 0).Balance(tower.RopePull{Tension: t, Angle: a}, bs.angle, t)
+		if err != nil {
+			return m.bankErr(Side(side), "tower.saddle", "reference state", err)
+		}
+		bs.unstretched = bs.unstretchedFor(g.elastic, float64(bal.Backstay))
 		bss[side] = bs
 	}
 	m.backstays = append(m.backstays, bss)
@@ -196,13 +199,38 @@ func clip(s Stretch, l units.Length) Stretch {
 	return Stretch{From: max(s.From, 0), To: min(s.To, l)}
 }
 
+// column returns the tower column of one bank, from its base section up
+// to its highest saddle. A concrete column is the tower's gross rectangle;
+// a steel tube or frame is given by its legs: breadth to the wind the legs'
+// sizes side by side, weight the steel's.
 func (m *model) column(s Side) tower.Column {
 	t := m.bank(s).Tower
-	return tower.Column{Depth: t.Depth, Width: t.Width, Height: t.Height, Facing: t.Facing, UnitWeight: t.UnitWeight}
+	c := tower.Column{Depth: t.Depth, Width: t.Width, Height: t.Height + m.topOffset(), Facing: t.Facing,
+		UnitWeight: t.UnitWeight, Drag: t.Drag}
+	if steel, legs := m.steel(s); legs > 0 {
+		n := units.Length(legs)
+		c = tower.Column{Depth: n * steel.Size, Width: steel.Size, Height: c.Height, UnitWeight: steelUnitWeight,
+			Area: units.Area(legs) * steel.Area(), Drag: t.Drag}
+		if c.Drag == 0 && steel.Shape == tower.Circular {
+			c.Drag = circularDrag
+		}
+	}
+	return c
+}
+
+// topOffset is the height of the highest saddle above the walkway-rope
+// saddle: the column reaches up to it.
+func (m *model) topOffset() units.Length {
+	var top units.Length
+	for _, g := range m.groups {
+		top = max(top, g.Offset)
+	}
+	return top
 }
 
 // section returns the effective reinforced-concrete section of a column,
-// bending along the bridge, checked to EN 1992-1-1 on design actions.
+// bending along the bridge (H along, B across), checked to EN 1992-1-1 on
+// design actions.
 func (m *model) section(s Side) tower.RCSection {
 	t := m.bank(s).Tower
 	spec := t.Section

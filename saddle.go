@@ -20,6 +20,29 @@ func saddleKind(s SaddleSpec) tower.SaddleKind {
 	return tower.Fixed
 }
 
+// grooveOf maps the description's groove; known is false when the
+// description does not say (the chain then checks the bounds).
+func grooveOf(s SaddleSpec) (g tower.Groove, known bool) {
+	switch s.Groove {
+	case "free":
+		return tower.FreeGroove, true
+	case "friction":
+		return tower.FrictionGroove, true
+	case "clamped":
+		return tower.ClampedGroove, true
+	}
+	return tower.FreeGroove, saddleKind(s) != tower.Fixed
+}
+
+// saddle returns the saddle of one bank for rope group g: its kind, the
+// groove behaviour of the variant being analysed, its height, and travel
+// as its offset.
+func (m *model) saddle(side Side, g group, travel units.Length) tower.Saddle {
+	spec := m.bank(side).Tower.Saddle
+	return tower.Saddle{Kind: saddleKind(spec), Friction: spec.Friction, Groove: m.grooves[side],
+		GrooveFriction: spec.GrooveFriction, Height: m.bank(side).Tower.Height + g.Offset, Offset: travel}
+}
+
 // backstay is one rope group's backstay at one bank: a straight rope from
 // the saddle down to the anchor (its own sag neglected, common practice for
 // short, steep backstays).
@@ -37,38 +60,24 @@ func (bs backstay) unstretchedFor(e cable.Elastic, t float64) float64 {
 	return float64(bs.chord) / (1 + t/float64(e.EA))
 }
 
-// saddleBalance returns the backstay tension over a saddle of the given
-// kind. The rope renders over the saddle's groove, friction there
-// neglected (common practice), so its tension is continuous, T_b = T_s,
-// unless the saddle itself moves on the column top. The span-side pull is
-// given by its tension ts and, in the elevation plane, its horizontal and
-// vertical components h and v:
+// heldTension returns the tension of the backstay when it keeps the
+// unstretched length l0 (at the rope's present temperature) over its chord:
+// the inverse of unstretchedFor, T = EA (c/l0 − 1), or zero when the rope
+// is longer than its chord and hangs slack. It is what a clamped rope, or
+// a saddle that has not moved, leaves in the backstay.
+func (bs backstay) heldTension(e cable.Elastic, l0 float64) float64 {
+	return max(0, float64(e.EA)*(float64(bs.chord)/l0-1))
+}
+
+// travel returns how far a sliding or roller saddle has moved along the
+// bridge (toward the span positive) from where it sat in the reference
+// state: the rope it carries clamped keeps the backstay's unstretched
+// length l0, so the backstay, stretched to l0 (1 + T/EA), reaches a chord
+// longer than c by the saddle's travel times cos β:
 //
-//	fixed:   T_b = T_s                               (the column takes H = h − T_b cos β)
-//	roller:  T_b = h / cos β                         (the saddle rolls until the horizontals balance)
-//	sliding: T_b = T_s    while |h − T_s cos β| <= μ (v + T_s sin β)
-//	         T_b = (h − sμv)/(cos β + sμ sin β)      once the saddle slides, s the sign of the unbalance
-//
-// with the normal force taken as the vertical component, as package tower
-// does (common practice). slide, when not zero, holds a sliding saddle
-// sliding in that direction (+1: toward the span); the result's moved is
-// the direction the saddle moved, zero when it stayed (a roller gives +1).
-func saddleBalance(kind tower.SaddleKind, mu, ts, h, v float64, beta units.Angle, slide float64) (t, moved float64) {
-	cb, sb := math.Cos(float64(beta)), math.Sin(float64(beta))
-	switch kind {
-	case tower.Roller:
-		return h / cb, 1
-	case tower.Sliding:
-		if slide == 0 {
-			unbalance := h - ts*cb
-			if math.Abs(unbalance) <= mu*(v+ts*sb) {
-				return ts, 0
-			}
-			slide = math.Copysign(1, unbalance)
-		}
-		return (h - slide*mu*v) / (cb + slide*mu*sb), slide
-	}
-	return ts, 0
+//	Δ = [l0 (1 + T/EA) − c] / cos β
+func (bs backstay) travel(e cable.Elastic, l0, t float64) units.Length {
+	return units.Length((l0*(1+t/float64(e.EA)) - float64(bs.chord)) / math.Cos(float64(bs.angle)))
 }
 
 // elevationPull returns the components, in the elevation plane, of the
@@ -88,10 +97,11 @@ const maxFeedIterations = 60
 
 // analyse returns the state of the bridge under case lc.
 //
-// Each rope group's span is a change of state from its reference state
-// (cable.ChangeOfState). The rope runs on from the span over the saddles
-// into the backstays, so rope renders between them: the span's unstretched
-// length grows by what the backstays give up, Σ [l0_b,θ − c_b/(1 + T_b/EA)],
+// Each rope group's span hangs its unstretched length, that of the
+// reference state at the case's temperature (cable.StateForLength). The
+// rope runs on from the span over the saddles into the backstays, so rope
+// renders between them: the span's unstretched length grows by what the
+// backstays give up, Σ [l0_b,θ − c_b/(1 + T_b/EA)],
 // and the span and backstay tensions are solved together (the anchors and,
 // but for sliding and roller saddles, the saddles fixed).
 func (m *model) analyse(lc LoadCase) (CaseState, error) {
@@ -108,33 +118,44 @@ func (m *model) analyseFrom(lc LoadCase, warm *CaseState) (CaseState, error) {
 		if warm != nil {
 			in.feed = warm.Groups[i].feed
 		}
+		swing := in.swing
 		gs, err := m.groupState(i, in)
 		if err != nil {
-			return CaseState{}, fmt.Errorf("sagspan: %s, case %q: %w", g.Name, lc.Name, err)
+			return CaseState{}, m.groupErr(i, lc, err)
 		}
-		swing := in.swing
 		for side := Left; side <= Right; side++ {
-			bank := m.bank(side)
-			h, v, lateral := elevationPull(gs.Tension[side], gs.Angle[side], swing)
-			spanPull := tower.Pull{Tension: units.Force(math.Hypot(h, v)), Angle: units.Angle(math.Atan2(v, h))}
-			saddle := tower.Saddle{Kind: saddleKind(bank.Tower.Saddle), Friction: bank.Tower.Saddle.Friction, Height: bank.Tower.Height + g.Offset}
-			lf, err := saddle.Force(spanPull, tower.Pull{Tension: gs.Backstay[side], Angle: gs.BackstayAngle[side]})
+			saddle := m.saddle(side, g, gs.Travel[side])
+			spanPull := tower.RopePull{Tension: gs.Tension[side], Angle: gs.Angle[side], Swing: swing}
+			lf, err := saddle.Force(spanPull, tower.RopePull{Tension: gs.Backstay[side], Angle: gs.BackstayAngle[side]})
 			if err != nil {
-				return CaseState{}, fmt.Errorf("sagspan: %s saddle, %s, case %q: %w", side, g.Name, lc.Name, err)
+				return CaseState{}, m.bankErr(side, "tower.saddle", lc.Name, fmt.Errorf("%s: %w", g.Name, err))
 			}
 			gs.Saddle[side] = lf
 			levels[side] = append(levels[side], lf)
-			cs.Lateral[side] += units.Force(lateral)
-			cs.LateralMoment[side] += units.MomentOf(units.Force(lateral), saddle.Height)
+			cs.Lateral[side] += lf.Lateral
+			cs.LateralMoment[side] += units.MomentOf(lf.Lateral, saddle.Height)
 		}
 		cs.Groups[i] = gs
+	}
+	for side := Left; side <= Right; side++ {
+		// Wind on the column face, across the bridge.
+		if f := lc.GammaW * lc.Wind; f > 0 && m.wind > 0 {
+			cw, err := m.column(side).Wind(units.Pressure(f) * m.wind)
+			if err != nil {
+				return CaseState{}, fmt.Errorf("sagspan: %s tower, case %q: %w", side, lc.Name, err)
+			}
+			levels[side] = append(levels[side], cw)
+			cs.ColumnWind[side] = cw.Lateral
+			cs.Lateral[side] += cw.Lateral
+			cs.LateralMoment[side] += units.MomentOf(cw.Lateral, cw.Height)
+		}
 	}
 	for side := Left; side <= Right; side++ {
 		// The column's own weight carries the permanent load factor of the
 		// case (1 on characteristic loads).
 		r, err := tower.Combine(levels[side], units.Force(lc.GammaG)*m.column(side).Weight())
 		if err != nil {
-			return CaseState{}, fmt.Errorf("sagspan: %s tower, case %q: %w", side, lc.Name, err)
+			return CaseState{}, m.bankErr(side, "tower", lc.Name, err)
 		}
 		cs.Tower[side] = r
 	}
@@ -180,39 +201,23 @@ func (m *model) solveInput(g group, lc LoadCase) solveInput {
 // The rope rendered into the span, feed, solves r(feed) = g(feed) − feed = 0
 // where g is the rope the backstays give up once the span hangs with that
 // feed; secant steps from the input's feed, safeguarded by plain iteration.
+// With ropes broken, the ropes left keep their unstretched lengths and the
+// group's stiffness is theirs.
 func (m *model) solveGroup(i int, in solveInput) (GroupState, error) {
 	load, swing, dt := in.load, in.swing, in.dt
 	g := m.groups[i]
 	e := g.elastic
-	// The rope fed into the span reaches the change of state as an
-	// equivalent change of the span's unstretched length, through the
-	// thermal term: exp(α' dθ') = exp(α dt)·(1 + feed/l0,θ).
-	thermal := math.Exp(float64(e.Alpha)*dt) * in.scale
-	thermalBackstay := math.Exp(float64(e.Alpha)*in.dtBackstay) * in.scale
+	e.EA *= units.AxialStiffness(in.intact)
+	// Linear thermal strain from the reference temperature, on the span and
+	// on the backstays each at its own temperature (package cable's
+	// constitutive law); new rope shorter by the scale.
+	thermal := (1 + float64(e.Alpha)*dt) * in.scale
+	thermalBackstay := (1 + float64(e.Alpha)*in.dtBackstay) * in.scale
 	l0 := m.spanUnstretched[i] * thermal
-	// With ropes broken the change of state, which measures the reference
-	// state's unstretched length with the group's present stiffness, is
-	// corrected to the unstretched length the ropes left really have.
-	var correct float64
-	if in.intact != 1 {
-		e.EA *= units.AxialStiffness(in.intact)
-		correct = math.Log(m.spanUnstretched[i] / (m.refLength[i] - m.refIntegral[i]/float64(e.EA)))
-	}
-	// slide records the direction a sliding saddle slides. Every sliding
-	// saddle is first held (as a fixed one); it slides only if the settled
-	// held state asks more of its plate than friction gives, and the state
-	// is then solved again with it sliding that way. Deciding on settled
-	// states, never during the iteration, makes the answer independent of
-	// where the iteration starts.
-	var slide [2]float64
+	temp := m.ref[i].Temperature + units.Temperature(dt)
 	var gs GroupState
 	step := func(feed float64) (float64, error) {
-		grow := float64(e.Alpha)*dt + math.Log(in.scale) + correct + math.Log1p(feed/l0)
-		// Any positive α' serves; this one keeps dθ' within ±100 K, so the
-		// equivalent temperature stays an absolute temperature.
-		alphaEq := math.Max(1e-5, math.Abs(grow)/100)
-		eq := cable.Elastic{EA: e.EA, Alpha: units.ThermalExpansion(alphaEq)}
-		st, err := cable.ChangeOfState(m.span, eq, m.ref[i], load, m.ref[i].Temperature+units.Temperature(grow/alphaEq))
+		st, err := cable.StateForLength(m.span, e.EA, load, units.Length(l0+feed), temp)
 		if err != nil {
 			return 0, err
 		}
@@ -226,75 +231,57 @@ func (m *model) solveGroup(i int, in solveInput) (GroupState, error) {
 		gs.Tension = [2]units.Force{ta, tb}
 		gs.Angle = [2]units.Angle{aa, ab}
 		gs.Sag = shape.Sag(m.b.Site.Span / 2)
-		gs.LowX, gs.LowZ, gs.LowWithin = shape.LowPoint()
-		gs.MaxTension = max(ta, tb)
+		gs.LowX, gs.LowZ = shape.LowPoint()
+		gs.MaxTension = shape.MaxTension()
 		given := 0.0
 		for side := Left; side <= Right; side++ {
-			bank := m.bank(side)
 			bs := m.backstays[i][side]
-			h, v, _ := elevationPull(gs.Tension[side], gs.Angle[side], swing)
-			kind := saddleKind(bank.Tower.Saddle)
-			if kind == tower.Sliding && slide[side] == 0 {
-				kind = tower.Fixed // held
+			l0b := bs.unstretched * thermalBackstay
+			held := units.Force(bs.heldTension(e, l0b))
+			bal, err := m.saddle(side, g, 0).Balance(tower.RopePull{Tension: gs.Tension[side], Angle: gs.Angle[side], Swing: swing},
+				bs.angle, held)
+			if err != nil {
+				return 0, fmt.Errorf("%s saddle: %w", side, err)
 			}
-			tback, dir := saddleBalance(kind, bank.Tower.Saddle.Friction, float64(gs.Tension[side]), h, v, bs.angle, slide[side])
-			gs.Backstay[side], gs.BackstayAngle[side], gs.SaddleMoved[side] = units.Force(tback), bs.angle, dir != 0
+			tback := float64(bal.Backstay)
+			h, _, _ := elevationPull(gs.Tension[side], gs.Angle[side], swing)
+			gs.Held[side] = held
+			gs.Unbalance[side] = units.Force(h - float64(held)*math.Cos(float64(bs.angle)))
+			gs.Backstay[side], gs.BackstayAngle[side] = bal.Backstay, bs.angle
+			gs.SaddleMoved[side], gs.Travel[side] = bal.Motion == tower.Travelled, 0
+			if bal.Motion == tower.Travelled {
+				gs.Travel[side] = bs.travel(e, l0b, tback)
+			}
 			gs.MaxTension = max(gs.MaxTension, units.Force(tback))
-			given += bs.unstretched*thermalBackstay - bs.unstretchedFor(e, tback)
+			given += l0b - bs.unstretchedFor(e, tback)
 		}
 		gs.feed = feed
 		return given, nil
 	}
 	tol := 1e-10 * float64(m.span.Length)
-	settle := func(x0 float64) error {
-		g0, err := step(x0)
-		if err != nil {
-			return err
-		}
-		r0 := g0 - x0
-		x1 := g0
-		for range maxFeedIterations {
-			g1, err := step(x1)
-			if err != nil {
-				return err
-			}
-			r1 := g1 - x1
-			if math.Abs(r1) <= tol {
-				return nil
-			}
-			next := g1 // plain iteration
-			if d := r1 - r0; d != 0 {
-				if sec := x1 - r1*(x1-x0)/d; !math.IsNaN(sec) && !math.IsInf(sec, 0) {
-					next = sec
-				}
-			}
-			x0, r0, x1 = x1, r1, next
-		}
-		return fmt.Errorf("rope rendered over the saddles does not settle after %d iterations", maxFeedIterations)
-	}
-	if err := settle(in.feed); err != nil {
+	x0, x1 := in.feed, 0.0
+	g0, err := step(x0)
+	if err != nil {
 		return GroupState{}, err
 	}
-	// A held sliding saddle whose plate needs more than friction slides;
-	// with one sliding the other may then need to, hence the second round.
-	for range 2 {
-		again := false
-		for side := Left; side <= Right; side++ {
-			saddle := m.bank(side).Tower.Saddle
-			if saddleKind(saddle) != tower.Sliding || slide[side] != 0 {
-				continue
-			}
-			h, v, _ := elevationPull(gs.Tension[side], gs.Angle[side], swing)
-			if _, dir := saddleBalance(tower.Sliding, saddle.Friction, float64(gs.Tension[side]), h, v, m.backstays[i][side].angle, 0); dir != 0 {
-				slide[side], again = dir, true
-			}
-		}
-		if !again {
-			return gs, nil
-		}
-		if err := settle(gs.feed); err != nil {
+	r0 := g0 - x0
+	x1 = g0
+	for range maxFeedIterations {
+		g1, err := step(x1)
+		if err != nil {
 			return GroupState{}, err
 		}
+		r1 := g1 - x1
+		if math.Abs(r1) <= tol {
+			return gs, nil
+		}
+		next := g1 // plain iteration
+		if d := r1 - r0; d != 0 {
+			if sec := x1 - r1*(x1-x0)/d; !math.IsNaN(sec) && !math.IsInf(sec, 0) {
+				next = sec
+			}
+		}
+		x0, r0, x1 = x1, r1, next
 	}
-	return gs, nil
+	return GroupState{}, fmt.Errorf("rope rendered over the saddles does not settle after %d iterations", maxFeedIterations)
 }

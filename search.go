@@ -295,9 +295,13 @@ func footingCost(b Bridge, p Prices) float64 {
 // the number of workers: ties in cost go to the candidate listed first.
 //
 // Search returns an error for a bridge that does not validate, a space
-// that asks for anchor sizes on a bank without a block anchor, or when ctx
+// that asks for anchor sizes on a bank without a block anchor, a nil ctx
+// (pass context.Background() to search without a deadline), or when ctx
 // is cancelled.
 func Search(ctx context.Context, b Bridge, space SearchSpace, settings *SearchSettings) (*SearchResult, error) {
+	if ctx == nil {
+		return nil, fmt.Errorf("sagspan: search: nil context; pass context.Background() to search without a deadline")
+	}
 	if settings == nil {
 		settings = &SearchSettings{}
 	}
@@ -393,7 +397,7 @@ func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footi
 	bb := base.Apply(b)
 	var superstructure scorer
 	fixed := math.Inf(1)
-	m, perm, service, err := ropeStage(bb, &superstructure)
+	m, perms, services, err := ropeStage(bb, &superstructure)
 	if err != nil {
 		superstructure = invalid(err)
 	} else if fixed, err = ropeCost(bb, prices); err == nil {
@@ -411,10 +415,13 @@ func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footi
 			anchorScores[j] = invalid(err)
 			continue
 		}
-		for side := Left; m != nil && side <= Right; side++ {
-			if err := m.anchorChecks(&anchorScores[j], side, size.apply(m.bank(side).Anchor), perm, service); err != nil {
-				anchorScores[j] = invalid(err)
-				break
+	anchors:
+		for v, service := range services {
+			for side := Left; m != nil && side <= Right; side++ {
+				if err := m.anchorChecks(&anchorScores[j], side, size.apply(m.bank(side).Anchor), perms[v], service); err != nil {
+					anchorScores[j] = invalid(err)
+					break anchors
+				}
 			}
 		}
 	}
@@ -427,10 +434,13 @@ func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footi
 			footingScores[k] = invalid(err)
 			continue
 		}
-		for side := Left; m != nil && side <= Right; side++ {
-			if err := m.footingChecks(&footingScores[k], side, size.apply(m.bank(side).Tower.Footing), perm, service); err != nil {
-				footingScores[k] = invalid(err)
-				break
+	footings:
+		for v, service := range services {
+			for side := Left; m != nil && side <= Right; side++ {
+				if err := m.footingChecks(&footingScores[k], side, size.apply(m.bank(side).Tower.Footing), perms[v], service); err != nil {
+					footingScores[k] = invalid(err)
+					break footings
+				}
 			}
 		}
 	}
@@ -451,43 +461,56 @@ func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footi
 
 // ropeStage analyses a rope configuration: every load case and every
 // stretch of the loaded-length searches, then the checks a choice of anchor
-// or footing cannot change (ropes, saddles, towers, column sections,
-// clearance, gradient), into out. It returns the permanent state and the
-// characteristic state of every case and stretch, on which the anchor and
-// footing checks of each size are then run: the whole-bridge check finds
-// each of those checks' governing stretch among the same states.
-func ropeStage(b Bridge, out sink) (*model, CaseState, []CaseState, error) {
+// or footing cannot change (ropes, saddles, towers, column members,
+// clearance, gradient), into out. For every variant of groove behaviour
+// (see model.variants) it returns the permanent state and the
+// characteristic states of every case and stretch tried, on which the
+// anchor and footing checks of each size are then run: the whole-bridge
+// check finds each of those checks' governing stretch among the same
+// states.
+func ropeStage(b Bridge, out sink) (*model, []CaseState, [][]CaseState, error) {
 	m, err := newModel(b)
 	if err != nil {
-		return nil, CaseState{}, nil, err
+		return nil, nil, nil, err
 	}
 	m.fbasis.Terse = true // scoring only: no result text from the foundation checks
-	var service []CaseState
-	for _, lc := range b.Cases() {
-		svc, des, err := m.pair(lc, nil)
-		if err != nil {
-			return nil, CaseState{}, nil, err
+	var perms []CaseState
+	var services [][]CaseState
+	for _, v := range m.variants() {
+		m.grooves = v.grooves
+		var service []CaseState
+		for _, lc := range b.Cases() {
+			svc, des, ok, err := m.caseStates(out, lc)
+			if err != nil {
+				return nil, nil, nil, err
+			}
+			if !ok {
+				continue
+			}
+			if err := m.ropeChecks(out, svc, des, true); err != nil {
+				return nil, nil, nil, err
+			}
+			service = append(service, svc)
+			if err := m.structureChecks(out, service[0], svc, des); err != nil {
+				return nil, nil, nil, err
+			}
 		}
-		if err := m.ropeChecks(out, svc, des, true); err != nil {
-			return nil, CaseState{}, nil, err
+		perm := service[0]
+		for _, fam := range b.LoadedLengths() {
+			_, tried, err := m.searchLength(out, perm, fam, false)
+			if err != nil {
+				return nil, nil, nil, err
+			}
+			service = append(service, tried...)
 		}
-		if err := m.structureChecks(out, svc, des); err != nil {
-			return nil, CaseState{}, nil, err
-		}
-		service = append(service, svc)
+		perms = append(perms, perm)
+		services = append(services, service)
 	}
-	perm := service[0]
-	for _, fam := range b.LoadedLengths() {
-		_, tried, err := m.searchLength(out, perm, fam, false)
-		if err != nil {
-			return nil, CaseState{}, nil, err
-		}
-		service = append(service, tried...)
-	}
+	m.grooves = m.variants()[0].grooves
 	if err := m.grooveChecks(out); err != nil {
-		return nil, CaseState{}, nil, err
+		return nil, nil, nil, err
 	}
-	return m, perm, service, nil
+	return m, perms, services, nil
 }
 
 // summarise picks the best design, the trade-off front and the near misses,

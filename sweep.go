@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"sort"
+	"strconv"
 
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/units"
@@ -34,7 +35,7 @@ const (
 	refineGain  = 2e-4
 	// proxyGain is refineGain for the drivers of the footing and anchor
 	// checks, which are evaluated on every point found.
-	proxyGain = 1e-3
+	proxyGain = 5e-4
 	// trustWidth is the widest bracket, as a fraction of the span, on which
 	// a parabola's verdict that the maximum is found is taken.
 	trustWidth      = 1.0
@@ -110,28 +111,29 @@ type sweepPoint struct {
 	regime uint64
 }
 
-// regime returns the bits of the saddles that moved in a pair of states.
+// regime returns the bits of the saddles that moved in a pair of states,
+// and of the way each moved (toward the span or away): a saddle that
+// starts to slide, or slides the other way, turns the checks' curves.
 func regime(svc, des CaseState) uint64 {
 	var bits uint64
 	n := 0
 	for _, cs := range [2]*CaseState{&svc, &des} {
 		for i := range cs.Groups {
 			for side := Left; side <= Right; side++ {
-				if cs.Groups[i].SaddleMoved[side] && n < 64 {
-					bits |= 1 << n
+				g := &cs.Groups[i]
+				if n+1 < 62 {
+					if g.SaddleMoved[side] {
+						bits |= 1 << n
+					}
+					if g.Travel[side] > 0 {
+						bits |= 1 << (n + 1)
+					}
 				}
-				n++
+				n += 2
 			}
 		}
 	}
 	return bits
-}
-
-func (p *sweepPoint) ratio(k int) float64 {
-	if k < len(p.ratios) {
-		return p.ratios[k]
-	}
-	return math.NaN()
 }
 
 // pressureRegime returns bits 62 and 63 where the EN 1991-2 crowd pressure
@@ -178,7 +180,7 @@ func (s *searcher) evaluate(p Placement, r float64, warm *sweepPoint) (*sweepPoi
 	if err := s.m.ropeChecks(&s.t, svc, des, false); err != nil {
 		return nil, err
 	}
-	if err := s.m.structureChecks(&s.t, svc, des); err != nil {
+	if err := s.m.structureChecks(&s.t, s.perm, svc, des); err != nil {
 		return nil, err
 	}
 	s.drivers(svc)
@@ -206,6 +208,8 @@ func (s *searcher) drivers(svc CaseState) {
 		// The footing's own weight W adds to V: its checks follow H/(V + W)
 		// and M/(V + W), which move from the maxima of H/V to those of H as
 		// W grows; three weights in between.
+		// The moment at the footing's underside adds H times its thickness
+		// t: M + H t for a thin and a thick footing.
 		for _, c := range [...]struct {
 			id string
 			w  float64
@@ -213,8 +217,12 @@ func (s *searcher) drivers(svc CaseState) {
 			if d := v + c.w*vp; d > 0 {
 				s.t.put("~H/V"+c.id, e, h/d, 1)
 				s.t.put("~-H/V"+c.id, e, -h/d, 1)
-				s.t.put("~M/V"+c.id, e, m/d, y)
-				s.t.put("~-M/V"+c.id, e, -m/d, y)
+				for _, t := range [...]float64{0, 1} {
+					mt := m + h*t
+					id := c.id + "+" + strconv.FormatFloat(t, 'g', -1, 64) + "H"
+					s.t.put("~M/V"+id, e, mt/d, y)
+					s.t.put("~-M/V"+id, e, -mt/d, y)
+				}
 			}
 		}
 		var pull, pullp float64
@@ -622,7 +630,7 @@ func (s *searcher) emit(out sink, ground bool) ([][2]CaseState, error) {
 		if err := m.ropeChecks(f, svc, des, true); err != nil {
 			return nil, err
 		}
-		if err := m.structureChecks(f, svc, des); err != nil {
+		if err := m.structureChecks(f, s.perm, svc, des); err != nil {
 			return nil, err
 		}
 		if ground {
@@ -668,4 +676,11 @@ func (o *only) add(r check.Result) {
 	if o.keys[checkKey{r.ID, r.Element}] {
 		o.out.add(r)
 	}
+}
+
+func (p *sweepPoint) ratio(k int) float64 {
+	if k < len(p.ratios) {
+		return p.ratios[k]
+	}
+	return math.NaN()
 }

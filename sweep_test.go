@@ -46,7 +46,7 @@ func denseGrid(t *testing.T, b Bridge, fam LoadedLength, n int) collect {
 			if err := m.ropeChecks(out, svc, des, false); err != nil {
 				t.Fatal(err)
 			}
-			if err := m.structureChecks(out, svc, des); err != nil {
+			if err := m.structureChecks(out, perm, svc, des); err != nil {
 				t.Fatal(err)
 			}
 			if err := m.groundChecks(out, perm, svc); err != nil {

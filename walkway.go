@@ -61,3 +61,57 @@ func (m *model) checkGradient(out sink, cs CaseState) {
 		)
 	out.add(r)
 }
+
+// Equilibrium factors of the uplift check, EN 1990 Table A2.4(A) for
+// bridges (from memory): γG,inf 0.95 on the permanent load that holds the
+// walkway down, γQ 1.5 on the wind that lifts it.
+const (
+	upliftGammaGInf = 0.95
+	upliftGammaQ    = 1.5
+)
+
+const upliftBasis = "static equilibrium of the walkway under the wind's upward force c_f,z q_p b (EN 1991-1-4 8.3.3, from memory): " +
+	"the permanent weight of the walkway and its ropes must hold it down with the EQU factors of EN 1990 Table A2.4(A) for bridges, " +
+	"γG,inf 0.95 and γQ 1.5 (from memory); where it does not, the walkway lifts and the ropes' states under the case are not analysed: " +
+	"hold the walkway down (storm ropes, a heavier deck) or give a smaller lift coefficient for an open deck (loads.walkway_lift)"
+
+// upliftCheck returns the check that the permanent weight of the walkway
+// groups holds them down against the wind's upward force in case lc, and
+// whether the walkway lifts (some group's net vertical load, characteristic
+// or design, is upward or nil, so that no rope state exists).
+func (m *model) upliftCheck(lc LoadCase) (check.Result, bool) {
+	var g0, lift float64
+	lifted := false
+	for _, g := range m.groups {
+		if g.share == 0 {
+			continue
+		}
+		gk := float64(g.self + units.LoadPerLength(g.share)*m.dead)
+		lk := lc.Wind * g.share * float64(m.b.lift())
+		if g.Role == RoleWalkway {
+			g0, lift = g0+gk, lift+lk
+		}
+		for _, f := range []LoadCase{m.characteristic(lc), m.designCase(lc)} {
+			if f.GammaG*gk-f.GammaW*lk <= 0 {
+				lifted = true
+			}
+		}
+	}
+	r := check.Stability("walkway.uplift", "Walkway held down against wind lift", units.KindLoadPerLength,
+		lift, g0, upliftGammaQ/upliftGammaGInf).
+		For("walkway", lc.Name).
+		WithBasis(upliftBasis).
+		WithValues(
+			check.Of("G_k", "permanent weight per metre of the walkway and its ropes", units.LoadPerLength(g0)),
+			check.Of("L_k", "upward wind force per metre on the walkway, ψ c_f,z q_p b", units.LoadPerLength(lift)),
+			check.Of("γ_G,inf", "factor on the permanent weight", units.Ratio(upliftGammaGInf)),
+			check.Of("γ_Q", "factor on the wind", units.Ratio(upliftGammaQ)),
+		)
+	if lifted {
+		r = r.WithNote("the wind lifts the walkway in this case (its net load points up, characteristic or factored): its rope states are not analysed")
+		if r.Status != check.Fail {
+			r.Status, r.Ratio = check.Fail, math.Max(r.Ratio, 1+1e-9)
+		}
+	}
+	return r, lifted
+}

@@ -19,8 +19,8 @@ func TestTensionCheck(t *testing.T) {
 		n        int
 		capacity float64 // of one rope
 	}{
-		// EN 1993-1-11 cl. 6.2 [M], k_e 1, γ_R 0.9: 252.0/(1.5·0.9) = 186.7 kN
-		// [D, written to four figures beside the formula in the references].
+		// EN 1993-1-11 cl. 6.2 [D], the same formula by hand: k_e 1, γ_R 0.9
+		// → 252.0/(1.5·0.9) = 186.7 kN
 		{"partial factor, k_e 1", cable.PartialFactor{GammaR: 0.9, Ke: 1}, 1, 186.7e3},
 		{"partial factor defaults", cable.PartialFactor{}, 2, 0.9 * mbf / (1.5 * 0.9)},
 		// Allowable basis: k_e MBF/γ, k_e 0.9 by default on this basis too.
