@@ -1,6 +1,8 @@
 package sagspan
 
 import (
+	"sync"
+
 	"github.com/sagspan/sagspan/cable"
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/tower"
@@ -231,17 +233,57 @@ func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, er
 			}
 		}
 	}
-	for _, fam := range m.b.LoadedLengths() {
-		found, _, err := m.searchLength(out, perm, fam, ground)
-		if err != nil {
-			return nil, nil, err
-		}
-		for _, p := range found {
-			service = append(service, p[0])
-			design = append(design, p[1])
-		}
+	found, _, err := m.searchFamilies(out, perm, ground, true)
+	if err != nil {
+		return nil, nil, err
+	}
+	for _, p := range found {
+		service = append(service, p[0])
+		design = append(design, p[1])
 	}
 	return service, design, nil
+}
+
+// searchFamilies runs the loaded-length search of every family (see
+// searchLength), each on its own copy of the model so that they may run
+// at once (parallel) and, either way, give the same numbers. The results
+// reach out family by family, in order. It returns the states of the
+// governing stretches and the searchers, whose points a design search
+// checks its sizes on.
+func (m *model) searchFamilies(out sink, perm CaseState, ground, parallel bool) (governing [][2]CaseState, searchers []*searcher, err error) {
+	fams := m.b.LoadedLengths()
+	type result struct {
+		results   collected
+		searcher  *searcher
+		governing [][2]CaseState
+		err       error
+	}
+	res := make([]result, len(fams))
+	var wg sync.WaitGroup
+	for i, fam := range fams {
+		c := m.clone()
+		search := func() {
+			r := &res[i]
+			r.searcher, r.governing, r.err = c.searchLength(&r.results, perm, fam, ground)
+		}
+		if parallel {
+			wg.Go(search)
+		} else {
+			search()
+		}
+	}
+	wg.Wait()
+	for _, r := range res {
+		if r.err != nil {
+			return nil, nil, r.err
+		}
+		for _, x := range r.results {
+			out.add(x)
+		}
+		governing = append(governing, r.governing...)
+		searchers = append(searchers, r.searcher)
+	}
+	return governing, searchers, nil
 }
 
 // collected keeps the results it is given, in order.

@@ -34,6 +34,10 @@ type model struct {
 	// grooves is the groove behaviour of each bank's saddle in the
 	// variant being analysed (see variants).
 	grooves [2]tower.Groove
+	// terse leaves out of the results what only a reader needs (values
+	// and text the numbers do not depend on): the loaded-length search's
+	// sweep, which keeps only ratios.
+	terse bool
 	// states holds the group states solved so far, by their input (and the
 	// variant's grooves): a group that carries no crowd hangs alike under
 	// every crowd, and a case's service and design states often share

@@ -75,3 +75,16 @@ func (m *model) pair(lc LoadCase, warm *[2]CaseState) (svc, des CaseState, err e
 	}
 	return svc, des, nil
 }
+
+// clone returns a copy of the model for another goroutine: the resolved
+// bridge shared, read only; the state cache copied and the scratch space
+// its own.
+func (m *model) clone() *model {
+	c := *m
+	c.scratch, c.pulls = nil, nil
+	c.states = make(map[stateKey]GroupState, len(m.states))
+	for k, v := range m.states {
+		c.states[k] = v
+	}
+	return &c
+}

@@ -4,7 +4,6 @@ import (
 	"fmt"
 	"math"
 	"sort"
-	"strconv"
 
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/units"
@@ -15,17 +14,23 @@ import (
 // utilisation:
 //
 //  1. a sweep of sweepPoints lengths per placement (k/sweepPoints of the
-//     span, the whole span shared by every placement);
-//  2. refinement around each check's maximum, placement by placement: a
-//     parabola through the best point and its neighbours, or a
-//     golden-section step where the parabola does not fit, until the
-//     bracket is narrower than refineTol of the span or the parabola
-//     promises less than refineGain of the check's scale;
-//  3. the footing and anchor checks, whose maximum moves with the sizes a
-//     design search tries, are evaluated at every point found; what drives
-//     the refinement for them is their actions (each tower's base forces and
-//     eccentricities, each anchor's pull), which no size changes, so that a
-//     design search and the whole-bridge check see the same points.
+//     span, the whole span shared by every placement), the case without
+//     the stretch, and the lengths where the EN 1991-2 pressure meets its
+//     bounds;
+//  2. refinement around each check's local maxima, placement by placement:
+//     a parabola through the best point and its neighbours where the
+//     saddles stay as they are, two lines meeting in a kink where a saddle
+//     starts to slide or slides the other way between them, a
+//     golden-section step where neither fits; until the bracket is
+//     narrower than refineTol of the span or the model promises less than
+//     refineGain of the check's scale. Proposals of one round that lie
+//     close together are tried as one point;
+//  3. the anchor checks, which grow with the backstays' pull (its maximum
+//     refined in step 2, no anchor size changes it), are evaluated at every
+//     point; the footing checks, whose maximum moves with the footing's
+//     size, get a refinement of their own on top of the points (the
+//     footing pass), which a design search repeats for each footing size
+//     it tries.
 //
 // Each point is a full pair of states (characteristic and design loads),
 // each group's iteration started from the nearest point's.
@@ -33,13 +38,12 @@ const (
 	sweepPoints = 6
 	refineTol   = 1.0 / 400
 	refineGain  = 2e-4
-	// proxyGain is refineGain for the drivers of the footing and anchor
-	// checks, which are evaluated on every point found.
-	proxyGain = 5e-4
+	// proxyGain is refineGain for the drivers of the anchor checks.
+	proxyGain       = 5e-4
+	maxRefineRounds = 16
 	// trustWidth is the widest bracket, as a fraction of the span, on which
 	// a parabola's verdict that the maximum is found is taken.
-	trustWidth      = 1.0
-	maxRefineRounds = 16
+	trustWidth = 0.25
 	// minRefined is the utilisation below which a check's maximum is not
 	// refined: it is found on the points the other checks bring.
 	minRefined = 0.01
@@ -104,7 +108,7 @@ type sweepPoint struct {
 	place    Placement
 	r        float64 // length as a fraction of the span
 	svc, des CaseState
-	ratios   []float64 // by the tally's key index; NaN where absent
+	ratios   []float64 // by the search tally's key index; NaN where absent
 	// regime records which saddles have moved on their columns, in both
 	// states: where it changes between two points, the checks may have a
 	// kink (a maximum that no parabola finds).
@@ -140,8 +144,8 @@ func regime(svc, des CaseState) uint64 {
 // of the case's stretch sits on its upper or lower bound (loaded lengths
 // up to 10 m, or from 210 m): the pressure's slope changes there, and so
 // may the checks'.
-func (s *searcher) pressureRegime(lc LoadCase) uint64 {
-	if lc.CrowdPressure > 0 || s.m.b.Loads.Crowd > 0 || lc.Crowd.Empty() {
+func (m *model) pressureRegime(lc LoadCase) uint64 {
+	if lc.CrowdPressure > 0 || m.b.Loads.Crowd > 0 || lc.Crowd.Empty() {
 		return 0
 	}
 	switch q := CrowdPressure(lc.Crowd.Length()); {
@@ -153,78 +157,186 @@ func (s *searcher) pressureRegime(lc LoadCase) uint64 {
 	return 0
 }
 
-// searcher runs one family's search.
-type searcher struct {
-	m      *model
-	fam    LoadedLength
-	perm   CaseState
-	span   units.Length
-	t      tally
+// pointSet is the points of a search with, for each placement, its points
+// sorted by length (the whole span and the case without the stretch in
+// every placement).
+type pointSet struct {
 	points []*sweepPoint
+	sorted [3]sortedPoints
 }
 
-// evaluate adds the point of placement p and length fraction r, started
-// from warm.
-func (s *searcher) evaluate(p Placement, r float64, warm *sweepPoint) (*sweepPoint, error) {
+// sortedPoints is a placement's points sorted, when the set had n points.
+type sortedPoints struct {
+	n   int
+	pts []*sweepPoint
+}
+
+func (ps *pointSet) add(pt *sweepPoint) { ps.points = append(ps.points, pt) }
+
+// placed returns the points of placement p sorted by length.
+func (ps *pointSet) placed(p Placement) []*sweepPoint {
+	if c := ps.sorted[p]; c.pts != nil && c.n == len(ps.points) {
+		return c.pts
+	}
+	var out []*sweepPoint
+	for _, pt := range ps.points {
+		if pt.place == p || pt.r >= 1 || pt.r <= 0 {
+			out = append(out, pt)
+		}
+	}
+	sort.Slice(out, func(i, j int) bool { return out[i].r < out[j].r })
+	ps.sorted[p] = sortedPoints{n: len(ps.points), pts: out}
+	return out
+}
+
+// nearest returns the point of placement p nearest to length r.
+func (ps *pointSet) nearest(p Placement, r float64) *sweepPoint {
+	var best *sweepPoint
+	for _, pt := range ps.points {
+		if pt.place != p && pt.r < 1 && pt.r > 0 {
+			continue
+		}
+		if best == nil || math.Abs(pt.r-r) < math.Abs(best.r-r) {
+			best = pt
+		}
+	}
+	return best
+}
+
+// refinement says what a refinement works on: which keys, their values at
+// a point, whether a key is a driver (refined to proxyGain, and worth
+// refining above ref) or a check (above minRefined), and how to evaluate a
+// new point.
+type refinement struct {
+	placements []Placement
+	keys       func() int
+	skip       func(k int) bool
+	val        func(pt *sweepPoint, k int) float64
+	driver     func(k int) (bool, float64)
+	eval       func(p Placement, r float64, warm *sweepPoint) (*sweepPoint, error)
+	name       func(k int) string
+}
+
+// refine adds points to ps around each key's local maxima until none moves
+// (see the search's outline at the top of this file).
+func (rf refinement) refine(ps *pointSet) error {
+	for round := range maxRefineRounds {
+		var props []proposal
+		for k := range rf.keys() {
+			if rf.skip(k) {
+				continue
+			}
+			scale, best, worst := 0.0, math.Inf(-1), math.Inf(1)
+			for _, pt := range ps.points {
+				if v := rf.val(pt, k); !math.IsNaN(v) && !math.IsInf(v, 0) {
+					scale, best, worst = math.Max(scale, math.Abs(v)), math.Max(best, v), math.Min(worst, v)
+				}
+			}
+			driver, ref := rf.driver(k)
+			// Nothing to find in a check used below a per cent, a driver
+			// that does not move off its noise, or a flat curve.
+			if driver && scale < 1e-3*ref || !driver && best < minRefined || best-worst <= refineGain*scale {
+				continue
+			}
+			gain := refineGain
+			if driver {
+				gain = proxyGain
+			}
+			// Around each local maximum of each placement, the next point;
+			// a maximum whose curve promises no more than the best found
+			// needs no closer look.
+			for _, p := range rf.placements {
+				pts := ps.placed(p)
+				for _, bi := range localMaxima(pts, k, rf.val) {
+					if r, _, ok := propose(pts, k, rf.val, bi, scale, best, gain); ok {
+						props = append(props, proposal{place: p, r: r, check: !driver})
+						if debugSweep {
+							fmt.Printf("  %s %v %.4f\n", rf.name(k), p, r)
+						}
+					}
+				}
+			}
+		}
+		if len(props) == 0 {
+			return nil
+		}
+		if debugSweep {
+			fmt.Println("round", round, len(props), "proposals")
+		}
+		added := 0
+		for _, pr := range cluster(props, clusterTol(round)) {
+			near := ps.nearest(pr.place, pr.r)
+			if math.Abs(near.r-pr.r) < refineTol/2 {
+				continue
+			}
+			pt, err := rf.eval(pr.place, pr.r, near)
+			if err != nil {
+				return err
+			}
+			ps.add(pt)
+			added++
+		}
+		if added == 0 {
+			return nil
+		}
+	}
+	return nil
+}
+
+// searcher runs one family's search.
+type searcher struct {
+	m    *model
+	fam  LoadedLength
+	perm CaseState
+	span units.Length
+	t    tally
+	pointSet
+}
+
+// state returns the pair of states of the stretch of placement p and
+// length fraction r, started from warm.
+func (s *searcher) state(m *model, p Placement, r float64, warm *sweepPoint) (*sweepPoint, error) {
 	lc := s.fam.at(p, units.Length(r)*s.span, s.span)
 	var w *[2]CaseState
 	if warm != nil {
 		w = &[2]CaseState{warm.svc, warm.des}
 	}
-	svc, des, err := s.m.pair(lc, w)
+	svc, des, err := m.pair(lc, w)
 	if err != nil {
 		return nil, err
 	}
-	pt := &sweepPoint{place: p, r: r, svc: svc, des: des, regime: regime(svc, des) | s.pressureRegime(lc)}
+	return &sweepPoint{place: p, r: r, svc: svc, des: des, regime: regime(svc, des) | m.pressureRegime(lc)}, nil
+}
+
+// evaluate returns the point of placement p and length fraction r,
+// started from warm, with the ratios of every check but the footings' and
+// anchors' and the anchors' driver.
+func (s *searcher) evaluate(p Placement, r float64, warm *sweepPoint) (*sweepPoint, error) {
+	pt, err := s.state(s.m, p, r, warm)
+	if err != nil {
+		return nil, err
+	}
 	s.t.reset()
-	if err := s.m.ropeChecks(&s.t, svc, des, false); err != nil {
+	terse := s.m.terse
+	s.m.terse = true
+	defer func() { s.m.terse = terse }()
+	if err := s.m.ropeChecks(&s.t, pt.svc, pt.des, false); err != nil {
 		return nil, err
 	}
-	if err := s.m.structureChecks(&s.t, s.perm, svc, des); err != nil {
+	if err := s.m.structureChecks(&s.t, s.perm, pt.svc, pt.des); err != nil {
 		return nil, err
 	}
-	s.drivers(svc)
+	s.drivers(pt.svc)
 	pt.ratios = append([]float64(nil), s.t.ratios...)
-	s.points = append(s.points, pt)
 	return pt, nil
 }
 
-// drivers records the actions that the footing and anchor checks grow
-// with and that no foundation size changes: each tower's base forces and
-// their ratios (the footing's sliding, overturning and bearing follow
-// them), each anchor's pull.
+// drivers records each anchor's pull, the sum of the backstay tensions
+// that reach it: every anchor check grows with it (the backstays keep their
+// slopes), so the anchor checks' governing stretch is where it is
+// greatest, whatever the anchor's size.
 func (s *searcher) drivers(svc CaseState) {
 	for side := Left; side <= Right; side++ {
-		e := towerElement[side]
-		r := svc.Tower[side]
-		v, h, m := float64(r.Vertical), float64(r.Horizontal), float64(r.BaseMoment)
-		vp := math.Abs(float64(s.perm.Tower[side].Vertical))
-		y := float64(s.m.bank(side).Tower.Height)
-		s.t.put("~V", e, v, vp)
-		s.t.put("~H", e, h, vp)
-		s.t.put("~-H", e, -h, vp)
-		s.t.put("~M", e, m, vp*y)
-		s.t.put("~-M", e, -m, vp*y)
-		// The footing's own weight W adds to V: its checks follow H/(V + W)
-		// and M/(V + W), which move from the maxima of H/V to those of H as
-		// W grows; three weights in between.
-		// The moment at the footing's underside adds H times its thickness
-		// t: M + H t for a thin and a thick footing.
-		for _, c := range [...]struct {
-			id string
-			w  float64
-		}{{"", 0}, {"+Vp", 1}, {"+3Vp", 3}} {
-			if d := v + c.w*vp; d > 0 {
-				s.t.put("~H/V"+c.id, e, h/d, 1)
-				s.t.put("~-H/V"+c.id, e, -h/d, 1)
-				for _, t := range [...]float64{0, 1} {
-					mt := m + h*t
-					id := c.id + "+" + strconv.FormatFloat(t, 'g', -1, 64) + "H"
-					s.t.put("~M/V"+id, e, mt/d, y)
-					s.t.put("~-M/V"+id, e, -mt/d, y)
-				}
-			}
-		}
 		var pull, pullp float64
 		for i := range svc.Groups {
 			pull += float64(svc.Groups[i].Backstay[side])
@@ -234,17 +346,276 @@ func (s *searcher) drivers(svc CaseState) {
 	}
 }
 
-// placed returns the points of placement p, the whole span included,
-// sorted by length.
-func (s *searcher) placed(p Placement) []*sweepPoint {
-	var out []*sweepPoint
-	for _, pt := range s.points {
-		if pt.place == p || pt.r >= 1 || pt.r <= 0 {
-			out = append(out, pt)
+// anchorPoints returns the points the anchor checks are run on: where
+// each anchor's pull is greatest, when one rope group's load varies in the
+// family (every anchor check grows with the pull of the backstays, which
+// keep their slopes; the others' tensions stay put); every point
+// otherwise.
+func (s *searcher) anchorPoints() []*sweepPoint {
+	varying := 0
+	for _, g := range s.m.groups {
+		if g.share > 0 {
+			varying++
 		}
 	}
-	sort.Slice(out, func(i, j int) bool { return out[i].r < out[j].r })
+	if varying > 1 {
+		return s.points
+	}
+	var out []*sweepPoint
+	for side := Left; side <= Right; side++ {
+		k, ok := s.t.index[checkKey{"~pull", anchorElement[side]}]
+		if !ok {
+			return s.points
+		}
+		var best *sweepPoint
+		for _, pt := range s.points {
+			if best == nil || pt.ratio(k) > best.ratio(k) {
+				best = pt
+			}
+		}
+		if len(out) == 0 || out[0] != best {
+			out = append(out, best)
+		}
+	}
 	return out
+}
+
+// structure returns the refinement of the search's own keys.
+func (s *searcher) structure() refinement {
+	return refinement{
+		placements: s.fam.Placements,
+		keys:       func() int { return len(s.t.keys) },
+		skip:       func(int) bool { return false },
+		val:        func(pt *sweepPoint, k int) float64 { return pt.ratio(k) },
+		driver:     func(k int) (bool, float64) { return s.t.proxy[k], s.t.ref[k] },
+		eval:       s.evaluate,
+		name:       func(k int) string { return fmt.Sprint(s.t.keys[k]) },
+	}
+}
+
+// searchLength runs the loaded-length search of one family. It adds the
+// governing result of every check to out under its stretch's case name,
+// the footing and anchor checks with ground (for the bridge's own sizes),
+// and returns the searcher (whose points a design search checks its sizes
+// on, see footingPass) and the states of the governing stretches,
+// characteristic and design.
+func (m *model) searchLength(out sink, perm CaseState, fam LoadedLength, ground bool) (*searcher, [][2]CaseState, error) {
+	s := &searcher{m: m, fam: fam, perm: perm, span: m.b.Site.Span, t: tally{index: map[checkKey]int{}}}
+	add := func(p Placement, r float64, warm *sweepPoint) (*sweepPoint, error) {
+		pt, err := s.evaluate(p, r, warm)
+		if err == nil {
+			s.add(pt)
+		}
+		return pt, err
+	}
+	full, err := add(fam.Placements[0], 1, nil)
+	if err != nil {
+		return nil, nil, err
+	}
+	for _, p := range fam.Placements {
+		warm := full
+		for j := sweepPoints - 1; j >= 1; j-- {
+			if warm, err = add(p, float64(j)/sweepPoints, warm); err != nil {
+				return nil, nil, err
+			}
+		}
+	}
+	// The family's case without the stretch closes the curves at zero.
+	if _, err := add(fam.Placements[0], 0, nil); err != nil {
+		return nil, nil, err
+	}
+	// Where the EN 1991-2 pressure leaves its bounds (10 m and 210 m of
+	// loaded length) the checks may turn a corner: a point there on each
+	// placement.
+	if !fam.deck() && fam.Base.CrowdPressure == 0 && m.b.Loads.Crowd == 0 {
+		for _, l := range []units.Length{crowdUpperLength, crowdLowerLength} {
+			if r := float64(l / s.span); r > refineTol && r < 1-refineTol {
+				for _, p := range fam.Placements {
+					if _, err := add(p, r, s.nearest(p, r)); err != nil {
+						return nil, nil, err
+					}
+				}
+			}
+		}
+	}
+	if err := s.structure().refine(&s.pointSet); err != nil {
+		return nil, nil, err
+	}
+	governing, err := s.emit(out, ground)
+	if err != nil {
+		return nil, nil, err
+	}
+	return s, governing, nil
+}
+
+// footingPass checks the footings of specs (left and right bank) on the
+// search's points and refines their maxima with points of its own, each
+// footing result reaching out; a design search runs one pass per footing
+// size, the whole-bridge check one for the bridge's own footings, and both
+// find the same governing stretches. The pass works on its own copy of the
+// model, so that no pass sees another's states. It returns the points of
+// the search and of the pass with the ratios of the footing checks (keys
+// and values).
+func (s *searcher) footingPass(out sink, specs [2]FootingSpec) (*pointSet, *tally, map[*sweepPoint][]float64, error) {
+	m := s.m.clone()
+	m.fbasis.Terse = true
+	ft := &tally{index: map[checkKey]int{}}
+	vals := map[*sweepPoint][]float64{}
+	check := func(pt *sweepPoint) error {
+		ft.reset()
+		both := fanout{ft, out}
+		for side := Left; side <= Right; side++ {
+			if err := m.footingChecks(both, side, specs[side], s.perm, []CaseState{pt.svc}); err != nil {
+				return err
+			}
+		}
+		vals[pt] = append([]float64(nil), ft.ratios...)
+		return nil
+	}
+	ps := &pointSet{points: append([]*sweepPoint(nil), s.points...)}
+	for _, pt := range ps.points {
+		if err := check(pt); err != nil {
+			return nil, nil, nil, err
+		}
+	}
+	rf := refinement{
+		placements: s.fam.Placements,
+		keys:       func() int { return len(ft.keys) },
+		skip:       func(int) bool { return false },
+		val: func(pt *sweepPoint, k int) float64 {
+			if v := vals[pt]; k < len(v) {
+				return v[k]
+			}
+			return math.NaN()
+		},
+		driver: func(int) (bool, float64) { return false, 0 },
+		eval: func(p Placement, r float64, warm *sweepPoint) (*sweepPoint, error) {
+			pt, err := s.state(m, p, r, warm)
+			if err != nil {
+				return nil, err
+			}
+			return pt, check(pt)
+		},
+		name: func(k int) string { return fmt.Sprint(ft.keys[k]) },
+	}
+	if err := rf.refine(ps); err != nil {
+		return nil, nil, nil, err
+	}
+	return ps, ft, vals, nil
+}
+
+// fanout passes results to two sinks.
+type fanout [2]sink
+
+func (f fanout) add(r check.Result) {
+	for _, s := range f {
+		if s != nil {
+			s.add(r)
+		}
+	}
+}
+
+// emit picks each check's governing point and adds its full result there:
+// the checks of the search's own keys and, with ground, the anchors'
+// (evaluated on every point) and the footings' (from the footing pass for
+// the bridge's own footings).
+func (s *searcher) emit(out sink, ground bool) ([][2]CaseState, error) {
+	m := s.m
+	type governing struct {
+		pt   *sweepPoint
+		keys map[checkKey]bool
+	}
+	var order []*governing
+	byPoint := map[*sweepPoint]*governing{}
+	govern := func(pt *sweepPoint, key checkKey) {
+		g := byPoint[pt]
+		if g == nil {
+			g = &governing{pt: pt, keys: map[checkKey]bool{}}
+			byPoint[pt] = g
+			order = append(order, g)
+		}
+		g.keys[key] = true
+	}
+	pick := func(points []*sweepPoint, keys []checkKey, val func(*sweepPoint, int) float64, skip func(int) bool) {
+		for k, key := range keys {
+			if skip(k) {
+				continue
+			}
+			var best *sweepPoint
+			bestV := math.Inf(-1)
+			for _, pt := range points {
+				if v := val(pt, k); !math.IsNaN(v) && (best == nil || v > bestV) {
+					best, bestV = pt, v
+				}
+			}
+			if best != nil {
+				govern(best, key)
+			}
+		}
+	}
+	pick(s.points, s.t.keys, func(pt *sweepPoint, k int) float64 { return pt.ratio(k) }, func(k int) bool { return s.t.proxy[k] })
+	var extra []*sweepPoint
+	if ground {
+		// Anchors on every point.
+		terse := m.fbasis.Terse
+		m.fbasis.Terse = true
+		at := &tally{index: map[checkKey]int{}}
+		avals := map[*sweepPoint][]float64{}
+		for _, pt := range s.anchorPoints() {
+			at.reset()
+			for side := Left; side <= Right; side++ {
+				if err := m.anchorChecks(at, side, m.bank(side).Anchor, s.perm, []CaseState{pt.svc}); err != nil {
+					m.fbasis.Terse = terse
+					return nil, err
+				}
+			}
+			avals[pt] = append([]float64(nil), at.ratios...)
+		}
+		m.fbasis.Terse = terse
+		val := func(vals map[*sweepPoint][]float64) func(*sweepPoint, int) float64 {
+			return func(pt *sweepPoint, k int) float64 {
+				if v := vals[pt]; k < len(v) {
+					return v[k]
+				}
+				return math.NaN()
+			}
+		}
+		pick(s.points, at.keys, val(avals), func(int) bool { return false })
+		// Footings from their pass.
+		ps, ft, fvals, err := s.footingPass(nil, [2]FootingSpec{m.bank(Left).Tower.Footing, m.bank(Right).Tower.Footing})
+		if err != nil {
+			return nil, err
+		}
+		pick(ps.points, ft.keys, val(fvals), func(int) bool { return false })
+		extra = ps.points[len(s.points):]
+	}
+	// Points in the order they were found, so the report is stable.
+	index := map[*sweepPoint]int{}
+	for i, pt := range append(append([]*sweepPoint(nil), s.points...), extra...) {
+		index[pt] = i
+	}
+	sort.SliceStable(order, func(i, j int) bool { return index[order[i].pt] < index[order[j].pt] })
+	names := map[string]bool{}
+	var found [][2]CaseState
+	for _, g := range order {
+		svc, des := g.pt.svc, g.pt.des
+		name := s.uniqueName(g.pt, names)
+		svc.Case.Name, des.Case.Name = name, name
+		f := &only{keys: g.keys, out: out}
+		if err := m.ropeChecks(f, svc, des, true); err != nil {
+			return nil, err
+		}
+		if err := m.structureChecks(f, s.perm, svc, des); err != nil {
+			return nil, err
+		}
+		if ground {
+			if err := m.groundChecks(f, s.perm, svc); err != nil {
+				return nil, err
+			}
+		}
+		found = append(found, [2]CaseState{svc, des})
+	}
+	return found, nil
 }
 
 // proposal is a stretch to evaluate next, for a check or for a driver.
@@ -256,17 +627,17 @@ type proposal struct {
 
 // localMaxima returns the indices of the points of pts where key k is at
 // a local maximum (the first of a plateau).
-func localMaxima(pts []*sweepPoint, k int) []int {
+func localMaxima(pts []*sweepPoint, k int, val func(*sweepPoint, int) float64) []int {
 	var out []int
 	for i, pt := range pts {
-		v := pt.ratio(k)
+		v := val(pt, k)
 		if math.IsNaN(v) {
 			continue
 		}
-		if i > 0 && !(v >= pts[i-1].ratio(k)) && !math.IsNaN(pts[i-1].ratio(k)) {
+		if i > 0 && !(v >= val(pts[i-1], k)) && !math.IsNaN(val(pts[i-1], k)) {
 			continue
 		}
-		if i+1 < len(pts) && !(v > pts[i+1].ratio(k)) && !math.IsNaN(pts[i+1].ratio(k)) {
+		if i+1 < len(pts) && !(v > val(pts[i+1], k)) && !math.IsNaN(val(pts[i+1], k)) {
 			continue
 		}
 		out = append(out, i)
@@ -283,9 +654,9 @@ func localMaxima(pts []*sweepPoint, k int) []int {
 // are, and two lines meeting in a kink where they change between bi and a
 // neighbour; a golden-section step where neither fits, taken only for the
 // best point found anywhere.
-func propose(pts []*sweepPoint, k, bi int, scale, global, gain float64) (r, peak float64, ok bool) {
+func propose(pts []*sweepPoint, k int, val func(*sweepPoint, int) float64, bi int, scale, global, gain float64) (r, peak float64, ok bool) {
 	last := len(pts) - 1
-	best := pts[bi].ratio(k)
+	best := val(pts[bi], k)
 	leading := best >= global-gain*scale
 	enough := func(peak float64) bool { return peak-global <= gain*scale }
 	x := pts[bi].r
@@ -299,7 +670,7 @@ func propose(pts []*sweepPoint, k, bi int, scale, global, gain float64) (r, peak
 	if hi-lo <= 2*refineTol {
 		return 0, 0, false
 	}
-	at := func(i int) (float64, float64) { return pts[i].r, pts[i].ratio(k) }
+	at := func(i int) (float64, float64) { return pts[i].r, val(pts[i], k) }
 	// A kink: the saddles change between the best point and a neighbour.
 	// Take the side with the higher neighbour.
 	side := 0
@@ -307,7 +678,7 @@ func propose(pts []*sweepPoint, k, bi int, scale, global, gain float64) (r, peak
 		side = -1
 	}
 	if bi < last && pts[bi+1].regime != pts[bi].regime {
-		if side == 0 || pts[bi+1].ratio(k) > pts[bi-1].ratio(k) {
+		if side == 0 || val(pts[bi+1], k) > val(pts[bi-1], k) {
 			side = 1
 		}
 	}
@@ -358,16 +729,20 @@ func propose(pts []*sweepPoint, k, bi int, scale, global, gain float64) (r, peak
 	case fits && v > lo && v < hi:
 		// A parabola through points far apart may hide a kink; its verdict
 		// that nothing is left to find is trusted on a narrow bracket only.
+		// A parabola through points far apart may hide a kink (an
+		// absolute value through zero, a saddle turning): its verdict that
+		// nothing is left to find is taken on a narrow bracket only.
 		if (math.Abs(v-x) < refineTol || enough(peak)) && hi-lo <= trustWidth {
 			return 0, 0, false // the maximum is at x, or near enough in value
 		}
 		if v > lo+refineTol/2 && v < hi-refineTol/2 {
 			return v, peak, true
 		}
-	case bi == 0 || bi == last:
-		// Best at an end with no peak in reach: the curve still rises
-		// there, and that end is the maximum (the whole span, or the case
-		// without the stretch).
+	case bi == last:
+		// Best at the whole span with no peak in reach: the curve still
+		// rises there, and the whole span is the maximum.
+		return 0, 0, false
+	case bi == 0 && !leading:
 		return 0, 0, false
 	}
 	if !leading {
@@ -397,120 +772,6 @@ func vertex(xa, xb, xc, ya, yb, yc float64) (v, peak float64, ok bool) {
 	v = (xa + xb - d1/d2) / 2
 	peak = ya + d1*(v-xa) + d2*(v-xa)*(v-xb)
 	return v, peak, true
-}
-
-// searchLength runs the loaded-length search of one family: every check
-// of every stretch tried, the governing result of each check added to out
-// under its stretch's case name. It returns the states of the governing
-// stretches (characteristic and design) and the characteristic states of
-// every stretch tried. With ground false the footing and anchor checks are
-// left to the caller, who checks them on every stretch tried (a design
-// search, for each size it tries).
-func (m *model) searchLength(out sink, perm CaseState, fam LoadedLength, ground bool) (governing [][2]CaseState, tried []CaseState, err error) {
-	s := &searcher{m: m, fam: fam, perm: perm, span: m.b.Site.Span, t: tally{index: map[checkKey]int{}}}
-	full, err := s.evaluate(fam.Placements[0], 1, nil)
-	if err != nil {
-		return nil, nil, err
-	}
-	for _, p := range fam.Placements {
-		warm := full
-		for j := sweepPoints - 1; j >= 1; j-- {
-			if warm, err = s.evaluate(p, float64(j)/sweepPoints, warm); err != nil {
-				return nil, nil, err
-			}
-		}
-	}
-	// The family's case without the stretch closes the curves at zero.
-	if _, err := s.evaluate(fam.Placements[0], 0, nil); err != nil {
-		return nil, nil, err
-	}
-	// Where the EN 1991-2 pressure leaves its bounds (10 m and 210 m of
-	// loaded length) the checks may turn a corner: a point there on each
-	// placement.
-	if !fam.deck() && fam.Base.CrowdPressure == 0 && m.b.Loads.Crowd == 0 {
-		for _, l := range []units.Length{crowdUpperLength, crowdLowerLength} {
-			if r := float64(l / s.span); r > refineTol && r < 1-refineTol {
-				for _, p := range fam.Placements {
-					if _, err := s.evaluate(p, r, s.nearest(proposal{place: p, r: r})); err != nil {
-						return nil, nil, err
-					}
-				}
-			}
-		}
-	}
-	if err := s.refine(); err != nil {
-		return nil, nil, err
-	}
-	if governing, err = s.emit(out, ground); err != nil {
-		return nil, nil, err
-	}
-	for _, pt := range s.points {
-		tried = append(tried, pt.svc)
-	}
-	return governing, tried, nil
-}
-
-// refine adds points around each check's maximum until none moves.
-func (s *searcher) refine() error {
-	for round := range maxRefineRounds {
-		var props []proposal
-		for k := range s.t.keys {
-			if s.t.ground[k] {
-				continue
-			}
-			scale, best, worst := 0.0, math.Inf(-1), math.Inf(1)
-			for _, pt := range s.points {
-				if v := pt.ratio(k); !math.IsNaN(v) && !math.IsInf(v, 0) {
-					scale, best, worst = math.Max(scale, math.Abs(v)), math.Max(best, v), math.Min(worst, v)
-				}
-			}
-			// Nothing to find in a check used below a per cent, a driver
-			// that does not move off its noise, or a flat curve.
-			if s.t.proxy[k] && scale < 1e-3*s.t.ref[k] || !s.t.proxy[k] && best < minRefined ||
-				best-worst <= refineGain*scale {
-				continue
-			}
-			gain := refineGain
-			if s.t.proxy[k] {
-				gain = proxyGain
-			}
-			// Around each local maximum of each placement, the next point; a
-			// maximum whose curve promises no more than the best found
-			// needs no closer look.
-			for _, p := range s.fam.Placements {
-				pts := s.placed(p)
-				for _, bi := range localMaxima(pts, k) {
-					if r, _, ok := propose(pts, k, bi, scale, best, gain); ok {
-						props = append(props, proposal{place: p, r: r, check: !s.t.proxy[k]})
-						if debugSweep {
-							fmt.Printf("  %v %v %.4f\n", s.t.keys[k], p, r)
-						}
-					}
-				}
-			}
-		}
-		if len(props) == 0 {
-			return nil
-		}
-		if debugSweep {
-			fmt.Println("round", round, len(props), "proposals")
-		}
-		added := 0
-		for _, pr := range cluster(props, clusterTol(round)) {
-			near := s.nearest(pr)
-			if math.Abs(near.r-pr.r) < refineTol/2 {
-				continue
-			}
-			if _, err := s.evaluate(pr.place, pr.r, near); err != nil {
-				return err
-			}
-			added++
-		}
-		if added == 0 {
-			return nil
-		}
-	}
-	return nil
 }
 
 // clusterTol returns how close, as a fraction of the span, the proposals
@@ -550,106 +811,6 @@ func cluster(props []proposal, tol float64) []proposal {
 		i = j
 	}
 	return out
-}
-
-// nearest returns the evaluated point of the proposal's placement nearest
-// to it.
-func (s *searcher) nearest(pr proposal) *sweepPoint {
-	var best *sweepPoint
-	for _, pt := range s.points {
-		if pt.place != pr.place && pt.r < 1 && pt.r > 0 {
-			continue
-		}
-		if best == nil || math.Abs(pt.r-pr.r) < math.Abs(best.r-pr.r) {
-			best = pt
-		}
-	}
-	return best
-}
-
-// emit evaluates the footing and anchor checks at every point (with
-// ground), picks each check's governing point and adds its full result
-// there.
-func (s *searcher) emit(out sink, ground bool) ([][2]CaseState, error) {
-	m := s.m
-	terse := m.fbasis.Terse
-	m.fbasis.Terse = true
-	s.t.groundMode = true
-	for _, pt := range s.points {
-		if !ground {
-			break
-		}
-		s.t.reset()
-		if err := m.groundChecks(&s.t, s.perm, pt.svc); err != nil {
-			m.fbasis.Terse = terse
-			return nil, err
-		}
-		for len(pt.ratios) < len(s.t.ratios) {
-			pt.ratios = append(pt.ratios, math.NaN())
-		}
-		for k, g := range s.t.ground {
-			if g {
-				pt.ratios[k] = s.t.ratios[k]
-			}
-		}
-	}
-	m.fbasis.Terse = terse
-	s.t.groundMode = false
-
-	// Each check's governing point; ties go to the point found first.
-	governs := make(map[*sweepPoint]map[checkKey]bool)
-	var order []*sweepPoint
-	for k, key := range s.t.keys {
-		if s.t.proxy[k] {
-			continue
-		}
-		var best *sweepPoint
-		for _, pt := range s.points {
-			if v := pt.ratio(k); !math.IsNaN(v) && (best == nil || v > best.ratio(k)) {
-				best = pt
-			}
-		}
-		if best == nil {
-			continue
-		}
-		if governs[best] == nil {
-			governs[best] = map[checkKey]bool{}
-			order = append(order, best)
-		}
-		governs[best][key] = true
-	}
-	// Points in the order they were found, so the report is stable.
-	sort.SliceStable(order, func(i, j int) bool { return s.index(order[i]) < s.index(order[j]) })
-	names := map[string]bool{}
-	var found [][2]CaseState
-	for _, pt := range order {
-		svc, des := pt.svc, pt.des
-		name := s.uniqueName(pt, names)
-		svc.Case.Name, des.Case.Name = name, name
-		f := &only{keys: governs[pt], out: out}
-		if err := m.ropeChecks(f, svc, des, true); err != nil {
-			return nil, err
-		}
-		if err := m.structureChecks(f, s.perm, svc, des); err != nil {
-			return nil, err
-		}
-		if ground {
-			if err := m.groundChecks(f, s.perm, svc); err != nil {
-				return nil, err
-			}
-		}
-		found = append(found, [2]CaseState{svc, des})
-	}
-	return found, nil
-}
-
-func (s *searcher) index(pt *sweepPoint) int {
-	for i, p := range s.points {
-		if p == pt {
-			return i
-		}
-	}
-	return -1
 }
 
 // uniqueName names a governing point, with more digits where two would

@@ -75,10 +75,11 @@ func TestLoadedLengthAgainstDenseGrid(t *testing.T) {
 		}
 		for _, fam := range b.LoadedLengths() {
 			got := collect{}
-			_, tried, err := m.searchLength(got, perm, fam, true)
+			sr, _, err := m.searchLength(got, perm, fam, true)
 			if err != nil {
 				t.Fatal(err)
 			}
+			tried := sr.points
 			dense := denseGrid(t, b, fam, 200)
 			worst := 0.0
 			for k, d := range dense {
