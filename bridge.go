@@ -235,7 +235,8 @@ type AnchorSpec struct {
 	Length units.Length `json:"length,omitempty"` // along the pull
 	Width  units.Length `json:"width,omitempty"`
 	Height units.Length `json:"height,omitempty"`
-	// Depth of the base (block) or of the beam's centre (deadman) below ground.
+	// Depth of the base (block) or of the bottom of the beam's face
+	// (deadman) below the ground at the anchor.
 	Depth      units.Length     `json:"depth,omitempty"`
 	UnitWeight units.UnitWeight `json:"unit_weight,omitempty"`
 	// Passive is the fraction of the passive earth resistance in front of a
@@ -244,27 +245,140 @@ type AnchorSpec struct {
 	// AttachX and AttachZ place the backstay attachment in a block, from its
 	// base edge farthest from the tower, x towards the tower, z up; zero
 	// means the middle of the length and a third of the height (common
-	// practice: the rope loops round a beam cast low in the block).
+	// practice: the rope loops round a beam cast low in the block). For a
+	// deadman AttachZ is the attachment's height above the bottom of its
+	// face; zero means the middle of the face. The attachment lies Drop
+	// below the saddle (banks.*.backstay.drop), which fixes the anchor's
+	// elevation against groundwater and flood levels.
 	AttachX units.Length `json:"attach_x,omitempty"`
 	AttachZ units.Length `json:"attach_z,omitempty"`
+	// Attachment is how the ropes are fixed to the anchor; when it is left
+	// out the rope forces at the anchor are reported for its design, not
+	// checked.
+	Attachment *AttachmentSpec `json:"attachment,omitempty"`
+	// Beam is a deadman's steel section, checked in bending and shear as a
+	// beam on the soil reaction; when it is left out (a concrete or timber
+	// deadman) its design moment and shear are reported.
+	Beam *BeamSpec `json:"beam,omitempty"`
 
-	// Rock anchor bars.
-	Bars         int            `json:"bars,omitempty"`
-	BarDiameter  units.Length   `json:"bar_diameter,omitempty"`
-	BarStrength  units.Pressure `json:"bar_strength,omitempty"`
-	HoleDiameter units.Length   `json:"hole_diameter,omitempty"`
-	BondLength   units.Length   `json:"bond_length,omitempty"`
-	FreeLength   units.Length   `json:"free_length,omitempty"`
+	// Rock anchor bars, in a row across the pull.
+	Bars        int            `json:"bars,omitempty"`
+	BarDiameter units.Length   `json:"bar_diameter,omitempty"`
+	BarStrength units.Pressure `json:"bar_strength,omitempty"` // yield strength f_y
+	// BarUltimate is the bars' ultimate strength f_u, for the thread; zero
+	// takes f_y (cautious).
+	BarUltimate units.Pressure `json:"bar_ultimate,omitempty"`
+	// BarSpacing is the distance between neighbouring bars; zero takes
+	// their rock cones as one (cautious).
+	BarSpacing   units.Length `json:"bar_spacing,omitempty"`
+	HoleDiameter units.Length `json:"hole_diameter,omitempty"`
+	BondLength   units.Length `json:"bond_length,omitempty"`
+	FreeLength   units.Length `json:"free_length,omitempty"`
+	// GroutBond is the ultimate grout–rock bond stress, from anchor tests
+	// (BS 8081, EN 1537); left out, the rock preset's typical value.
+	GroutBond *units.Pressure `json:"grout_bond,omitempty"`
+	// Plate is the square head plate under each bar's nut; when it is left
+	// out the plate is not checked.
+	Plate *PlateSpec `json:"plate,omitempty"`
 }
 
-// SoilSpec picks a soil preset and overrides any of its values.
+// AttachmentSpec is how the backstay ropes are fixed to their anchor.
+type AttachmentSpec struct {
+	// Kind is "rod": each rope's eye is fixed (by shackle or turnbuckle) to
+	// steel rods cast into a block or deadman; or "loop": each rope passes
+	// round a pin or pipe cast into the block and is clamped back on
+	// itself. For a rock anchor the ropes' eyes are fixed to the bars'
+	// heads: give "rod" with no rods.
+	Kind string `json:"kind"`
+	// Termination is the rope's end: "grips" (wire rope grips, k_e 0.80),
+	// "ferrule" (ferrule-secured eye, 0.90) or "socket" (poured or swaged,
+	// 1.0); or give Efficiency instead.
+	Termination string  `json:"termination,omitempty"`
+	Efficiency  float64 `json:"efficiency,omitempty"`
+	// Rods cast into the block or deadman, sharing the pull of all the
+	// backstays ("rod"): their number, gross diameter, yield and ultimate
+	// strength, and the tensile stress area of their thread (zero: 0.78 of
+	// the gross area).
+	Rods          int            `json:"rods,omitempty"`
+	RodDiameter   units.Length   `json:"rod_diameter,omitempty"`
+	RodSteel      units.Pressure `json:"rod_steel,omitempty"`
+	RodUltimate   units.Pressure `json:"rod_ultimate,omitempty"`
+	RodThreadArea units.Area     `json:"rod_thread_area,omitempty"`
+	// PinDiameter is the diameter of the pin or pipe the ropes loop round
+	// ("loop").
+	PinDiameter units.Length `json:"pin_diameter,omitempty"`
+}
+
+// BeamSpec is a deadman's steel section.
+type BeamSpec struct {
+	Steel          units.Pressure `json:"steel"`           // yield strength f_y
+	PlasticModulus units.Volume   `json:"plastic_modulus"` // W_pl about the axis the pull bends
+	ShearArea      units.Area     `json:"shear_area"`      // A_v in the direction of the pull
+}
+
+// PlateSpec is a rock anchor's square head plate.
+type PlateSpec struct {
+	Side      units.Length   `json:"side"`
+	Thickness units.Length   `json:"thickness"`
+	Steel     units.Pressure `json:"steel"` // yield strength f_y
+}
+
+// SoilSpec describes the ground of one bank: a preset, the site
+// investigation's own parameters, or a preset with some of them
+// overridden. Presence decides, not value: a field given counts even when
+// zero ("cohesion": "0 kPa" removes a preset's c'; "undrained_strength":
+// "0 kPa" checks a clay drained only), a field left out keeps the preset's
+// value. Without a preset, unit_weight and friction (or rock) are needed.
+//
+// A fine soil with an undrained_strength is checked in the short-term
+// (undrained) and the long-term (drained) condition at every footing and
+// anchor; the report names the one that governs.
 type SoilSpec struct {
-	Preset     string           `json:"preset,omitempty"`
-	UnitWeight units.UnitWeight `json:"unit_weight,omitempty"`
-	Friction   units.Angle      `json:"friction,omitempty"`
-	Cohesion   units.Pressure   `json:"cohesion,omitempty"`
-	Allowable  units.Pressure   `json:"allowable_bearing,omitempty"`
+	// Preset names a typical soil or rock (foundation.Presets).
+	Preset string `json:"preset,omitempty"`
+	// Rock says the ground is rock: its bearing comes from
+	// allowable_bearing or rock_strength, never from soil theory, and rock
+	// anchors may be grouted in it.
+	Rock *bool `json:"rock,omitempty"`
+	// UnitWeight is the bulk unit weight γ above the water table; give
+	// either SubmergedUnitWeight (γ') or SaturatedUnitWeight (γsat) for the
+	// soil below it (neither: γ − γw).
+	UnitWeight          *units.UnitWeight `json:"unit_weight,omitempty"`
+	SubmergedUnitWeight *units.UnitWeight `json:"submerged_unit_weight,omitempty"`
+	SaturatedUnitWeight *units.UnitWeight `json:"saturated_unit_weight,omitempty"`
+	// Friction and Cohesion are the drained strength φ', c'.
+	Friction *units.Angle    `json:"friction,omitempty"`
+	Cohesion *units.Pressure `json:"cohesion,omitempty"`
+	// UndrainedStrength is the undrained shear strength c_u of a clay or
+	// silt.
+	UndrainedStrength *units.Pressure `json:"undrained_strength,omitempty"`
+	// Interface is δ/φ' of concrete on this ground; left out, 2/3.
+	Interface *float64 `json:"interface,omitempty"`
+	// Allowable is an allowable bearing pressure from the site
+	// investigation: on rock the bearing limit; on soil it replaces the
+	// bearing-capacity equation on the allowable basis.
+	Allowable *units.Pressure `json:"allowable_bearing,omitempty"`
+	// RockStrength, JointSpacing and JointAperture (uniaxial compressive
+	// strength of rock cores, spacing and opening of the joints) give rock
+	// its allowable bearing pressure by the K_sp method when no
+	// allowable_bearing is given.
+	RockStrength  *units.Pressure `json:"rock_strength,omitempty"`
+	JointSpacing  *units.Length   `json:"joint_spacing,omitempty"`
+	JointAperture *units.Length   `json:"joint_aperture,omitempty"`
+	// BearingMethod is the bearing-capacity method of this bank's footing
+	// and anchor block: "EN 1997-1 Annex D" (default) or "Vesic".
+	BearingMethod string `json:"bearing_method,omitempty"`
+	// Groundwater is the elevation of the groundwater table at this bank
+	// (the datum of the site's elevations); left out, no groundwater within
+	// reach. The design flood (site.flood_elevation) raises it at every
+	// footing and anchor it reaches, in the flood case.
+	Groundwater *units.Length `json:"groundwater_elevation,omitempty"`
 }
+
+// Given returns a pointer to x, for the optional fields of a description
+// built in Go, such as SoilSpec{Preset: "soft clay",
+// Cohesion: sagspan.Given(0 * units.Kilopascal)}.
+func Given[T any](x T) *T { return &x }
 
 // Loads sets the imposed loads. Every zero field takes its default.
 type Loads struct {

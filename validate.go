@@ -140,14 +140,8 @@ func (b Bridge) Validate() error {
 	b.validateRopes(v)
 	b.validateBank(v, "banks.left", b.Banks.Left)
 	b.validateBank(v, "banks.right", b.Banks.Right)
-	for _, k := range []struct {
-		f    string
-		soil SoilSpec
-	}{{"banks.left.soil", b.Banks.Left.Soil}, {"banks.right.soil", b.Banks.Right.Soil}} {
-		if _, err := k.soil.soil(); err != nil {
-			v.fail(at(k.f), "%v", err)
-		}
-	}
+	b.validateGround(v, Left)
+	b.validateGround(v, Right)
 	b.validateLoads(v)
 	return v.err
 }
@@ -281,28 +275,7 @@ func (b Bridge) validateBank(v *validator, f string, k Bank) {
 		v.fail(path{f, ".backstay.drop"}, "the anchor must lie below the saddle, got a drop of %s (anchor above the saddle)", bs.Drop)
 	}
 
-	a := k.Anchor
-	switch a.Type {
-	case "block", "deadman":
-		v.positive(path{f, ".anchor.length"}, float64(a.Length), units.KindLength)
-		v.positive(path{f, ".anchor.width"}, float64(a.Width), units.KindLength)
-		v.positive(path{f, ".anchor.height"}, float64(a.Height), units.KindLength)
-		v.positive(path{f, ".anchor.depth"}, float64(a.Depth), units.KindLength)
-		v.nonNegative(path{f, ".anchor.unit_weight"}, float64(a.UnitWeight), units.KindUnitWeight)
-		if a.Passive < 0 || a.Passive > 1 || math.IsNaN(a.Passive) {
-			v.fail(path{f, ".anchor.passive"}, "must lie between 0 and 1, got %v", a.Passive)
-		}
-	case "rock":
-		if a.Bars <= 0 {
-			v.fail(path{f, ".anchor.bars"}, "a rock anchor needs at least one bar, got %d", a.Bars)
-		}
-		v.positive(path{f, ".anchor.bar_diameter"}, float64(a.BarDiameter), units.KindLength)
-		v.positive(path{f, ".anchor.bar_strength"}, float64(a.BarStrength), units.KindPressure)
-		v.positive(path{f, ".anchor.hole_diameter"}, float64(a.HoleDiameter), units.KindLength)
-		v.positive(path{f, ".anchor.bond_length"}, float64(a.BondLength), units.KindLength)
-	default:
-		v.fail(path{f, ".anchor.type"}, "unknown anchor type %q; want block, deadman or rock", a.Type)
-	}
+	b.validateAnchor(v, f, k.Anchor)
 }
 
 func (b Bridge) validateLoads(v *validator) {
