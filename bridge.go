@@ -8,16 +8,30 @@ import (
 // the rope groups, both banks, the loads and the verification basis. It is
 // plain data with JSON tags; load one from a file with Load, check it with
 // Check. In JSON a quantity may be a bare SI number or a string with its
-// unit ("48 m", "3.2 kN/m").
+// unit ("48 m", "3.2 kN/m"), except where a bare number is ambiguous:
+// temperatures, angles and the fields tagged `unit:"mm"` (diameters,
+// cover, facing) must carry their unit. A field whose JSON tag lacks
+// omitempty is required.
 type Bridge struct {
-	Name    string      `json:"name"`
-	Site    Site        `json:"site"`
-	Climate Climate     `json:"climate"`
-	Walkway Walkway     `json:"walkway"`
-	Ropes   []RopeGroup `json:"ropes"`
-	Banks   Banks       `json:"banks"`
-	Loads   Loads       `json:"loads"`
-	Basis   Basis       `json:"basis"`
+	// Name names the bridge in reports.
+	Name string `json:"name"`
+	// Site is the crossing: span, levels, flood and ground.
+	Site Site `json:"site"`
+	// Climate is the rope temperatures and the wind.
+	Climate Climate `json:"climate"`
+	// Walkway is the deck the walkers use and its weight.
+	Walkway Walkway `json:"walkway"`
+	// Ropes lists the rope groups, walkway ropes and handrail ropes.
+	Ropes []RopeGroup `json:"ropes"`
+	// Banks is what stands on each bank.
+	Banks Banks `json:"banks"`
+	// Loads sets the imposed loads; every one left out takes its default.
+	Loads Loads `json:"loads,omitempty"`
+	// Basis chooses how the checks are verified and their factors.
+	Basis Basis `json:"basis,omitempty"`
+	// Comfort sets the modal analysis and the walkers' response; every
+	// field left out takes its default.
+	Comfort ComfortSpec `json:"comfort,omitempty"`
 }
 
 // Site is the crossing: the span between the walkway saddles and the
@@ -30,8 +44,9 @@ type Site struct {
 	Rise units.Length `json:"rise"`
 	// LeftSaddle is the elevation of the left walkway-rope saddle.
 	LeftSaddle units.Length `json:"left_saddle_elevation"`
-	// Flood is the elevation of the design flood.
-	Flood units.Length `json:"flood_elevation"`
+	// Flood is the elevation of the design flood, or "none" where no
+	// flood reaches the bridge.
+	Flood Level `json:"flood_elevation"`
 	// Freeboard is the clearance required between the design flood and the
 	// underside of the walkway at its lowest point.
 	Freeboard units.Length `json:"freeboard"`
@@ -43,7 +58,9 @@ type Site struct {
 // Point is a point in the elevation: x horizontal from the left saddle
 // towards the right, z elevation.
 type Point struct {
+	// X is the horizontal distance from the left saddle, negative behind it.
 	X units.Length `json:"x"`
+	// Z is the elevation of the ground there.
 	Z units.Length `json:"z"`
 }
 
@@ -84,7 +101,9 @@ type Walkway struct {
 
 // Part is one component of the walkway dead load.
 type Part struct {
-	Name string              `json:"name"`
+	// Name says what the part is, such as "timber deck planks".
+	Name string `json:"name"`
+	// Load is the part's weight per metre of walkway.
 	Load units.LoadPerLength `json:"load"`
 }
 
@@ -99,10 +118,15 @@ const (
 
 // RopeGroup is a set of identical ropes that hang together at one sag.
 type RopeGroup struct {
-	Name  string   `json:"name"`
-	Role  Role     `json:"role"`
-	Count int      `json:"count"`
-	Rope  RopeSpec `json:"rope"`
+	// Name names the group in reports, such as "walkway ropes".
+	Name string `json:"name"`
+	// Role is "walkway" (the ropes the walkway rests on or hangs from) or
+	// "handrail" (the ropes along the top of the side fencing).
+	Role Role `json:"role"`
+	// Count is the number of identical ropes in the group.
+	Count int `json:"count"`
+	// Rope is the rope every rope of the group is made of.
+	Rope RopeSpec `json:"rope"`
 	// Sag is the design dead-load sag at midspan below the chord, at the
 	// reference temperature.
 	Sag units.Length `json:"sag"`
@@ -122,30 +146,36 @@ type RopeSpec struct {
 	// Construction names the catalogue construction, such as "6x36-IWRC".
 	Construction string `json:"construction,omitempty"`
 	// Diameter is the nominal rope diameter.
-	Diameter units.Length `json:"diameter"`
+	Diameter units.Length `json:"diameter" unit:"mm"`
 	// Grade is the rope grade (nominal wire tensile strength), such as "1770 MPa".
 	Grade units.Pressure `json:"grade,omitempty"`
 
-	// A rope given directly, not from the catalogue.
-	MBF     units.Force            `json:"mbf,omitempty"`
-	Area    units.Area             `json:"area,omitempty"`
-	Modulus units.Pressure         `json:"modulus,omitempty"`
-	Mass    units.MassPerLength    `json:"mass,omitempty"`
-	Alpha   units.ThermalExpansion `json:"alpha,omitempty"`
+	// A rope given directly, not from the catalogue, when MBF is set.
+	MBF     units.Force            `json:"mbf,omitempty"`     // minimum breaking force of one rope; set it to give the rope directly
+	Area    units.Area             `json:"area,omitempty"`    // metallic cross-section of one rope
+	Modulus units.Pressure         `json:"modulus,omitempty"` // effective modulus on the metallic area
+	Mass    units.MassPerLength    `json:"mass,omitempty"`    // mass per metre of one rope
+	Alpha   units.ThermalExpansion `json:"alpha,omitempty"`   // coefficient of thermal expansion
 }
 
 // Banks holds the left and right bank.
 type Banks struct {
-	Left  Bank `json:"left"`
+	// Left is the bank at x = 0.
+	Left Bank `json:"left"`
+	// Right is the bank at x = span.
 	Right Bank `json:"right"`
 }
 
 // Bank is what stands on one bank: tower, backstay, anchor and soil.
 type Bank struct {
-	Tower    TowerSpec  `json:"tower"`
-	Backstay Backstay   `json:"backstay"`
-	Anchor   AnchorSpec `json:"anchor"`
-	Soil     SoilSpec   `json:"soil"`
+	// Tower is the tower column with its saddle, section and footing.
+	Tower TowerSpec `json:"tower"`
+	// Backstay is the run of rope from the saddle down to the anchor.
+	Backstay Backstay `json:"backstay"`
+	// Anchor is the anchorage the backstays run into.
+	Anchor AnchorSpec `json:"anchor"`
+	// Soil is the ground the footing and anchor stand in.
+	Soil SoilSpec `json:"soil"`
 }
 
 // TowerSpec is the tower column, its saddle, section and footing.
@@ -159,58 +189,127 @@ type TowerSpec struct {
 	Width units.Length `json:"width"`
 	// Facing is the thickness of non-structural facing (masonry, formwork)
 	// on each face, left out of the effective section.
-	Facing units.Length `json:"facing,omitempty"`
+	Facing units.Length `json:"facing,omitempty" unit:"mm"`
 	// UnitWeight of the column and footing; zero means 24 kN/m³.
 	UnitWeight units.UnitWeight `json:"unit_weight,omitempty"`
-	Saddle     SaddleSpec       `json:"saddle"`
-	Section    SectionSpec      `json:"section"`
-	Footing    FootingSpec      `json:"footing"`
-	// Eccentricity sets the allowed eccentricity of the resultant at the
-	// column base; zero value means the kern of the effective section.
+	// Saddle says how the ropes sit on the column.
+	Saddle SaddleSpec `json:"saddle"`
+	// Section is the column's section: reinforced concrete, a steel tube
+	// or a steel frame.
+	Section SectionSpec `json:"section"`
+	// Footing is the spread footing under the column.
+	Footing FootingSpec `json:"footing"`
+	// Eccentricity sets how the resultant of the rope forces is checked;
+	// the zero value: the rope-line form at the column base against the
+	// kern of the effective section.
 	Eccentricity EccentricitySpec `json:"eccentricity,omitempty"`
+	// Drag is the force coefficient of the column for wind across the
+	// bridge; zero means tower.DefaultColumnDrag (2.4) for a concrete
+	// column and 1.2 for a circular tube (from memory, EN 1991-1-4 7.9,
+	// subcritical flow).
+	Drag float64 `json:"drag,omitempty"`
 }
 
-// SaddleSpec says how the ropes sit on the tower. The rope renders over
-// the saddle's groove with its tension continuous in every kind; the kind
-// says how the saddle itself is held on the column:
+// SaddleSpec says how the ropes sit on the tower: how the saddle is held
+// on the column (Kind) and, for a fixed saddle, how the rope is held in its
+// groove (Groove):
 //
 //	fixed:   bolted to the column, which takes the whole unbalanced horizontal force
-//	sliding: on a bearing plate; it slides once the unbalance exceeds Friction × the vertical force
-//	roller:  on rollers; the column takes no horizontal force
+//	sliding: on a bearing plate, the rope clamped on it; it slides once the unbalance exceeds Friction × the vertical force
+//	roller:  on rollers, the rope clamped on it; the column takes no horizontal force along the bridge
+//
+//	groove "free":     the rope renders freely, its tension the same on both sides
+//	groove "friction": the rope grips the groove with GrooveFriction μ over the wrap angle the
+//	                   geometry gives, and renders once the tensions differ by more than e^{μθ}
+//	groove "clamped":  the rope is clamped on the saddle; span and backstay tensions are independent
+//	groove "" (not known): both bounding behaviours, free and clamped, are checked and each
+//	                   check reports the one that governs it
 type SaddleSpec struct {
 	// Kind is "fixed", "sliding" or "roller".
 	Kind string `json:"kind"`
 	// Friction is the friction coefficient of a sliding saddle's plate.
 	Friction float64 `json:"friction,omitempty"`
+	// Groove is "free", "friction", "clamped", or empty when not known
+	// (fixed saddles only).
+	Groove string `json:"groove,omitempty"`
+	// GrooveFriction is the coefficient of friction between rope and
+	// groove, for groove "friction".
+	GrooveFriction float64 `json:"groove_friction,omitempty"`
 }
 
-// SectionSpec is the reinforced-concrete column section. Bars are placed
-// symmetrically, half on each face normal to the bridge axis.
+// SectionSpec is the column section. Type "concrete" (the default) is a
+// reinforced-concrete rectangle of the tower's effective size, its bars
+// placed symmetrically, half on each face normal to the bridge axis; a
+// concrete column with no bars is plain. Type "tube" is one hollow steel
+// tube, "frame" two tube legs side by side across the bridge, joined by
+// bracing, Spacing apart.
 type SectionSpec struct {
-	Concrete    units.Pressure `json:"concrete"` // characteristic cylinder strength
-	Steel       units.Pressure `json:"steel,omitempty"`
-	Bars        int            `json:"bars,omitempty"`
-	BarDiameter units.Length   `json:"bar_diameter,omitempty"`
-	Cover       units.Length   `json:"cover,omitempty"` // to the bar centres
+	// Type is "concrete" (default), "tube" or "frame".
+	Type string `json:"type,omitempty"`
+	// Concrete is the characteristic cylinder strength fck.
+	Concrete units.Pressure `json:"concrete,omitempty"`
+	// Steel is the characteristic yield strength fyk of the bars, or fy of
+	// a tube or frame's legs.
+	Steel units.Pressure `json:"steel,omitempty"`
+	// Bars is the number of longitudinal bars, an even number; zero means
+	// plain concrete.
+	Bars int `json:"bars,omitempty"`
+	// BarDiameter is the diameter of each bar.
+	BarDiameter units.Length `json:"bar_diameter,omitempty" unit:"mm"`
+	// Cover is the distance from a face to the centres of the bars.
+	Cover units.Length `json:"cover,omitempty" unit:"mm"`
+	// Creep is the creep coefficient φ(∞, t0) of the concrete; zero means
+	// 2.0 (see tower.DefaultCreep).
+	Creep float64 `json:"creep,omitempty"`
+
+	// Shape of a steel tube or of a frame's legs: "circular" (default) or
+	// "square".
+	Shape string `json:"shape,omitempty"`
+	// Size is the tube's outside diameter or width.
+	Size units.Length `json:"size,omitempty" unit:"mm"`
+	// Wall is the tube's wall thickness.
+	Wall units.Length `json:"wall,omitempty" unit:"mm"`
+	// ColdFormed marks a cold-formed tube (buckling curve c of EN 1993-1-1
+	// Table 6.2 instead of a).
+	ColdFormed bool `json:"cold_formed,omitempty"`
+	// Spacing of a frame's legs across the bridge, centre to centre.
+	Spacing units.Length `json:"spacing,omitempty"`
+	// Panel is the distance between a frame's bracing nodes; zero means
+	// the column height.
+	Panel units.Length `json:"panel,omitempty"`
 }
 
 // FootingSpec is the spread footing under a tower column.
 type FootingSpec struct {
-	Length    units.Length `json:"length"` // along the bridge
-	Width     units.Length `json:"width"`
+	// Length is the footing's size along the bridge.
+	Length units.Length `json:"length"`
+	// Width is the footing's size across the bridge.
+	Width units.Length `json:"width"`
+	// Thickness is the depth of the footing slab.
 	Thickness units.Length `json:"thickness"`
-	Depth     units.Length `json:"depth"` // of the underside below ground
+	// Depth is that of the footing's underside below ground.
+	Depth units.Length `json:"depth"`
 	// ColumnOffset places the column axis from the footing centre, towards
 	// the span positive (a footing often extends further on the backstay
 	// side).
 	ColumnOffset units.Length `json:"column_offset,omitempty"`
 }
 
-// EccentricitySpec sets the allowed eccentricity of the rope-force
-// resultant at the column base.
+// EccentricitySpec sets how the resultant of the rope forces on a tower
+// column is checked: where (Section), in which form, against which limit.
 type EccentricitySpec struct {
-	// Rule is "kern" (default: no tension, d/6 of the effective depth) or
-	// "fraction" (Fraction × d/2 + Offset).
+	// Form is "rope" (default: the line of action of the rope forces
+	// alone, e = h·tan δ, as practice checks it) or "statics" (ΣM/ΣV with
+	// the column's weight). The other form's value is always reported.
+	Form string `json:"form,omitempty"`
+	// Section is the height of the checked section above the column base
+	// section: where the column is first tied into its base. Zero means
+	// the base section.
+	Section units.Length `json:"section,omitempty"`
+	// Rule is "kern" (default: no tension, d/6 of the effective section),
+	// "section" (within the effective section: d/2 + Offset, Offset the
+	// projection of a base beyond the column face) or "fraction"
+	// (Fraction × d/2 + Offset).
 	Rule     string       `json:"rule,omitempty"`
 	Fraction float64      `json:"fraction,omitempty"`
 	Offset   units.Length `json:"offset,omitempty"`
@@ -231,13 +330,18 @@ type AnchorSpec struct {
 	// Type is "block" (gravity anchor block), "deadman" or "rock".
 	Type string `json:"type"`
 
-	// Block and deadman dimensions.
-	Length units.Length `json:"length,omitempty"` // along the pull
-	Width  units.Length `json:"width,omitempty"`
+	// Length is a block's size along the backstay's pull, or a deadman
+	// beam's thickness in the direction of the pull.
+	Length units.Length `json:"length,omitempty"`
+	// Width is a block's size across the pull, or a deadman beam's length.
+	Width units.Length `json:"width,omitempty"`
+	// Height is the height of a block or of a deadman beam's face.
 	Height units.Length `json:"height,omitempty"`
-	// Depth of the base (block) or of the bottom of the beam's face
-	// (deadman) below the ground at the anchor.
-	Depth      units.Length     `json:"depth,omitempty"`
+	// Depth is that of a block's base, or of the bottom of a deadman
+	// beam's face, below the ground at the anchor.
+	Depth units.Length `json:"depth,omitempty"`
+	// UnitWeight is that of a block's or beam's concrete; zero means
+	// 24 kN/m³.
 	UnitWeight units.UnitWeight `json:"unit_weight,omitempty"`
 	// Passive is the fraction of the passive earth resistance in front of a
 	// block counted on; zero counts none.
@@ -261,19 +365,24 @@ type AnchorSpec struct {
 	// deadman) its design moment and shear are reported.
 	Beam *BeamSpec `json:"beam,omitempty"`
 
-	// Rock anchor bars, in a row across the pull.
-	Bars        int            `json:"bars,omitempty"`
-	BarDiameter units.Length   `json:"bar_diameter,omitempty"`
-	BarStrength units.Pressure `json:"bar_strength,omitempty"` // yield strength f_y
+	// Bars is the number of a rock anchor's bars, in a row across the pull.
+	Bars int `json:"bars,omitempty"`
+	// BarDiameter is the diameter of each rock-anchor bar.
+	BarDiameter units.Length `json:"bar_diameter,omitempty" unit:"mm"`
+	// BarStrength is the yield strength f_y of a rock-anchor bar.
+	BarStrength units.Pressure `json:"bar_strength,omitempty"`
 	// BarUltimate is the bars' ultimate strength f_u, for the thread; zero
 	// takes f_y (cautious).
 	BarUltimate units.Pressure `json:"bar_ultimate,omitempty"`
 	// BarSpacing is the distance between neighbouring bars; zero takes
 	// their rock cones as one (cautious).
-	BarSpacing   units.Length `json:"bar_spacing,omitempty"`
-	HoleDiameter units.Length `json:"hole_diameter,omitempty"`
-	BondLength   units.Length `json:"bond_length,omitempty"`
-	FreeLength   units.Length `json:"free_length,omitempty"`
+	BarSpacing units.Length `json:"bar_spacing,omitempty"`
+	// HoleDiameter is the diameter of the grouted drill hole.
+	HoleDiameter units.Length `json:"hole_diameter,omitempty" unit:"mm"`
+	// BondLength is the length of bar grouted into the rock.
+	BondLength units.Length `json:"bond_length,omitempty"`
+	// FreeLength is the length of bar free to stretch above the bond.
+	FreeLength units.Length `json:"free_length,omitempty"`
 	// GroutBond is the ultimate grout–rock bond stress, from anchor tests
 	// (BS 8081, EN 1537); left out, the rock preset's typical value.
 	GroutBond *units.Pressure `json:"grout_bond,omitempty"`
@@ -285,42 +394,54 @@ type AnchorSpec struct {
 // AttachmentSpec is how the backstay ropes are fixed to their anchor.
 type AttachmentSpec struct {
 	// Kind is "rod": each rope's eye is fixed (by shackle or turnbuckle) to
-	// steel rods cast into a block or deadman; or "loop": each rope passes
-	// round a pin or pipe cast into the block and is clamped back on
-	// itself. For a rock anchor the ropes' eyes are fixed to the bars'
-	// heads: give "rod" with no rods.
+	// steel rods cast into a block or deadman, or to a rock anchor's bars'
+	// heads (then with no rods); or "loop": each rope passes round a pin or
+	// pipe cast into the block and is clamped back on itself.
 	Kind string `json:"kind"`
 	// Termination is the rope's end: "grips" (wire rope grips, k_e 0.80),
 	// "ferrule" (ferrule-secured eye, 0.90) or "socket" (poured or swaged,
-	// 1.0); or give Efficiency instead.
-	Termination string  `json:"termination,omitempty"`
-	Efficiency  float64 `json:"efficiency,omitempty"`
-	// Rods cast into the block or deadman, sharing the pull of all the
-	// backstays ("rod"): their number, gross diameter, yield and ultimate
-	// strength, and the tensile stress area of their thread (zero: 0.78 of
-	// the gross area).
-	Rods          int            `json:"rods,omitempty"`
-	RodDiameter   units.Length   `json:"rod_diameter,omitempty"`
-	RodSteel      units.Pressure `json:"rod_steel,omitempty"`
-	RodUltimate   units.Pressure `json:"rod_ultimate,omitempty"`
-	RodThreadArea units.Area     `json:"rod_thread_area,omitempty"`
+	// 1.0); or give efficiency instead.
+	Termination string `json:"termination,omitempty"`
+	// Efficiency is the termination efficiency k_e of the rope's end, in
+	// place of termination.
+	Efficiency float64 `json:"efficiency,omitempty"`
+	// Rods is the number of rods cast into the block or deadman ("rod"),
+	// sharing the pull of all the backstays.
+	Rods int `json:"rods,omitempty"`
+	// RodDiameter is the rods' gross diameter.
+	RodDiameter units.Length `json:"rod_diameter,omitempty" unit:"mm"`
+	// RodSteel is the rods' yield strength f_y.
+	RodSteel units.Pressure `json:"rod_steel,omitempty"`
+	// RodUltimate is the rods' ultimate strength f_u; zero takes f_y
+	// (cautious).
+	RodUltimate units.Pressure `json:"rod_ultimate,omitempty"`
+	// RodThreadArea is the tensile stress area of a rod's thread; zero
+	// takes 0.78 of its gross area (an M20 thread's ratio, cautious).
+	RodThreadArea units.Area `json:"rod_thread_area,omitempty"`
 	// PinDiameter is the diameter of the pin or pipe the ropes loop round
 	// ("loop").
-	PinDiameter units.Length `json:"pin_diameter,omitempty"`
+	PinDiameter units.Length `json:"pin_diameter,omitempty" unit:"mm"`
 }
 
 // BeamSpec is a deadman's steel section.
 type BeamSpec struct {
-	Steel          units.Pressure `json:"steel"`           // yield strength f_y
-	PlasticModulus units.Volume   `json:"plastic_modulus"` // W_pl about the axis the pull bends
-	ShearArea      units.Area     `json:"shear_area"`      // A_v in the direction of the pull
+	// Steel is the section's yield strength f_y.
+	Steel units.Pressure `json:"steel"`
+	// PlasticModulus is the plastic section modulus W_pl about the axis the
+	// pull bends the beam about.
+	PlasticModulus units.Volume `json:"plastic_modulus"`
+	// ShearArea is the shear area A_v in the direction of the pull.
+	ShearArea units.Area `json:"shear_area"`
 }
 
 // PlateSpec is a rock anchor's square head plate.
 type PlateSpec struct {
-	Side      units.Length   `json:"side"`
-	Thickness units.Length   `json:"thickness"`
-	Steel     units.Pressure `json:"steel"` // yield strength f_y
+	// Side is the side of the square plate.
+	Side units.Length `json:"side"`
+	// Thickness is the plate's thickness.
+	Thickness units.Length `json:"thickness" unit:"mm"`
+	// Steel is the plate's yield strength f_y.
+	Steel units.Pressure `json:"steel"`
 }
 
 // SoilSpec describes the ground of one bank: a preset, the site
@@ -334,44 +455,51 @@ type PlateSpec struct {
 // (undrained) and the long-term (drained) condition at every footing and
 // anchor; the report names the one that governs.
 type SoilSpec struct {
-	// Preset names a typical soil or rock (foundation.Presets).
+	// Preset names a typical soil or rock whose values are taken, such as
+	// "dense sand" (foundation.Presets); the fields below override them.
 	Preset string `json:"preset,omitempty"`
-	// Rock says the ground is rock: its bearing comes from
+	// IsRock says whether the ground is rock: its bearing then comes from
 	// allowable_bearing or rock_strength, never from soil theory, and rock
 	// anchors may be grouted in it.
-	Rock *bool `json:"rock,omitempty"`
-	// UnitWeight is the bulk unit weight γ above the water table; give
-	// either SubmergedUnitWeight (γ') or SaturatedUnitWeight (γsat) for the
-	// soil below it (neither: γ − γw).
-	UnitWeight          *units.UnitWeight `json:"unit_weight,omitempty"`
-	SubmergedUnitWeight *units.UnitWeight `json:"submerged_unit_weight,omitempty"`
-	SaturatedUnitWeight *units.UnitWeight `json:"saturated_unit_weight,omitempty"`
-	// Friction and Cohesion are the drained strength φ', c'.
-	Friction *units.Angle    `json:"friction,omitempty"`
+	IsRock *bool `json:"rock,omitempty"`
+	// UnitWeight is the bulk unit weight γ above the water table.
+	UnitWeight *units.UnitWeight `json:"unit_weight,omitempty"`
+	// Submerged is the effective unit weight γ' below the water table; left
+	// out (and no saturated_unit_weight), γ − 9.81 kN/m³.
+	Submerged *units.UnitWeight `json:"submerged_unit_weight,omitempty"`
+	// Saturated is the saturated unit weight γsat, from which
+	// γ' = γsat − 9.81 kN/m³; give it or submerged_unit_weight, not both.
+	Saturated *units.UnitWeight `json:"saturated_unit_weight,omitempty"`
+	// Friction is the drained (effective) angle of shearing resistance φ'.
+	Friction *units.Angle `json:"friction,omitempty"`
+	// Cohesion is the drained (effective) cohesion c'.
 	Cohesion *units.Pressure `json:"cohesion,omitempty"`
-	// UndrainedStrength is the undrained shear strength c_u of a clay or
-	// silt.
-	UndrainedStrength *units.Pressure `json:"undrained_strength,omitempty"`
-	// Interface is δ/φ' of concrete on this ground; left out, 2/3.
+	// Undrained is the undrained shear strength c_u of a clay or silt: the
+	// short-term condition is checked besides the drained one; "0 kPa"
+	// checks a preset clay drained only.
+	Undrained *units.Pressure `json:"undrained_strength,omitempty"`
+	// Interface is the ratio δ/φ' of base friction between concrete and
+	// this ground; left out, 2/3.
 	Interface *float64 `json:"interface,omitempty"`
 	// Allowable is an allowable bearing pressure from the site
 	// investigation: on rock the bearing limit; on soil it replaces the
 	// bearing-capacity equation on the allowable basis.
 	Allowable *units.Pressure `json:"allowable_bearing,omitempty"`
-	// RockStrength, JointSpacing and JointAperture (uniaxial compressive
-	// strength of rock cores, spacing and opening of the joints) give rock
-	// its allowable bearing pressure by the K_sp method when no
-	// allowable_bearing is given.
-	RockStrength  *units.Pressure `json:"rock_strength,omitempty"`
-	JointSpacing  *units.Length   `json:"joint_spacing,omitempty"`
-	JointAperture *units.Length   `json:"joint_aperture,omitempty"`
+	// RockStrength is the uniaxial compressive strength of intact rock
+	// cores, for the K_sp method when no allowable_bearing is given.
+	RockStrength *units.Pressure `json:"rock_strength,omitempty"`
+	// JointSpacing is the spacing of the rock's discontinuities, for the
+	// K_sp method.
+	JointSpacing *units.Length `json:"joint_spacing,omitempty"`
+	// JointAperture is the opening of the rock's discontinuities, for the
+	// K_sp method.
+	JointAperture *units.Length `json:"joint_aperture,omitempty"`
 	// BearingMethod is the bearing-capacity method of this bank's footing
 	// and anchor block: "EN 1997-1 Annex D" (default) or "Vesic".
 	BearingMethod string `json:"bearing_method,omitempty"`
-	// Groundwater is the elevation of the groundwater table at this bank
-	// (the datum of the site's elevations); left out, no groundwater within
-	// reach. The design flood (site.flood_elevation) raises it at every
-	// footing and anchor it reaches, in the flood case.
+	// Groundwater is the elevation of the groundwater table at this bank,
+	// on the datum of the site's levels; left out, no groundwater within
+	// reach. In the flood case the design flood raises it where higher.
 	Groundwater *units.Length `json:"groundwater_elevation,omitempty"`
 }
 
@@ -402,37 +530,36 @@ type Basis struct {
 	// safety) or "partial" (factored loads and resistances).
 	Method string `json:"method,omitempty"`
 
-	// Allowable basis: global factors of safety, zero → default.
-	RopeFactor        float64 `json:"rope_factor,omitempty"`
-	SlidingFactor     float64 `json:"sliding_factor,omitempty"`
-	OverturningFactor float64 `json:"overturning_factor,omitempty"`
-	UpliftFactor      float64 `json:"uplift_factor,omitempty"`
-	BearingFactor     float64 `json:"bearing_factor,omitempty"`
+	// Allowable basis: global factors of safety; zero takes the default.
+	RopeFactor        float64 `json:"rope_factor,omitempty"`        // on the ropes' minimum breaking force; default 3 (cable.DefaultGlobalFactor)
+	SlidingFactor     float64 `json:"sliding_factor,omitempty"`     // against sliding of footings and anchors; default 1.5
+	OverturningFactor float64 `json:"overturning_factor,omitempty"` // against overturning; default 2.0 for footings, 1.5 for anchor blocks
+	UpliftFactor      float64 `json:"uplift_factor,omitempty"`      // against uplift of anchor blocks; default 1.5
+	BearingFactor     float64 `json:"bearing_factor,omitempty"`     // on the ultimate bearing pressure; default 3.0
 
-	// Partial-factor basis: load factors, zero → default.
-	GammaG float64 `json:"gamma_g,omitempty"`
-	GammaQ float64 `json:"gamma_q,omitempty"`
+	// Partial-factor basis, EN 1990 Annex A2; zero takes the default.
+	GammaG float64 `json:"gamma_g,omitempty"` // γG on unfavourable permanent loads; default 1.35
+	GammaQ float64 `json:"gamma_q,omitempty"` // γQ on the crowd and the wind; default 1.5
 	// GammaR is the rope resistance factor of EN 1993-1-11; zero → default.
 	GammaR float64 `json:"gamma_r,omitempty"`
 	// RopeEfficiency is the termination efficiency k_e of EN 1993-1-11;
 	// zero → cable.DefaultKe.
 	RopeEfficiency float64 `json:"rope_efficiency,omitempty"`
 
-	// Ground checks on the partial basis, EN 1997-1 Annex A; zero → the
-	// recommended values documented in foundation.Basis.
-	Approach  string  `json:"approach,omitempty"` // "DA2" (default) or "DA1"
-	GammaGdst float64 `json:"gamma_g_dst,omitempty"`
-	GammaGstb float64 `json:"gamma_g_stb,omitempty"`
-	GammaQdst float64 `json:"gamma_q_dst,omitempty"`
-	GammaPhi  float64 `json:"gamma_phi,omitempty"`
-	GammaC    float64 `json:"gamma_c,omitempty"`
-	GammaRh   float64 `json:"gamma_rh,omitempty"`
-	GammaRv   float64 `json:"gamma_rv,omitempty"`
-	GammaRe   float64 `json:"gamma_re,omitempty"`
+	// Ground checks on the partial basis, EN 1997-1 Annex A; zero takes
+	// the recommended value documented in foundation.Basis.
+	Approach  string  `json:"approach,omitempty"`    // design approach, "DA2" (default) or "DA1"
+	GammaGdst float64 `json:"gamma_g_dst,omitempty"` // EQU, destabilising permanent actions; default 1.1
+	GammaGstb float64 `json:"gamma_g_stb,omitempty"` // EQU, stabilising permanent actions; default 0.9
+	GammaQdst float64 `json:"gamma_q_dst,omitempty"` // EQU, destabilising variable actions; default 1.5
+	GammaPhi  float64 `json:"gamma_phi,omitempty"`   // on tan φ' (set M2); default 1.25
+	GammaC    float64 `json:"gamma_c,omitempty"`     // on c' (set M2); default 1.25
+	GammaRh   float64 `json:"gamma_rh,omitempty"`    // on sliding resistance; default 1.1 (DA2), 1.0 (DA1)
+	GammaRv   float64 `json:"gamma_rv,omitempty"`    // on bearing resistance; default 1.4 (DA2), 1.0 (DA1)
+	GammaRe   float64 `json:"gamma_re,omitempty"`    // on earth resistance; default 1.4 (DA2), 1.0 (DA1)
 
-	// Column sections, EN 1992-1-1; zero → the values documented in
-	// tower.RCSection (γc 1.5, γs 1.15, αcc 1.0).
-	GammaConcrete float64 `json:"gamma_concrete,omitempty"`
-	GammaSteel    float64 `json:"gamma_steel,omitempty"`
-	AlphaCC       float64 `json:"alpha_cc,omitempty"`
+	// Column sections, EN 1992-1-1; zero takes the default of tower.RCSection.
+	GammaConcrete float64 `json:"gamma_concrete,omitempty"` // γc on concrete; default 1.5
+	GammaSteel    float64 `json:"gamma_steel,omitempty"`    // γs on reinforcement; default 1.15
+	AlphaCC       float64 `json:"alpha_cc,omitempty"`       // αcc, long-term effects on concrete strength; default 1.0
 }

@@ -24,7 +24,7 @@ type bankGround struct {
 	footingTop, footingGround, anchorGround units.Length
 	// groundwater is the groundwater elevation, when given.
 	groundwater *units.Length
-	flood       units.Length
+	flood       Level
 }
 
 // saddleElevation returns the elevation of a bank's walkway-rope saddle.
@@ -86,8 +86,8 @@ func (b Bridge) groundOf(s Side, soil foundation.Soil) bankGround {
 // the flood's level, cautious).
 func (g bankGround) waterLevel(lc LoadCase) (units.Length, bool, string) {
 	switch {
-	case lc.Flood && (g.groundwater == nil || g.flood > *g.groundwater):
-		return g.flood, true, fmt.Sprintf("the design flood at %s (site.flood_elevation), the bank saturated up to it", g.flood)
+	case lc.Flood && !g.flood.None && (g.groundwater == nil || g.flood.Z > *g.groundwater):
+		return g.flood.Z, true, fmt.Sprintf("the design flood at %s (site.flood_elevation), the bank saturated up to it", g.flood.Z)
 	case g.groundwater != nil:
 		return *g.groundwater, true, fmt.Sprintf("groundwater at %s", *g.groundwater)
 	}
@@ -164,7 +164,7 @@ func (m *model) footingChecks(out sink, side Side, spec FootingSpec, service []C
 	for _, svc := range service {
 		results, err := m.footing(side, spec, service[0].Tower[side], svc)
 		if err != nil {
-			return fmt.Errorf("sagspan: %s, case %q: %w", element, svc.Case.Name, err)
+			return m.bankErr(side, "tower.footing", svc.Case.Name, err)
 		}
 		for _, r := range results {
 			out.add(r.For(element, svc.Case.Name))
@@ -174,7 +174,7 @@ func (m *model) footingChecks(out sink, side Side, spec FootingSpec, service []C
 		}
 		results, err = m.footingAcross(side, spec, service[0].Tower[side], svc)
 		if err != nil {
-			return fmt.Errorf("sagspan: %s across, case %q: %w", element, svc.Case.Name, err)
+			return m.bankErr(side, "tower.footing", svc.Case.Name+", across the bridge", err)
 		}
 		for _, r := range results {
 			out.add(r.For(footingAcrossElement[side], svc.Case.Name))
@@ -227,7 +227,7 @@ func (m *model) anchorChecks(out sink, side Side, spec AnchorSpec, service []Cas
 	for _, svc := range service {
 		results, err := m.anchor(side, spec, service[0], svc)
 		if err != nil {
-			return fmt.Errorf("sagspan: %s, case %q: %w", element, svc.Case.Name, err)
+			return m.bankErr(side, "anchor", svc.Case.Name, err)
 		}
 		for _, r := range results {
 			out.add(r.For(element, svc.Case.Name))

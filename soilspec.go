@@ -28,7 +28,7 @@ func (s SoilSpec) soil() (foundation.Soil, error) {
 		soil = p
 	} else {
 		soil = foundation.Soil{Name: "site soil", Source: "the site investigation, as given in the bridge description"}
-		rock := s.Rock != nil && *s.Rock
+		rock := s.IsRock != nil && *s.IsRock
 		if s.UnitWeight == nil {
 			return foundation.Soil{}, fieldErr("unit_weight", "is missing: without a preset give unit_weight, friction (φ') and, for a clay, undrained_strength (c_u); or name a preset")
 		}
@@ -36,8 +36,8 @@ func (s SoilSpec) soil() (foundation.Soil, error) {
 			return foundation.Soil{}, fieldErr("friction", "is missing: without a preset give the drained friction angle φ' (and undrained_strength for a clay); or name a preset")
 		}
 	}
-	if s.Rock != nil {
-		soil.IsRock = *s.Rock
+	if s.IsRock != nil {
+		soil.IsRock = *s.IsRock
 		given = append(given, "rock")
 		if !soil.IsRock {
 			soil.GroutBond = 0
@@ -47,15 +47,15 @@ func (s SoilSpec) soil() (foundation.Soil, error) {
 		soil.UnitWeight, soil.Submerged = *s.UnitWeight, 0
 		given = append(given, "unit_weight")
 	}
-	if s.SubmergedUnitWeight != nil && s.SaturatedUnitWeight != nil {
+	if s.Submerged != nil && s.Saturated != nil {
 		return foundation.Soil{}, fieldErr("saturated_unit_weight", "give either submerged_unit_weight (γ') or saturated_unit_weight (γsat), not both")
 	}
-	if s.SubmergedUnitWeight != nil {
-		soil.Submerged = *s.SubmergedUnitWeight
+	if s.Submerged != nil {
+		soil.Submerged = *s.Submerged
 		given = append(given, "submerged_unit_weight")
 	}
-	if s.SaturatedUnitWeight != nil {
-		soil.Submerged = *s.SaturatedUnitWeight - foundation.WaterUnitWeight
+	if s.Saturated != nil {
+		soil.Submerged = *s.Saturated - foundation.WaterUnitWeight
 		given = append(given, "saturated_unit_weight")
 	}
 	if s.Friction != nil {
@@ -66,8 +66,8 @@ func (s SoilSpec) soil() (foundation.Soil, error) {
 		soil.Cohesion = *s.Cohesion
 		given = append(given, "cohesion")
 	}
-	if s.UndrainedStrength != nil {
-		soil.Undrained = *s.UndrainedStrength
+	if s.Undrained != nil {
+		soil.Undrained = *s.Undrained
 		given = append(given, "undrained_strength")
 	}
 	if s.Interface != nil {
@@ -110,15 +110,15 @@ func (s SoilSpec) check(soil foundation.Soil) error {
 	case g <= foundation.WaterUnitWeight && soil.Submerged == 0:
 		return fieldErr("unit_weight", "%s is not more than water's 9.81 kN/m³: give submerged_unit_weight, or check the unit", g)
 	}
-	if s.SaturatedUnitWeight != nil && !(*s.SaturatedUnitWeight > foundation.WaterUnitWeight) {
-		return fieldErr("saturated_unit_weight", "%s must exceed water's 9.81 kN/m³", *s.SaturatedUnitWeight)
+	if s.Saturated != nil && !(*s.Saturated > foundation.WaterUnitWeight) {
+		return fieldErr("saturated_unit_weight", "%s must exceed water's 9.81 kN/m³", *s.Saturated)
 	}
 	if soil.Submerged < 0 || math.IsNaN(float64(soil.Submerged)) {
 		return fieldErr("submerged_unit_weight", "must be positive, got %s", soil.Submerged)
 	}
 	if soil.Submerged >= soil.UnitWeight {
 		f := "submerged_unit_weight"
-		if s.SaturatedUnitWeight != nil {
+		if s.Saturated != nil {
 			f = "saturated_unit_weight"
 		}
 		return fieldErr(f, "γ' = %s is not less than the unit weight γ = %s: the effective weight below the water is γsat − 9.81 kN/m³",

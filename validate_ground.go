@@ -163,9 +163,9 @@ func (b Bridge) validateGround(v *validator, side Side) {
 	}
 	if gw := k.Soil.Groundwater; gw != nil {
 		v.finite(at(f+".soil.groundwater_elevation"), float64(*gw))
-		if v.err == nil && *gw > b.Site.Flood {
+		if fl := b.Site.Flood; v.err == nil && !fl.None && *gw > fl.Z {
 			v.fail(at(f+".soil.groundwater_elevation"), "%s is above the design flood %s (site.flood_elevation): the flood is the highest water the checks take; "+
-				"raise the flood or lower the groundwater", *gw, b.Site.Flood)
+				"raise the flood or lower the groundwater", *gw, b.Site.Flood.Z)
 		}
 	}
 	a := k.Anchor
