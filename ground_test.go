@@ -40,6 +40,18 @@ func TestSoilPresenceDecides(t *testing.T) {
 	if right.Undrained != 0 || right.Cohesion != stiff.Cohesion || right.UnitWeight != 20e3 {
 		t.Errorf("overrides gave %+v", right)
 	}
+	// Written back as JSON, a zero given stays given.
+	data, err = b.MarshalJSON()
+	if err != nil {
+		t.Fatal(err)
+	}
+	back, err := Parse(data)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if c := back.Banks.Left.Soil.Cohesion; c == nil || *c != 0 {
+		t.Errorf("round trip lost the given zero cohesion: %v", c)
+	}
 	// The whole chain then checks the right bank drained only.
 	a, err := Check(b, nil)
 	if err != nil {
