@@ -152,10 +152,6 @@ func Check(b Bridge, opts *Options) (*Analysis, error) {
 // only what a design search needs.
 type sink interface{ add(check.Result) }
 
-type reportSink struct{ rep *check.Report }
-
-func (s reportSink) add(r check.Result) { s.rep.Add(r) }
-
 func (m *model) run(a *Analysis, opts *Options) error {
 	// Each variant of groove behaviour (one, unless the description leaves
 	// a fixed saddle's groove open) is analysed and checked in full; the
