@@ -81,17 +81,29 @@ func (b Bridge) groundOf(s Side, soil foundation.Soil) bankGround {
 }
 
 // waterLevel returns the water level at a bank in case lc, whether there
-// is one, and its source in words: the groundwater, or in the flood case
-// the design flood where it is higher (the bank taken as saturated up to
-// the flood's level, cautious).
-func (g bankGround) waterLevel(lc LoadCase) (units.Length, bool, string) {
+// is one, and whether it is the design flood: the groundwater, or in the
+// flood case the design flood where it is higher (the bank taken as
+// saturated up to the flood's level, cautious).
+func (g bankGround) waterLevel(lc LoadCase) (level units.Length, ok, flood bool) {
 	switch {
 	case lc.Flood && !g.flood.None && (g.groundwater == nil || g.flood.Z > *g.groundwater):
-		return g.flood.Z, true, fmt.Sprintf("the design flood at %s (site.flood_elevation), the bank saturated up to it", g.flood.Z)
+		return g.flood.Z, true, true
 	case g.groundwater != nil:
-		return *g.groundwater, true, fmt.Sprintf("groundwater at %s", *g.groundwater)
+		return *g.groundwater, true, false
 	}
-	return 0, false, "no groundwater given"
+	return 0, false, false
+}
+
+// waterText says in words which water level case lc uses at the bank.
+func (g bankGround) waterText(lc LoadCase) string {
+	level, ok, flood := g.waterLevel(lc)
+	switch {
+	case flood:
+		return fmt.Sprintf("the design flood at %s (site.flood_elevation), the bank saturated up to it", level)
+	case ok:
+		return fmt.Sprintf("groundwater at %s", level)
+	}
+	return "no groundwater given"
 }
 
 // waterAt returns the water at a foundation whose ground lies at
@@ -283,7 +295,8 @@ func (m *model) waterBasis(rs []check.Result, s Side, lc LoadCase, w foundation.
 	if m.fbasis.Terse {
 		return
 	}
-	level, ok, text := m.ground[s].waterLevel(lc)
+	level, ok, _ := m.ground[s].waterLevel(lc)
+	text := m.ground[s].waterText(lc)
 	for i := range rs {
 		rs[i] = rs[i].WithBasis(rs[i].Basis + "; water level used: " + text)
 		if ok {
@@ -350,7 +363,8 @@ func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Re
 		return nil, err
 	}
 	m.waterBasis(m.scratch, s, svc.Case, water)
-	return m.attachment(m.scratch, s, spec, perm, svc, pull, permanent)
+	m.scratch, err = m.attachment(m.scratch, s, spec, perm, svc, pull, permanent)
+	return m.scratch, err
 }
 
 // attachment appends the checks of the ropes' attachment at the anchor:
