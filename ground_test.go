@@ -362,3 +362,28 @@ func groundFailures(a *Analysis) []check.Result {
 	}
 	return out
 }
+
+// TestDemoOnSoftClay: the demo bridge set on soft clay with c_u 20 kPa
+// (the case the first version passed) fails in undrained terms: the footing
+// bears about 45 kPa allowed against about 95 kPa acting, and the anchor
+// block slides (undrained factor of safety about 1.0 against 1.5; drained,
+// φ' 22°, it fails too, as it did before).
+func TestDemoOnSoftClay(t *testing.T) {
+	b := Demo()
+	for _, k := range []*Bank{&b.Banks.Left, &b.Banks.Right} {
+		k.Soil = SoilSpec{Preset: "soft clay", Undrained: Given(20 * units.Kilopascal)}
+	}
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	noNaNIn(t, a)
+	bear := governingOf(t, a, "footing.bearing", "left footing")
+	if uu, _ := bear.Value("U_un"); bear.Status != check.Fail || !(uu.Value > 1) || !strings.HasPrefix(bear.Basis, "undrained") {
+		t.Errorf("footing on soft clay: %v, U_un %v, basis %q", bear.Status, uu.Value, bear.Basis)
+	}
+	slide := governingOf(t, a, "anchor.sliding", "left anchor")
+	if uu, _ := slide.Value("U_un"); slide.Status != check.Fail || !(uu.Value > 1) {
+		t.Errorf("anchor sliding on soft clay: %v, U_un %v", slide.Status, uu.Value)
+	}
+}
