@@ -164,10 +164,6 @@ func Check(b Bridge, opts *Options) (*Analysis, error) {
 // only what a design search needs.
 type sink interface{ add(check.Result) }
 
-type reportSink struct{ rep *check.Report }
-
-func (s reportSink) add(r check.Result) { s.rep.Add(r) }
-
 func (m *model) run(a *Analysis, opts *Options) error {
 	// Each variant of groove behaviour (one, unless the description leaves
 	// a fixed saddle's groove open) is analysed and checked in full; the
@@ -186,9 +182,11 @@ func (m *model) run(a *Analysis, opts *Options) error {
 	}
 	m.grooves = m.variants()[0].grooves
 	a.Report.Add(all.results...)
-	if err := m.grooveChecks(reportSink{&a.Report}); err != nil {
+	var grooves collected
+	if err := m.grooveChecks(&grooves); err != nil {
 		return err
 	}
+	a.Report.Add(grooves...)
 	if err := m.comfort(a, a.Service[0], opts); err != nil {
 		return err
 	}

@@ -87,6 +87,10 @@ type LoadCase struct {
 	// GammaG, GammaQ and GammaW are the partial factors on the permanent
 	// load, the crowd and the wind: all 1 on characteristic loads.
 	GammaG, GammaQ, GammaW float64
+	// Flood puts the water at the design flood (site.flood_elevation) at
+	// every footing and anchor it reaches: buoyancy, submerged soil and
+	// effective stresses in the ground checks.
+	Flood bool
 }
 
 // crowded reports whether people stand on the walkway in this case.
@@ -126,6 +130,9 @@ func (lc LoadCase) describe(b Bridge) string {
 		t = "span ropes at " + lc.Temperature.String() + ", backstays at " + lc.BackstayTemperature.String()
 	}
 	parts = append(parts, t)
+	if lc.Flood {
+		parts = append(parts, "water at the design flood at the footings and anchors it reaches")
+	}
 	if lc.Broken > 0 {
 		parts = append(parts, fmt.Sprintf("%d rope of %s broken", lc.Broken, lc.BrokenGroup))
 	}
@@ -278,6 +285,7 @@ const (
 	caseWindCrowd     = "wind with crowd"
 	caseLift          = "wind lifting the walkway"
 	caseSun           = "sun on the span, shade on the backstays"
+	caseFlood         = "flood with crowd"
 	familyCrowd       = "crowd"
 	familyDeck        = "deck placed"
 )
@@ -303,6 +311,7 @@ type defaultCase struct {
 //	sun on the span, ...              G + Q                 span hottest, backstays cooler by loads.sun_difference
 //	                                                        (not below the coldest)
 //	one rope broken: GROUP            G + ψ1 Q (accidental) reference, crowd on the whole span
+//	flood with crowd                  G + Q                 reference, crowd on the whole span, water at the design flood
 //
 // On the partial-factor basis G, Q and W carry γG (1.0 where favourable),
 // γQ and γQ; the accidental case carries 1 throughout (EN 1990 6.4.3.3).
@@ -330,6 +339,10 @@ func (b Bridge) Cases() []LoadCase {
 		{LoadCase{Name: caseLift, Wind: 1, Lift: true, Temperature: c.Reference}, wind},
 		{LoadCase{Name: caseSun, Crowd: whole, CrowdFactor: 1, Temperature: c.Hottest,
 			BackstayTemperature: shade}, shade < c.Hottest},
+		// The design flood at the foundations, with a crowd watching it
+		// from the walkway (common practice: people gather on a bridge in
+		// a flood).
+		{LoadCase{Name: caseFlood, Crowd: whole, CrowdFactor: 1, Temperature: c.Reference, Flood: true}, true},
 	}
 	var cases []LoadCase
 	for _, d := range defaults {
@@ -451,7 +464,7 @@ func (b Bridge) omitted(name string) bool {
 // defaultNames lists the names loads.omit accepts.
 func (b Bridge) defaultNames() []string {
 	names := []string{casePermanentCold, casePermanentHot, caseWind, caseWindCold, caseWindHot,
-		caseWindCrowd, caseLift, caseSun, familyCrowd, familyDeck}
+		caseWindCrowd, caseLift, caseSun, caseFlood, familyCrowd, familyDeck}
 	for _, g := range b.Ropes {
 		if g.Role == RoleWalkway {
 			names = append(names, brokenCaseName(g.Name))

@@ -37,10 +37,10 @@ func TestBadCaseDescriptions(t *testing.T) {
 			loads(m)["cases"] = []any{map[string]any{"name": "odd", "actions": map[string]any{"crowd": -1.0}}}
 		}, "loads.cases[0].actions.crowd", "between 0 and 10"},
 		{"an unknown default left out", func(m map[string]any) { loads(m)["omit"] = []any{"earthquake"} }, "loads.omit[0]", "no default case"},
-		{"a gradient limit of zero", func(m map[string]any) { obj(m, "walkway")["gradient_limit"] = 0.0 }, "walkway.gradient_limit", "positive"},
-		{"a sharing factor below 1", func(m map[string]any) { rope0(m)["sharing"] = 0.9 }, "ropes[0].sharing", "at least an equal share"},
+		{"a gradient limit of zero", func(m map[string]any) { obj(m, "walkway")["gradient_limit"] = 0.0 }, "walkway.gradient_limit", "outside the plausible range 0.02 to 2"},
+		{"a sharing factor below 1", func(m map[string]any) { rope0(m)["sharing"] = 0.9 }, "ropes[0].sharing", "outside the plausible range 1 to 50"},
 		{"a sharing factor above the rope count", func(m map[string]any) { rope0(m)["sharing"] = 7.0 }, "ropes[0].sharing", "rope count 6"},
-		{"a negative constructional stretch", func(m map[string]any) { rope0(m)["constructional_stretch"] = -0.001 }, "ropes[0].constructional_stretch", "strain"},
+		{"a negative constructional stretch", func(m map[string]any) { rope0(m)["constructional_stretch"] = -0.001 }, "ropes[0].constructional_stretch", "outside the plausible range 0 to 0.02"},
 		{"an unknown termination", func(m map[string]any) { obj(m, "basis")["termination"] = "knot" }, "basis.termination", "unknown termination"},
 		{"termination and efficiency both", func(m map[string]any) {
 			obj(m, "basis")["termination"] = "clips"

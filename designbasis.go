@@ -552,6 +552,18 @@ func walkCompact(v reflect.Value, p string, leaf func(fieldInfo, string)) {
 		fp := join(p, name)
 		fv := v.Field(i)
 		fi := fieldOf(t, f, fp)
+		if f.Type.Kind() == reflect.Pointer { // presence decides: a value given counts, zero too
+			switch {
+			case fv.IsNil() && isLeaf(f.Type):
+				leaf(fi, "")
+			case fv.IsNil():
+			case isLeaf(f.Type):
+				leaf(fi, formatLeaf(fv.Elem()))
+			default:
+				walkCompact(fv.Elem(), fp, leaf)
+			}
+			continue
+		}
 		switch {
 		case isLeaf(f.Type):
 			text := formatLeaf(fv)
