@@ -49,8 +49,6 @@ const (
 	minRefined = 0.01
 )
 
-var debugSweep = false
-
 // checkKey names a check as the report's governing summary does.
 type checkKey struct{ id, element string }
 
@@ -214,7 +212,6 @@ type refinement struct {
 	val        func(pt *sweepPoint, k int) float64
 	driver     func(k int) (bool, float64)
 	eval       func(p Placement, r float64, warm *sweepPoint) (*sweepPoint, error)
-	name       func(k int) string
 }
 
 // refine adds points to ps around each key's local maxima until none moves
@@ -250,18 +247,12 @@ func (rf refinement) refine(ps *pointSet) error {
 				for _, bi := range localMaxima(pts, k, rf.val) {
 					if r, _, ok := propose(pts, k, rf.val, bi, scale, best, gain); ok {
 						props = append(props, proposal{place: p, r: r, check: !driver})
-						if debugSweep {
-							fmt.Printf("  %s %v %.4f\n", rf.name(k), p, r)
-						}
 					}
 				}
 			}
 		}
 		if len(props) == 0 {
 			return nil
-		}
-		if debugSweep {
-			fmt.Println("round", round, len(props), "proposals")
 		}
 		added := 0
 		for _, pr := range cluster(props, clusterTol(round)) {
@@ -389,7 +380,6 @@ func (s *searcher) structure() refinement {
 		val:        func(pt *sweepPoint, k int) float64 { return pt.ratio(k) },
 		driver:     func(k int) (bool, float64) { return s.t.proxy[k], s.t.ref[k] },
 		eval:       s.evaluate,
-		name:       func(k int) string { return fmt.Sprint(s.t.keys[k]) },
 	}
 }
 
@@ -496,7 +486,6 @@ func (s *searcher) footingPass(out sink, specs [2]FootingSpec) (*pointSet, *tall
 			}
 			return pt, check(pt)
 		},
-		name: func(k int) string { return fmt.Sprint(ft.keys[k]) },
 	}
 	if err := rf.refine(ps); err != nil {
 		return nil, nil, nil, err
