@@ -505,7 +505,7 @@ func inputTable(name string, f reflect.StructField, v reflect.Value) check.Secti
 		}
 		m := r.meaning
 		if m == last {
-			m = "〃" // as above: the meaning of a list's elements, or of fields documented together
+			m = "(as above)" // the meaning of a list's elements, or of fields documented together
 		} else {
 			last = m
 		}
