@@ -5,6 +5,7 @@ import (
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/tower"
 	"github.com/sagspan/sagspan/units"
+	"github.com/sagspan/sagspan/vibration"
 )
 
 // Options tune a whole-bridge check. A nil *Options means the defaults.
@@ -12,9 +13,16 @@ type Options struct {
 	// ErectionStep is the temperature step of the erection table; zero
 	// means 5 K.
 	ErectionStep float64
-	// StrictComfort fails, rather than flags, natural frequencies in the
-	// ranges walkers excite. Default false: flags.
+	// StrictComfort fails, rather than flags, what the comfort assessment
+	// finds: accelerations under walkers beyond their limits and crowds
+	// beyond the lock-in number (with SkipComfort, frequencies in the
+	// ranges walkers excite). Default false: flags.
 	StrictComfort bool
+	// SkipComfort leaves out the modal analysis and the walkers' response,
+	// keeping the closed-form frequencies: for a fast check. Default false.
+	SkipComfort bool
+	// Modal tunes the modal analysis; nil means its defaults.
+	Modal *vibration.Settings
 }
 
 // Side names a bank.
@@ -61,8 +69,17 @@ type GroupState struct {
 	LowX, LowZ           units.Length // lowest point within the span, z from the left saddle
 	MaxTension           units.Force  // the largest of span and backstay tensions
 	// SaddleMoved reports whether the saddle moved on the column top: a
-	// sliding saddle that slid, or a roller.
+	// sliding saddle that slid, or a roller; Travel is how far it moved
+	// from its place in the reference state, toward the span positive.
 	SaddleMoved [2]bool
+	Travel      [2]units.Length
+	// Held is the backstay tension had neither the rope nor the saddle
+	// moved from the reference state (the backstay's own unstretched length
+	// over its chord); Unbalance the horizontal force the ropes would then
+	// put on the saddle, toward the span: for a sliding saddle, its
+	// unbalance before friction.
+	Held      [2]units.Force
+	Unbalance [2]units.Force
 	// Saddle is the force on each tower column from this group's saddle.
 	Saddle [2]tower.LevelForce
 	shape  cable.Loaded
@@ -75,10 +92,13 @@ type CaseState struct {
 	// Tower is the resultant of the saddle forces and column weight at each
 	// column base.
 	Tower [2]tower.Resultant
-	// Lateral is the force across the bridge that wind-swung ropes put on
-	// each tower, and LateralMoment its moment about the column base.
+	// Lateral is the force across the bridge that wind-swung ropes and wind
+	// on the column face put on each tower, and LateralMoment its moment
+	// about the column base; ColumnWind is the part from wind on the
+	// column face.
 	Lateral       [2]units.Force
 	LateralMoment [2]units.Moment
+	ColumnWind    [2]units.Force
 }
 
 // ErectionTable is the erection-sag table of one rope group.
@@ -100,8 +120,11 @@ type Analysis struct {
 	// them. Design holds the states under the factored loads of the partial
 	// basis: rope tension (on that basis) and column sections.
 	Service, Design []CaseState
-	Modes           cable.Modes
-	Erection        []ErectionTable
+	// Modes are the closed-form frequencies of Irvine & Caughey; Comfort
+	// the modal analysis and walkers' response (nil when switched off).
+	Modes    cable.Modes
+	Comfort  *Comfort
+	Erection []ErectionTable
 }
 
 // Check runs the whole-bridge check: every load case through rope statics,
@@ -134,25 +157,38 @@ type reportSink struct{ rep *check.Report }
 func (s reportSink) add(r check.Result) { s.rep.Add(r) }
 
 func (m *model) run(a *Analysis, opts *Options) error {
-	var err error
-	if a.Service, a.Design, err = m.states(); err != nil {
-		return err
-	}
-	out := reportSink{&a.Report}
-	if err := m.superstructure(out, a.Service, a.Design); err != nil {
-		return err
-	}
-	for side := Left; side <= Right; side++ {
-		bank := m.bank(side)
-		if err := m.footingChecks(out, side, bank.Tower.Footing, a.Service); err != nil {
+	// Each variant of groove behaviour (one, unless the description leaves
+	// a fixed saddle's groove open) is analysed and checked in full; the
+	// report keeps each check's worst variant. The states kept are the
+	// first variant's (free grooves where not given).
+	var all merged
+	for k, v := range m.variants() {
+		m.grooves = v.grooves
+		service, design, err := m.states()
+		if err != nil {
 			return err
 		}
-		if err := m.anchorChecks(out, side, bank.Anchor, a.Service); err != nil {
+		if k == 0 {
+			a.Service, a.Design = service, design
+		}
+		out := labelSink{&all, v.label}
+		if err := m.superstructure(out, service, design); err != nil {
 			return err
 		}
+		for side := Left; side <= Right; side++ {
+			bank := m.bank(side)
+			if err := m.footingChecks(out, side, bank.Tower.Footing, service); err != nil {
+				return err
+			}
+			if err := m.anchorChecks(out, side, bank.Anchor, service); err != nil {
+				return err
+			}
+		}
+		m.checkClearance(out, service)
 	}
-	m.checkClearance(out, a.Service)
-	if err := m.checkFrequencies(a, a.Service[0], opts); err != nil {
+	m.grooves = m.variants()[0].grooves
+	a.Report.Add(all.results...)
+	if err := m.comfort(a, a.Service[0], opts); err != nil {
 		return err
 	}
 	return m.erection(a, opts)
@@ -201,30 +237,8 @@ func (m *model) superstructure(out sink, service, design []CaseState) error {
 			out.add(r.For(g.Name, name))
 		}
 		for side := Left; side <= Right; side++ {
-			bank := m.bank(side)
-			towerName := towerElement[side]
-			var limit *tower.EccentricityLimit // nil: the kern
-			if e := bank.Tower.Eccentricity; e.Rule == "fraction" {
-				limit = &tower.EccentricityLimit{Fraction: e.Fraction, Offset: e.Offset}
-			}
-			r, err := tower.EccentricityCheck(svc.Tower[side], m.column(side), limit)
-			if err != nil {
-				return m.bankErr(side, "tower.eccentricity", name, err)
-			}
-			out.add(r.For(towerName, name))
-			dr := des.Tower[side]
-			r, err = m.section(side).Check(dr.Vertical, dr.BaseMoment)
-			if err != nil {
-				return m.bankErr(side, "tower.section", name, err)
-			}
-			out.add(r.For(towerName, name))
-			if ml := des.LateralMoment[side]; ml != 0 {
-				// Wind-swung ropes push the column across the bridge.
-				r, err = m.section(side).Turned().Check(dr.Vertical, ml)
-				if err != nil {
-					return m.bankErr(side, "tower.section", name+", across the bridge", err)
-				}
-				out.add(r.For(towerAcrossElement[side], name).WithNote("bending across the bridge from wind on the swung ropes"))
+			if err := m.towerChecks(out, side, svc, des, service[0]); err != nil {
+				return err
 			}
 		}
 	}

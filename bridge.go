@@ -29,6 +29,9 @@ type Bridge struct {
 	Loads Loads `json:"loads,omitempty"`
 	// Basis chooses how the checks are verified and their factors.
 	Basis Basis `json:"basis,omitempty"`
+	// Comfort sets the modal analysis and the walkers' response; every
+	// field left out takes its default.
+	Comfort ComfortSpec `json:"comfort,omitempty"`
 }
 
 // Site is the crossing: the span between the walkway saddles and the
@@ -191,35 +194,62 @@ type TowerSpec struct {
 	UnitWeight units.UnitWeight `json:"unit_weight,omitempty"`
 	// Saddle says how the ropes sit on the column.
 	Saddle SaddleSpec `json:"saddle"`
-	// Section is the column's reinforced-concrete section.
+	// Section is the column's section: reinforced concrete, a steel tube
+	// or a steel frame.
 	Section SectionSpec `json:"section"`
 	// Footing is the spread footing under the column.
 	Footing FootingSpec `json:"footing"`
-	// Eccentricity sets the allowed eccentricity of the resultant at the
-	// column base; zero value means the kern of the effective section.
+	// Eccentricity sets how the resultant of the rope forces is checked;
+	// the zero value: the rope-line form at the column base against the
+	// kern of the effective section.
 	Eccentricity EccentricitySpec `json:"eccentricity,omitempty"`
+	// Drag is the force coefficient of the column for wind across the
+	// bridge; zero means tower.DefaultColumnDrag (2.4) for a concrete
+	// column and 1.2 for a circular tube (from memory, EN 1991-1-4 7.9,
+	// subcritical flow).
+	Drag float64 `json:"drag,omitempty"`
 }
 
-// SaddleSpec says how the ropes sit on the tower. The rope renders over
-// the saddle's groove with its tension continuous in every kind; the kind
-// says how the saddle itself is held on the column:
+// SaddleSpec says how the ropes sit on the tower: how the saddle is held
+// on the column (Kind) and, for a fixed saddle, how the rope is held in its
+// groove (Groove):
 //
 //	fixed:   bolted to the column, which takes the whole unbalanced horizontal force
-//	sliding: on a bearing plate; it slides once the unbalance exceeds Friction × the vertical force
-//	roller:  on rollers; the column takes no horizontal force
+//	sliding: on a bearing plate, the rope clamped on it; it slides once the unbalance exceeds Friction × the vertical force
+//	roller:  on rollers, the rope clamped on it; the column takes no horizontal force along the bridge
+//
+//	groove "free":     the rope renders freely, its tension the same on both sides
+//	groove "friction": the rope grips the groove with GrooveFriction μ over the wrap angle the
+//	                   geometry gives, and renders once the tensions differ by more than e^{μθ}
+//	groove "clamped":  the rope is clamped on the saddle; span and backstay tensions are independent
+//	groove "" (not known): both bounding behaviours, free and clamped, are checked and each
+//	                   check reports the one that governs it
 type SaddleSpec struct {
 	// Kind is "fixed", "sliding" or "roller".
 	Kind string `json:"kind"`
 	// Friction is the friction coefficient of a sliding saddle's plate.
 	Friction float64 `json:"friction,omitempty"`
+	// Groove is "free", "friction", "clamped", or empty when not known
+	// (fixed saddles only).
+	Groove string `json:"groove,omitempty"`
+	// GrooveFriction is the coefficient of friction between rope and
+	// groove, for groove "friction".
+	GrooveFriction float64 `json:"groove_friction,omitempty"`
 }
 
-// SectionSpec is the reinforced-concrete column section. Bars are placed
-// symmetrically, half on each face normal to the bridge axis.
+// SectionSpec is the column section. Type "concrete" (the default) is a
+// reinforced-concrete rectangle of the tower's effective size, its bars
+// placed symmetrically, half on each face normal to the bridge axis; a
+// concrete column with no bars is plain. Type "tube" is one hollow steel
+// tube, "frame" two tube legs side by side across the bridge, joined by
+// bracing, Spacing apart.
 type SectionSpec struct {
+	// Type is "concrete" (default), "tube" or "frame".
+	Type string `json:"type,omitempty"`
 	// Concrete is the characteristic cylinder strength fck.
-	Concrete units.Pressure `json:"concrete"`
-	// Steel is the characteristic yield strength fyk of the bars.
+	Concrete units.Pressure `json:"concrete,omitempty"`
+	// Steel is the characteristic yield strength fyk of the bars, or fy of
+	// a tube or frame's legs.
 	Steel units.Pressure `json:"steel,omitempty"`
 	// Bars is the number of longitudinal bars, an even number; zero means
 	// plain concrete.
@@ -228,6 +258,25 @@ type SectionSpec struct {
 	BarDiameter units.Length `json:"bar_diameter,omitempty" unit:"mm"`
 	// Cover is the distance from a face to the centres of the bars.
 	Cover units.Length `json:"cover,omitempty" unit:"mm"`
+	// Creep is the creep coefficient φ(∞, t0) of the concrete; zero means
+	// 2.0 (see tower.DefaultCreep).
+	Creep float64 `json:"creep,omitempty"`
+
+	// Shape of a steel tube or of a frame's legs: "circular" (default) or
+	// "square".
+	Shape string `json:"shape,omitempty"`
+	// Size is the tube's outside diameter or width.
+	Size units.Length `json:"size,omitempty" unit:"mm"`
+	// Wall is the tube's wall thickness.
+	Wall units.Length `json:"wall,omitempty" unit:"mm"`
+	// ColdFormed marks a cold-formed tube (buckling curve c of EN 1993-1-1
+	// Table 6.2 instead of a).
+	ColdFormed bool `json:"cold_formed,omitempty"`
+	// Spacing of a frame's legs across the bridge, centre to centre.
+	Spacing units.Length `json:"spacing,omitempty"`
+	// Panel is the distance between a frame's bracing nodes; zero means
+	// the column height.
+	Panel units.Length `json:"panel,omitempty"`
 }
 
 // FootingSpec is the spread footing under a tower column.
@@ -246,11 +295,21 @@ type FootingSpec struct {
 	ColumnOffset units.Length `json:"column_offset,omitempty"`
 }
 
-// EccentricitySpec sets the allowed eccentricity of the rope-force
-// resultant at the column base.
+// EccentricitySpec sets how the resultant of the rope forces on a tower
+// column is checked: where (Section), in which form, against which limit.
 type EccentricitySpec struct {
-	// Rule is "kern" (default: no tension, d/6 of the effective depth) or
-	// "fraction" (Fraction × d/2 + Offset).
+	// Form is "rope" (default: the line of action of the rope forces
+	// alone, e = h·tan δ, as practice checks it) or "statics" (ΣM/ΣV with
+	// the column's weight). The other form's value is always reported.
+	Form string `json:"form,omitempty"`
+	// Section is the height of the checked section above the column base
+	// section: where the column is first tied into its base. Zero means
+	// the base section.
+	Section units.Length `json:"section,omitempty"`
+	// Rule is "kern" (default: no tension, d/6 of the effective section),
+	// "section" (within the effective section: d/2 + Offset, Offset the
+	// projection of a base beyond the column face) or "fraction"
+	// (Fraction × d/2 + Offset).
 	Rule     string       `json:"rule,omitempty"`
 	Fraction float64      `json:"fraction,omitempty"`
 	Offset   units.Length `json:"offset,omitempty"`

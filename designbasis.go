@@ -207,6 +207,7 @@ func (a *Analysis) soilsUsed() BasisGroup {
 		}
 		prefix := "banks." + side.String() + ".soil"
 		sv, specV := reflect.ValueOf(soil), reflect.ValueOf(spec)
+		told := false // the preset's source, said once per bank
 		st := sv.Type()
 		for i := range st.NumField() {
 			f := st.Field(i)
@@ -214,7 +215,10 @@ func (a *Analysis) soilsUsed() BasisGroup {
 				continue
 			}
 			name := side.String() + " bank, " + soil.Name + ": " + words(f.Name)
-			source := "preset " + fmt.Sprintf("%q", spec.Preset) + " (" + soil.Source + ")"
+			source := fmt.Sprintf("preset %q", spec.Preset)
+			if !told {
+				source, told = source+" ("+soil.Source+")", true
+			}
 			if sf, ok := specV.Type().FieldByName(f.Name); ok && !specV.FieldByIndex(sf.Index).IsZero() {
 				jn, _ := jsonName(sf)
 				source = "given (" + prefix + "." + jn + ")"
@@ -224,7 +228,16 @@ func (a *Analysis) soilsUsed() BasisGroup {
 				e.Value, e.Unit = si(sv.Field(i).Float(), q.Kind())
 			}
 			if sv.Field(i).IsZero() {
-				e.Source = "not set: the package's default applies (see foundation.Soil." + f.Name + ")"
+				switch f.Name {
+				case "Submerged":
+					w := soil.SubmergedWeight()
+					e.Text, e.Source = w.String(), fmt.Sprintf("default: unit weight less that of water, %s (foundation.WaterUnitWeight)", foundation.WaterUnitWeight)
+					e.Value, e.Unit = si(float64(w), units.KindUnitWeight)
+				case "Interface":
+					e.Text, e.Source = fmt.Sprintf("%.3g", foundation.DefaultInterface), "default: δ = 2/3 φ' (foundation.DefaultInterface)"
+				default:
+					e.Source += ", which gives none"
+				}
 			}
 			g.Entries = append(g.Entries, e)
 		}

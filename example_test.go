@@ -21,10 +21,10 @@ func ExampleCheck() {
 		}
 	}
 	// Output:
-	// overall: pass
-	// cable.tension (walkway ropes): 801.0 kN of 1290 kN under "cold with crowd"
+	// overall: flag
+	// cable.tension (walkway ropes): 801.6 kN of 1290 kN under "cold with crowd"
 	// cable.tension (handrail ropes): 11.06 kN of 168.0 kN under "wind"
-	// bridge.clearance (walkway): 1.500 m of 4.161 m under "hot with crowd"
+	// bridge.clearance (walkway): 1.500 m of 4.164 m under "hot with crowd"
 }
 
 func ExampleCrowdPressure() {
@@ -69,5 +69,5 @@ func ExampleSearch() {
 	}
 	// Output:
 	// 8 candidates, 8 feasible
-	// best: sag 1/20, 4 ropes, anchor 4.500 m long, cost 39756, utilisation 0.875
+	// best: sag 1/20, 4 ropes, anchor 4.500 m long, cost 40724, utilisation 0.913
 }

@@ -30,11 +30,14 @@ type model struct {
 	fbasis foundation.Basis
 	// scratch and pulls are reused by each footing or anchor check.
 	scratch []check.Result
-	pulls   []foundation.Pull
+	pulls   []foundation.AnchorPull
 	// spanUnstretched is each group's unstretched span length in the
 	// reference state; backstays are each group's backstays.
 	spanUnstretched []float64
 	backstays       [][2]backstay
+	// grooves is the groove behaviour of each bank's saddle in the
+	// variant being analysed (see variants).
+	grooves [2]tower.Groove
 }
 
 func newModel(b Bridge) (*model, error) {
@@ -115,9 +118,14 @@ func (m *model) reference(g group, ref cable.State) error {
 		a := [2]units.Angle{aa, ab}[side]
 		bs := backstay{angle: backstayAngle(bank.Backstay, g.Offset)}
 		bs.chord = units.Length(math.Hypot(float64(bank.Backstay.Horizontal), float64(bank.Backstay.Drop+g.Offset)))
-		hx, v, _ := elevationPull(t, a, 0)
-		t0, _ := saddleBalance(saddleKind(bank.Tower.Saddle), bank.Tower.Saddle.Friction, float64(t), hx, v, bs.angle, 0)
-		bs.unstretched = bs.unstretchedFor(g.elastic, t0)
+		// The rope was set over the saddle with its tension continuous
+		// (held = T_s), then clamped or left to grip: the backstay's
+		// reference tension is what the saddle holds from there.
+		bal, err := m.saddle(Side(side), g, 0).Balance(tower.RopePull{Tension: t, Angle: a}, bs.angle, t)
+		if err != nil {
+			return m.bankErr(Side(side), "tower.saddle", "reference state", err)
+		}
+		bs.unstretched = bs.unstretchedFor(g.elastic, float64(bal.Backstay))
 		bss[side] = bs
 	}
 	m.backstays = append(m.backstays, bss)
@@ -161,9 +169,33 @@ func (m *model) load(g group, lc LoadCase) (cable.Load, units.Angle) {
 	return load, swing
 }
 
+// column returns the tower column of one bank, from its base section up
+// to its highest saddle. A concrete column is the tower's gross rectangle;
+// a steel tube or frame is given by its legs: breadth to the wind the legs'
+// sizes side by side, weight the steel's.
 func (m *model) column(s Side) tower.Column {
 	t := m.bank(s).Tower
-	return tower.Column{Depth: t.Depth, Width: t.Width, Height: t.Height, Facing: t.Facing, UnitWeight: t.UnitWeight}
+	c := tower.Column{Depth: t.Depth, Width: t.Width, Height: t.Height + m.topOffset(), Facing: t.Facing,
+		UnitWeight: t.UnitWeight, Drag: t.Drag}
+	if steel, legs := m.steel(s); legs > 0 {
+		n := units.Length(legs)
+		c = tower.Column{Depth: n * steel.Size, Width: steel.Size, Height: c.Height, UnitWeight: steelUnitWeight,
+			Area: units.Area(legs) * steel.Area(), Drag: t.Drag}
+		if c.Drag == 0 && steel.Shape == tower.Circular {
+			c.Drag = circularDrag
+		}
+	}
+	return c
+}
+
+// topOffset is the height of the highest saddle above the walkway-rope
+// saddle: the column reaches up to it.
+func (m *model) topOffset() units.Length {
+	var top units.Length
+	for _, g := range m.groups {
+		top = max(top, g.Offset)
+	}
+	return top
 }
 
 // designCase returns the case with the factors of the partial-factor basis
@@ -189,7 +221,8 @@ func (m *model) designCase(lc LoadCase) LoadCase {
 }
 
 // section returns the effective reinforced-concrete section of a column,
-// bending along the bridge, checked to EN 1992-1-1 on design actions.
+// bending along the bridge (H along, B across), checked to EN 1992-1-1 on
+// design actions.
 func (m *model) section(s Side) tower.RCSection {
 	t := m.bank(s).Tower
 	spec := t.Section

@@ -17,7 +17,7 @@ import (
 // HTML reports, add its builder to reportParts.
 var reportParts = []func(*Analysis) check.Section{
 	(*Analysis).ropeStatesSection,
-	(*Analysis).frequenciesSection,
+	(*Analysis).comfortSection,
 	(*Analysis).erectionSection,
 }
 
@@ -101,16 +101,6 @@ func (a *Analysis) ropeStatesSection() check.Section {
 		}
 	}
 	return s
-}
-
-func (a *Analysis) frequenciesSection() check.Section {
-	m := a.Modes
-	return check.Section{ID: "frequencies", Title: "Natural frequencies (permanent load)", Head: []string{"Mode", "Frequency"}, Rows: [][]string{
-		{"first out-of-plane (swing)", m.Swing.String()},
-		{"first in-plane antisymmetric", m.Antisymmetric.String()},
-		{"first in-plane symmetric", m.Symmetric.String()},
-		{"Irvine's λ²", fmt.Sprintf("%.1f", m.LambdaSq)},
-	}}
 }
 
 func (a *Analysis) erectionSection() check.Section {

@@ -20,6 +20,29 @@ func saddleKind(s SaddleSpec) tower.SaddleKind {
 	return tower.Fixed
 }
 
+// grooveOf maps the description's groove; known is false when the
+// description does not say (the chain then checks the bounds).
+func grooveOf(s SaddleSpec) (g tower.Groove, known bool) {
+	switch s.Groove {
+	case "free":
+		return tower.FreeGroove, true
+	case "friction":
+		return tower.FrictionGroove, true
+	case "clamped":
+		return tower.ClampedGroove, true
+	}
+	return tower.FreeGroove, saddleKind(s) != tower.Fixed
+}
+
+// saddle returns the saddle of one bank for rope group g: its kind, the
+// groove behaviour of the variant being analysed, its height, and travel
+// as its offset.
+func (m *model) saddle(side Side, g group, travel units.Length) tower.Saddle {
+	spec := m.bank(side).Tower.Saddle
+	return tower.Saddle{Kind: saddleKind(spec), Friction: spec.Friction, Groove: m.grooves[side],
+		GrooveFriction: spec.GrooveFriction, Height: m.bank(side).Tower.Height + g.Offset, Offset: travel}
+}
+
 // backstay is one rope group's backstay at one bank: a straight rope from
 // the saddle down to the anchor (its own sag neglected, common practice for
 // short, steep backstays).
@@ -37,38 +60,24 @@ func (bs backstay) unstretchedFor(e cable.Elastic, t float64) float64 {
 	return float64(bs.chord) / (1 + t/float64(e.EA))
 }
 
-// saddleBalance returns the backstay tension over a saddle of the given
-// kind. The rope renders over the saddle's groove, friction there
-// neglected (common practice), so its tension is continuous, T_b = T_s,
-// unless the saddle itself moves on the column top. The span-side pull is
-// given by its tension ts and, in the elevation plane, its horizontal and
-// vertical components h and v:
+// heldTension returns the tension of the backstay when it keeps the
+// unstretched length l0 (at the rope's present temperature) over its chord:
+// the inverse of unstretchedFor, T = EA (c/l0 − 1), or zero when the rope
+// is longer than its chord and hangs slack. It is what a clamped rope, or
+// a saddle that has not moved, leaves in the backstay.
+func (bs backstay) heldTension(e cable.Elastic, l0 float64) float64 {
+	return max(0, float64(e.EA)*(float64(bs.chord)/l0-1))
+}
+
+// travel returns how far a sliding or roller saddle has moved along the
+// bridge (toward the span positive) from where it sat in the reference
+// state: the rope it carries clamped keeps the backstay's unstretched
+// length l0, so the backstay, stretched to l0 (1 + T/EA), reaches a chord
+// longer than c by the saddle's travel times cos β:
 //
-//	fixed:   T_b = T_s                               (the column takes H = h − T_b cos β)
-//	roller:  T_b = h / cos β                         (the saddle rolls until the horizontals balance)
-//	sliding: T_b = T_s    while |h − T_s cos β| <= μ (v + T_s sin β)
-//	         T_b = (h − sμv)/(cos β + sμ sin β)      once the saddle slides, s the sign of the unbalance
-//
-// with the normal force taken as the vertical component, as package tower
-// does (common practice). slide, when not zero, holds a sliding saddle
-// sliding in that direction (+1: toward the span); the result's moved is
-// the direction the saddle moved, zero when it stayed (a roller gives +1).
-func saddleBalance(kind tower.SaddleKind, mu, ts, h, v float64, beta units.Angle, slide float64) (t, moved float64) {
-	cb, sb := math.Cos(float64(beta)), math.Sin(float64(beta))
-	switch kind {
-	case tower.Roller:
-		return h / cb, 1
-	case tower.Sliding:
-		if slide == 0 {
-			unbalance := h - ts*cb
-			if math.Abs(unbalance) <= mu*(v+ts*sb) {
-				return ts, 0
-			}
-			slide = math.Copysign(1, unbalance)
-		}
-		return (h - slide*mu*v) / (cb + slide*mu*sb), slide
-	}
-	return ts, 0
+//	Δ = [l0 (1 + T/EA) − c] / cos β
+func (bs backstay) travel(e cable.Elastic, l0, t float64) units.Length {
+	return units.Length((l0*(1+t/float64(e.EA)) - float64(bs.chord)) / math.Cos(float64(bs.angle)))
 }
 
 // elevationPull returns the components, in the elevation plane, of the
@@ -106,20 +115,31 @@ func (m *model) analyse(lc LoadCase) (CaseState, error) {
 			return CaseState{}, m.groupErr(i, lc, err)
 		}
 		for side := Left; side <= Right; side++ {
-			bank := m.bank(side)
-			h, v, lateral := elevationPull(gs.Tension[side], gs.Angle[side], swing)
-			spanPull := tower.Pull{Tension: units.Force(math.Hypot(h, v)), Angle: units.Angle(math.Atan2(v, h))}
-			saddle := tower.Saddle{Kind: saddleKind(bank.Tower.Saddle), Friction: bank.Tower.Saddle.Friction, Height: bank.Tower.Height + g.Offset}
-			lf, err := saddle.Force(spanPull, tower.Pull{Tension: gs.Backstay[side], Angle: gs.BackstayAngle[side]})
+			saddle := m.saddle(side, g, gs.Travel[side])
+			spanPull := tower.RopePull{Tension: gs.Tension[side], Angle: gs.Angle[side], Swing: swing}
+			lf, err := saddle.Force(spanPull, tower.RopePull{Tension: gs.Backstay[side], Angle: gs.BackstayAngle[side]})
 			if err != nil {
 				return CaseState{}, m.bankErr(side, "tower.saddle", lc.Name, fmt.Errorf("%s: %w", g.Name, err))
 			}
 			gs.Saddle[side] = lf
 			levels[side] = append(levels[side], lf)
-			cs.Lateral[side] += units.Force(lateral)
-			cs.LateralMoment[side] += units.MomentOf(units.Force(lateral), saddle.Height)
+			cs.Lateral[side] += lf.Lateral
+			cs.LateralMoment[side] += units.MomentOf(lf.Lateral, saddle.Height)
 		}
 		cs.Groups[i] = gs
+	}
+	for side := Left; side <= Right; side++ {
+		// Wind on the column face, across the bridge.
+		if lc.Wind && lc.GammaW > 0 && m.wind > 0 {
+			cw, err := m.column(side).Wind(units.Pressure(lc.GammaW) * m.wind)
+			if err != nil {
+				return CaseState{}, fmt.Errorf("sagspan: %s tower, case %q: %w", side, lc.Name, err)
+			}
+			levels[side] = append(levels[side], cw)
+			cs.ColumnWind[side] = cw.Lateral
+			cs.Lateral[side] += cw.Lateral
+			cs.LateralMoment[side] += units.MomentOf(cw.Lateral, cw.Height)
+		}
 	}
 	for side := Left; side <= Right; side++ {
 		// The column's own weight carries the permanent load factor of the
@@ -147,10 +167,6 @@ func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64
 	thermal := 1 + float64(e.Alpha)*dt
 	l0 := m.spanUnstretched[i] * thermal
 	temp := m.ref[i].Temperature + units.Temperature(dt)
-	// slide records the direction a sliding saddle has slid: once it
-	// slides it stays sliding while the iteration settles, so that the
-	// feed cannot flip between held and sliding.
-	var slide [2]float64
 	var gs GroupState
 	step := func(feed float64) (float64, error) {
 		st, err := cable.StateForLength(m.span, e.EA, load, units.Length(l0+feed), temp)
@@ -171,14 +187,25 @@ func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64
 		gs.MaxTension = shape.MaxTension()
 		given := 0.0
 		for side := Left; side <= Right; side++ {
-			bank := m.bank(side)
 			bs := m.backstays[i][side]
-			h, v, _ := elevationPull(gs.Tension[side], gs.Angle[side], swing)
-			tback, dir := saddleBalance(saddleKind(bank.Tower.Saddle), bank.Tower.Saddle.Friction, float64(gs.Tension[side]), h, v, bs.angle, slide[side])
-			slide[side] = dir
-			gs.Backstay[side], gs.BackstayAngle[side], gs.SaddleMoved[side] = units.Force(tback), bs.angle, dir != 0
+			l0b := bs.unstretched * thermal
+			held := units.Force(bs.heldTension(e, l0b))
+			bal, err := m.saddle(side, g, 0).Balance(tower.RopePull{Tension: gs.Tension[side], Angle: gs.Angle[side], Swing: swing},
+				bs.angle, held)
+			if err != nil {
+				return 0, fmt.Errorf("%s saddle: %w", side, err)
+			}
+			tback := float64(bal.Backstay)
+			h, _, _ := elevationPull(gs.Tension[side], gs.Angle[side], swing)
+			gs.Held[side] = held
+			gs.Unbalance[side] = units.Force(h - float64(held)*math.Cos(float64(bs.angle)))
+			gs.Backstay[side], gs.BackstayAngle[side] = bal.Backstay, bs.angle
+			gs.SaddleMoved[side], gs.Travel[side] = bal.Motion == tower.Travelled, 0
+			if bal.Motion == tower.Travelled {
+				gs.Travel[side] = bs.travel(e, l0b, tback)
+			}
 			gs.MaxTension = max(gs.MaxTension, units.Force(tback))
-			given += bs.unstretched*thermal - bs.unstretchedFor(e, tback)
+			given += l0b - bs.unstretchedFor(e, tback)
 		}
 		return given, nil
 	}

@@ -397,7 +397,7 @@ func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footi
 	bb := base.Apply(b)
 	var superstructure scorer
 	fixed := math.Inf(1)
-	m, service, err := ropeStage(bb, &superstructure)
+	m, services, err := ropeStage(bb, &superstructure)
 	if err != nil {
 		superstructure = invalid(err)
 	} else if fixed, err = ropeCost(bb, prices); err == nil {
@@ -415,10 +415,13 @@ func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footi
 			anchorScores[j] = invalid(err)
 			continue
 		}
-		for side := Left; m != nil && side <= Right; side++ {
-			if err := m.anchorChecks(&anchorScores[j], side, size.apply(m.bank(side).Anchor), service); err != nil {
-				anchorScores[j] = invalid(err)
-				break
+	anchors:
+		for _, service := range services {
+			for side := Left; m != nil && side <= Right; side++ {
+				if err := m.anchorChecks(&anchorScores[j], side, size.apply(m.bank(side).Anchor), service); err != nil {
+					anchorScores[j] = invalid(err)
+					break anchors
+				}
 			}
 		}
 	}
@@ -431,10 +434,13 @@ func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footi
 			footingScores[k] = invalid(err)
 			continue
 		}
-		for side := Left; m != nil && side <= Right; side++ {
-			if err := m.footingChecks(&footingScores[k], side, size.apply(m.bank(side).Tower.Footing), service); err != nil {
-				footingScores[k] = invalid(err)
-				break
+	footings:
+		for _, service := range services {
+			for side := Left; m != nil && side <= Right; side++ {
+				if err := m.footingChecks(&footingScores[k], side, size.apply(m.bank(side).Tower.Footing), service); err != nil {
+					footingScores[k] = invalid(err)
+					break footings
+				}
 			}
 		}
 	}
@@ -456,21 +462,28 @@ func evaluate(b Bridge, prices Prices, rc ropeChoice, anchors []BlockSize, footi
 // ropeStage analyses a rope configuration: every load case, then the
 // checks a choice of anchor or footing cannot change (ropes, towers, column
 // sections, clearance), into out.
-func ropeStage(b Bridge, out sink) (*model, []CaseState, error) {
+// It returns the service states of every variant of groove behaviour (see
+// model.variants), each checked.
+func ropeStage(b Bridge, out sink) (*model, [][]CaseState, error) {
 	m, err := newModel(b)
 	if err != nil {
 		return nil, nil, err
 	}
 	m.fbasis.Terse = true // scoring only: no result text from the foundation checks
-	service, design, err := m.states()
-	if err != nil {
-		return nil, nil, err
+	var services [][]CaseState
+	for _, v := range m.variants() {
+		m.grooves = v.grooves
+		service, design, err := m.states()
+		if err != nil {
+			return nil, nil, err
+		}
+		if err := m.superstructure(out, service, design); err != nil {
+			return nil, nil, err
+		}
+		m.checkClearance(out, service)
+		services = append(services, service)
 	}
-	if err := m.superstructure(out, service, design); err != nil {
-		return nil, nil, err
-	}
-	m.checkClearance(out, service)
-	return m, service, nil
+	return m, services, nil
 }
 
 // summarise picks the best design, the trade-off front and the near misses,

@@ -59,58 +59,6 @@ func (m *model) checkClearance(out sink, service []CaseState) {
 	}
 }
 
-// Comfort ranges of footbridge frequencies (from memory; widely cited, e.g.
-// Živanović, Pavić & Reynolds, J. Sound Vib. 279, 2005): vertical
-// 1.25–2.3 Hz and its second harmonic 2.5–4.6 Hz, lateral 0.5–1.2 Hz.
-var (
-	verticalRanges = [][2]float64{{1.25, 2.3}, {2.5, 4.6}}
-	lateralRanges  = [][2]float64{{0.5, 1.2}}
-)
-
-const comfortBasis = "Irvine–Caughey linear theory of a sagging cable (from memory); " +
-	"critical ranges vertical 1.25–2.3 and 2.5–4.6 Hz, lateral 0.5–1.2 Hz " +
-	"(Živanović, Pavić & Reynolds 2005, from memory); EN 1990 A2.4.3.2 asks for a " +
-	"comfort check below 5 Hz vertical and 2.5 Hz lateral (from memory)"
-
-func comfort(id, title string, f units.Frequency, ranges [][2]float64, strict bool) check.Result {
-	r := check.Record(id, title, units.KindFrequency, float64(f)).For("span", "permanent").WithBasis(comfortBasis)
-	for _, rg := range ranges {
-		if float64(f) >= rg[0] && float64(f) <= rg[1] {
-			r.Status = check.Flag
-			if strict {
-				r.Status, r.Ratio = check.Fail, math.Inf(1)
-			}
-			return r.WithNote(fmt.Sprintf("%s lies in the range %.2f–%.2f Hz that walkers excite: assess the response or change the design", f, rg[0], rg[1]))
-		}
-	}
-	return r
-}
-
-func (m *model) checkFrequencies(a *Analysis, perm CaseState, opts *Options) error {
-	var h units.Force
-	var w units.LoadPerLength
-	var ea units.AxialStiffness
-	for i, g := range m.groups {
-		h += perm.Groups[i].H
-		w += m.ref[i].Load.Uniform
-		ea += g.elastic.EA
-	}
-	// The bridge hangs at the sag its total weight and tension give,
-	// w l²/(8H): the weighted harmonic mean of the groups' sags.
-	mass := units.MassPerLength(float64(w) / units.StandardGravity)
-	modes, err := cable.Frequencies(m.span, h, mass, ea)
-	if err != nil {
-		return fieldErr("ropes", "natural frequencies: %w; check the sags and rope sizes", err)
-	}
-	a.Modes = modes
-	a.Report.Add(
-		comfort("bridge.frequency.vertical_antisymmetric", "First in-plane antisymmetric frequency", modes.Antisymmetric, verticalRanges, opts.StrictComfort),
-		comfort("bridge.frequency.vertical_symmetric", "First in-plane symmetric frequency", modes.Symmetric, verticalRanges, opts.StrictComfort),
-		comfort("bridge.frequency.lateral", "First out-of-plane (swing) frequency", modes.Swing, lateralRanges, opts.StrictComfort),
-	)
-	return nil
-}
-
 // maxErectionRows bounds the erection table.
 const maxErectionRows = 1000
 

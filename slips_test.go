@@ -35,7 +35,7 @@ func TestSlips(t *testing.T) {
 		{"ten million ropes", `"count": 6`, `"count": 10000000`, nil, false,
 			`sagspan: bridge description: ropes[0].count: 1e+07 is outside the plausible range 1 to 50 (line 41, column 16)`},
 		{"backstay of 1 mm", `"horizontal": "16 m"`, `"horizontal": "1 mm"`, nil, false,
-			`sagspan: bridge description: banks.left.backstay.horizontal: 1.000 mm is outside the plausible range 0.5000 m to 300.0 m (line 65, column 34)`},
+			`sagspan: bridge description: banks.left.backstay.horizontal: 1.000 mm is outside the plausible range 0.5000 m to 300.0 m (line 66, column 34)`},
 		// The last one won.
 		{"key given twice", `"coldest": "-10 C",`, `"coldest": "-10 C", "coldest": "-20 C",`, nil, false,
 			`sagspan: bridge description: climate.coldest: given twice (first at line 24, column 5); keep one (line 24, column 36)`},
@@ -44,14 +44,14 @@ func TestSlips(t *testing.T) {
 			`sagspan: bridge description: climate.coldest: units: a bare -10 is ambiguous for a temperature; write it with its unit, such as "-10 C" (line 24, column 16)`},
 		// "friction angle 1719 deg is not a soil's"
 		{"bare friction angle", `"preset": "dense sand"}`, `"preset": "dense sand", "friction": 30}`, nil, false,
-			`sagspan: bridge description: banks.left.soil.friction: units: a bare 30 is ambiguous for an angle; write it with its unit, such as "30 deg" (line 67, column 52)`},
+			`sagspan: bridge description: banks.left.soil.friction: units: a bare 30 is ambiguous for an angle; write it with its unit, such as "30 deg" (line 68, column 52)`},
 		{"syntax error", `"width": "1.2 m",`, `"width": "1.2 m",,`, nil, false,
 			`sagspan: bridge description: JSON syntax: invalid character ',' looking for beginning of object key string (line 29, column 22)`},
 		{"trailing comma", `"basis": {"method": "allowable"}`, `"basis": {"method": "allowable",}`, nil, false,
-			`sagspan: bridge description: JSON syntax: invalid character '}' looking for beginning of object key string (a comma before a closing bracket: remove it) (line 85, column 35)`},
+			`sagspan: bridge description: JSON syntax: invalid character '}' looking for beginning of object key string (a comma before a closing bracket: remove it) (line 87, column 35)`},
 		// "cannot unmarshal number 2.5 into Go value of type int"
 		{"fraction where a whole number goes", `"passive": 0.5}`, `"passive": 0.5, "bars": 2.5}`, nil, false,
-			`sagspan: bridge description: banks.left.anchor.bars: want a whole number, got 2.5 (line 66, column 133)`},
+			`sagspan: bridge description: banks.left.anchor.bars: want a whole number, got 2.5 (line 67, column 133)`},
 		{"misspelt field", `"freeboard"`, `"freebord"`, nil, false,
 			`sagspan: bridge description: site.freebord: unknown field; did you mean "freeboard"? (line 8, column 5)`},
 		// "the result overflows float64"
@@ -59,7 +59,7 @@ func TestSlips(t *testing.T) {
 			`sagspan: bridge description: ropes[0].sag: sag 1.000 mm is less than 1/100 of the span 72.00 m: a rope that tight carries many times its load in tension; footbridge sag ratios lie between about 1/25 and 1/8 (line 43, column 14)`},
 		// Passed validation, then refused by package cable.
 		{"rope factor below 1", `"method": "allowable"}`, `"method": "allowable", "rope_factor": 0.5}`, nil, false,
-			`sagspan: bridge description: basis.rope_factor: 0.5 is outside the plausible range 1 to 10 (line 85, column 51)`},
+			`sagspan: bridge description: basis.rope_factor: 0.5 is outside the plausible range 1 to 10 (line 87, column 51)`},
 		// "strains the rope by 31.9 %", naming no field.
 		{"walkway too heavy for its ropes", `"load": "0.45 kN/m"`, `"load": "25 kN/m"`, []string{`"count": 6`, `"count": 1`}, true,
 			`sagspan: bridge description: walkway.parts: walkway ropes, case "permanent": cable: the new state strains the rope by 9.8 %, beyond the small-strain model (5 %): invalid input; the walkway's own weight strains the walkway ropes beyond what the rope model covers: lighten the walkway (walkway.parts) or use larger or more ropes (ropes[0].rope.diameter, ropes[0].count)`},

@@ -27,6 +27,9 @@ const (
 	maxConcrete   = 90 * units.Megapascal  // fck of C90/105, EN 1992-1-1 Table 3.1
 	maxSteel      = 600 * units.Megapascal // fyk, EN 1992-1-1 3.2.2(3)
 	maxSteelRatio = 0.08                   // As/Ac at laps, EN 1992-1-1 9.5.2(3) (from memory)
+	// maxStructuralSteel is f_y of S700, the strongest steel EN 1993-1-12
+	// covers (from memory).
+	maxStructuralSteel = 700 * units.Megapascal
 )
 
 // maxSagRatio is the largest dead-load sag ratio accepted: beyond a quarter
@@ -163,6 +166,7 @@ func (b Bridge) Validate() error {
 		}
 	}
 	b.validateLoads(v)
+	b.validateComfort(v)
 	return v.err
 }
 
@@ -244,7 +248,98 @@ func (b Bridge) validateBank(v *validator, f string, k Bank) {
 	default:
 		v.fail(path{f, ".tower.saddle.kind"}, "unknown saddle kind %q; want fixed, sliding or roller", t.Saddle.Kind)
 	}
+	b.validateTower(v, f, t)
+	b.validateFooting(v, f, t)
+	b.validateAnchorage(v, f, k)
+}
+
+// validateTower checks the tower's saddle groove, eccentricity settings and
+// column section.
+func (b Bridge) validateTower(v *validator, f string, t TowerSpec) {
+	gf := t.Saddle.GrooveFriction
+	if math.IsNaN(gf) || gf < 0 || gf > 2 {
+		v.fail(path{f, ".tower.saddle.groove_friction"}, "must be a friction coefficient between 0 and 2, got %v", gf)
+	}
+	switch t.Saddle.Groove {
+	case "":
+	case "free", "friction", "clamped":
+		if t.Saddle.Kind != "fixed" && t.Saddle.Groove != "clamped" && v.err == nil {
+			v.fail(path{f, ".tower.saddle.groove"}, "a %s saddle carries the rope clamped on it (the saddle moves, not the rope); groove %q applies to fixed saddles only",
+				t.Saddle.Kind, t.Saddle.Groove)
+		}
+		if t.Saddle.Groove == "friction" && gf == 0 && v.err == nil {
+			v.fail(path{f, ".tower.saddle.groove_friction"}, "is missing: a groove with friction needs the friction coefficient between rope and groove")
+		}
+	default:
+		v.fail(path{f, ".tower.saddle.groove"}, "unknown groove %q; want free, friction or clamped (or leave it out to check both bounds)", t.Saddle.Groove)
+	}
+	if t.Saddle.Groove != "friction" && gf != 0 && v.err == nil {
+		v.fail(path{f, ".tower.saddle.groove_friction"}, "is given but the groove is %q, not \"friction\"", t.Saddle.Groove)
+	}
+	if math.IsNaN(t.Drag) || t.Drag < 0 || t.Drag > 10 {
+		v.fail(path{f, ".tower.drag"}, "must be zero (default) or a force coefficient up to 10, got %v", t.Drag)
+	}
+	e := t.Eccentricity
+	switch e.Form {
+	case "", "rope", "statics":
+	default:
+		v.fail(path{f, ".tower.eccentricity.form"}, "unknown form %q; want rope or statics", e.Form)
+	}
+	v.nonNegative(path{f, ".tower.eccentricity.section"}, float64(e.Section), units.KindLength)
+	if v.err == nil && e.Section >= t.Height {
+		v.fail(path{f, ".tower.eccentricity.section"}, "checked section at %s is at or above the saddle at %s: it must lie below where the ropes act", e.Section, t.Height)
+	}
+	switch e.Rule {
+	case "", "kern":
+	case "section":
+		v.finite(path{f, ".tower.eccentricity.offset"}, float64(e.Offset))
+		if v.err == nil && float64(e.Offset) <= -float64(t.Depth-2*t.Facing)/2 {
+			v.fail(path{f, ".tower.eccentricity.offset"}, "%s leaves no allowed eccentricity", e.Offset)
+		}
+	case "fraction":
+		if !(e.Fraction > 0 && e.Fraction <= 1) {
+			v.fail(path{f, ".tower.eccentricity.fraction"}, "must lie in (0, 1], got %v", e.Fraction)
+		}
+		v.finite(path{f, ".tower.eccentricity.offset"}, float64(e.Offset))
+	default:
+		v.fail(path{f, ".tower.eccentricity.rule"}, "unknown rule %q; want kern, section or fraction", e.Rule)
+	}
 	sec := t.Section
+	if math.IsNaN(sec.Creep) || sec.Creep < 0 || sec.Creep > 10 {
+		v.fail(path{f, ".tower.section.creep"}, "must be zero (default) or a creep coefficient up to 10, got %v", sec.Creep)
+	}
+	switch sec.Type {
+	case "", "concrete":
+	case "tube", "frame":
+		switch sec.Shape {
+		case "", "circular", "square":
+		default:
+			v.fail(path{f, ".tower.section.shape"}, "unknown tube shape %q; want circular or square", sec.Shape)
+		}
+		v.positive(path{f, ".tower.section.size"}, float64(sec.Size), units.KindLength)
+		v.positive(path{f, ".tower.section.wall"}, float64(sec.Wall), units.KindLength)
+		if v.err == nil && 2*sec.Wall >= sec.Size {
+			v.fail(path{f, ".tower.section.wall"}, "wall %s is half the tube size %s or more", sec.Wall, sec.Size)
+		}
+		v.positive(path{f, ".tower.section.steel"}, float64(sec.Steel), units.KindPressure)
+		if v.err == nil && sec.Steel > maxStructuralSteel {
+			v.fail(path{f, ".tower.section.steel"}, "%s is above the %s of the structural steels of EN 1993-1-1 and EN 1993-1-12", sec.Steel, maxStructuralSteel)
+		}
+		if sec.Type == "frame" {
+			v.positive(path{f, ".tower.section.spacing"}, float64(sec.Spacing), units.KindLength)
+			if v.err == nil && sec.Spacing <= sec.Size {
+				v.fail(path{f, ".tower.section.spacing"}, "legs %s apart overlap: the spacing must exceed the leg size %s", sec.Spacing, sec.Size)
+			}
+			v.nonNegative(path{f, ".tower.section.panel"}, float64(sec.Panel), units.KindLength)
+			if v.err == nil && sec.Panel > t.Height {
+				v.fail(path{f, ".tower.section.panel"}, "bracing panel %s is longer than the column", sec.Panel)
+			}
+		}
+		return
+	default:
+		v.fail(path{f, ".tower.section.type"}, "unknown column type %q; want concrete, tube or frame", sec.Type)
+		return
+	}
 	v.positive(path{f, ".tower.section.concrete"}, float64(sec.Concrete), units.KindPressure)
 	if v.err == nil && sec.Concrete > maxConcrete {
 		v.fail(path{f, ".tower.section.concrete"}, "%s is above the %s of the strongest concrete class in EN 1992-1-1 Table 3.1", sec.Concrete, maxConcrete)
@@ -269,6 +364,9 @@ func (b Bridge) validateBank(v *validator, f string, k Bank) {
 				sec.Bars, sec.BarDiameter, 100*bars/gross, 100*maxSteelRatio)
 		}
 	}
+}
+
+func (b Bridge) validateFooting(v *validator, f string, t TowerSpec) {
 	ft := t.Footing
 	v.positive(path{f, ".tower.footing.length"}, float64(ft.Length), units.KindLength)
 	v.positive(path{f, ".tower.footing.width"}, float64(ft.Width), units.KindLength)
@@ -281,18 +379,9 @@ func (b Bridge) validateBank(v *validator, f string, k Bank) {
 	if v.err == nil && math.Abs(float64(ft.ColumnOffset))+float64(t.Depth)/2 > float64(ft.Length)/2 {
 		v.fail(path{f, ".tower.footing.column_offset"}, "puts the column beyond the edge of the footing")
 	}
-	e := t.Eccentricity
-	switch e.Rule {
-	case "", "kern":
-	case "fraction":
-		if !(e.Fraction > 0 && e.Fraction <= 1) {
-			v.fail(path{f, ".tower.eccentricity.fraction"}, "must lie in (0, 1], got %v", e.Fraction)
-		}
-		v.finite(path{f, ".tower.eccentricity.offset"}, float64(e.Offset))
-	default:
-		v.fail(path{f, ".tower.eccentricity.rule"}, "unknown rule %q; want kern or fraction", e.Rule)
-	}
+}
 
+func (b Bridge) validateAnchorage(v *validator, f string, k Bank) {
 	bs := k.Backstay
 	v.positive(path{f, ".backstay.horizontal"}, float64(bs.Horizontal), units.KindLength)
 	v.finite(path{f, ".backstay.drop"}, float64(bs.Drop))
@@ -430,11 +519,19 @@ var limits = map[string]limit{
 	"TowerSpec.Facing":          between(0*units.Millimetre, 300*units.Millimetre),
 	"TowerSpec.UnitWeight":      between(15*units.KilonewtonPerCubicMetre, 30*units.KilonewtonPerCubicMetre),
 	"SaddleSpec.Friction":       plain(0, 0.6),
+	"SaddleSpec.GrooveFriction": plain(0, 0.6),
 	"SectionSpec.Concrete":      between(12*units.Megapascal, maxConcrete), // C12/15 to C90/105, EN 1992-1-1 Table 3.1
 	"SectionSpec.Steel":         between(250*units.Megapascal, maxSteel),
 	"SectionSpec.Bars":          plain(0, 64),
 	"SectionSpec.BarDiameter":   between(6*units.Millimetre, 50*units.Millimetre),
 	"SectionSpec.Cover":         between(15*units.Millimetre, 300*units.Millimetre),
+	"SectionSpec.Creep":         plain(0, 5), // φ(∞, t0) of EN 1992-1-1 Figure 3.1 stays below about 4
+	"SectionSpec.Size":          between(50*units.Millimetre, 2000*units.Millimetre),
+	"SectionSpec.Wall":          between(2*units.Millimetre, 100*units.Millimetre),
+	"SectionSpec.Spacing":       between(0.1*units.Metre, 10*units.Metre),
+	"SectionSpec.Panel":         between(0.1*units.Metre, 60*units.Metre),
+	"TowerSpec.Drag":            plain(0.5, 3),
+	"EccentricitySpec.Section":  between(0*units.Metre, 60*units.Metre),
 	"FootingSpec.Length":        between(0.3*units.Metre, 20*units.Metre),
 	"FootingSpec.Width":         between(0.3*units.Metre, 20*units.Metre),
 	"FootingSpec.Thickness":     between(0.15*units.Metre, 5*units.Metre),
@@ -468,6 +565,8 @@ var limits = map[string]limit{
 	"SoilSpec.Friction":   between(0*units.Degree, 50*units.Degree),
 	"SoilSpec.Cohesion":   between(0*units.Pascal, 2*units.Megapascal),
 	"SoilSpec.Allowable":  between(10*units.Kilopascal, 20*units.Megapascal),
+
+	"ComfortSpec.Damping": plain(0.001, maxDamping), // 0.1 % to 20 % of critical
 
 	"Loads.Crowd":           between(1*units.Kilopascal, 10*units.Kilopascal),
 	"Loads.WindWithCrowd":   plain(0, 1),

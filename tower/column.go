@@ -28,6 +28,12 @@ type Column struct {
 	Facing units.Length
 	// UnitWeight of the column material; zero means DefaultUnitWeight.
 	UnitWeight units.UnitWeight
+	// Drag is the force coefficient c_f of the column for wind across the
+	// bridge; zero means DefaultColumnDrag.
+	Drag float64
+	// Area is the area of the column's cross-section for its weight (a
+	// steel tube's, say); zero means Depth × Width, a solid rectangle.
+	Area units.Area
 }
 
 func (c Column) validate() error {
@@ -45,6 +51,12 @@ func (c Column) validate() error {
 	}
 	if 2*c.Facing >= min(c.Depth, c.Width) {
 		return invalid("Column.Facing", c.Facing, "leaves no effective section (twice the facing reaches the smaller side)")
+	}
+	if err := nonNegative("Column.Drag", units.Ratio(c.Drag)); err != nil {
+		return err
+	}
+	if err := nonNegative("Column.Area", c.Area); err != nil {
+		return err
 	}
 	return nonNegative("Column.UnitWeight", c.UnitWeight)
 }
@@ -69,7 +81,46 @@ func (c Column) EffectiveWidth() units.Length { return c.Width - 2*c.Facing }
 // Weight returns the self-weight of the column from its gross section,
 // facing included:
 //
-//	W = γ · Depth · Width · Height
+//	W = γ · A · Height,   A = Area, or Depth · Width when Area is zero
 func (c Column) Weight() units.Force {
-	return c.unitWeight().Weight(units.Volume(float64(c.Depth) * float64(c.Width) * float64(c.Height)))
+	a := float64(c.Area)
+	if a == 0 {
+		a = float64(c.Depth) * float64(c.Width)
+	}
+	return c.unitWeight().Weight(units.Volume(a * float64(c.Height)))
+}
+
+// DefaultColumnDrag is the force coefficient used for wind on a column
+// face when Column.Drag is zero: 2.4, the largest value of c_f,0 for a
+// rectangular section with sharp corners over every depth-to-breadth ratio
+// (EN 1991-1-4:2005 7.6, Figure 7.23, from memory), with ψ_r = ψ_λ = 1 (no
+// reduction for rounded corners or end effects). It is conservative for
+// every rectangle.
+const DefaultColumnDrag = 2.4
+
+// Wind returns the force that wind of peak velocity pressure q puts on the
+// column across the bridge, as a level force at mid-height of the column
+// (uniform pressure over the height, EN 1991-1-4:2005 5.3):
+//
+//	F = q · c_f · Depth · Height,   at Height/2
+//
+// The wind blows across the bridge onto the face of breadth Depth (the
+// gross dimension along the bridge, facing included); c_f is Drag, or
+// DefaultColumnDrag. The whole column height above the base section is
+// taken as exposed (conservative where the ground covers part of it).
+// The force is positive downwind. Special cases: a negative or non-finite
+// q gives ErrInvalid.
+func (c Column) Wind(q units.Pressure) (LevelForce, error) {
+	if err := c.validate(); err != nil {
+		return LevelForce{}, err
+	}
+	if err := nonNegative("wind pressure", q); err != nil {
+		return LevelForce{}, err
+	}
+	cf := c.Drag
+	if cf == 0 {
+		cf = DefaultColumnDrag
+	}
+	f := float64(q) * cf * float64(c.Depth) * float64(c.Height)
+	return LevelForce{Height: c.Height / 2, Lateral: units.Force(f)}, nil
 }

@@ -14,7 +14,7 @@
 // one tower this package uses a local horizontal axis positive TOWARD THE
 // SPAN, so the same code serves the left and the right tower:
 //
-//   - a Pull's Angle is measured below horizontal (negative when the rope
+//   - a RopePull's Angle is measured below horizontal (negative when the rope
 //     rises away from the saddle);
 //   - the span-side rope pulls the saddle toward the span and down,
 //     the backstay pulls it away from the span and down;
@@ -38,8 +38,8 @@
 // at 35° down the backstay, over a fixed saddle:
 //
 //	lf, _ := tower.Saddle{Kind: tower.Fixed, Height: 3.2 * units.Metre}.Force(
-//		tower.Pull{Tension: 180 * units.Kilonewton, Angle: units.FromDegrees(12)},
-//		tower.Pull{Tension: 185 * units.Kilonewton, Angle: units.FromDegrees(35)})
+//		tower.RopePull{Tension: 180 * units.Kilonewton, Angle: units.FromDegrees(12)},
+//		tower.RopePull{Tension: 185 * units.Kilonewton, Angle: units.FromDegrees(35)})
 //	col := tower.Column{Depth: 0.8 * units.Metre, Width: 1.2 * units.Metre, Height: 3.4 * units.Metre}
 //	r, _ := tower.Combine([]tower.LevelForce{lf}, col.Weight())
 //	res, _ := tower.EccentricityCheck(r, col, nil) // kern limit d/6

@@ -9,12 +9,15 @@ import (
 )
 
 // EccentricityLimit sets the allowed eccentricity of the resultant at the
-// column base section. A nil *EccentricityLimit means the kern.
+// checked section. A nil *EccentricityLimit means the kern.
 //
 //	e_allowed = Fraction · d_eff/2 + Offset
 //
 // The kern of a rectangle (no tension anywhere on the section) is
-// Fraction = 1/3, Offset = 0, i.e. d_eff/6.
+// Fraction = 1/3, Offset = 0, i.e. d_eff/6. "Within the effective section"
+// is Fraction = 1, with Offset the projection of a base beyond the column
+// face. d_eff is the effective dimension in the direction checked (facing
+// excluded); no factor of safety is applied.
 type EccentricityLimit struct {
 	// Fraction of the half effective depth d_eff/2; zero means 1/3 (the kern).
 	Fraction float64
@@ -24,9 +27,9 @@ type EccentricityLimit struct {
 }
 
 // allowed returns the allowed eccentricity and a description of the rule.
-func (l *EccentricityLimit) allowed(deff units.Length) (units.Length, string, error) {
+func (l *EccentricityLimit) allowed(deff units.Length, d string) (units.Length, string, error) {
 	if l == nil {
-		return deff / 6, "kern of the effective rectangle, d_eff/6 (no tension on the section)", nil
+		return deff / 6, "kern of the effective section, " + d + "/6 (no tension on the section)", nil
 	}
 	f := l.Fraction
 	if f == 0 {
@@ -42,63 +45,242 @@ func (l *EccentricityLimit) allowed(deff units.Length) (units.Length, string, er
 	if a <= 0 {
 		return 0, "", invalid("EccentricityLimit", *l, "gives an allowed eccentricity of zero or less")
 	}
-	return a, fmt.Sprintf("user limit %.3g × d_eff/2 + %v", f, l.Offset), nil
+	switch {
+	case f == 1 && l.Offset == 0:
+		return a, "within the effective section, " + d + "/2", nil
+	case f == 1:
+		return a, fmt.Sprintf("within the effective section, %s/2 + %v (projecting base)", d, l.Offset), nil
+	case f == 1.0/3 && l.Offset == 0:
+		return a, "kern of the effective section, " + d + "/6 (no tension on the section)", nil
+	}
+	return a, fmt.Sprintf("user limit %.3g × %s/2 + %v", f, d, l.Offset), nil
 }
 
-// EccentricityCheck checks the eccentricity of the resultant at the column
-// base section against an allowed limit, with no factor of safety:
+// EccentricityForm says how the eccentricity of the resultant is worked out.
+type EccentricityForm int
+
+// The forms.
+const (
+	// RopeLine is the form practice uses: the line of action of the rope
+	// forces alone (the column's own weight does not pull it back), where
+	// it crosses the checked section, e = h·tan δ.
+	RopeLine EccentricityForm = iota
+	// Statics is ΣM/ΣV at the checked section with the weight of the
+	// column above it on the axis.
+	Statics
+)
+
+// String returns "rope line" or "statics".
+func (f EccentricityForm) String() string {
+	switch f {
+	case RopeLine:
+		return "rope line"
+	case Statics:
+		return "statics"
+	}
+	return fmt.Sprintf("EccentricityForm(%d)", int(f))
+}
+
+// Direction is the direction an eccentricity check looks in.
+type Direction int
+
+// The directions.
+const (
+	// Along the bridge: the rope forces' horizontal components and the
+	// saddles' offsets and travel, against the effective depth.
+	Along Direction = iota
+	// Across the bridge: the lateral forces (wind on the swung ropes and on
+	// the column), against the effective width.
+	Across
+)
+
+// Eccentricity sets how EccentricityCheck works. A nil *Eccentricity means
+// the defaults: the rope-line form, along the bridge, at the column base
+// section, against the kern.
+type Eccentricity struct {
+	// Form is RopeLine (default) or Statics; the other form's value is
+	// always reported beside it.
+	Form EccentricityForm
+	// Direction is Along (default) or Across.
+	Direction Direction
+	// Section is the height of the checked section above the column base
+	// section: where the column is first tied into its base (where its
+	// continuous reinforcement starts, say). Zero means the base section.
+	// It must lie below the lowest saddle.
+	Section units.Length
+	// Limit is the allowed eccentricity; nil means the kern.
+	Limit *EccentricityLimit
+}
+
+// EccentricityCheck checks where the resultant crosses the checked section
+// at height y_c above the column base, against an allowed limit, with no
+// factor of safety.
 //
-//	e = M / V       (Combine; for one level e = y·tan θ)
-//	|e| ≤ e_allowed (kern d_eff/6 by default, see EccentricityLimit)
+// Rope-line form (default, the form practice uses): the rope forces alone,
+// ΣV (down) and ΣH, with moment M about the base-section point on the
+// column axis (see Combine), have a line of action inclined at
 //
-// The column's own weight (Column.Weight, on the axis) replaces whatever
-// self-weight r carries, so the check does not depend on what was passed to
-// Combine. The effective depth excludes the facing on both faces along the
-// bridge (d_eff = Depth − 2·Facing). The kern d/6 of a rectangle is the
-// middle-third rule of elementary bending theory (σ = N/A ± M/W with
-// W = b d²/6 stays compressive for e ≤ d/6; common practice for masonry and
-// plain-concrete piers). The eccentricity may lie toward the span or toward
-// the backstay; the check compares its magnitude and the note says which.
+//	δ = atan(ΣH / ΣV)
 //
-// The result has ID "tower.eccentricity", kind length, demand |e|,
-// capacity e_allowed. Special cases: a net vertical force ≤ 0 gives
-// ErrLiftOff; invalid column or limit gives ErrInvalid.
-func EccentricityCheck(r Resultant, c Column, limit *EccentricityLimit) (check.Result, error) {
+// from the vertical; it crosses the column axis at height y_R = M/ΣH and
+// the checked section at
+//
+//	e = h · tan δ = (M − ΣH·y_c) / ΣV,   h = y_R − y_c
+//
+// For one saddle on the axis, h is the height of the saddle above the
+// checked section. A saddle off the axis (a sliding or roller saddle that
+// has travelled) moves the line by its offset: with ΣH = 0 the line is
+// vertical at e = Σ V_i o_i / ΣV.
+//
+// Statics form: the weight W of the column above the checked section (on
+// its axis, from Column.Weight pro rata of height) joins the rope forces:
+//
+//	e_s = (M − ΣH·y_c) / (ΣV + W)
+//
+// It is smaller than the rope-line e whenever W > 0 (the weight pulls the
+// line back toward the axis); both are reported, the form chosen is
+// checked. With W = 0 the two agree.
+//
+// Across the bridge the lateral forces (wind on the swung ropes; wind on
+// the column when the caller adds it as a level, which is conservative)
+// take the place of ΣH, and the effective width that of the depth.
+//
+// Limit: the kern d_eff/6 by default (the middle-third rule of elementary
+// bending theory, σ = N/A ± M/W with W = b d²/6 compressive for e ≤ d/6;
+// common practice for masonry and plain-concrete piers), or "within the
+// effective section" d_eff/2 plus the projection of a base (see
+// EccentricityLimit). The effective dimension excludes the facing on both
+// faces (d_eff = Depth − 2·Facing, b_eff = Width − 2·Facing).
+//
+// The result has ID "tower.eccentricity", kind length, demand |e| of the
+// chosen form, capacity e_allowed, and values V, H, R, δ, y_c, h, e, W,
+// e_s, θ_s, d_eff (b_eff across), e_lim. Special cases: a rope vertical
+// force ≤ 0 gives ErrLiftOff; a checked section at or above the lowest
+// saddle, or above the column, and an invalid column or limit give
+// ErrInvalid naming the field.
+func EccentricityCheck(r Resultant, c Column, opt *Eccentricity) (check.Result, error) {
 	if err := r.validate(); err != nil {
 		return check.Result{}, err
 	}
 	if err := c.validate(); err != nil {
 		return check.Result{}, err
 	}
-	rc, err := r.withSelfWeight(c.Weight())
+	var o Eccentricity
+	if opt != nil {
+		o = *opt
+	}
+	if o.Form != RopeLine && o.Form != Statics {
+		return check.Result{}, invalid("Eccentricity.Form", int(o.Form), "is not RopeLine or Statics")
+	}
+	if o.Direction != Along && o.Direction != Across {
+		return check.Result{}, invalid("Eccentricity.Direction", int(o.Direction), "is not Along or Across")
+	}
+	yc := o.Section
+	if err := nonNegative("Eccentricity.Section", yc); err != nil {
+		return check.Result{}, err
+	}
+	if yc > 0 && (yc >= r.Lowest || yc >= c.Height) {
+		return check.Result{}, invalid("Eccentricity.Section", yc,
+			fmt.Sprintf("lies at or above the lowest saddle (%v) or the column top (%v): the checked section must lie below where the ropes act", r.Lowest, c.Height))
+	}
+	v := float64(r.RopeVertical())
+	if !(v > 0) {
+		return check.Result{}, fmt.Errorf("tower: the rope forces on the column do not press down (ΣV = %v): "+
+			"their line of action never reaches the section: %w", units.Force(v), ErrLiftOff)
+	}
+	h, m := float64(r.Horizontal), float64(r.BaseMoment)
+	deff, dname, hname := c.EffectiveDepth(), "d_eff", "ΣH"
+	dmeaning, hmeaning, side := "effective depth along the bridge (facing excluded)", "horizontal force of the rope forces, toward the span", sideOf
+	if o.Direction == Across {
+		h, m = float64(r.Lateral), float64(r.LateralMoment)
+		deff, dname, hname = c.EffectiveWidth(), "b_eff", "ΣL"
+		dmeaning, hmeaning, side = "effective width across the bridge (facing excluded)", "lateral force on the column, downwind", downwind
+	}
+	allowed, rule, err := o.Limit.allowed(deff, dname)
 	if err != nil {
 		return check.Result{}, err
 	}
-	deff := c.EffectiveDepth()
-	allowed, rule, err := limit.allowed(deff)
-	if err != nil {
-		return check.Result{}, err
+	mc := m - h*float64(yc) // moment of the rope forces about the checked section
+	ep := mc / v
+	w := float64(c.Weight()) * float64(c.Height-yc) / float64(c.Height)
+	es := mc / (v + w)
+	if !finite(w) || !finite(mc) || !finite(es) || !finite(mc/v) {
+		return check.Result{}, invalid("Column", fmt.Sprintf("%v × %v × %v", c.Depth, c.Width, c.Height),
+			"with these forces gives a weight or moment that is not finite")
 	}
-	e := float64(rc.BaseOffset)
-	res := check.Compare("tower.eccentricity", "Resultant eccentricity at column base",
-		units.KindLength, math.Abs(e), float64(allowed)).
-		WithBasis("e = ΣM/ΣV at the base section by statics; limit: " + rule +
-			"; middle-third rule of elementary bending theory (common practice); no factor of safety").
-		WithNote(fmt.Sprintf("e = %v %s; resultant %.2f deg from vertical (rope forces alone %.2f deg); V = %v incl. column weight %v",
-			units.Length(math.Abs(e)), sideOf(e), rc.Angle.Degrees(), rc.RopeAngle.Degrees(), rc.Vertical, rc.SelfWeight))
+	delta := math.Atan2(h, v)
+	e, form := ep, "rope-line form (the form practice uses): the line of action of the rope forces alone, the column's weight not counted, e = h·tan δ"
+	if o.Form == Statics {
+		e, form = es, "statics form: e = ΣM/ΣV at the checked section with the weight of the column above it"
+	}
+	where := "the column base section"
+	if yc > 0 {
+		where = fmt.Sprintf("the checked section %v above the column base", yc)
+	}
+	title := "Resultant eccentricity at column base"
+	if yc > 0 {
+		title = "Resultant eccentricity at checked section"
+	}
+	res := check.Compare("tower.eccentricity", title, units.KindLength, math.Abs(e), float64(allowed)).
+		WithBasis(form + ", at " + where + "; limit: " + rule + "; no factor of safety (common practice)")
+	vals := []check.Value{
+		check.Of("ΣV", "vertical force of the rope forces (down)", units.Force(v)),
+		check.Of(hname, hmeaning, units.Force(h)),
+		check.Of("R", "magnitude of the rope-force resultant", units.Force(math.Hypot(h, v))),
+		check.Of("δ", "angle of the rope-force resultant from the vertical", units.Angle(delta)),
+		check.Of("y_c", "height of the checked section above the column base section", yc),
+	}
+	if h != 0 {
+		vals = append(vals, check.Of("h", "height above the checked section where the rope-force line crosses the column axis", units.Length(mc/h)))
+	}
+	vals = append(vals,
+		check.Of("e", "eccentricity by the rope-line form, (M − ΣH·y_c)/ΣV", units.Length(ep)),
+		check.Of("W", "weight of the column above the checked section", units.Force(w)),
+		check.Of("e_s", "eccentricity by the statics form, with the column weight", units.Length(es)),
+		check.Of("θ_s", "angle from the vertical of the resultant with the column weight", units.Angle(math.Atan2(h, v+w))),
+		check.Of(dname, dmeaning, deff),
+		check.Of("e_lim", "allowed eccentricity", allowed),
+	)
+	res = res.WithValues(vals...)
+	switch {
+	case h == 0 && mc == 0:
+		if o.Direction == Across {
+			res = res.WithNote("nothing leans the resultant across the bridge in this case (no lateral force): e = 0")
+		} else {
+			res = res.WithNote("the rope forces have no horizontal component along the bridge and act on the column axis in this case: e = 0")
+		}
+	case h == 0:
+		res = res.WithNote(fmt.Sprintf("the rope forces are vertical; they act off the column axis (saddle offset or travel), e = %v %s",
+			units.Length(math.Abs(e)), side(e)))
+	default:
+		res = res.WithNote(fmt.Sprintf("e = %v %s", units.Length(math.Abs(e)), side(e)))
+	}
 	if c.Facing > 0 {
-		res = res.WithNote(fmt.Sprintf("effective depth %v = %v − 2 × %v facing", deff, c.Depth, c.Facing))
+		res = res.WithNote(fmt.Sprintf("effective section %v × %v: %v of facing on each face left out", c.EffectiveDepth(), c.EffectiveWidth(), c.Facing))
 	}
 	return res, nil
 }
 
-// sideOf names the side of the column axis a signed offset lies on.
+// sideOf names the side of the column axis a signed offset along the
+// bridge lies on.
 func sideOf(x float64) string {
 	switch {
 	case x > 0:
 		return "toward the span"
 	case x < 0:
 		return "toward the backstay"
+	}
+	return "on the axis"
+}
+
+// downwind names the side of the column axis a signed offset across the
+// bridge lies on.
+func downwind(x float64) string {
+	switch {
+	case x > 0:
+		return "downwind"
+	case x < 0:
+		return "upwind"
 	}
 	return "on the axis"
 }

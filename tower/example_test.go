@@ -12,8 +12,8 @@ import (
 func ExampleSaddle_Force() {
 	walk := tower.Saddle{Kind: tower.Fixed, Height: 3.2 * units.Metre}
 	lf, err := walk.Force(
-		tower.Pull{Tension: 180 * units.Kilonewton, Angle: units.FromDegrees(12)},
-		tower.Pull{Tension: 185 * units.Kilonewton, Angle: units.FromDegrees(35)})
+		tower.RopePull{Tension: 180 * units.Kilonewton, Angle: units.FromDegrees(12)},
+		tower.RopePull{Tension: 185 * units.Kilonewton, Angle: units.FromDegrees(35)})
 	if err != nil {
 		fmt.Println(err)
 		return
@@ -21,8 +21,8 @@ func ExampleSaddle_Force() {
 	fmt.Printf("walkway: V %v down, H %v toward the span\n", lf.Vertical, lf.Horizontal)
 
 	rail := tower.Saddle{Kind: tower.Sliding, Friction: 0.15, Height: 4.3 * units.Metre}
-	span := tower.Pull{Tension: 40 * units.Kilonewton, Angle: units.FromDegrees(10)}
-	back := tower.Pull{Tension: 40 * units.Kilonewton, Angle: units.FromDegrees(40)}
+	span := tower.RopePull{Tension: 40 * units.Kilonewton, Angle: units.FromDegrees(10)}
+	back := tower.RopePull{Tension: 40 * units.Kilonewton, Angle: units.FromDegrees(40)}
 	lf, _ = rail.Force(span, back)
 	fmt.Printf("handrail: V %v down, H %v toward the span, slips %v\n", lf.Vertical, lf.Horizontal, rail.Slips(span, back))
 	// Output:
@@ -48,12 +48,19 @@ func ExampleEccentricityCheck() {
 		return
 	}
 	fmt.Printf("%s: %s of %s, ratio %.3f, %s\n", res.ID, res.DemandString(), res.CapacityString(), res.Ratio, res.Status)
-	res, _ = tower.EccentricityCheck(r, col, &tower.EccentricityLimit{Fraction: 0.5, Offset: 0.1 * units.Metre})
-	fmt.Printf("user limit: %s of %s, ratio %.3f, %s\n", res.DemandString(), res.CapacityString(), res.Ratio, res.Status)
+	e, _ := res.Value("e")
+	es, _ := res.Value("e_s")
+	fmt.Printf("rope line e %v, statics e_s %v\n", units.Length(e.Value), units.Length(es.Value))
+	// Checked 0.6 m up, where the column is tied into its base, within the
+	// effective section plus a 0.1 m projecting base:
+	res, _ = tower.EccentricityCheck(r, col, &tower.Eccentricity{Section: 0.6 * units.Metre,
+		Limit: &tower.EccentricityLimit{Fraction: 1, Offset: 0.1 * units.Metre}})
+	fmt.Printf("checked section: %s of %s, ratio %.3f, %s\n", res.DemandString(), res.CapacityString(), res.Ratio, res.Status)
 	// Output:
 	// V 267.4 kN, H 29.40 kN, angle 6.27 deg, e 372.0 mm
-	// tower.eccentricity: 372.0 mm of 116.7 mm, ratio 3.188, FAIL
-	// user limit: 372.0 mm of 275.0 mm, ratio 1.353, FAIL
+	// tower.eccentricity: 562.9 mm of 116.7 mm, ratio 4.825, FAIL
+	// rope line e 562.9 mm, statics e_s 372.0 mm
+	// checked section: 463.1 mm of 450.0 mm, ratio 1.029, FAIL
 }
 
 func ExampleStability() {
@@ -103,8 +110,9 @@ func ExampleTube_Check() {
 		fmt.Println(err)
 		return
 	}
-	fmt.Printf("%s: utilisation %.3f, %s\n%s\n", res.ID, res.Demand, res.Status, res.Notes[0])
+	chi, _ := res.Value("χ")
+	nb, _ := res.Value("N_b,Rd")
+	fmt.Printf("%s: utilisation %.3f, %s; χ %.3f, N_b,Rd %v\n", res.ID, res.Demand, res.Status, chi.Value, units.Force(nb.Value))
 	// Output:
-	// tower.column_section: utilisation 0.738, pass
-	// class 1, λ̄ 1.051, χ 0.630; Nb,Rd 1186 kN, N_Rd 1883 kN, M_Rd 126.6 kN·m
+	// tower.column_section: utilisation 0.738, pass; χ 0.630, N_b,Rd 1186 kN
 }

@@ -156,21 +156,41 @@ func (s RCSection) validate() error {
 }
 
 // rcModel is the section reduced to numbers in SI for one sense of bending.
+// It refers to the section's bars without copying them, so that building
+// one does not allocate.
 type rcModel struct {
 	b, h       float64
 	sigma      float64 // block stress: 0.85 f'c or η fcd
 	lambda     float64 // block depth factor: β₁ or λ
 	ecu        float64 // extreme-fibre strain at the ultimate state
 	ec3        float64 // EN: strain at the pivot when the whole section is compressed; 0 for ACI
+	yp         float64 // EN: depth of that pivot, (1 − εc3/εcu3) h
 	fy, es     float64 // design (EN) or nominal (ACI) bar yield strength; modulus
-	area, dep  []float64
 	dt         float64 // depth of the extreme tension bar
 	as         float64 // total bar area
 	aci, plain bool
+	// The bars gathered into layers of equal depth from the compressed
+	// face: store holds up to len(store) of them without allocating, extra
+	// any more.
+	nl    int
+	store [16]layer
+	extra []layer
+}
+
+// layer is the bar area at one depth from the compressed face.
+type layer struct{ area, depth float64 }
+
+// layers returns the bar layers.
+func (m *rcModel) layers() []layer {
+	if m.extra != nil {
+		return m.extra
+	}
+	return m.store[:m.nl]
 }
 
 func (s RCSection) model(mirror bool) rcModel {
-	m := rcModel{b: float64(s.B), h: float64(s.H), es: float64(s.Es), aci: s.Code == ACI318, plain: len(s.Bars) == 0}
+	m := rcModel{b: float64(s.B), h: float64(s.H), es: float64(s.Es), aci: s.Code == ACI318,
+		plain: len(s.Bars) == 0}
 	if m.es == 0 {
 		m.es = 200e9
 	}
@@ -206,30 +226,54 @@ func (s RCSection) model(mirror bool) rcModel {
 		m.sigma = eta * fcd
 		m.lambda = lam
 		m.fy = float64(s.Fy) / gs
+		m.yp = m.h * (1 - m.ec3/m.ecu) // EN 1992-1-1 6.1(5): pivot at the strain εc3
 	}
 	for _, b := range s.Bars {
-		y := float64(b.Y)
+		d := m.h/2 - float64(b.Y)
 		if mirror {
-			y = -y
+			d = m.h/2 + float64(b.Y)
 		}
-		d := m.h/2 - y
-		m.area = append(m.area, float64(b.Area))
-		m.dep = append(m.dep, d)
 		m.as += float64(b.Area)
 		m.dt = math.Max(m.dt, d)
+		m.addLayer(float64(b.Area), d)
 	}
 	return m
 }
 
+// addLayer adds bar area a at depth d, to the layer at that depth when
+// there is one.
+func (m *rcModel) addLayer(a, d float64) {
+	ls := m.layers()
+	for i := range ls {
+		if ls[i].depth == d {
+			ls[i].area += a
+			return
+		}
+	}
+	switch {
+	case m.extra != nil:
+		m.extra = append(m.extra, layer{a, d})
+	case m.nl < len(m.store):
+		m.store[m.nl] = layer{a, d}
+		m.nl++
+	default:
+		m.extra = append(append(make([]layer, 0, 2*m.nl), m.store[:m.nl]...), layer{a, d})
+	}
+}
+
+// pivot reports whether neutral-axis depth c lies in the EN 1992-1-1
+// region where the whole section is compressed and the strain pivots about
+// εc3 at depth yp.
+func (m *rcModel) pivot(c float64) bool { return !m.aci && c > m.h }
+
 // strain returns the strain (compression positive) at depth y from the
 // compressed face for neutral-axis depth c (c = +Inf: uniform compression).
-func (m rcModel) strain(c, y float64) float64 {
-	if !m.aci && c > m.h {
-		yp := m.h * (1 - m.ec3/m.ecu) // EN 1992-1-1 6.1(5): pivot at the strain εc3
+func (m *rcModel) strain(c, y float64) float64 {
+	if m.pivot(c) {
 		if math.IsInf(c, 1) {
 			return m.ec3
 		}
-		return m.ec3 * (c - y) / (c - yp)
+		return m.ec3 * (c - y) / (c - m.yp)
 	}
 	if math.IsInf(c, 1) {
 		return m.ecu
@@ -239,15 +283,21 @@ func (m rcModel) strain(c, y float64) float64 {
 
 // at returns the nominal axial force (compression +) and moment about the
 // mid-depth for neutral-axis depth c, and the strength reduction φ.
-func (m rcModel) at(c float64) (n, mom, phi float64) {
+func (m *rcModel) at(c float64) (n, mom, phi float64) { return m.atSide(c, c) }
+
+// atSide is at with the bars inside the block decided at depth cm rather
+// than c: where a bar enters the block (c = d/λ) the concrete it displaces
+// makes P jump, and atSide(c, c ± δ) gives the two sides of the jump.
+func (m *rcModel) atSide(c, cm float64) (n, mom, phi float64) {
 	a := math.Min(m.lambda*c, m.h)
+	am := math.Min(m.lambda*cm, m.h)
 	cc := m.sigma * m.b * a
 	n = cc
 	mom = cc * (m.h/2 - a/2)
-	for i, ar := range m.area {
-		d := m.dep[i]
+	for _, l := range m.layers() {
+		ar, d := l.area, l.depth
 		sg := math.Max(-m.fy, math.Min(m.fy, m.es*m.strain(c, d)))
-		if d < a {
+		if d < am {
 			sg -= m.sigma // concrete displaced by the bar
 		}
 		n += ar * sg
@@ -256,10 +306,21 @@ func (m rcModel) at(c float64) (n, mom, phi float64) {
 	return n, mom, m.phi(c)
 }
 
+// atZero returns the limit c → 0 of at: every bar yields in tension and
+// the concrete carries nothing.
+func (m *rcModel) atZero() (n, mom, phi float64) {
+	for _, l := range m.layers() {
+		ar, d := l.area, l.depth
+		n -= ar * m.fy
+		mom -= ar * m.fy * (m.h/2 - d)
+	}
+	return n, mom, m.phi(0)
+}
+
 // phi is ACI 318-19 Table 21.2.2 (from memory): 0.65 for tied sections
 // when εt ≤ εty, 0.90 when εt ≥ εty + 0.003, linear between; 0.60 for plain
 // concrete (21.2.1). EN 1992 carries its factors in fcd and fyd: φ = 1.
-func (m rcModel) phi(c float64) float64 {
+func (m *rcModel) phi(c float64) float64 {
 	if !m.aci {
 		return 1
 	}
@@ -269,6 +330,9 @@ func (m rcModel) phi(c float64) float64 {
 	if math.IsInf(c, 1) {
 		return 0.65
 	}
+	if c <= 0 {
+		return 0.90
+	}
 	et := m.ecu * (m.dt - c) / c
 	ety := m.fy / m.es
 	return math.Max(0.65, math.Min(0.90, 0.65+0.25*(et-ety)/0.003))
@@ -276,7 +340,7 @@ func (m rcModel) phi(c float64) float64 {
 
 // limits returns the design axial capacity in compression (positive) and
 // in tension (negative or zero).
-func (m rcModel) limits() (comp, tens float64) {
+func (m *rcModel) limits() (comp, tens float64) {
 	if m.aci {
 		// ACI 318-19 22.4.2 (from memory): Pn,max = 0.80 Po for tied columns,
 		// Po = 0.85 f'c (Ag − Ast) + fy Ast.
@@ -292,64 +356,291 @@ func (m rcModel) limits() (comp, tens float64) {
 	return comp, -m.fy * m.as
 }
 
-// samples of the neutral-axis parameter s = c/(c+h) in (0, 1).
-const rcSamples = 256
-
-func (m rcModel) cOf(s float64) float64 {
-	if s >= 1 {
-		return math.Inf(1)
+// breaks appends to bp the neutral-axis depths at which the form of φP(c)
+// changes: the block reaching a bar or the far face, a bar yielding, the
+// EN pivot region starting, the ACI φ changing. Between two of them every
+// bar stays elastic or yielded, inside the block or outside it, so φP is a
+// low-order rational function of c (see coefficients).
+func (m *rcModel) breaks(bp []float64) []float64 {
+	add := func(c float64) {
+		if c > 0 && !math.IsInf(c, 0) && !math.IsNaN(c) {
+			bp = append(bp, c)
+		}
 	}
-	return m.h * s / (1 - s)
+	add(m.h / m.lambda)
+	if !m.aci {
+		add(m.h)
+	}
+	ey := m.fy / m.es
+	for _, l := range m.layers() {
+		d := l.depth
+		add(d / m.lambda)
+		// ε(d) = εcu (c − d)/c = ±εy (the ε_cu region; for EN only c ≤ h).
+		if c := m.ecu * d / (m.ecu + ey); m.aci || c <= m.h { // tension yield
+			add(c)
+		}
+		if m.ecu > ey { // compression yield
+			if c := m.ecu * d / (m.ecu - ey); m.aci || c <= m.h {
+				add(c)
+			}
+		}
+		// EN pivot region: εc3 (c − d)/(c − yp) = εy.
+		if !m.aci && m.ec3 != ey {
+			if c := (m.ec3*d - ey*m.yp) / (m.ec3 - ey); c > m.h {
+				add(c)
+			}
+		}
+	}
+	if m.aci && !m.plain {
+		ety := m.fy / m.es
+		add(m.ecu * m.dt / (m.ecu + ety))
+		add(m.ecu * m.dt / (m.ecu + ety + 0.003))
+	}
+	return bp
 }
+
+// coefficients returns the polynomial whose roots x in the interval that
+// contains the neutral-axis depth cm give φP = n there, and the shift
+// c = x + shift. Within an interval of breaks,
+//
+//	P(x) = p1 x + p0 + pm1/x,   φ(x) = k0 + k1/x
+//
+// with x = c in the εcu region and x = c − yp in the EN pivot region
+// (elastic bars give the 1/x terms, the block the x term). Multiplying
+// φP − n = 0 by x (k1 = 0) or x² (ACI transition zone) gives a quadratic or
+// a cubic; poly holds its coefficients from the highest power down.
+func (m *rcModel) coefficients(cm, n float64) (poly [4]float64, shift float64) {
+	var p1, p0, pm1 float64
+	piv := m.pivot(cm)
+	if piv {
+		shift = m.yp
+	}
+	a := m.lambda * cm
+	if a < m.h {
+		p1 += m.sigma * m.b * m.lambda
+		p0 += m.sigma * m.b * m.lambda * shift
+	} else {
+		p0 += m.sigma * m.b * m.h
+	}
+	for _, l := range m.layers() {
+		ar, d := l.area, l.depth
+		if d < a {
+			p0 -= m.sigma * ar
+		}
+		e := m.strain(cm, d)
+		switch {
+		case m.es*e >= m.fy:
+			p0 += m.fy * ar
+		case m.es*e <= -m.fy:
+			p0 -= m.fy * ar
+		case piv: // Es εc3 (x + yp − d)/x
+			p0 += ar * m.es * m.ec3
+			pm1 += ar * m.es * m.ec3 * (m.yp - d)
+		default: // Es εcu (x − d)/x
+			p0 += ar * m.es * m.ecu
+			pm1 -= ar * m.es * m.ecu * d
+		}
+	}
+	k0, k1 := m.phi(cm), 0.0
+	if m.aci && !m.plain {
+		ety := m.fy / m.es
+		if et := m.ecu * (m.dt - cm) / cm; et > ety && et < ety+0.003 {
+			// φ = 0.65 + 0.25 (εcu (dt − c)/c − εty)/0.003
+			k0 = 0.65 - 0.25*(m.ecu+ety)/0.003
+			k1 = 0.25 * m.ecu * m.dt / 0.003
+		}
+	}
+	if k1 == 0 {
+		return [4]float64{0, k0 * p1, k0*p0 - n, k0 * pm1}, shift
+	}
+	return [4]float64{k0 * p1, k0*p0 + k1*p1 - n, k0*pm1 + k1*p0, k1 * pm1}, shift
+}
+
+// maxStackBreaks is the number of breaks held without allocating: four per
+// bar layer for up to 15 layers.
+const maxStackBreaks = 64
 
 // momentAt returns the least design moment capacity φMn over the points of
 // the design interaction curve with φPn = n, and false when n lies outside
-// the curve.
-func (m rcModel) momentAt(n float64) (float64, bool) {
-	g := func(s float64) (float64, float64) {
-		p, mo, phi := m.at(m.cOf(s))
-		return phi*p - n, phi * mo
+// the curve. The neutral-axis depth is solved in closed form: the breaks
+// split c into intervals on each of which φP(c) = n is a quadratic (a cubic
+// in the ACI φ transition zone) whose roots in the interval are found
+// directly. The moment is then evaluated at each root.
+//
+// Where a bar enters the stress block the concrete it displaces makes φP
+// jump down by φσA; when n falls inside such a jump the lesser of the
+// moments on its two sides is taken (the jump is an artefact of the
+// block's sharp edge; either side is a state of the section, and the
+// lesser moment is the conservative one).
+func (m *rcModel) momentAt(n float64) (float64, bool) {
+	mo, _, ok := m.solve(n)
+	return mo, ok
+}
+
+// solve is momentAt that also returns the neutral-axis depth of the point
+// it chose (0 and +Inf for the limits of the curve).
+func (m *rcModel) solve(n float64) (moment, depth float64, found bool) {
+	var buf [maxStackBreaks]float64
+	bp := buf[:0]
+	if n := 4*len(m.layers()) + 4; n > maxStackBreaks {
+		bp = make([]float64, 0, n)
 	}
-	best, found := math.Inf(1), false
-	// The limit c → 0: every bar yields in tension, the concrete carries nothing.
-	s0, g0 := 0.0, -n
-	if g0 == 0 || !m.plain {
-		var p0, m0 float64
-		for i, ar := range m.area {
-			p0 -= ar * m.fy
-			m0 -= ar * m.fy * (m.h/2 - m.dep[i])
-		}
-		g0 = m.phi(0)*p0 - n
-		if g0 == 0 {
-			best, found = m.phi(0)*m0, true
+	bp = m.breaks(bp)
+	// Insertion sort: a handful of values, no allocation.
+	for i := 1; i < len(bp); i++ {
+		for j := i; j > 0 && bp[j] < bp[j-1]; j-- {
+			bp[j], bp[j-1] = bp[j-1], bp[j]
 		}
 	}
-	for k := 1; k <= rcSamples; k++ {
-		s1 := float64(k) / rcSamples
-		g1, m1 := g(s1)
-		if g1 == 0 {
-			best, found = math.Min(best, m1), true
-		} else if (g0 < 0) != (g1 < 0) && g0 != 0 {
-			lo, hi := s0, s1
-			glo := g0
-			for range 100 {
-				mid := 0.5 * (lo + hi)
-				gm, _ := g(mid)
-				if (gm < 0) == (glo < 0) {
-					lo, glo = mid, gm
-				} else {
-					hi = mid
-				}
-				if hi-lo < 1e-15 {
-					break
-				}
+	best := math.Inf(1)
+	keep := func(mo, c float64) {
+		if mo < best {
+			best, depth = mo, c
+		}
+		found = true
+	}
+	take := func(c float64) {
+		var p, mo, phi float64
+		if c <= 0 {
+			p, mo, phi = m.atZero()
+		} else {
+			p, mo, phi = m.at(c)
+		}
+		// A root from the polynomial may sit a rounding error off φP = n;
+		// accept it when it agrees to a relative 1e-9.
+		if math.Abs(phi*p-n) <= 1e-9*math.Max(math.Abs(n), math.Abs(phi*p))+1e-12*m.scale() {
+			keep(phi*mo, c)
+		}
+	}
+	// The limits of the curve: c → 0 (every bar yields in tension) and
+	// c → ∞ (uniform compression).
+	if p0, _, phi := m.atZero(); phi*p0 == n {
+		take(0)
+	}
+	if pinf, _, phi := m.at(math.Inf(1)); phi*pinf == n {
+		take(math.Inf(1))
+	}
+	lo, prevMid := 0.0, 0.0
+	var prev [4]float64 // the previous interval's polynomial and shift
+	prevShift := 0.0
+	eval := func(p [4]float64, x float64) float64 { return ((p[0]*x+p[1])*x+p[2])*x + p[3] }
+	var roots [3]float64
+	for i := 0; i <= len(bp); i++ {
+		hi := math.Inf(1)
+		if i < len(bp) {
+			hi = bp[i]
+			if hi <= lo {
+				continue
 			}
-			_, mm := g(0.5 * (lo + hi))
-			best, found = math.Min(best, mm), true
 		}
-		s0, g0 = s1, g1
+		cm := 0.5 * (lo + hi)
+		if math.IsInf(hi, 1) {
+			cm = 2*lo + m.h
+		}
+		poly, shift := m.coefficients(cm, n)
+		// A jump at lo: φP − n on its left side and on its right side
+		// (the polynomials times a positive power of x) of opposite signs.
+		if gl, gr := eval(prev, lo-prevShift), eval(poly, lo-shift); lo > 0 && ((gl < 0 && gr > 0) || (gl > 0 && gr < 0)) {
+			pl, ml, phl := m.atSide(lo, prevMid)
+			pr, mr, phr := m.atSide(lo, cm)
+			if gl, gr := phl*pl-n, phr*pr-n; (gl < 0 && gr > 0) || (gl > 0 && gr < 0) {
+				keep(math.Min(phl*ml, phr*mr), lo)
+			}
+		}
+		k := rootsIn(poly, lo-shift, hi-shift, &roots)
+		for _, x := range roots[:k] {
+			take(x + shift)
+		}
+		lo, prevMid, prev, prevShift = hi, cm, poly, shift
 	}
-	return math.Max(best, 0), found
+	return math.Max(best, 0), depth, found
+}
+
+// scale is a force of the size of the section's resistance, for tolerances.
+func (m *rcModel) scale() float64 { return m.sigma*m.b*m.h + m.fy*m.as }
+
+// rootsIn stores in out the real roots x of p[0]x³ + p[1]x² + p[2]x + p[3]
+// with lo ≤ x ≤ hi (hi may be +Inf only when p[0] is zero) and returns how
+// many it stored. Quadratics are solved in closed form (the rounding-stable
+// form of the formula); a cubic is split at the roots of its derivative
+// into monotone pieces and each bracketed root refined by bisection.
+func rootsIn(p [4]float64, lo, hi float64, out *[3]float64) int {
+	k := 0
+	keep := func(x float64) {
+		if x >= lo && x <= hi && k < 3 {
+			out[k] = x
+			k++
+		}
+	}
+	if p[0] == 0 {
+		a, b, c := p[1], p[2], p[3]
+		switch {
+		case a == 0 && b == 0:
+		case a == 0:
+			keep(-c / b)
+		default:
+			disc := b*b - 4*a*c
+			if disc < 0 {
+				// A tangent root lost to rounding: keep the vertex when it is
+				// one within a relative 1e-12.
+				if -disc <= 1e-12*b*b {
+					keep(-b / (2 * a))
+				}
+				break
+			}
+			q := -0.5 * (b + math.Copysign(math.Sqrt(disc), b))
+			if q != 0 {
+				keep(q / a)
+				keep(c / q)
+			} else {
+				keep(0)
+			}
+		}
+		return k
+	}
+	f := func(x float64) float64 { return ((p[0]*x+p[1])*x+p[2])*x + p[3] }
+	// Monotone pieces between the roots of 3p0 x² + 2p1 x + p2.
+	edges := [4]float64{lo, 0, 0, hi}
+	ne := 1
+	var d [3]float64
+	for _, x := range d[:rootsIn([4]float64{0, 3 * p[0], 2 * p[1], p[2]}, lo, hi, &d)] {
+		edges[ne] = x
+		ne++
+	}
+	edges[ne] = hi
+	ne++
+	if ne == 4 && edges[1] > edges[2] {
+		edges[1], edges[2] = edges[2], edges[1]
+	}
+	for i := 0; i+1 < ne; i++ {
+		a, b := edges[i], edges[i+1]
+		fa, fb := f(a), f(b)
+		switch {
+		case fa == 0:
+			keep(a)
+			continue
+		case fb == 0:
+			if i+2 == ne {
+				keep(b)
+			}
+			continue
+		case (fa < 0) == (fb < 0):
+			continue
+		}
+		for range 200 {
+			mid := 0.5 * (a + b)
+			if mid <= a || mid >= b {
+				break
+			}
+			if fm := f(mid); (fm < 0) == (fa < 0) {
+				a, fa = mid, fm
+			} else {
+				b = mid
+			}
+		}
+		keep(0.5 * (a + b))
+	}
+	return k
 }
 
 // InteractionPoint is one point of a section's axial force–moment
@@ -386,7 +677,8 @@ func (s RCSection) Point(c units.Length) (InteractionPoint, error) {
 	if math.IsNaN(float64(c)) || c <= 0 {
 		return InteractionPoint{}, invalid("neutral-axis depth", c, "must be positive")
 	}
-	n, m, phi := s.model(false).at(float64(c))
+	md := s.model(false)
+	n, m, phi := md.at(float64(c))
 	return InteractionPoint{NeutralAxis: c, Axial: units.Force(n), Moment: units.Moment(m), Phi: phi}, nil
 }
 
@@ -402,7 +694,8 @@ func (s RCSection) AxialCapacity() (compression, tension units.Force, err error)
 	if err := s.validate(); err != nil {
 		return 0, 0, err
 	}
-	c, t := s.model(false).limits()
+	md := s.model(false)
+	c, t := md.limits()
 	return units.Force(c), units.Force(t), nil
 }
 
@@ -477,21 +770,26 @@ func (s RCSection) Check(n units.Force, m units.Moment) (check.Result, error) {
 	} else {
 		axial = check.Compare(id, title, units.KindForce, -float64(n), -tens)
 	}
+	vals := [5]check.Value{
+		check.Of("N_Ed", "design axial force (compression +)", n),
+		check.Of("M_Ed", "design moment", m),
+		check.Of("N_Rd", "axial resistance in compression", units.Force(comp)),
+		check.Of("N_Rd,t", "axial resistance in tension (negative)", units.Force(tens)),
+	}
 	axial = axial.WithBasis(basis)
 	if axial.Ratio > 1 || m == 0 {
-		return axial.WithNote(fmt.Sprintf("axial %v against capacity %v (compression) / %v (tension)",
-			n, units.Force(comp), units.Force(tens))), nil
+		return axial.WithValues(vals[:4]...).WithNote("the axial force governs"), nil
 	}
 	mc, ok := md.momentAt(float64(n))
 	if !ok {
 		return check.Result{}, fmt.Errorf("tower: axial force %v not reached on the interaction curve: %w", n, ErrUnsupported)
 	}
-	bend := check.Compare(id, title, units.KindMoment, math.Abs(float64(m)), mc).WithBasis(basis).
-		WithNote(fmt.Sprintf("moment capacity %v at axial force %v; axial ratio %.3f", units.Moment(mc), n, axial.Ratio))
+	vals[4] = check.Of("M_Rd", "moment resistance at N_Ed", units.Moment(mc))
+	bend := check.Compare(id, title, units.KindMoment, math.Abs(float64(m)), mc).WithBasis(basis)
 	if axial.Ratio > bend.Ratio {
-		return axial.WithNote(fmt.Sprintf("bending ratio %.3f (capacity %v)", bend.Ratio, units.Moment(mc))), nil
+		return axial.WithValues(vals[:]...).WithNote("the axial force governs"), nil
 	}
-	return bend, nil
+	return bend.WithValues(vals[:]...), nil
 }
 
 func (s RCSection) basis() string {

@@ -315,3 +315,31 @@ func BenchmarkRCSectionCheck(b *testing.B) {
 	}
 	_ = sink
 }
+
+// enColumn is a column section in the form the whole-bridge check builds:
+// EN 1992-1-1, 700 × 700 mm effective, C25/30, B500, 8 Ø20 (four on each
+// face across the bending direction).
+func enColumn() tower.RCSection {
+	bar := units.Area(math.Pi * 0.01 * 0.01)
+	return tower.RCSection{B: 0.7, H: 0.7, Fc: 25 * mpa, Fy: 500 * mpa, Code: tower.EN1992,
+		Bars: tower.RectangularBars(0.7, 0.7, 0.06, 4, 0, bar)}
+}
+
+// BenchmarkRCSectionMoment is the P–M interaction itself: the design moment
+// resistance at a design axial force, both senses of bending.
+func BenchmarkRCSectionMoment(b *testing.B) {
+	for _, c := range []struct {
+		name string
+		s    tower.RCSection
+	}{{"EN1992", enColumn()}, {"ACI318", sourceSection()}} {
+		b.Run(c.name, func(b *testing.B) {
+			b.ReportAllocs()
+			var sink units.Moment
+			for b.Loop() {
+				p, n, _ := c.s.MomentCapacity(kN(800))
+				sink += p + n
+			}
+			_ = sink
+		})
+	}
+}

@@ -31,7 +31,19 @@ type Resultant struct {
 	// RopeAngle is the angle from the vertical of the rope forces alone
 	// (without SelfWeight), toward the span positive.
 	RopeAngle units.Angle
+	// Lateral is the total force across the bridge (downwind positive) and
+	// LateralMoment its moment about the base section.
+	Lateral       units.Force
+	LateralMoment units.Moment
+	// Lowest is the height of the lowest level with a vertical or
+	// along-bridge force (a saddle; wind on the column is not one): the
+	// checked section of an eccentricity check must lie below it.
+	Lowest units.Length
 }
+
+// RopeVertical returns the vertical force of the levels alone, without the
+// self-weight: V − W.
+func (r Resultant) RopeVertical() units.Force { return r.Vertical - r.SelfWeight }
 
 // Combine returns the resultant at the column base section of the saddle
 // forces at several levels and the column self-weight W (acting on the
@@ -43,6 +55,7 @@ type Resultant struct {
 //	M = Σ (H_i y_i + V_i o_i)
 //	e = M / V
 //	θ = atan(H / V)
+//	L = Σ L_i,  M_L = Σ L_i y_i      (across the bridge)
 //
 // by statics (moments about the base-section point on the column axis). For
 // a single level on the axis e = y·tan θ. The line of action crosses height
@@ -61,13 +74,19 @@ func Combine(levels []LevelForce, selfWeight units.Force) (Resultant, error) {
 	if err := nonNegative("selfWeight", selfWeight); err != nil {
 		return Resultant{}, err
 	}
-	var v, h, m float64
+	var v, h, m, lat, ml float64
+	lowest := math.Inf(1)
 	for i, l := range levels {
 		if y := float64(l.Height); finite(y) && y >= 0 && finite(float64(l.Offset)) &&
-			finite(float64(l.Vertical)) && finite(float64(l.Horizontal)) {
+			finite(float64(l.Vertical)) && finite(float64(l.Horizontal)) && finite(float64(l.Lateral)) {
 			v += float64(l.Vertical)
 			h += float64(l.Horizontal)
 			m += float64(l.Horizontal)*float64(l.Height) + float64(l.Vertical)*float64(l.Offset)
+			lat += float64(l.Lateral)
+			ml += float64(l.Lateral) * float64(l.Height)
+			if l.Vertical != 0 || l.Horizontal != 0 { // a saddle, not wind on the column
+				lowest = math.Min(lowest, y)
+			}
 			continue
 		}
 		name := "levels[" + strconv.Itoa(i) + "]"
@@ -83,8 +102,14 @@ func Combine(levels []LevelForce, selfWeight units.Force) (Resultant, error) {
 		if err := isFinite(name+".Horizontal", l.Horizontal); err != nil {
 			return Resultant{}, err
 		}
+		if err := isFinite(name+".Lateral", l.Lateral); err != nil {
+			return Resultant{}, err
+		}
 	}
-	if !finite(v) || !finite(h) || !finite(m) {
+	if math.IsInf(lowest, 1) {
+		lowest = 0
+	}
+	if !finite(v) || !finite(h) || !finite(m) || !finite(lat) || !finite(ml) {
 		return Resultant{}, invalid("levels", len(levels), "sum to a force or moment that is not finite")
 	}
 	r := Resultant{
@@ -92,6 +117,8 @@ func Combine(levels []LevelForce, selfWeight units.Force) (Resultant, error) {
 		Horizontal: units.Force(h),
 		BaseMoment: units.Moment(m),
 		RopeAngle:  units.Angle(math.Atan2(h, v)),
+		Lateral:    units.Force(lat), LateralMoment: units.Moment(ml),
+		Lowest: units.Length(lowest),
 	}
 	return r.withSelfWeight(selfWeight)
 }
@@ -120,7 +147,9 @@ func (r Resultant) validate() error {
 		name string
 		v    float64
 	}{{"Resultant.Vertical", float64(r.Vertical)}, {"Resultant.Horizontal", float64(r.Horizontal)},
-		{"Resultant.BaseMoment", float64(r.BaseMoment)}, {"Resultant.SelfWeight", float64(r.SelfWeight)}} {
+		{"Resultant.BaseMoment", float64(r.BaseMoment)}, {"Resultant.SelfWeight", float64(r.SelfWeight)},
+		{"Resultant.Lateral", float64(r.Lateral)}, {"Resultant.LateralMoment", float64(r.LateralMoment)},
+		{"Resultant.Lowest", float64(r.Lowest)}} {
 		if err := isFinite(f.name, units.Ratio(f.v)); err != nil {
 			return err
 		}

@@ -34,7 +34,7 @@ func TestSaddleForce(t *testing.T) {
 	if !near(hu, 11.88e3, 5e-4) || !near(v, 67.36e3, 5e-4) {
 		t.Fatalf("hand values disagree with identities: %g %g", hu, v)
 	}
-	span, back := tower.Pull{Tension: kN(T), Angle: deg(10)}, tower.Pull{Tension: kN(T), Angle: deg(30)}
+	span, back := tower.RopePull{Tension: kN(T), Angle: deg(10)}, tower.RopePull{Tension: kN(T), Angle: deg(30)}
 	tests := []struct {
 		name  string
 		s     tower.Saddle
@@ -77,7 +77,7 @@ func TestSaddleBalanced(t *testing.T) {
 	ts := 150.0
 	tb := ts * math.Cos(8*math.Pi/180) / math.Cos(40*math.Pi/180)
 	for _, k := range []tower.SaddleKind{tower.Fixed, tower.Sliding, tower.Roller} {
-		lf, err := tower.Saddle{Kind: k, Height: 4}.Force(tower.Pull{Tension: kN(ts), Angle: deg(8)}, tower.Pull{Tension: kN(tb), Angle: deg(40)})
+		lf, err := tower.Saddle{Kind: k, Height: 4}.Force(tower.RopePull{Tension: kN(ts), Angle: deg(8)}, tower.RopePull{Tension: kN(tb), Angle: deg(40)})
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -88,17 +88,17 @@ func TestSaddleBalanced(t *testing.T) {
 }
 
 func TestSaddleErrors(t *testing.T) {
-	ok := tower.Pull{Tension: kN(50), Angle: deg(20)}
-	up := tower.Pull{Tension: kN(50), Angle: deg(-20)}
+	ok := tower.RopePull{Tension: kN(50), Angle: deg(20)}
+	up := tower.RopePull{Tension: kN(50), Angle: deg(-20)}
 	tests := []struct {
 		name     string
 		s        tower.Saddle
-		span, bk tower.Pull
+		span, bk tower.RopePull
 		sentinel error
 	}{
-		{"negative tension", tower.Saddle{}, tower.Pull{Tension: kN(-1)}, ok, tower.ErrInvalid},
-		{"NaN tension", tower.Saddle{}, tower.Pull{Tension: units.Force(math.NaN())}, ok, tower.ErrInvalid},
-		{"vertical angle", tower.Saddle{}, ok, tower.Pull{Tension: kN(1), Angle: deg(90)}, tower.ErrInvalid},
+		{"negative tension", tower.Saddle{}, tower.RopePull{Tension: kN(-1)}, ok, tower.ErrInvalid},
+		{"NaN tension", tower.Saddle{}, tower.RopePull{Tension: units.Force(math.NaN())}, ok, tower.ErrInvalid},
+		{"vertical angle", tower.Saddle{}, ok, tower.RopePull{Tension: kN(1), Angle: deg(90)}, tower.ErrInvalid},
 		{"bad kind", tower.Saddle{Kind: 7}, ok, ok, tower.ErrInvalid},
 		{"negative friction", tower.Saddle{Kind: tower.Sliding, Friction: -0.1}, ok, ok, tower.ErrInvalid},
 		{"negative height", tower.Saddle{Height: -1}, ok, ok, tower.ErrInvalid},
@@ -124,7 +124,7 @@ func TestSaddleErrors(t *testing.T) {
 
 func BenchmarkSaddleCombine(b *testing.B) {
 	s := tower.Saddle{Kind: tower.Sliding, Height: 3.2}
-	span, back := tower.Pull{Tension: kN(180), Angle: deg(12)}, tower.Pull{Tension: kN(185), Angle: deg(35)}
+	span, back := tower.RopePull{Tension: kN(180), Angle: deg(12)}, tower.RopePull{Tension: kN(185), Angle: deg(35)}
 	levels := make([]tower.LevelForce, 1)
 	b.ReportAllocs()
 	var sink tower.Resultant

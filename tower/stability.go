@@ -150,7 +150,13 @@ func Stability(r Resultant, c Column, f Footing, sf *StabilityFactors) ([]check.
 	ot := check.Stability("tower.overturning", "Tower overturning on footing", units.KindMoment, gov.drv, gov.res, fo).
 		WithBasis(fmt.Sprintf("moments about the %s: column, footing and backfill weights and rope vertical force resist, "+
 			"rope horizontal forces overturn (statics); required factor %.2g (conventional global factor, common practice)", gov.name, fo)).
-		WithNote(fmt.Sprintf("overturning %v, resisting %v about the %s", units.Moment(gov.drv), units.Moment(gov.res), gov.name))
+		WithValues(
+			check.Of("M_ovt", "overturning moment about the "+gov.name, units.Moment(gov.drv)),
+			check.Of("M_res", "resisting moment about the "+gov.name, units.Moment(gov.res)),
+			check.Of("V", "vertical force at the footing base", a.Vertical),
+			check.Of("H", "horizontal force at the footing base, toward the span", a.Horizontal),
+			check.Of("M_b", "moment about the centre of the footing base", a.Moment),
+		)
 	out = append(out, ot)
 
 	// Sliding.
@@ -158,7 +164,11 @@ func Stability(r Resultant, c Column, f Footing, sf *StabilityFactors) ([]check.
 	sl := check.Stability("tower.sliding", "Tower sliding on footing base", units.KindForce, hAbs, mu*v, fs).
 		WithBasis(fmt.Sprintf("base friction μV, μ = %.3g; passive resistance ignored (conservative); "+
 			"required factor %.2g (conventional global factor, common practice)", mu, fs)).
-		WithNote(fmt.Sprintf("horizontal %v %s, vertical %v", units.Force(hAbs), sideOf(l.h), a.Vertical))
+		WithValues(
+			check.Of("H", "horizontal force at the footing base, toward the span", units.Force(l.h)),
+			check.Of("V", "vertical force at the footing base", a.Vertical),
+			check.Of("μ", "base friction coefficient", units.Ratio(mu)),
+		)
 	out = append(out, sl)
 
 	// Contact pressure.
@@ -172,31 +182,42 @@ func Stability(r Resultant, c Column, f Footing, sf *StabilityFactors) ([]check.
 	case ae >= half:
 		bp = check.Result{ID: "tower.base_pressure", Title: "Footing contact pressure", Kind: units.KindPressure,
 			Capacity: float64(qa), Ratio: math.Inf(1), Status: check.Fail, Basis: pbasis}.
-			WithNote(fmt.Sprintf("the resultant lies %v outside the footing base (e = %v %s, half-length %v): "+
-				"no contact pressure can balance it; the tower overturns", units.Length(ae-half), units.Length(ae), sideOf(e), units.Length(half)))
+			WithValues(check.Of("e_b", "eccentricity of the base resultant, toward the span", units.Length(e))).
+			WithNote("the resultant lies outside the footing base: no contact pressure can balance it; the tower overturns")
 	default:
-		var qmax float64
+		var qmax, qmin, contact float64
 		var shape string
 		if ae <= ll/6 {
 			qmax = v / (bw * ll) * (1 + 6*ae/ll)
-			qmin := v / (bw * ll) * (1 - 6*ae/ll)
-			shape = fmt.Sprintf("trapezoidal, q_max %v, q_min %v", units.Pressure(qmax), units.Pressure(qmin))
+			qmin = v / (bw * ll) * (1 - 6*ae/ll)
+			contact = ll
+			shape = "trapezoidal contact pressure"
 		} else {
 			qmax = 2 * v / (3 * bw * (half - ae))
-			shape = fmt.Sprintf("triangular over %v of %v (resultant outside the kern)", units.Length(3*(half-ae)), f.Length)
+			contact = 3 * (half - ae)
+			shape = "triangular contact pressure over part of the base (resultant outside the kern)"
 		}
 		if qa > 0 {
 			bp = check.Compare("tower.base_pressure", "Footing contact pressure", units.KindPressure, qmax, float64(qa))
 		} else {
 			bp = check.Record("tower.base_pressure", "Footing contact pressure", units.KindPressure, qmax)
 		}
-		bp = bp.WithBasis(pbasis).WithNote(fmt.Sprintf("e = %v %s; %s", units.Length(ae), sideOf(e), shape))
+		bp = bp.WithBasis(pbasis).WithNote(shape).WithValues(
+			check.Of("V", "vertical force at the footing base", a.Vertical),
+			check.Of("e_b", "eccentricity of the base resultant, toward the span", units.Length(e)),
+			check.Of("q_max", "largest contact pressure", units.Pressure(qmax)),
+			check.Of("q_min", "least contact pressure", units.Pressure(qmin)),
+			check.Of("L_c", "length of the base in contact", units.Length(contact)),
+		)
 	}
 	out = append(out, bp)
 
 	br := check.Compare("tower.base_resultant", "Resultant within footing base", units.KindLength, ae, half).
 		WithBasis("eccentricity of the base resultant against half the footing length (statics)").
-		WithNote(fmt.Sprintf("e = %v %s; kern L/6 = %v", units.Length(ae), sideOf(e), units.Length(ll/6)))
+		WithValues(
+			check.Of("e_b", "eccentricity of the base resultant, toward the span", units.Length(e)),
+			check.Of("L/6", "kern of the footing base", units.Length(ll/6)),
+		).WithNote(fmt.Sprintf("e_b = %v %s", units.Length(ae), sideOf(e)))
 	out = append(out, br)
 	return out, nil
 }

@@ -333,8 +333,9 @@ func (t Tube) Check(n units.Force, m units.Moment, effLength units.Length) (chec
 		return check.Result{}, invalid("Tube", t.Size, "gives resistances that are not finite and positive")
 	}
 	nn, mm := float64(n), math.Abs(float64(m))
-	var u float64
+	var u, k float64
 	var basis, note string
+	var vals []check.Value
 	if t.Code == AISC360 {
 		pc := c.pc
 		if nn < 0 {
@@ -351,14 +352,19 @@ func (t Tube) Check(n units.Force, m units.Moment, effLength units.Length) (chec
 		if c.class == 2 {
 			cls = "noncompact"
 		}
-		note = fmt.Sprintf("Lc/r %.1f, Fcr/Fy %.3f; φcPn %v, φtPn %v, φbMn %v (%s)",
-			c.lam, c.chi, units.Force(c.pc), units.Force(c.pt), units.Moment(c.mc), cls)
+		note = "section " + cls
+		vals = []check.Value{
+			check.Of("Lc/r", "slenderness", units.Ratio(c.lam)),
+			check.Of("Fcr/Fy", "critical stress over yield (E3)", units.Ratio(c.chi)),
+			check.Of("φcPn", "design compressive strength", units.Force(c.pc)),
+			check.Of("φtPn", "design tensile strength", units.Force(c.pt)),
+			check.Of("φbMn", "design flexural strength", units.Moment(c.mc)),
+		}
 	} else {
 		lin := math.Abs(nn)/c.pt + mm/c.mc
 		u = lin
 		if nn > 0 {
 			nr := nn / c.pc
-			var k float64
 			if c.class <= 2 {
 				k = math.Min(1+(c.lam-0.2)*nr, 1+0.8*nr)
 			} else {
@@ -371,9 +377,17 @@ func (t Tube) Check(n units.Force, m units.Moment, effLength units.Length) (chec
 			curve = "c (cold-formed)"
 		}
 		basis = "EN 1993-1-1 6.3.1.2 buckling curve " + curve + ", 6.3.3 eq. 6.61 with Annex B k_yy, Cmy 1 (from memory)"
-		note = fmt.Sprintf("class %d, λ̄ %.3f, χ %.3f; Nb,Rd %v, N_Rd %v, M_Rd %v",
-			c.class, c.lam, c.chi, units.Force(c.pc), units.Force(c.pt), units.Moment(c.mc))
+		note = fmt.Sprintf("section class %d", c.class)
+		vals = []check.Value{
+			check.Of("λ̄", "non-dimensional slenderness", units.Ratio(c.lam)),
+			check.Of("χ", "buckling reduction factor (6.3.1.2)", units.Ratio(c.chi)),
+			check.Of("N_b,Rd", "buckling resistance χ A f_y/γM1", units.Force(c.pc)),
+			check.Of("N_Rd", "cross-section axial resistance A f_y/γM0", units.Force(c.pt)),
+			check.Of("M_Rd", "cross-section moment resistance W f_y/γM0", units.Moment(c.mc)),
+			check.Of("k_yy", "interaction factor (Annex B)", units.Ratio(k)),
+		}
 	}
 	return check.Compare("tower.column_section", "Column section, axial force and bending", units.KindRatio, u, 1).
-		WithBasis(basis).WithNote(note), nil
+		WithBasis(basis).WithValues(append([]check.Value{check.Of("N_Ed", "design axial force (compression +)", n),
+		check.Of("M_Ed", "design moment", m)}, vals...)...).WithNote(note), nil
 }

@@ -94,3 +94,4 @@ func (m MassPerLength) String() string    { return Format(float64(m), KindMassPe
 func (v Velocity) String() string         { return Format(float64(v), KindVelocity) }
 func (f Frequency) String() string        { return Format(float64(f), KindFrequency) }
 func (r Ratio) String() string            { return Format(float64(r), KindRatio) }
+func (a Acceleration) String() string     { return Format(float64(a), KindAcceleration) }

@@ -91,3 +91,6 @@ func (f *Frequency) UnmarshalJSON(b []byte) error {
 	return unmarshal(b, KindFrequency, (*float64)(f))
 }
 func (r *Ratio) UnmarshalJSON(b []byte) error { return unmarshal(b, KindRatio, (*float64)(r)) }
+func (a *Acceleration) UnmarshalJSON(b []byte) error {
+	return unmarshal(b, KindAcceleration, (*float64)(a))
+}

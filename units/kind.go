@@ -22,6 +22,7 @@ const (
 	KindVelocity
 	KindFrequency
 	KindRatio
+	KindAcceleration
 )
 
 // dim is a dimension vector: powers of length, mass, time, temperature and
@@ -46,6 +47,7 @@ var (
 	dimMassPerLen  = dim{-1, 1, 0, 0, 0}
 	dimVelocity    = dim{1, 0, -1, 0, 0}
 	dimFrequency   = dim{0, 0, -1, 0, 0}
+	dimAccel       = dim{1, 0, -2, 0, 0}
 )
 
 // display is one unit a kind may be shown in: values whose magnitude is at
@@ -87,6 +89,7 @@ var kinds = [...]kindInfo{
 	KindVelocity:         {"velocity", "m/s", dimVelocity, []display{{0, 1, "m/s"}}, false},
 	KindFrequency:        {"frequency", "Hz", dimFrequency, []display{{0, 1, "Hz"}}, false},
 	KindRatio:            {"ratio", "1", dimNone, []display{{0, 1, ""}}, false},
+	KindAcceleration:     {"acceleration", "m/s2", dimAccel, []display{{0, 1, "m/s²"}}, false},
 }
 
 // String returns the name of the kind, such as "load per length".
@@ -169,3 +172,6 @@ func (Frequency) Kind() Kind { return KindFrequency }
 
 // Kind reports KindRatio.
 func (Ratio) Kind() Kind { return KindRatio }
+
+// Kind reports KindAcceleration.
+func (Acceleration) Kind() Kind { return KindAcceleration }

@@ -97,7 +97,8 @@ var symbols = map[string]symbol{
 
 	"kg/m": {dimMassPerLen, 1, 0},
 	"m/s":  {dimVelocity, 1, 0}, "km/h": {dimVelocity, 1 / 3.6, 0},
-	"Hz": {dimFrequency, 1, 0},
+	"Hz":   {dimFrequency, 1, 0},
+	"m/s2": {dimAccel, 1, 0},
 
 	"%": {dimNone, 1e-2, 0},
 }

@@ -50,6 +50,8 @@ func TestParse(t *testing.T) {
 		{"26 m/s", KindVelocity, 26},
 		{"36 km/h", KindVelocity, 10},
 		{"1.8 Hz", KindFrequency, 1.8},
+		{"0.7 m/s²", KindAcceleration, 0.7},
+		{"0.2 m/s2", KindAcceleration, 0.2},
 		{"  48 m  ", KindLength, 48},
 		{"48", KindLength, 48},
 	}
@@ -174,6 +176,7 @@ func TestFormat(t *testing.T) {
 		{0, KindForce, "0 N"},
 		{1.0 / 12, KindRatio, "0.08333"},
 		{12e-6, KindThermalExpansion, "12.00 µ/K"},
+		{0.7, KindAcceleration, "0.7000 m/s²"},
 	}
 	for _, tt := range tests {
 		if got := Format(tt.x, tt.kind); got != tt.want {
@@ -206,7 +209,7 @@ func TestFormatPair(t *testing.T) {
 // within the four significant figures Format keeps.
 func TestRoundTrip(t *testing.T) {
 	values := []float64{1e-4, 0.0123, 0.45, 1, 7.5, 48, 312.5e3, 2.2e6, -3.3, -1234.5}
-	for k := KindLength; k <= KindRatio; k++ {
+	for k := KindLength; k <= KindAcceleration; k++ {
 		for _, x := range values {
 			if k == KindTemperature && x < 0 {
 				continue

@@ -1,0 +1,264 @@
+package sagspan
+
+import (
+	"strconv"
+	"strings"
+
+	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/tower"
+	"github.com/sagspan/sagspan/units"
+)
+
+// Steel column defaults.
+const (
+	// steelUnitWeight is the unit weight of structural steel, 77 kN/m³
+	// (EN 1991-1-1 Table A.4, from memory).
+	steelUnitWeight = 77 * units.KilonewtonPerCubicMetre
+	// steelModulus is E of structural steel, EN 1993-1-1 3.2.6.
+	steelModulus = 210 * units.Gigapascal
+	// circularDrag is the force coefficient of a circular tube in
+	// subcritical flow (EN 1991-1-4 7.9, from memory), used for wind on a
+	// circular steel column.
+	circularDrag = 1.2
+)
+
+// steel returns the tube of a steel column (or of each leg of a frame) and
+// the number of legs; zero legs for a concrete column.
+func (m *model) steel(s Side) (tower.Tube, int) {
+	spec := m.bank(s).Tower.Section
+	legs := 0
+	switch spec.Type {
+	case "tube":
+		legs = 1
+	case "frame":
+		legs = 2
+	default:
+		return tower.Tube{}, 0
+	}
+	shape := tower.Circular
+	if spec.Shape == "square" {
+		shape = tower.Square
+	}
+	return tower.Tube{Shape: shape, Size: spec.Size, Wall: spec.Wall, Fy: spec.Steel, E: steelModulus,
+		Code: tower.EN1993, ColdFormed: spec.ColdFormed}, legs
+}
+
+// variant is one combination of groove behaviours of the two banks'
+// saddles. Where the description does not say how a fixed saddle holds
+// the rope, the chain analyses both bounds, a free groove and a clamped
+// rope, and each check reports the bound that governs it.
+type variant struct {
+	grooves [2]tower.Groove
+	// label names the behaviours when they are bounds, "" otherwise.
+	label string
+}
+
+// variants returns the groove behaviours to analyse: one variant when the
+// description says how each saddle holds the rope; otherwise every
+// combination of the two bounds on the banks that do not say.
+func (m *model) variants() []variant {
+	var options [2][]tower.Groove
+	bounded := false
+	for side := Left; side <= Right; side++ {
+		g, known := grooveOf(m.bank(side).Tower.Saddle)
+		if known {
+			options[side] = []tower.Groove{g}
+			continue
+		}
+		options[side] = []tower.Groove{tower.FreeGroove, tower.ClampedGroove}
+		bounded = true
+	}
+	var out []variant
+	for _, l := range options[Left] {
+		for _, r := range options[Right] {
+			v := variant{grooves: [2]tower.Groove{l, r}}
+			if bounded {
+				var parts []string
+				for side := Left; side <= Right; side++ {
+					if len(options[side]) > 1 {
+						parts = append(parts, side.String()+" saddle "+v.grooves[side].String())
+					}
+				}
+				v.label = strings.Join(parts, ", ")
+			}
+			out = append(out, v)
+		}
+	}
+	return out
+}
+
+// restraint returns how the column top of one bank is held along the
+// bridge in the variant analysed: a fixed saddle whose groove holds the
+// rope (clamped or gripping) is braced by the span and backstay; a free
+// groove, a sliding or a roller saddle leaves the top free (cantilever).
+func (m *model) restraint(s Side) tower.Restraint {
+	if saddleKind(m.bank(s).Tower.Saddle) == tower.Fixed && m.grooves[s] != tower.FreeGroove {
+		return tower.HeldTop
+	}
+	return tower.FreeTop
+}
+
+// eccentricity returns the eccentricity settings of one bank's tower in
+// direction d.
+func (m *model) eccentricity(s Side, d tower.Direction) *tower.Eccentricity {
+	spec := m.bank(s).Tower.Eccentricity
+	o := &tower.Eccentricity{Direction: d, Section: spec.Section}
+	if spec.Form == "statics" {
+		o.Form = tower.Statics
+	}
+	switch spec.Rule {
+	case "section":
+		o.Limit = &tower.EccentricityLimit{Fraction: 1, Offset: spec.Offset}
+	case "fraction":
+		o.Limit = &tower.EccentricityLimit{Fraction: spec.Fraction, Offset: spec.Offset}
+	}
+	return o
+}
+
+// saddleBasis names how the saddles of one bank hold the rope, for the
+// basis of every tower result.
+func (m *model) saddleBasis(s Side) string {
+	return "; saddle: " + m.saddle(s, group{}, 0).Behaviour()
+}
+
+// towerChecks checks one bank's tower under one case: the resultant of the
+// rope forces along and across the bridge (on the characteristic state
+// svc), and the column member (on the design state des, with the
+// permanent case perm for creep).
+func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error {
+	name := svc.Case.Name
+	col := m.column(side)
+	basis := m.saddleBasis(side)
+	_, legs := m.steel(side)
+	for _, d := range []tower.Direction{tower.Along, tower.Across} {
+		element := towerElement[side]
+		if d == tower.Across {
+			element = towerAcrossElement[side]
+		}
+		r, err := tower.EccentricityCheck(svc.Tower[side], col, m.eccentricity(side, d))
+		if err != nil {
+			return m.bankErr(side, "tower.eccentricity", name, err)
+		}
+		if d == tower.Along {
+			r = r.WithValues(m.saddleValues(side, svc)...)
+		}
+		if legs > 0 {
+			// A steel column carries the bending in its members; the
+			// resultant is reported, not limited.
+			rec := check.Record(r.ID, r.Title, r.Kind, r.Demand)
+			rec.Basis, rec.Values, rec.Notes = r.Basis, r.Values, r.Notes
+			r = rec.WithNote("a steel column resists this eccentricity by bending (see tower.column_section): the resultant is reported, not limited")
+		}
+		out.add(r.WithBasis(r.Basis+basis).For(element, name))
+	}
+	res, err := m.member(side, des, perm)
+	if err != nil {
+		return m.bankErr(side, "tower.section", name, err)
+	}
+	out.add(res.Along.WithBasis(res.Along.Basis+basis).For(towerElement[side], name))
+	out.add(res.Across.WithBasis(res.Across.Basis+basis).For(towerAcrossElement[side], name))
+	out.add(res.Both.WithBasis(res.Both.Basis+basis).For(towerElement[side], name))
+	return nil
+}
+
+// member checks one bank's column member under the design state des:
+// axial force and first-order moments at the base from the ropes (and
+// wind on the column), the permanent state perm as the quasi-permanent
+// actions for creep.
+func (m *model) member(side Side, des, perm CaseState) (tower.ColumnResults, error) {
+	r, p := des.Tower[side], perm.Tower[side]
+	a := tower.ColumnActions{N: r.Vertical, Along: r.BaseMoment, Across: des.LateralMoment[side],
+		NQP: p.Vertical, AlongQP: p.BaseMoment, AcrossQP: perm.LateralMoment[side]}
+	length := m.column(side).Height
+	if tube, legs := m.steel(side); legs > 0 {
+		spec := m.bank(side).Tower.Section
+		sc := tower.SteelColumn{Tube: tube, Legs: legs, Spacing: spec.Spacing, Panel: spec.Panel,
+			Length: length, Along: m.restraint(side), Across: tower.FreeTop}
+		return sc.Check(a)
+	}
+	rc := tower.RCColumn{Section: m.section(side), Length: length, Along: m.restraint(side), Across: tower.FreeTop,
+		Creep: m.bank(side).Tower.Section.Creep}
+	return rc.Check(a)
+}
+
+// saddleValues returns, for each rope group on one bank, the forces its
+// saddle puts on the column and what decides them: the symbols carry the
+// group's number (1 for the first group of the description).
+func (m *model) saddleValues(side Side, cs CaseState) []check.Value {
+	var vals []check.Value
+	for i, gs := range cs.Groups {
+		k := strconv.Itoa(i + 1)
+		lf := gs.Saddle[side]
+		of := " at the " + gs.Group + " saddle"
+		vals = append(vals,
+			check.Of("T_s,"+k, "span-side rope tension"+of, gs.Tension[side]),
+			check.Of("T_b,"+k, "backstay tension"+of, gs.Backstay[side]),
+			check.Of("θ_"+k, "wrap angle of the rope"+of, lf.Wrap),
+			check.Of("V_"+k, "vertical force on the column"+of, lf.Vertical),
+			check.Of("H_u0,"+k, "unbalanced horizontal force of the ropes had nothing moved (before friction or rendering)"+of, gs.Unbalance[side]),
+			check.Of("H_u,"+k, "unbalanced horizontal force of the ropes as they settle"+of, lf.Unbalance),
+			check.Of("H_"+k, "horizontal force reaching the column"+of, lf.Horizontal),
+		)
+		switch saddleKind(m.bank(side).Tower.Saddle) {
+		case tower.Sliding:
+			vals = append(vals, check.Of("μN_"+k, "friction limit of the sliding saddle"+of, lf.Limit))
+			fallthrough
+		case tower.Roller:
+			vals = append(vals, check.Of("Δ_"+k, "travel of the saddle from its reference place, toward the span"+of, lf.Offset))
+		}
+		if s := m.saddle(side, m.groups[i], 0); s.Kind == tower.Fixed && s.Groove == tower.FrictionGroove && lf.Wrap > 0 {
+			if k2, err := tower.CapstanBound(s.GrooveFriction, lf.Wrap); err == nil {
+				vals = append(vals, check.Of("e^μθ_"+k, "largest tension ratio the groove holds (rope-friction law)"+of, units.Ratio(k2)))
+			}
+		}
+	}
+	return vals
+}
+
+// merged gathers the results of the variants of groove behaviour into one
+// report: for every check (identifier, element, case, and its order among
+// equals) the worst variant's result, with a note naming the behaviour
+// that governs it.
+type merged struct {
+	results []check.Result
+	index   map[string]int
+	seen    map[string]int
+}
+
+func (g *merged) add(r check.Result, label string) {
+	if g.index == nil {
+		g.index, g.seen = map[string]int{}, map[string]int{}
+	}
+	base := r.ID + "\x00" + r.Element + "\x00" + r.Case
+	key := base + "\x00" + strconv.Itoa(g.seen[base+"\x00"+label])
+	g.seen[base+"\x00"+label]++
+	if label != "" {
+		r = r.WithNote("saddle behaviour not given: the bounds free groove and rope clamped were both checked; this is the one that governs: " + label)
+	}
+	i, ok := g.index[key]
+	if !ok {
+		g.index[key] = len(g.results)
+		g.results = append(g.results, r)
+		return
+	}
+	if worseOf(r, g.results[i]) {
+		g.results[i] = r
+	}
+}
+
+// worseOf reports whether a is worse than b: by status and ratio, and for
+// results with no limit by the larger demand.
+func worseOf(a, b check.Result) bool {
+	if a.NoLimit && b.NoLimit && a.Status == b.Status {
+		return a.Demand > b.Demand
+	}
+	return check.Worse(a, b)
+}
+
+// labelSink passes results to a merged report under a variant's label.
+type labelSink struct {
+	m     *merged
+	label string
+}
+
+func (s labelSink) add(r check.Result) { s.m.add(r, s.label) }
