@@ -146,6 +146,9 @@ func (a *Analysis) DesignBasis() DesignBasis {
 	db := DesignBasis{Bridge: b.Name, Library: Version(), Digest: b.Digest(), Source: a.Source}
 	walkValues(reflect.ValueOf(b), "", func(fi fieldInfo, v reflect.Value) {
 		e := BasisEntry{Name: fi.Path, Text: formatLeaf(v), Source: "given"}
+		if v.Kind() == reflect.String {
+			e.Text = v.String() // as given, without the quotes the tables show
+		}
 		if q, ok := v.Interface().(kinded); ok {
 			e.Value, e.Unit = si(v.Float(), q.Kind())
 		} else if l, ok := v.Interface().(Level); ok && !l.None {
