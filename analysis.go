@@ -60,8 +60,7 @@ type GroupState struct {
 	Tension, Backstay    [2]units.Force
 	Angle, BackstayAngle [2]units.Angle
 	Sag                  units.Length // at midspan below the chord
-	LowX, LowZ           units.Length // lowest point, z from the left saddle
-	LowWithin            bool         // false when the lowest point is a saddle
+	LowX, LowZ           units.Length // lowest point within the span, z from the left saddle
 	MaxTension           units.Force  // the largest of span and backstay tensions
 	// SaddleMoved reports whether the saddle moved on the column top: a
 	// sliding saddle that slid, or a roller; Travel is how far it moved

@@ -69,7 +69,8 @@ func cubicRoot(t *testing.T, a, c float64) float64 {
 // TestLevelSpanByHand checks the chain on testdata/level.json against a
 // hand calculation with published formulas:
 //
-// Rope (SOURCES §2, rope makers' formulas in the form of EN 12385-4):
+// Rope (rope makers' formulas in the form of EN 12385-4; package cable's
+// References):
 // 6x36-IWRC 26 mm 1770: MBF = 0.356·26²·1770/1000 = 425.97 kN,
 // mass = 0.409·26²/100 = 2.76484 kg/m, metallic area 0.460·26² = 310.96 mm².
 // Four ropes weigh 4·2.76484·9.80665 = 108.455 N per metre of rope.
@@ -82,7 +83,8 @@ func cubicRoot(t *testing.T, a, c float64) float64 {
 //
 // Crowd, EN 1991-2 cl. 5.3.2.1: q = 2 + 120/(50+30) = 3.5 kPa on 1.0 m.
 // Crowd over the full span, same temperature: the classical change-of-state
-// cubic H₂²[H₂ − H₁ + EA W₁²/(24H₁²)] = EA W₂²/24, W = w l (SOURCES §1),
+// cubic H₂²[H₂ − H₁ + EA W₁²/(24H₁²)] = EA W₂²/24, W = w l (Irvine, Cable
+// Structures, ch. 3, [M]),
 // solved here through gonum's eigen solver.
 //
 // Fixed saddle, free groove (one rope over it, tension continuous):
@@ -153,7 +155,7 @@ func TestLevelSpanByHand(t *testing.T) {
 	// Both routes are exact within the small-strain rule; what is left is
 	// the iteration tolerance (1e-10 of the span in rope length).
 	near(t, "full-crowd H (rope conserved over span and backstays)", float64(full.Groups[0].H), h2, 1e-7)
-	// Without the backstays the classical cubic (SOURCES §1) gives a larger
+	// Without the backstays the classical cubic (Irvine, ch. 3) gives a larger
 	// H; the rope the backstays give up lowers it.
 	cubic := cubicRoot(t, -h0+ea*w0*l*w0*l/(24*h0*h0), ea*(w0+crowd)*l*(w0+crowd)*l/24)
 	if !(float64(full.Groups[0].H) < cubic) {
@@ -188,25 +190,28 @@ func TestLevelSpanByHand(t *testing.T) {
 
 // levelEA is the axial stiffness of testdata/level.json's four 26 mm
 // 6x36-IWRC ropes: E 100 GPa (from memory, as in package cable) on the
-// metallic area 0.460 d² (SOURCES §2).
+// metallic area 0.460 d² (rope makers' factor in the form of EN 12385-4;
+// see package cable's References).
 const levelEA = 4 * 100e9 * 0.460 * 26 * 26 * 1e-6
 
 // levelLength returns the total unstretched rope length of
 // testdata/level.json (span 50 m and two 10 m × 3 m backstays over fixed
-// saddles, tension continuous) hanging with H under w per metre:
+// saddles, tension continuous) hanging with H under w per metre, by Hooke's
+// law on the unstretched length (ds = (1 + T/EA) dp):
 //
-//	L(H) = S(H) − (H l + w² l³/(12 H))/EA + 2 c/(1 + T_b/EA)
-//	S = (l/2)√(1+16n²) + l asinh(4n)/(8n),  n = w l/(8H)
+//	L(H) = ∫₀ˡ √(1+z'²)/(1 + H√(1+z'²)/EA) dx + 2 c/(1 + T_b/EA)
 //
-// S is the closed form of the level parabola's length (standard texts;
-// Hicks, Civil Engineering Formulas, ch. 10, gives its series), the stretch
-// is ∫T ds/EA by statics, T_b = √(H² + (w l/2)²), c = √(10² + 3²).
+// on the level parabola z' = (w/H)(l/2 − x) (general cable theorem), by
+// gonum's Gauss–Legendre quadrature, T_b = √(H² + (w l/2)²) the support
+// tension, c = √(10² + 3²) the backstay chord.
 func levelLength(h, w float64) float64 {
 	const l = 50.0
-	n := w * l / (8 * h)
-	s := l/2*math.Sqrt(1+16*n*n) + l*math.Asinh(4*n)/(8*n)
+	span := quad.Fixed(func(x float64) float64 {
+		a := math.Hypot(1, w/h*(l/2-x))
+		return a / (1 + h*a/levelEA)
+	}, 0, l, 60, quad.Legendre{}, 0)
 	tb := math.Hypot(h, w*l/2)
-	return s - (h*l+w*w*l*l*l/(12*h))/levelEA + 2*math.Hypot(10, 3)/(1+tb/levelEA)
+	return span + 2*math.Hypot(10, 3)/(1+tb/levelEA)
 }
 
 // levelSolve returns H under load w2 of the level bridge's rope that hangs
@@ -229,7 +234,7 @@ func levelSolve(h1, w1, w2 float64) float64 {
 // testdata/level.json. The ropes are analysed under factored loads (the
 // rope is non-linear: factor the loads, then solve), γG = 1.35 (EN 1990
 // Table A2.4(B), from memory); the resistance is EN 1993-1-11 cl. 6.2
-// (from memory, SOURCES §2): F_Rd = k_e F_min/(1.5 γ_R), k_e 0.9 and
+// (from memory): F_Rd = k_e F_min/(1.5 γ_R), k_e 0.9 and
 // γ_R 0.90 by default, for each of the four ropes.
 func TestPartialBasisByHand(t *testing.T) {
 	b := loadTestBridge(t, "level.json")
@@ -333,7 +338,7 @@ func TestLoadScaling(t *testing.T) {
 }
 
 // unstretchedByQuadrature returns the unstretched length of a rope state's
-// span, L₀ = ∫ (1 − T/EA) ds, by gonum's Gauss–Legendre quadrature on each
+// span, L₀ = ∫ ds/(1 + T/EA) (Hooke on the unstretched length), by gonum's Gauss–Legendre quadrature on each
 // half of the span (the loaded shape is smooth on each), with the slope
 // from a central difference of Z: a route independent of package cable's
 // closed forms.
@@ -342,7 +347,7 @@ func unstretchedByQuadrature(gs GroupState, span units.Length, ea float64) float
 	integrand := func(x float64) float64 {
 		dz := (float64(gs.shape.Z(units.Length(x+h))) - float64(gs.shape.Z(units.Length(x-h)))) / (2 * h)
 		ds := math.Sqrt(1 + dz*dz)
-		return ds * (1 - float64(gs.shape.Tension(units.Length(x)))/ea)
+		return ds / (1 + float64(gs.shape.Tension(units.Length(x)))/ea)
 	}
 	l := float64(span)
 	return quad.Fixed(integrand, 0, l/2, 40, quad.Legendre{}, 0) + quad.Fixed(integrand, l/2, l, 40, quad.Legendre{}, 0)
@@ -350,8 +355,8 @@ func unstretchedByQuadrature(gs GroupState, span units.Length, ea float64) float
 
 // TestRopeRenderedOverSaddles checks the rope that renders over the
 // saddles: whatever the numbers, the rope is conserved. The span and both
-// backstays together keep their unstretched length (scaled by thermal
-// expansion exp(α Δθ)); a roller balances the horizontal components,
+// backstays together keep their unstretched length (scaled by the linear
+// thermal strain 1 + α Δθ); a roller balances the horizontal components,
 // T_b cos β = H; a sliding saddle that slides passes μN to the column
 // (statics).
 func TestRopeRenderedOverSaddles(t *testing.T) {
@@ -372,7 +377,7 @@ func TestRopeRenderedOverSaddles(t *testing.T) {
 	mu := b.Banks.Left.Tower.Saddle.Friction
 	for _, cs := range a.Service {
 		gs := cs.Groups[0]
-		thermal := math.Exp(alpha * float64(cs.Case.Temperature-b.Climate.Reference))
+		thermal := 1 + alpha*float64(cs.Case.Temperature-b.Climate.Reference)
 		got := unstretchedByQuadrature(gs, b.Site.Span, ea)
 		want := ref * thermal
 		for side := Left; side <= Right; side++ {
@@ -402,7 +407,7 @@ func TestAnchorTypes(t *testing.T) {
 	b.Banks.Left.Anchor = AnchorSpec{Type: "deadman", Length: 1.2 * m, Width: 6 * m, Height: 1.5 * m, Depth: 3 * m}
 	b.Banks.Right.Anchor = AnchorSpec{Type: "rock", Bars: 4, BarDiameter: 32 * units.Millimetre,
 		BarStrength: 500 * units.Megapascal, HoleDiameter: 90 * units.Millimetre, BondLength: 4 * m, FreeLength: 2 * m}
-	b.Banks.Right.Soil = SoilSpec{Preset: "sound rock"}
+	b.Banks.Right.Soil = SoilSpec{Preset: "sound rock", Allowable: 2 * units.Megapascal} // rock bears by an allowable pressure
 	if err := b.Validate(); err != nil {
 		t.Fatal(err)
 	}

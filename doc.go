@@ -21,4 +21,36 @@
 //
 // The results support, and never replace, the design of a qualified
 // engineer; local codes and licensed practice govern.
+//
+// # References
+//
+// The root package composes the checks of packages cable, tower and
+// foundation (each lists its own sources) and adds the loads and the
+// serviceability checks, from:
+//
+//   - EN 1990:2002+A1:2005. Eurocode — Basis of structural design. Annex A2
+//     (application for bridges): combinations, partial factors γG, γQ and
+//     the combination factor ψ0 of wind; A2.4.3.2, comfort criteria.
+//   - EN 1991-1-1:2002. Eurocode 1 — Actions on structures — Part 1-1:
+//     densities and self-weight. Table A.1 (concrete, 24 kN/m³).
+//   - EN 1991-1-4:2005. Eurocode 1 — Part 1-4: Wind actions. Cl. 4.5, the
+//     basic and peak velocity pressure, air density 1.25 kg/m³; Figure 4.2,
+//     the exposure factor; cl. 7.9, force coefficients of cylinders.
+//   - EN 1991-2:2003. Eurocode 1 — Part 2: Traffic loads on bridges.
+//     Cl. 5.3.2.1, the uniform pedestrian load on footbridges,
+//     q = 2.0 + 120/(L + 30) kN/m² within 2.5–5.0 kN/m².
+//   - EN 1992-1-1:2004. Eurocode 2 — Design of concrete structures — Part
+//     1-1. Table 3.1 (concrete classes), 3.2.2 (reinforcing steel), 9.5.2
+//     (column reinforcement).
+//   - Hicks, T. G. (ed.). Civil Engineering Formulas. McGraw-Hill. Ch. 10,
+//     the length of a parabolic cable.
+//   - Živanović, S., Pavić, A. & Reynolds, P. (2005). Vibration
+//     serviceability of footbridges under human-induced excitation: a
+//     literature review. Journal of Sound and Vibration 279, 1–74. The
+//     frequency ranges walkers excite.
+//
+// Where a value is recalled rather than read in its source, the code says
+// "from memory"; a fact of the trade with no single source is "common
+// practice". The tags [R], [M] and [D] beside test values are defined in
+// the repository's DEVELOPERS.md.
 package sagspan

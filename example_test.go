@@ -22,9 +22,9 @@ func ExampleCheck() {
 	}
 	// Output:
 	// overall: pass
-	// cable.tension (walkway ropes): 801.3 kN of 1290 kN under "cold with crowd"
+	// cable.tension (walkway ropes): 801.6 kN of 1290 kN under "cold with crowd"
 	// cable.tension (handrail ropes): 11.06 kN of 168.0 kN under "wind"
-	// bridge.clearance (walkway): 1.500 m of 4.163 m under "hot with crowd"
+	// bridge.clearance (walkway): 1.500 m of 4.164 m under "hot with crowd"
 }
 
 func ExampleCrowdPressure() {

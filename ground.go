@@ -41,7 +41,7 @@ func (m *model) footingChecks(out sink, side Side, spec FootingSpec, service []C
 // lateral force. The whole lateral action is variable.
 func (m *model) footingAcross(s Side, spec FootingSpec, perm tower.Resultant, svc CaseState) ([]check.Result, error) {
 	f := m.padOf(s, spec)
-	f.B, f.L = spec.Width, spec.Length // turned: B along the lateral force
+	f.Along, f.Across = spec.Width, spec.Length // turned: along the lateral force
 	lateral := svc.Lateral[s]
 	moment := svc.LateralMoment[s] + units.MomentOf(lateral, spec.Thickness)
 	load := foundation.FootingLoad{
@@ -128,9 +128,9 @@ func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Re
 	for i, g := range svc.Groups {
 		t, p := g.Backstay[s], perm.Groups[i].Backstay[s]
 		angle := g.BackstayAngle[s]
-		pulls = append(pulls, foundation.Pull{Force: min(t, p), Angle: angle, X: x, Z: z})
+		pulls = append(pulls, foundation.AnchorPull{Force: min(t, p), Angle: angle, X: x, Z: z})
 		if t > p {
-			pulls = append(pulls, foundation.Pull{Force: t - p, Angle: angle, X: x, Z: z, Variable: true})
+			pulls = append(pulls, foundation.AnchorPull{Force: t - p, Angle: angle, X: x, Z: z, Variable: true})
 		}
 	}
 	soil := m.soils[s]
@@ -160,7 +160,7 @@ func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Re
 		UnitWeight: spec.UnitWeight, PassiveMobilisation: spec.Passive,
 	}
 	var err error
-	m.scratch, err = blk.AppendCheck(m.scratch[:0], pulls, soil, basis)
+	m.scratch, err = blk.AppendCheck(m.scratch[:0], pulls, soil, foundation.EC7, basis)
 	return m.scratch, err
 }
 
@@ -168,6 +168,6 @@ func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Re
 // B along the bridge, the column's footprint free of soil cover.
 func (m *model) padOf(s Side, spec FootingSpec) foundation.Footing {
 	t := m.bank(s).Tower
-	return foundation.Footing{B: spec.Length, L: spec.Width, Thickness: spec.Thickness, Depth: spec.Depth,
+	return foundation.Footing{Along: spec.Length, Across: spec.Width, Thickness: spec.Thickness, Depth: spec.Depth,
 		UnitWeight: t.UnitWeight, Footprint: units.Area(float64(t.Depth) * float64(t.Width))}
 }

@@ -31,7 +31,7 @@ type model struct {
 	fbasis foundation.Basis
 	// scratch and pulls are reused by each footing or anchor check.
 	scratch []check.Result
-	pulls   []foundation.Pull
+	pulls   []foundation.AnchorPull
 	// spanUnstretched is each group's unstretched span length in the
 	// reference state; backstays are each group's backstays.
 	spanUnstretched []float64
@@ -104,13 +104,13 @@ func (m *model) reference(g group, ref cable.State) error {
 	if err != nil {
 		return fmt.Errorf("sagspan: %s, reference state: %w", g.Name, err)
 	}
-	// Unstretched length: L₀ = S − (1/EA) ∫T ds with ∫T ds = H (l + h²/l) + D/H,
-	// D = ∫Q² dx = w² l³/12 for the uniform reference load (the small-strain
-	// rule; see cable.ChangeOfState).
-	l, h := float64(m.span.Length), float64(m.span.Rise)
-	w, hh := float64(ref.Load.Uniform), float64(ref.H)
-	integral := hh*(l+h*h/l) + w*w*l*l*l/12/hh
-	m.spanUnstretched = append(m.spanUnstretched, float64(shape.Length())-integral/float64(g.elastic.EA))
+	// Unstretched length by Hooke's law on the unstretched length, the law
+	// of every rope model here (see package cable).
+	l0, err := cable.UnstretchedLength(m.span, g.elastic.EA, ref.Load, ref.H)
+	if err != nil {
+		return fmt.Errorf("sagspan: %s, reference state: %w", g.Name, err)
+	}
+	m.spanUnstretched = append(m.spanUnstretched, float64(l0))
 	ta, tb := shape.SupportTensions()
 	aa, ab := shape.SupportAngles()
 	var bss [2]backstay

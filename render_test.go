@@ -48,6 +48,7 @@ func TestRenderDemo(t *testing.T) {
 	}
 	golden(t, "demo_report.txt", text.Bytes())
 	golden(t, "demo_report.md", md.Bytes())
+	golden(t, "demo_report.json", js.Bytes())
 	for _, out := range []string{text.String(), md.String(), js.String()} {
 		if !strings.Contains(out, "never replace") {
 			t.Error("a rendering lacks the safety caution")
@@ -68,6 +69,39 @@ func TestRenderDemo(t *testing.T) {
 	}
 	if back.Report.Status != a.Report.Status() || len(back.Cases) != len(a.Service) || len(back.Report.Governing) == 0 {
 		t.Errorf("JSON does not carry the analysis: %+v", back.Report.Status)
+	}
+	// A program reads a check's terms by symbol, without parsing notes.
+	type value struct {
+		Symbol string   `json:"symbol"`
+		Value  *float64 `json:"value"`
+		Unit   string   `json:"unit"`
+	}
+	var gov []struct {
+		ID     string  `json:"id"`
+		Values []value `json:"values"`
+	}
+	for _, raw := range back.Report.Governing {
+		gov = append(gov, struct {
+			ID     string  `json:"id"`
+			Values []value `json:"values"`
+		}{})
+		if err := json.Unmarshal(raw, &gov[len(gov)-1]); err != nil {
+			t.Fatal(err)
+		}
+	}
+	clearance := false
+	for _, r := range gov {
+		if r.ID != "bridge.clearance" {
+			continue
+		}
+		for _, v := range r.Values {
+			if v.Symbol == "c" && v.Value != nil && v.Unit == "m" && *v.Value > 0 {
+				clearance = true
+			}
+		}
+	}
+	if !clearance {
+		t.Error("the JSON report does not carry the clearance as a structured value")
 	}
 	if err := a.WriteSVG(&svg); err != nil {
 		t.Fatal(err)

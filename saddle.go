@@ -97,10 +97,11 @@ const maxFeedIterations = 60
 
 // analyse returns the state of the bridge under case lc.
 //
-// Each rope group's span is a change of state from its reference state
-// (cable.ChangeOfState). The rope runs on from the span over the saddles
-// into the backstays, so rope renders between them: the span's unstretched
-// length grows by what the backstays give up, Σ [l0_b,θ − c_b/(1 + T_b/EA)],
+// Each rope group's span hangs its unstretched length, that of the
+// reference state at the case's temperature (cable.StateForLength). The
+// rope runs on from the span over the saddles into the backstays, so rope
+// renders between them: the span's unstretched length grows by what the
+// backstays give up, Σ [l0_b,θ − c_b/(1 + T_b/EA)],
 // and the span and backstay tensions are solved together (the anchors and,
 // but for sliding and roller saddles, the saddles fixed).
 func (m *model) analyse(lc LoadCase) (CaseState, error) {
@@ -161,19 +162,14 @@ func (m *model) analyse(lc LoadCase) (CaseState, error) {
 func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64) (GroupState, error) {
 	g := m.groups[i]
 	e := g.elastic
-	// The rope fed into the span reaches the change of state as an
-	// equivalent change of the span's unstretched length, through the
-	// thermal term: exp(α' dθ') = exp(α dt)·(1 + feed/l0,θ).
-	thermal := math.Exp(float64(e.Alpha) * dt)
+	// Linear thermal strain from the reference temperature, on the span and
+	// the backstays alike (package cable's constitutive law).
+	thermal := 1 + float64(e.Alpha)*dt
 	l0 := m.spanUnstretched[i] * thermal
+	temp := m.ref[i].Temperature + units.Temperature(dt)
 	var gs GroupState
 	step := func(feed float64) (float64, error) {
-		grow := float64(e.Alpha)*dt + math.Log1p(feed/l0)
-		// Any positive α' serves; this one keeps dθ' within ±100 K, so the
-		// equivalent temperature stays an absolute temperature.
-		alphaEq := math.Max(1e-5, math.Abs(grow)/100)
-		eq := cable.Elastic{EA: e.EA, Alpha: units.ThermalExpansion(alphaEq)}
-		st, err := cable.ChangeOfState(m.span, eq, m.ref[i], load, m.ref[i].Temperature+units.Temperature(grow/alphaEq))
+		st, err := cable.StateForLength(m.span, e.EA, load, units.Length(l0+feed), temp)
 		if err != nil {
 			return 0, err
 		}
@@ -187,8 +183,8 @@ func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64
 		gs.Tension = [2]units.Force{ta, tb}
 		gs.Angle = [2]units.Angle{aa, ab}
 		gs.Sag = shape.Sag(m.b.Site.Span / 2)
-		gs.LowX, gs.LowZ, gs.LowWithin = shape.LowPoint()
-		gs.MaxTension = max(ta, tb)
+		gs.LowX, gs.LowZ = shape.LowPoint()
+		gs.MaxTension = shape.MaxTension()
 		given := 0.0
 		for side := Left; side <= Right; side++ {
 			bs := m.backstays[i][side]

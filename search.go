@@ -295,9 +295,13 @@ func footingCost(b Bridge, p Prices) float64 {
 // the number of workers: ties in cost go to the candidate listed first.
 //
 // Search returns an error for a bridge that does not validate, a space
-// that asks for anchor sizes on a bank without a block anchor, or when ctx
+// that asks for anchor sizes on a bank without a block anchor, a nil ctx
+// (pass context.Background() to search without a deadline), or when ctx
 // is cancelled.
 func Search(ctx context.Context, b Bridge, space SearchSpace, settings *SearchSettings) (*SearchResult, error) {
+	if ctx == nil {
+		return nil, fmt.Errorf("sagspan: search: nil context; pass context.Background() to search without a deadline")
+	}
 	if settings == nil {
 		settings = &SearchSettings{}
 	}

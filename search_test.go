@@ -5,6 +5,7 @@ import (
 	"errors"
 	"math"
 	"runtime"
+	"strings"
 	"testing"
 
 	"github.com/google/go-cmp/cmp"
@@ -172,6 +173,14 @@ func TestSearchEdgeCases(t *testing.T) {
 	}
 	if got := res.Analysis.Bridge.Ropes[1].Sag; got != 2.5*units.Metre {
 		t.Errorf("the best design's handrail sag is %v, want the bridge's own 2.5 m", got)
+	}
+}
+
+func TestSearchNilContext(t *testing.T) {
+	//lint:ignore SA1012 a nil context is what this test is about
+	_, err := Search(nil, Demo(), SearchSpace{Counts: []int{6}}, nil) //nolint:staticcheck
+	if err == nil || !strings.Contains(err.Error(), "nil context") {
+		t.Fatalf("nil context: got %v, want an error naming it", err)
 	}
 }
 

@@ -18,14 +18,7 @@ func (m *model) walkwayLow(cs CaseState) (units.Length, units.Length) {
 			continue
 		}
 		gs := cs.Groups[i]
-		x, z := gs.LowX, gs.LowZ
-		if !gs.LowWithin { // the lowest point of the span is then a saddle
-			x, z = 0, 0
-			if m.b.Site.Rise < 0 {
-				x, z = m.b.Site.Span, m.b.Site.Rise
-			}
-		}
-		z += g.Offset
+		x, z := gs.LowX, gs.LowZ+g.Offset
 		if z < low {
 			low, at = z, x
 		}
@@ -45,7 +38,12 @@ func (m *model) checkClearance(out sink, service []CaseState) {
 			float64(site.Freeboard), float64(clear)).
 			For("walkway", cs.Case.Name).
 			WithBasis("clearance of the lowest walkway underside above the design flood, characteristic loads; in wind the sag in the swung plane is taken as vertical, which is conservative (common practice)").
-			WithNote(fmt.Sprintf("lowest underside %s at x = %s; flood %s", soffit, x, site.Flood))
+			WithValues(
+				check.Of("z_w", "elevation of the lowest walkway underside", soffit),
+				check.Of("x_w", "where it lies, from the left saddle", x),
+				check.Of("z_f", "design flood elevation", site.Flood),
+				check.Of("c", "clearance above the flood", clear),
+			)
 		if clear <= 0 {
 			r.Status, r.Ratio = check.Fail, math.Inf(1)
 			r = r.WithNote("the walkway is at or below the design flood")
@@ -90,12 +88,10 @@ func (m *model) checkFrequencies(a *Analysis, perm CaseState, opts *Options) err
 		w += m.ref[i].Load.Uniform
 		ea += g.elastic.EA
 	}
-	// The sag that the total weight and tension hang at, w l²/(8H): the
-	// weighted harmonic mean of the groups' sags.
-	l := float64(m.b.Site.Span)
-	sag := units.Length(float64(w) * l * l / (8 * float64(h)))
+	// The bridge hangs at the sag its total weight and tension give,
+	// w l²/(8H): the weighted harmonic mean of the groups' sags.
 	mass := units.MassPerLength(float64(w) / units.StandardGravity)
-	modes, err := cable.Frequencies(m.span, h, mass, sag, ea)
+	modes, err := cable.Frequencies(m.span, h, mass, ea)
 	if err != nil {
 		return fmt.Errorf("sagspan: natural frequencies: %w", err)
 	}

@@ -107,7 +107,7 @@ func BenchmarkElasticChangeOfState(b *testing.B) {
 func BenchmarkFrequencies(b *testing.B) {
 	b.ReportAllocs()
 	for i := 0; i < b.N; i++ {
-		m, err := cable.Frequencies(cable.Span{Length: 100}, 245.25e3, 100, 5, 1e9)
+		m, err := cable.Frequencies(cable.Span{Length: 100}, 245.25e3, 100, 1e9)
 		sinkForce, sinkErr = units.Force(m.Symmetric), err
 	}
 }

@@ -198,7 +198,7 @@ func newCatenary(s Span, w, h float64) (Catenary, error) {
 	c := Catenary{span: s, w: w, h: h, a: a, x0: l/2 - a*u}
 	va, vb := c.Reactions()
 	ta, tb := c.SupportTensions()
-	xl, zl, _ := c.LowPoint()
+	xl, zl, _ := c.Vertex()
 	if !allFinite(c.x0, float64(va), float64(vb), float64(ta), float64(tb), float64(c.Length()),
 		float64(c.Sag(s.Length/2)), float64(xl), float64(zl)) {
 		return Catenary{}, errOutOfRange
@@ -261,8 +261,16 @@ func (c Catenary) Length() units.Length {
 	return units.Length(math.Hypot(float64(c.span.Rise), 2*c.a*math.Sinh(l/(2*c.a))))
 }
 
-// LowPoint returns the vertex (x₀, −2a sinh²(x₀/(2a))).
-func (c Catenary) LowPoint() (x, z units.Length, within bool) {
+// Vertex returns the vertex (x₀, −2a sinh²(x₀/(2a))), on the curve
+// extended beyond a support when it lies outside the span.
+func (c Catenary) Vertex() (x, z units.Length, within bool) {
 	sh := math.Sinh(c.x0 / (2 * c.a))
 	return units.Length(c.x0), units.Length(-2 * c.a * sh * sh), c.x0 >= 0 && c.x0 <= float64(c.span.Length)
 }
+
+// LowPoint returns the lowest point of the rope within the span.
+func (c Catenary) LowPoint() (x, z units.Length) { return lowPoint(c) }
+
+// MaxTension returns the largest tension in the span, at the higher-tension
+// support.
+func (c Catenary) MaxTension() units.Force { return maxTension(c) }

@@ -9,7 +9,7 @@ import (
 )
 
 func TestCatenaryReferences(t *testing.T) {
-	// SOURCES §1 [D], computed there from y = a(cosh(x/a) − 1); here the
+	// [D] computed by hand from y = a(cosh(x/a) − 1); here the
 	// values come from the closed forms in u and k and from the length
 	// and sag solvers, a different route.
 	lv, err := cable.CatenaryWithTension(cable.Span{Length: 100}, units.KilonewtonPerMetre, 100*units.Kilonewton)

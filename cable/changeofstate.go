@@ -3,6 +3,8 @@ package cable
 import (
 	"math"
 
+	"gonum.org/v1/gonum/integrate/quad"
+
 	"github.com/sagspan/sagspan/units"
 )
 
@@ -14,11 +16,14 @@ type Elastic struct {
 }
 
 // State is a load on the ropes, the horizontal tension it hangs with and
-// the rope temperature.
+// the rope temperature. Unstretched is the rope's unstretched length at
+// that temperature when the state was found by ChangeOfState or
+// StateForLength (zero in a state built by hand).
 type State struct {
 	Load        Load
 	H           units.Force
 	Temperature units.Temperature
+	Unstretched units.Length
 }
 
 func (e Elastic) validate() error {
@@ -39,22 +44,103 @@ func validTemperature(name string, t units.Temperature) error {
 }
 
 // thermalFactor returns the ratio of unstretched lengths after a
-// temperature change dθ: exp(α dθ), the integral of a constant coefficient
-// α = (1/L) dL/dθ. It differs from 1 + α dθ by (α dθ)²/2 (1.8e-7 for
-// 12e-6/K over 50 K) and makes a change of state and its reverse cancel
-// exactly.
-func thermalFactor(alpha, dt float64) float64 { return math.Exp(alpha * dt) }
+// temperature change dθ from the state one starts from: 1 + α dθ, the
+// linear thermal strain of the package's constitutive law (see the package
+// doc). Chaining changes of state through intermediate temperatures
+// differs from one direct change by about (α dθ)², 1.4e-7 for 12e-6/K over
+// 30 K: start every change from the same reference state.
+func thermalFactor(alpha, dt float64) float64 { return 1 + alpha*dt }
 
-// unstretched returns the unstretched length of the Loaded rope of load b
-// and horizontal tension h, by the small-strain rule
+// The Gauss–Legendre rule on [−1, 1] used for the elastic part of the
+// unstretched length, 8 points (exact for polynomials of degree 15):
+// nodes and weights from gonum's quad.Legendre.
+var glNodes, glWeights = legendre(8)
+
+func legendre(n int) (x, w []float64) {
+	x, w = make([]float64, n), make([]float64, n)
+	quad.Legendre{}.FixedLocations(x, w, -1, 1)
+	return x, w
+}
+
+// maxSlopeStep is the widest range of slope p over which one application
+// of the Gauss–Legendre rule integrates the elastic part of the unstretched
+// length: k a²/(1 + k a), a = √(1+p²), is analytic but for branch points at
+// p = ±i, so on a slope range of width 1 the 8-point rule errs by about
+// (2+√5)^−16 ≈ 1e-10 of a term that is itself the strain (about 1e-3) of
+// the length.
+const maxSlopeStep = 1.0
+
+// unstretched returns the unstretched length L₀ of the Loaded rope of load
+// sections xs, qs and horizontal tension h, and dL₀/dH, by Hooke's law on
+// the unstretched length (ds = (1 + T/EA) dp, p the unstretched
+// coordinate):
 //
-//	L₀ = S − (1/EA) ∫ T ds,  ∫ T ds = H ∫ (1 + z'²) dx = H (L + h²/L) + D/H
+//	L₀ = ∫ ds/(1 + T/EA) = S − C,   C = ∫ k a²/(1 + k a) dx
+//	T = H a,  a = √(1 + z'²),  k = H/EA
 //
-// with D = ∫ Q² dx (∫ Q dx = 0 over the span).
-func unstretched(s Span, b beam, d, h, ea float64) float64 {
-	L, rise := float64(s.Length), float64(s.Rise)
-	c0 := rise / L
-	return b.arcLength(c0, h) - (h*(L+rise*c0)+d/h)/ea
+// S (the arc length) and dS/dH are exact (arcLengthDH); C, the elastic
+// shortening (about the strain times S), by Gauss–Legendre on each piece
+// of uniform load, split so that no application spans a slope range wider
+// than maxSlopeStep, with
+//
+//	dC/dH = ∫ [a²/EA + k (2 + k a) z' (c₀ − z')/H] / (1 + k a)² dx.
+func unstretched(xs, qs []float64, c0, h, ea float64) (l0, dl0 float64) {
+	S, dS := arcLengthDH(xs, qs, c0, h)
+	k := h / ea
+	var c, dc float64
+	for i := 1; i < len(xs); i++ {
+		dx := xs[i] - xs[i-1]
+		if dx <= 0 {
+			continue
+		}
+		p0, p1 := c0-qs[i-1]/h, c0-qs[i]/h
+		n := max(1, int(math.Ceil(math.Abs(p1-p0)/maxSlopeStep)))
+		for j := range n {
+			a0 := p0 + (p1-p0)*float64(j)/float64(n)
+			b0 := p0 + (p1-p0)*float64(j+1)/float64(n)
+			mid, half := (a0+b0)/2, (b0-a0)/2
+			var sc, sd float64
+			for m, t := range glNodes {
+				p := mid + half*t
+				a := sqrt1p(p)
+				den := 1 + k*a
+				sc += glWeights[m] * a * a / den
+				sd += glWeights[m] * (a*a/ea + k*(2+k*a)*p*(c0-p)/h) / (den * den)
+			}
+			// each sub-range covers dx/n of the span: ∫ f dx = (dx/n)·mean
+			c += k * sc / 2 * dx / float64(n)
+			dc += sd / 2 * dx / float64(n)
+		}
+	}
+	return S - c, dS - dc
+}
+
+// UnstretchedLength returns the unstretched length of the rope of axial
+// stiffness ea that hangs over s in the Loaded shape of load l under
+// horizontal tension h, by Hooke's law on the unstretched length:
+//
+//	L₀ = ∫ ds/(1 + T/EA)
+//
+// the same law as the elastic catenary's and a straight backstay's
+// c/(1 + T/EA). Special cases: invalid span, load or stiffness, or H not
+// positive, give ErrInvalid.
+func UnstretchedLength(s Span, ea units.AxialStiffness, l Load, h units.Force) (units.Length, error) {
+	if err := l.Validate(s); err != nil {
+		return 0, err
+	}
+	if err := positive("EA", float64(ea)); err != nil {
+		return 0, err
+	}
+	if err := positive("horizontal tension", float64(h)); err != nil {
+		return 0, err
+	}
+	var xbuf, qbuf [16]float64
+	xs, qs := newBeam(s, l).sections(xbuf[:], qbuf[:])
+	l0, _ := unstretched(xs, qs, float64(s.Rise)/float64(s.Length), float64(h), float64(ea))
+	if !finite(l0) || l0 <= 0 {
+		return 0, errOutOfRange
+	}
+	return units.Length(l0), nil
 }
 
 // validateChange checks the inputs of a change of state.
@@ -78,48 +164,82 @@ func validateChange(s Span, e Elastic, from State, to Load, temp units.Temperatu
 }
 
 // ChangeOfState returns the state under load to at temperature temp of the
-// same rope (same unstretched length) that carries from. It is exact for
-// inextensible-geometry funicular shapes (Loaded) of any load pattern and
-// inclination, with small-strain elastic stretch and thermal expansion:
+// same rope that carries from: its unstretched length, L₀ at from's
+// temperature, becomes L₀(1 + α(θ₂ − θ₁)) (linear thermal strain), and the
+// new H hangs that length in the Loaded shape of the new load by Hooke's
+// law on the unstretched length (see StateForLength):
 //
-//	S(H₂) − (1/EA)∫T₂ ds = [S(H₁) − (1/EA)∫T₁ ds] · exp(α (θ₂ − θ₁))
+//	∫ ds₂/(1 + T₂/EA) = (1 + α(θ₂ − θ₁)) ∫ ds₁/(1 + T₁/EA)
 //
-// where S is the exact arc length of the Loaded shape. Method: within the
-// small-strain model (strains of a few per cent at most) the left side
-// decreases with H₂; the root is found by Newton's method in H₂ with
-// analytic derivative, started from the classical cubic's answer
-// (ChangeOfStateCubic) and safeguarded by bisection inside the bracket that
-// the iterates build; typically 3–4 evaluations. Accuracy: to rounding
-// (relative 1e-13 in H for ordinary sag ratios). Special cases: a rope too
-// slack or too stiff for float64 gives ErrInvalid; so does a state whose
-// strain H/EA would exceed maxStrain, beyond the small-strain model; failure
-// to bracket or converge otherwise gives ErrNoConvergence.
+// It is exact for inextensible-geometry funicular shapes (Loaded) of any
+// load pattern and inclination, and agrees with the elastic catenary and a
+// straight backstay hung on the same unstretched length (one constitutive
+// law; see the package doc). The State returned carries the unstretched
+// length. Special cases: a rope too slack or too stiff for float64 gives
+// ErrInvalid; so does a state whose strain H/EA would exceed maxStrain;
+// failure to bracket or converge otherwise gives ErrNoConvergence.
 func ChangeOfState(s Span, e Elastic, from State, to Load, temp units.Temperature) (State, error) {
 	if err := validateChange(s, e, from, to, temp); err != nil {
 		return State{}, err
 	}
 	ea := float64(e.EA)
-	b1, b2 := newBeam(s, from.Load), newBeam(s, to)
-	d1, d2 := b1.shearSquared(), b2.shearSquared()
-	h1 := float64(from.H)
-	l0 := unstretched(s, b1, d1, h1, ea) * thermalFactor(float64(e.Alpha), float64(temp-from.Temperature))
+	c0 := float64(s.Rise) / float64(s.Length)
+	var xbuf, qbuf [16]float64
+	xs, qs := newBeam(s, from.Load).sections(xbuf[:], qbuf[:])
+	l1, _ := unstretched(xs, qs, c0, float64(from.H), ea)
+	l0 := l1 * thermalFactor(float64(e.Alpha), float64(temp-from.Temperature))
 	if !finite(l0) || l0 <= 0 {
 		return State{}, errOutOfRange
 	}
-	L, rise := float64(s.Length), float64(s.Rise)
-	c0 := rise / L
-	var xbuf, qbuf [16]float64
-	xs, qs := b2.sections(xbuf[:], qbuf[:])
-	// g(H) = L₀ − [S − ∫T ds/EA], increasing in H.
-	g := func(h float64) (float64, float64) {
-		S, dS := arcLengthDH(xs, qs, c0, h)
-		v := l0 - (S - (h*(L+rise*c0)+d2/h)/ea)
-		dE := ((L + rise*c0) - d2/(h*h)) / ea
-		return v, -(dS - dE)
+	return stateForLength(s, ea, to, l0, temp)
+}
+
+// StateForLength returns the state under load l at temperature temp of the
+// rope of axial stiffness ea whose unstretched length, at that
+// temperature, is l0: the H at which the Loaded shape of l has
+//
+//	∫ ds/(1 + T/EA) = l0.
+//
+// Method: the left side decreases with H; Newton's method in H with the
+// analytic derivative, started from the classical change-of-state cubic's
+// estimate and safeguarded by bisection inside the bracket that the
+// iterates build; typically 3–5 evaluations, to rounding (relative 1e-13 in
+// H for ordinary sag ratios). Special cases as ChangeOfState.
+func StateForLength(s Span, ea units.AxialStiffness, l Load, l0 units.Length, temp units.Temperature) (State, error) {
+	if err := l.Validate(s); err != nil {
+		return State{}, err
 	}
-	h0 := cubicEstimate(s, ea, float64(e.Alpha), d1, d2, h1, float64(temp-from.Temperature))
+	if err := positive("EA", float64(ea)); err != nil {
+		return State{}, err
+	}
+	if err := positive("unstretched length", float64(l0)); err != nil {
+		return State{}, err
+	}
+	if err := validTemperature("temperature", temp); err != nil {
+		return State{}, err
+	}
+	return stateForLength(s, float64(ea), l, float64(l0), temp)
+}
+
+func stateForLength(s Span, ea float64, to Load, l0 float64, temp units.Temperature) (State, error) {
+	L, c := float64(s.Length), float64(s.Chord())
+	c0 := float64(s.Rise) / L
+	b := newBeam(s, to)
+	var xbuf, qbuf [16]float64
+	xs, qs := b.sections(xbuf[:], qbuf[:])
+	// g(H) = L₀ − L₀(H), increasing in H.
+	g := func(h float64) (float64, float64) {
+		v, dv := unstretched(xs, qs, c0, h, ea)
+		return l0 - v, -dv
+	}
+	// Start: the cubic H³ + bH² = κD, with the length excess over the chord
+	// taken as cos³β D/(2LH²)·… and the stretch as H L/(EA cos²β), so that
+	// b = EA cos²β (L₀ − c)/L (see ChangeOfStateCubic).
+	cb := L / c
+	kappa := ea * cb * cb * cb * cb * cb / (2 * L)
+	h0 := cubicRoot(ea*cb*cb*(l0-c)/L, kappa*b.shearSquared())
 	if !(h0 > 0) || !finite(h0) {
-		h0 = h1
+		h0 = ea * 1e-3
 	}
 	h2, ok := newtonPositive(g, h0, 1e-14, 100)
 	if !ok {
@@ -134,7 +254,7 @@ func ChangeOfState(s Span, e Elastic, from State, to Load, temp units.Temperatur
 	if !finite(h2) || h2 <= 0 {
 		return State{}, errOutOfRange
 	}
-	return State{Load: to, H: units.Force(h2), Temperature: temp}, nil
+	return State{Load: to, H: units.Force(h2), Temperature: temp, Unstretched: units.Length(l0)}, nil
 }
 
 // maxStrain is the largest strain H/EA the small-strain change of state
@@ -158,9 +278,10 @@ func cubicEstimate(s Span, ea, alpha, d1, d2, h1, dt float64) float64 {
 //
 //	H₂²[H₂ − H₁ + EA W₁²/(24 H₁²) + EA α Δθ] = EA W₂²/24,  W = w L
 //
-// (standard cable texts; SOURCES §1, W the whole span's weight), which
+// (standard cable texts, e.g. Irvine, Cable Structures, ch. 3; W the whole
+// span's weight, not the weight per metre), which
 // takes the length excess as D/(2H²) with D = ∫Q² dx = w²L³/12 and the
-// stretch as H L/EA. For an inclined span it uses the same linearisation
+// stretch as H L/EA (the SSNL114 validation case, see References, checks it). For an inclined span it uses the same linearisation
 // about the chord (angle β):
 //
 //	H₂²[H₂ − H₁ + κ D₁/H₁² + EA cos β α Δθ] = κ D₂,  κ = EA cos⁵β/(2L)
@@ -196,7 +317,7 @@ func ChangeOfStateCubic(s Span, e Elastic, from State, to units.LoadPerLength, t
 // a walkway hung along it). It is exact within the elastic catenary's
 // small-strain model:
 //
-//	L₀' = L₀ exp(α (θ₂ − θ₁)),  w' = weight · L₀/L₀'   (total weight kept)
+//	L₀' = L₀ (1 + α (θ₂ − θ₁)),  w' = weight · L₀/L₀'   (total weight kept)
 //
 // and then NewElasticCatenary. Source: the elastic catenary of Irvine,
 // Cable Structures, 1981, ch. 2 (from memory); checked against the code_aster

@@ -8,10 +8,10 @@ import (
 	"github.com/sagspan/sagspan/units"
 )
 
-// unstretchedByQuadrature returns S − (1/EA)∫T ds of the Loaded shape by
-// gonum quadrature of √(1+z'²) and H(1+z'²) on each piece, z' from the
-// shape's tension (T = H√(1+z'²)): an independent evaluation of the
-// quantity ChangeOfState conserves.
+// unstretchedByQuadrature returns L₀ = ∫ ds/(1 + T/EA) of the Loaded shape
+// by gonum quadrature on each piece, ds = (T/H) dx from the shape's tension
+// (T = H√(1+z'²)): an independent evaluation of the quantity ChangeOfState
+// conserves (Hooke's law on the unstretched length).
 func unstretchedByQuadrature(t *testing.T, s cable.Span, l cable.Load, h units.Force, ea float64) float64 {
 	t.Helper()
 	sh, err := cable.NewLoaded(s, l, h)
@@ -23,15 +23,15 @@ func unstretchedByQuadrature(t *testing.T, s cable.Span, l cable.Load, h units.F
 		xs = append(xs, float64(p.From), float64(p.To))
 	}
 	sortFloats(xs)
-	var S, E float64
+	var l0 float64
 	for i := 1; i < len(xs); i++ {
-		S += integrate(func(x float64) float64 { return float64(sh.Tension(units.Length(x)) / h) }, xs[i-1], xs[i])
-		E += integrate(func(x float64) float64 {
+		// ds/(1 + T/EA) with ds = (T/H) dx: Hooke's law on the unstretched length
+		l0 += integrate(func(x float64) float64 {
 			tt := float64(sh.Tension(units.Length(x)))
-			return tt * tt / float64(h)
+			return tt / float64(h) / (1 + tt/ea)
 		}, xs[i-1], xs[i])
 	}
-	return S - E/ea
+	return l0
 }
 
 func sortFloats(xs []float64) {
@@ -67,14 +67,28 @@ func TestChangeOfStateConservesLength(t *testing.T) {
 		}
 		l1 := unstretchedByQuadrature(t, c.span, c.from, from.H, ea)
 		l2 := unstretchedByQuadrature(t, c.span, c.to, got.H, ea)
-		want := l1 * math.Exp(float64(e.Alpha)*float64(c.temp-t20))
+		// linear thermal strain from the start state's temperature
+		want := l1 * (1 + float64(e.Alpha)*float64(c.temp-t20))
 		approx(t, c.name+": unstretched length kept", l2, want, 1e-12)
-		// there and back returns the start
-		back, err := cable.ChangeOfState(c.span, e, got, c.from, t20)
+		approx(t, c.name+": unstretched length carried", float64(got.Unstretched), want, 1e-12)
+		// there and back at one temperature returns the start
+		there, err := cable.ChangeOfState(c.span, e, from, c.to, t20)
+		if err != nil {
+			t.Fatal(err)
+		}
+		back, err := cable.ChangeOfState(c.span, e, there, c.from, t20)
 		if err != nil {
 			t.Fatal(err)
 		}
 		approx(t, c.name+": round trip H", float64(back.H), float64(from.H), 1e-11)
+		// there and back through another temperature: the linear thermal
+		// strain, measured from each start, leaves (1 + αΔθ)(1 − αΔθ)
+		back, err = cable.ChangeOfState(c.span, e, got, c.from, t20)
+		if err != nil {
+			t.Fatal(err)
+		}
+		adt := float64(e.Alpha) * float64(c.temp-t20)
+		approx(t, c.name+": thermal round trip length", unstretchedByQuadrature(t, c.span, c.from, back.H, ea), l1*(1-adt*adt), 1e-12)
 		// mirrored span and load give the same H
 		mf, mt := mirrorLoad(c.span, c.from), mirrorLoad(c.span, c.to)
 		mg, err := cable.ChangeOfState(c.span.Mirror(), e, cable.State{Load: mf, H: from.H, Temperature: t20}, mt, c.temp)
@@ -112,7 +126,7 @@ func TestChangeOfStateIdentityAndTrends(t *testing.T) {
 }
 
 func TestChangeOfStateCubic(t *testing.T) {
-	// SOURCES §1 [D]: the SSNL114 cable from its 0 °C state, +39.26 K, by the
+	// [D] by hand: the SSNL114 cable from its 0 °C state, +39.26 K, by the
 	// classical cubic: H₂ 10 244 N, sag 8.193 m (against the exact 10 242 N,
 	// 8.195 m). The state at 0 °C is taken from the elastic catenary solver,
 	// and the load per horizontal metre as the total weight over the span.
@@ -129,7 +143,7 @@ func TestChangeOfStateCubic(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	// These [D] values were computed in SOURCES with the same cubic, so the
+	// These [D] values were computed by hand with the same cubic, so the
 	// check is of the implementation against a hand evaluation of one
 	// formula, to the rounding of its 4–5 figures.
 	approx(t, "cubic H₂", float64(cub.H), 10244, 1e-4)
@@ -145,7 +159,7 @@ func TestChangeOfStateCubic(t *testing.T) {
 	approx(t, "funicular vs elastic catenary", float64(ex.H), float64(hot.Horizontal()), 2e-3)
 
 	// Classical cubic against the hand form H₂²[H₂ − H₁ + EA W₁²/(24H₁²) + EA α Δθ] = EA W₂²/24
-	// (SOURCES §1 [R]) by gonum-free direct substitution: the residual vanishes.
+	// (Irvine, Cable Structures, ch. 3, [M]) by direct substitution: the residual vanishes.
 	lv := cable.Span{Length: 90}
 	e2 := cable.Elastic{EA: 30e6, Alpha: 12e-6}
 	f := cable.State{Load: cable.Load{Uniform: 1500}, H: 180e3, Temperature: t0}

@@ -74,7 +74,7 @@ func NewElasticCatenary(s Span, r ElasticRope) (ElasticCatenary, error) {
 	e.h, e.v = h, v
 	va, vb := e.Reactions()
 	ta, tb := e.SupportTensions()
-	xl, zl, _ := e.LowPoint()
+	xl, zl, _ := e.Vertex()
 	// the stretch ∫T ds/EA is at most L₀ T_max/EA
 	stretch := float64(r.Unstretched) * math.Max(float64(ta), float64(tb)) / float64(r.EA)
 	if !allFinite(h, float64(va), float64(vb), float64(ta), float64(tb), stretch, float64(xl), float64(zl)) {
@@ -330,11 +330,18 @@ func (e ElasticCatenary) Strain() float64 {
 	return e.h * arcMean((e.v-W)/e.h, e.v/e.h, W/e.h) / EA
 }
 
-// LowPoint returns the point where V(s) = 0, s = L₀ − V/w, on the curve
+// Vertex returns the point where V(s) = 0, s = L₀ − V/w, on the curve
 // or on its analytic extension beyond a support.
-func (e ElasticCatenary) LowPoint() (x, z units.Length, within bool) {
+func (e ElasticCatenary) Vertex() (x, z units.Length, within bool) {
 	L0, w := float64(e.rope.Unstretched), float64(e.rope.Weight)
 	s := L0 - e.v/w
 	xv, zv := e.at(s)
 	return units.Length(xv), units.Length(zv), s >= 0 && s <= L0
 }
+
+// LowPoint returns the lowest point of the rope within the span.
+func (e ElasticCatenary) LowPoint() (x, z units.Length) { return lowPoint(e) }
+
+// MaxTension returns the largest tension in the span, at the higher-tension
+// support.
+func (e ElasticCatenary) MaxTension() units.Force { return maxTension(e) }

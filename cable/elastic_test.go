@@ -10,7 +10,7 @@ import (
 )
 
 // ssnl114 is the cable of the code_aster validation case SSNL114
-// (SOURCES §1 [R]): level span 325 m, unstretched length = span,
+// ([R] code_aster validation manual, SSNL114; see References): level span 325 m, unstretched length = span,
 // A 2.2783e-4 m², E 5.70e10 Pa, ρ 2844.23 kg/m³, g 9.81 m/s², α 2.3e-5/K.
 func ssnl114() (cable.Span, cable.ElasticRope, units.ThermalExpansion) {
 	const area = 2.2783e-4
@@ -38,7 +38,7 @@ func TestElasticSSNL114(t *testing.T) {
 		t.Fatal(err)
 	}
 	approx(t, "SSNL114 sag after +39.26 K", float64(hot.Sag(162.5)), 8.195, 1e-3)
-	// SOURCES §1 [D]: exact H 10 242 N, computed with the weight per
+	// [D] H 10 242 N, computed by hand from the elastic catenary with the weight per
 	// unstretched metre kept as the rope lengthens. Check like for like: a
 	// rope of unstretched length 325·(1 + αΔθ) at the old weight per metre.
 	long := rope
@@ -51,16 +51,21 @@ func TestElasticSSNL114(t *testing.T) {
 	// This package's own model keeps the total weight: 0.09 % less load, H
 	// lower by about as much.
 	approx(t, "SSNL114 H after +39.26 K, total weight kept", float64(hot.Horizontal()), 10242*(1-0.0009), 3e-4)
-	// back to 0 °C returns the start
+	// back to 0 °C: the linear thermal strain, measured from each start,
+	// leaves the unstretched length (1 + αΔθ)(1 − αΔθ) of the start and
+	// the total weight as it was
 	back, err := cable.ElasticChangeOfState(sp, hot.Rope(), alpha, t0+39.26, t0, hot.Rope().Weight)
 	if err != nil {
 		t.Fatal(err)
 	}
-	approx(t, "SSNL114 round trip H", float64(back.Horizontal()), float64(e.Horizontal()), 1e-11)
+	adt := float64(alpha) * 39.26
+	approx(t, "SSNL114 round trip length", float64(back.Rope().Unstretched), 325*(1+adt)*(1-adt), 1e-14)
+	approx(t, "SSNL114 round trip weight", float64(back.Rope().Weight.Times(back.Rope().Unstretched)), float64(rope.Weight.Times(rope.Unstretched)), 1e-14)
 }
 
 func TestElasticIrvineCheck(t *testing.T) {
-	// SOURCES §1 [D]: H 100 kN, V 80 kN, w 1 kN/m, L₀ 120 m, EA 1e5 kN give
+	// [D] Irvine's forward formulas (Cable Structures, ch. 2) by hand: H 100 kN,
+	// V 80 kN, w 1 kN/m, L₀ 120 m, EA 1e5 kN give
 	// l 112.39036, h 20.38319 m (forward formulas). Here the solver goes the
 	// other way, from l and h to H and V.
 	sp := cable.Span{Length: 112.39036, Rise: 20.38319}

@@ -89,7 +89,7 @@ func checkShape(t *testing.T, name string, s cable.Shape, total, loadMomentA flo
 	}
 	approx(t, name+" length vs quadrature", float64(s.Length()), S, 1e-8)
 	// low point: lowest where within; slope zero there
-	x0, z0, within := s.LowPoint()
+	x0, z0, within := s.Vertex()
 	if within {
 		for _, x := range []float64{0, 0.25, 0.5, 0.75, 1} {
 			if z := float64(s.Z(units.Length(x * L))); z < float64(z0)-1e-9*L {
@@ -97,6 +97,27 @@ func checkShape(t *testing.T, name string, s cable.Shape, total, loadMomentA flo
 			}
 		}
 		approx(t, name+" z at low point", float64(s.Z(x0)), float64(z0), 1e-9)
+	}
+	// lowest point within the span: no sampled point lies below it, and it
+	// is the vertex when that is within, else a support
+	lx, lz := s.LowPoint()
+	if lx < 0 || float64(lx) > L {
+		t.Errorf("%s: lowest point x = %g outside the span", name, float64(lx))
+	}
+	for i := 0; i <= 100; i++ {
+		x := units.Length(float64(i) / 100 * L)
+		if z := s.Z(x); float64(z) < float64(lz)-1e-9*L {
+			t.Errorf("%s: z(%g) = %g below the lowest point %g", name, float64(x), float64(z), float64(lz))
+		}
+	}
+	approxAbs(t, name+" z at lowest point", float64(s.Z(lx)), float64(lz), 1e-9*L)
+	// maximum tension: no sampled tension exceeds it, and it is reached
+	tmax := float64(s.MaxTension())
+	approx(t, name+" max tension", tmax, math.Max(float64(ta), float64(tb)), 0)
+	for i := 0; i <= 100; i++ {
+		if tx := float64(s.Tension(units.Length(float64(i) / 100 * L))); tx > tmax*(1+1e-12) {
+			t.Errorf("%s: tension %g at %d %% of the span above the maximum %g", name, tx, i, tmax)
+		}
 	}
 }
 
@@ -120,8 +141,8 @@ func checkMirror(t *testing.T, name string, a, b cable.Shape) {
 		approxAbs(t, name+" mirror z", float64(b.Z(units.Length(x*L))), float64(a.Z(units.Length((1-x)*L)))-h, 1e-9*L)
 		approx(t, name+" mirror T", float64(b.Tension(units.Length(x*L))), float64(a.Tension(units.Length((1-x)*L))), 1e-9)
 	}
-	xa, za, wa := a.LowPoint()
-	xb, zb, wb := b.LowPoint()
+	xa, za, wa := a.Vertex()
+	xb, zb, wb := b.Vertex()
 	if wa != wb {
 		t.Errorf("%s mirror: low point within %v vs %v", name, wa, wb)
 	}
@@ -156,7 +177,7 @@ func shapeFinite(s cable.Shape) bool {
 	va, vb := s.Reactions()
 	ta, tb := s.SupportTensions()
 	aa, ab := s.SupportAngles()
-	x0, z0, _ := s.LowPoint()
+	x0, z0, _ := s.Vertex()
 	L := s.Span().Length
 	return allFinite(float64(s.Horizontal()), float64(va), float64(vb), float64(ta), float64(tb), float64(aa), float64(ab),
 		float64(s.Length()), float64(x0), float64(z0), float64(s.Z(L/3)), float64(s.Sag(L/2)), float64(s.Tension(L/2)))

@@ -58,7 +58,7 @@ func newLoaded(s Span, l Load, h float64) (Loaded, error) {
 	c := Loaded{span: s, load: l, h: h, b: newBeam(s, l)}
 	va, vb := c.Reactions()
 	ta, tb := c.SupportTensions()
-	xl, zl, _ := c.LowPoint()
+	xl, zl, _ := c.Vertex()
 	if !allFinite(float64(va), float64(vb), float64(ta), float64(tb), float64(c.Length()),
 		float64(c.Sag(s.Length/2)), float64(xl), float64(zl)) {
 		return Loaded{}, errOutOfRange
@@ -115,11 +115,11 @@ func (c Loaded) Sag(x units.Length) units.Length {
 // Length returns the arc length, exact on each piece of uniform load.
 func (c Loaded) Length() units.Length { return units.Length(c.b.arcLength(c.chordSlope(), c.h)) }
 
-// LowPoint returns the point where z' = 0, that is Q(x) = H h/L. Outside
+// Vertex returns the point where z' = 0, that is Q(x) = H h/L. Outside
 // the span the curve is extended with the load intensity at the nearer
 // support; when that intensity is zero the extended rope is straight and
 // has no vertex, and the lower support is returned with within false.
-func (c Loaded) LowPoint() (x, z units.Length, within bool) {
+func (c Loaded) Vertex() (x, z units.Length, within bool) {
 	target := c.h * c.chordSlope()
 	L := c.b.l
 	q0, qL := c.b.shear(0), c.b.shear(L)
@@ -169,3 +169,10 @@ func (c Loaded) patchIntensity(x float64) float64 {
 	}
 	return w
 }
+
+// LowPoint returns the lowest point of the rope within the span.
+func (c Loaded) LowPoint() (x, z units.Length) { return lowPoint(c) }
+
+// MaxTension returns the largest tension in the span, at the higher-tension
+// support.
+func (c Loaded) MaxTension() units.Force { return maxTension(c) }

@@ -31,8 +31,8 @@ func TestLoadedMatchesParabola(t *testing.T) {
 		approx(t, "T", float64(l.Tension(x)), float64(p.Tension(x)), 1e-12)
 	}
 	approx(t, "length", float64(l.Length()), float64(p.Length()), 1e-13)
-	lx, lz, lw := l.LowPoint()
-	px, pz, pw := p.LowPoint()
+	lx, lz, lw := l.Vertex()
+	px, pz, pw := p.Vertex()
 	approx(t, "low x", float64(lx), float64(px), 1e-12)
 	approx(t, "low z", float64(lz), float64(pz), 1e-12)
 	if lw != pw {

@@ -59,7 +59,7 @@ func ParabolaWithTension(s Span, w units.LoadPerLength, h units.Force) (Parabola
 func newParabola(s Span, w, h float64) (Parabola, error) {
 	p := Parabola{span: s, w: w, h: h}
 	va, vb := p.Reactions()
-	x0, z0, _ := p.LowPoint()
+	x0, z0, _ := p.Vertex()
 	l := float64(s.Length)
 	// finite reactions bound the tensions; finite slopes bound the length
 	bound := h + math.Abs(float64(va)) + math.Abs(float64(vb))
@@ -131,11 +131,18 @@ func (p Parabola) Length() units.Length {
 	return units.Length(l * arcMean(p.slope(0), p.slope(l), p.w*l/p.h))
 }
 
-// LowPoint returns x = L/2 − H h/(w L) and its elevation; the vertex of the
+// Vertex returns x = L/2 − H h/(w L) and its elevation; the vertex of the
 // parabola extended beyond the supports when it is outside the span.
-func (p Parabola) LowPoint() (x, z units.Length, within bool) {
+func (p Parabola) Vertex() (x, z units.Length, within bool) {
 	l := float64(p.span.Length)
 	x0 := l/2 - p.h*float64(p.span.Rise)/(p.w*l)
 	z0 := float64(p.span.Rise)*x0/l - p.w*x0*(l-x0)/(2*p.h)
 	return units.Length(x0), units.Length(z0), x0 >= 0 && x0 <= l
 }
+
+// LowPoint returns the lowest point of the rope within the span.
+func (p Parabola) LowPoint() (x, z units.Length) { return lowPoint(p) }
+
+// MaxTension returns the largest tension in the span, at the higher-tension
+// support.
+func (p Parabola) MaxTension() units.Force { return maxTension(p) }

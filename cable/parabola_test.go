@@ -9,7 +9,7 @@ import (
 )
 
 func TestParabolaReferences(t *testing.T) {
-	// SOURCES §1 [D] (computed from the same closed forms, so here only the
+	// [D] (computed by hand from the same closed forms, so here only the
 	// length is checked by a different route: quadrature in checkShape and
 	// the values below are a regression on the formulas).
 	p, err := cable.NewParabola(cable.Span{Length: 100, Rise: 10}, 2*units.KilonewtonPerMetre, 8)
@@ -18,7 +18,7 @@ func TestParabolaReferences(t *testing.T) {
 	}
 	va, vb := p.Reactions()
 	ta, tb := p.SupportTensions()
-	x0, _, within := p.LowPoint()
+	x0, _, within := p.Vertex()
 	for _, c := range []struct {
 		what      string
 		got, want float64
@@ -37,7 +37,8 @@ func TestParabolaReferences(t *testing.T) {
 		t.Error("low point should be within the span")
 	}
 
-	// SOURCES §1 [R]: w 2 N/m, l 100 m, sag 5 m → H = 500 N.
+	// General cable theorem H = w l²/(8 f) (Hicks, Civil Engineering
+	// Formulas, ch. 10, [M] for the attribution): w 2 N/m, l 100 m, sag 5 m → H = 500 N.
 	q, err := cable.NewParabola(cable.Span{Length: 100}, 2, 5)
 	if err != nil {
 		t.Fatal(err)
@@ -74,7 +75,7 @@ func TestParabolaConsistency(t *testing.T) {
 		L := float64(c.span.Length)
 		checkShape(t, "parabola", p, float64(c.w)*L, float64(c.w)*L*L/2)
 		approx(t, "midspan sag", float64(p.Sag(c.span.Length/2)), float64(c.sag), 1e-12)
-		if _, _, within := p.LowPoint(); within == c.outside {
+		if _, _, within := p.Vertex(); within == c.outside {
 			t.Errorf("low point within = %v for %+v", within, c.span)
 		}
 		m, err := cable.NewParabola(c.span.Mirror(), c.w, c.sag)

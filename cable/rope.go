@@ -65,8 +65,8 @@ type Construction struct {
 
 // Strand6x36IWRC is a six-strand rope of 36-wire strands on an independent
 // wire rope core, the common construction for footbridge main ropes.
-// K 0.356, C 0.460, W 0.409 are the published rope makers' factors (SOURCES
-// §2). The effective modulus 100 GPa on the metallic area (stranded IWRC,
+// K 0.356, C 0.460, W 0.409 are the published rope makers' factors (rope
+// makers' technical data in the form of EN 12385-4; see References). The effective modulus 100 GPa on the metallic area (stranded IWRC,
 // ≈ 100 ± 10 GPa) and α = 12e-6/K are from memory, not confirmed.
 var Strand6x36IWRC = Construction{
 	Name: "6x36-IWRC", K: 0.356, C: 0.460, W: 0.409,

@@ -8,8 +8,8 @@ import (
 )
 
 func TestRopeFormula(t *testing.T) {
-	// SOURCES §2 [R]: a 6x7-FC rope with K 0.332 reproduces a standard rope
-	// table: 20 mm 235/260 kN, 40 mm 940/1040 kN (grades 1770/1960).
+	// [R] rope makers' technical data in the form of EN 12385-4 (References):
+	// a 6x7-FC rope with K 0.332 reproduces the makers' rope table: 20 mm 235/260 kN, 40 mm 940/1040 kN (grades 1770/1960).
 	// Published tables round to ~3 figures: 0.5 % tolerance.
 	c := cable.Construction{Name: "6x7-FC", K: 0.332, C: 0.369, W: 0.345, Modulus: 90 * units.Gigapascal} // C, W, modulus: placeholders, not checked
 	for _, r := range []struct {
@@ -31,7 +31,7 @@ func TestRopeFormula(t *testing.T) {
 }
 
 func TestStrand6x36IWRC(t *testing.T) {
-	// SOURCES §2 [D]: computed there from the same formula F = K d² R_r; this
+	// [D] from the same formula F = K d² R_r (EN 12385-4 form) by hand; this
 	// is a regression on the implementation of that formula and its units.
 	for _, r := range []struct {
 		d     units.Length

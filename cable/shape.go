@@ -15,9 +15,12 @@ type Shape interface {
 	Reactions() (va, vb units.Force)
 	// Tension returns the rope tension at x.
 	Tension(x units.Length) units.Force
-	// SupportTensions returns the rope tension at A and at B; the larger is
-	// the maximum tension in the span.
+	// SupportTensions returns the rope tension at A and at B.
 	SupportTensions() (ta, tb units.Force)
+	// MaxTension returns the largest tension in the span. T = H√(1+z'²)
+	// grows with the slope, which is steepest at a support for a rope under
+	// downward load, so it is the larger support tension.
+	MaxTension() units.Force
 	// SupportAngles returns the inclination of the rope below horizontal at
 	// A and at B, measured going from the support into the span: positive
 	// when the rope descends from the support into the span.
@@ -28,11 +31,31 @@ type Shape interface {
 	Sag(x units.Length) units.Length
 	// Length returns the arc length (stretched, for elastic shapes).
 	Length() units.Length
-	// LowPoint returns the vertex of the shape, where the rope is
-	// horizontal; within is false when it falls outside [0, L], in which
-	// case the position is that of the vertex of the curve extended beyond
-	// the support.
-	LowPoint() (x, z units.Length, within bool)
+	// LowPoint returns the lowest point of the rope within the span: the
+	// vertex when it lies in [0, L], else the lower support.
+	LowPoint() (x, z units.Length)
+	// Vertex returns the point where the rope is horizontal; within is
+	// false when it falls outside [0, L], in which case the position is
+	// that of the vertex of the curve extended beyond the support.
+	Vertex() (x, z units.Length, within bool)
+}
+
+// lowPoint returns the vertex of s when it lies within the span, else the
+// lower support (A on a tie).
+func lowPoint(s Shape) (x, z units.Length) {
+	if x, z, within := s.Vertex(); within {
+		return x, z
+	}
+	if sp := s.Span(); sp.Rise < 0 {
+		return sp.Length, sp.Rise
+	}
+	return 0, 0
+}
+
+// maxTension returns the larger of the support tensions of s.
+func maxTension(s Shape) units.Force {
+	ta, tb := s.SupportTensions()
+	return max(ta, tb)
 }
 
 // clampX limits x to [0, l]; NaN stays NaN.

@@ -18,7 +18,7 @@ func TestTensionCheck(t *testing.T) {
 		n        int
 		capacity float64
 	}{
-		// EN 1993-1-11 cl. 6.2 (SOURCES §2 [D], same formula): k_e 1 → 186.7 kN
+		// EN 1993-1-11 cl. 6.2 [D], the same formula by hand: k_e 1 → 186.7 kN
 		{"partial factor, k_e 1", cable.PartialFactor{GammaR: 0.9, Ke: 1}, 1, 186.7e3},
 		{"partial factor defaults", cable.PartialFactor{}, 2, 2 * 0.9 * mbf / (1.5 * 0.9)},
 		{"global factor 2.5", cable.GlobalFactor{Factor: 2.5}, 4, 4 * mbf / 2.5},

@@ -20,4 +20,11 @@
 //
 // Every rendered report carries Caution: the results support, and never
 // replace, the design of a qualified engineer.
+//
+// # References
+//
+// This package defines the currency of the checks and cites no published
+// method of its own; each check's Basis names its method and source, and
+// the packages that make the checks list those sources in their own
+// References sections.
 package check

@@ -1,7 +1,6 @@
 package foundation
 
 import (
-	"errors"
 	"fmt"
 	"math"
 
@@ -38,11 +37,10 @@ type AnchorBlock struct {
 	// is positive the active thrust on the back face is added to the
 	// driving force (common practice).
 	PassiveMobilisation float64
-	// Groundwater is true when the water table lies WaterDepth below the
-	// ground surface: the block is then buoyed over its submerged height
-	// and soil below the water table weighs its submerged unit weight.
-	Groundwater bool
-	WaterDepth  units.Length
+	// Water is the water level at the block: the block is buoyed over its
+	// submerged height, soil below the water weighs its submerged unit
+	// weight, and bearing and passive resistance use effective stresses.
+	Water Water
 	// Steps are concrete parts standing on the block (a stepped block);
 	// none for a plain rectangular block.
 	Steps []Step
@@ -66,10 +64,8 @@ func (a AnchorBlock) validate() error {
 	if err := fraction("AnchorBlock.PassiveMobilisation", a.PassiveMobilisation); err != nil {
 		return err
 	}
-	if a.Groundwater {
-		if err := nonNegative("AnchorBlock.WaterDepth", float64(a.WaterDepth)); err != nil {
-			return err
-		}
+	if err := a.Water.validate("AnchorBlock.Water"); err != nil {
+		return err
 	}
 	for i, st := range a.Steps {
 		name := fmt.Sprintf("AnchorBlock.Steps[%d]", i)
@@ -146,10 +142,7 @@ func (a AnchorBlock) loads(s Soil) blockLoads {
 	}
 	gs, gsub, gw := float64(s.UnitWeight), float64(s.SubmergedWeight()), float64(WaterUnitWeight)
 	// Heights in the block frame: ground at z = d, water table at zw.
-	zw := math.Inf(-1)
-	if a.Groundwater {
-		zw = d - float64(a.WaterDepth)
-	}
+	zw := d - a.Water.depth() // −Inf without water
 	var wsum, wmom, usum, umom float64
 	add := func(x0, x1, z0, z1, width float64) {
 		plan := (x1 - x0) * width
@@ -185,50 +178,58 @@ func (a AnchorBlock) loads(s Soil) blockLoads {
 	return r
 }
 
-// earth returns the total (over the width) passive resistance on the front
-// face and active thrust on the back face, with their heights above the
-// base, for design soil s.
-func (a AnchorBlock) earth(s Soil) (pp, pa EarthForce, err error) {
-	d := a.Depth
-	top := units.Length(math.Max(float64(a.Depth-a.Height), 0))
-	g := s.UnitWeight
-	if a.Groundwater && a.WaterDepth < a.Depth {
-		g = s.SubmergedWeight() // whole face at the submerged weight: cautious
+// earth returns the passive resistance on the front face and the active
+// thrust on the back face, each over the block's width, with their heights
+// above the base, in strength st (drained: Rankine's Kp, Ka with Bell's
+// cohesion terms; undrained: K = 1 and c_u), effective stresses with the
+// block's water level (the water's own pressure acts alike on both faces).
+func (a AnchorBlock) earth(s Soil, st strength) (pp, pa EarthForce) {
+	d := float64(a.Depth)
+	top := math.Max(d-float64(a.Height), 0)
+	kp, ka := 1.0, 1.0
+	if st.cond == Drained {
+		kp, ka = rankineLevel(units.Angle(st.phi), true), rankineLevel(units.Angle(st.phi), false)
 	}
-	if d <= top || g <= 0 {
-		return EarthForce{}, EarthForce{}, nil
-	}
-	pp, err = EarthPressureForce(rankineLevel(s.Friction, true), g, s.Cohesion, top, d, 1)
-	if err != nil {
-		return pp, pa, err
-	}
-	pa, err = EarthPressureForce(rankineLevel(s.Friction, false), g, s.Cohesion, top, d, -1)
+	g, gs, dw := float64(s.UnitWeight), float64(s.SubmergedWeight()), a.Water.depth()
+	pp = layeredEarth(kp, st.c, 1, top, d, g, gs, dw)
+	pa = layeredEarth(ka, st.c, -1, top, d, g, gs, dw)
 	pp.Force *= units.Force(a.Width)
 	pa.Force *= units.Force(a.Width)
-	return pp, pa, err
+	return pp, pa
 }
 
-// Check verifies the block against the pulls on soil s: sliding,
-// overturning about the front toe, uplift and bearing, with result IDs
-// "anchor.sliding", "anchor.overturning", "anchor.uplift" and
-// "anchor.bearing". Element and Case are left empty for the caller.
+// Check verifies the block against the pulls on soil s, bearing by method
+// m, with result IDs "anchor.sliding", "anchor.overturning",
+// "anchor.uplift" and "anchor.bearing". Element and Case are left empty
+// for the caller.
 //
 // With Fx = Σ F cos α, Fz = Σ F sin α, W the weight of the block and its
-// steps, Ws the soil cover's (less the soil the steps displace), xW their
-// centroid, U the buoyancy at xU and N = W + Ws − U − Fz:
+// steps, Ws the soil cover's (less the soil the steps displace; submerged
+// below the water), xW their centroid, U the water's uplift (γw times the
+// submerged concrete volume) at xU and N = W + Ws − U − Fz:
 //
 //	sliding:     driving Fx (+ Pa, active on the back face, when passive is counted)
-//	             resisting N tan δ + μ Pp            (δ = Soil.InterfaceFriction; cohesion ignored)
+//	             resisting R_b + μ Pp, R_b = N tan δ drained, A'c_u undrained (≤ 0.4 N where
+//	             water or air reach the base; EN 1997-1 6.5.3), cohesion ignored drained
 //	overturning: about the front toe (x = Length, z = 0)
 //	             driving Σ (Fx·Z + Fz·(Length − X)) + U·(Length − xU)
 //	             resisting (W + Ws)·(Length − xW)    (earth pressures ignored)
 //	uplift:      driving Fz, resisting W + Ws − U   (side friction ignored)
 //	bearing:     N on the base with eccentricity e = M/N from the base centre,
 //	             M = Σ (Fx·Z + Fz·(Length/2 − X)) + (W + Ws)(xW − Length/2) − U(xU − Length/2);
-//	             earth pressures ignored;
-//	             N/A' against qult (EN 1997-1 Annex D) on the effective base B' = Length − 2|e|,
-//	             or, on the allowable basis, the peak contact pressure against
-//	             Soil.Allowable when one is given.
+//	             earth pressures ignored; N/A' against qult of method m on the effective
+//	             base B' = Length − 2|e| (soil; allowable basis with Soil.Allowable: the peak
+//	             contact pressure against it), or on rock the peak contact pressure under
+//	             characteristic actions against RockPressure
+//
+// A fine soil (Soil.Undrained given) is checked in both the drained and
+// the undrained condition for sliding and bearing; the result is the worse,
+// its basis names the condition that governs and its values hold the
+// utilisation in each ("U_dr", "U_un"). Every number behind a result is
+// among its Values: the base's normal force N, horizontal force H,
+// eccentricity e, resultant position x_R from the back edge, contact
+// pressures q_max, q_min and contact length l_c, the passive and active
+// forces P_p, P_a, and the whole bearing equation (Bearing.Values).
 //
 // Allowable basis: each factor of safety is required on the driving side
 // (check.Stability) and reported as provided; bearing compares N/A' with
@@ -240,20 +241,24 @@ func (a AnchorBlock) earth(s Soil) (pp, pa EarthForce, err error) {
 // Special cases: no pull, or pulls that do not drive a mode, give a
 // provided factor of +Inf; a block that lifts off reports bearing as
 // passing with a note (uplift fails); a resultant outside the base fails
-// bearing with a note. Invalid input, or an attachment point outside the
-// block, returns an error wrapping ErrInvalid.
-func (a AnchorBlock) Check(pulls []Pull, s Soil, b *Basis) ([]check.Result, error) {
-	return a.AppendCheck(nil, pulls, s, b)
+// bearing with a note. Invalid input, an attachment point outside the
+// block, or a block on rock with no allowable pressure or rock strength
+// returns an error wrapping ErrInvalid.
+func (a AnchorBlock) Check(pulls []AnchorPull, s Soil, m Method, b *Basis) ([]check.Result, error) {
+	return a.AppendCheck(nil, pulls, s, m, b)
 }
 
 // AppendCheck is Check appending its results to dst, for callers that
 // check many blocks and reuse one slice (strconv.AppendFloat's pattern).
-func (a AnchorBlock) AppendCheck(dst []check.Result, pulls []Pull, s Soil, b *Basis) ([]check.Result, error) {
+func (a AnchorBlock) AppendCheck(dst []check.Result, pulls []AnchorPull, s Soil, m Method, b *Basis) ([]check.Result, error) {
 	if err := a.validate(); err != nil {
 		return nil, err
 	}
 	if err := s.Validate(); err != nil {
 		return nil, err
+	}
+	if !m.valid() {
+		return nil, invalid("Method", fmt.Sprintf("%d is not a known method", int(m)))
 	}
 	if err := validatePulls(pulls, true); err != nil {
 		return nil, err
@@ -267,134 +272,158 @@ func (a AnchorBlock) AppendCheck(dst []check.Result, pulls []Pull, s Soil, b *Ba
 	if err != nil {
 		return nil, err
 	}
+	if s.IsRock {
+		if _, err := RockPressure(s, min(a.Length, a.Width)); err != nil {
+			return nil, err
+		}
+	}
 	ld := a.loads(s)
+	conds := s.Conditions()
 	var slide, over, lift, bear check.Result
 	if !bs.PartialFactors {
 		set := bs.allowableSet()
-		if slide, err = a.sliding(pulls, s, ld, set, def(bs.Sliding, 1.5)); err != nil {
+		if slide, err = a.slidingIn(conds, pulls, s, ld, []actionSet{set}, def(bs.Sliding, 1.5)); err != nil {
 			return nil, err
 		}
-		if over, err = a.overturning(pulls, ld, set, def(bs.Overturning, 1.5)); err != nil {
-			return nil, err
-		}
+		over = a.overturning(pulls, ld, set, def(bs.Overturning, 1.5))
 		lift = a.uplift(pulls, ld, set, def(bs.Uplift, 1.5))
-		if bear, err = a.bearing(pulls, s, ld, set, false, false, def(bs.Bearing, 3)); err != nil {
+		if bear, err = a.bearingIn(conds, pulls, s, m, ld, []actionSet{set}, def(bs.Bearing, 3)); err != nil {
 			return nil, err
 		}
 		return append(dst, slide, over, lift, bear), nil
 	}
 	equ := bs.equSet()
-	if over, err = a.overturning(pulls, ld, equ, 1); err != nil {
+	over = a.overturning(pulls, ld, equ, 1)
+	lift = a.uplift(pulls, ld, equ, 1)
+	geo := bs.geoSets()
+	if slide, err = a.slidingIn(conds, pulls, s, ld, geo, 1); err != nil {
 		return nil, err
 	}
-	lift = a.uplift(pulls, ld, equ, 1)
-	first := true
-	for _, set := range bs.geoSets() {
-		r, err := a.sliding(pulls, s, ld, set, 1)
-		if err != nil {
-			return nil, err
-		}
-		if first || r.Ratio > slide.Ratio {
-			slide = r
-		}
-		// Pulls unfavourable or favourable, with the block's weight
-		// unfavourable (γG) or favourable (γG,inf): the light block under
-		// full pulls gives the largest inclination and eccentricity.
-		for _, c := range [][2]bool{{false, false}, {true, false}, {false, true}} {
-			r, err := a.bearing(pulls, s, ld, set, c[0], c[1], 1)
-			if err != nil {
-				return nil, err
-			}
-			if first || r.Ratio > bear.Ratio {
-				bear = r
-			}
-			first = false
-		}
+	if s.IsRock { // presumed bearing values go with characteristic actions
+		geo = []actionSet{bs.allowableSet()}
+	}
+	if bear, err = a.bearingIn(conds, pulls, s, m, ld, geo, 1); err != nil {
+		return nil, err
 	}
 	return append(dst, slide, over, lift, bear), nil
 }
 
-// baseShear returns the shear resistance of a base of area area under
-// normal force n: n tan δ on a soil with friction, or, on an undrained soil
-// (no friction angle), A cu on the base, EN 1997-1 6.5.3(12) (from memory;
-// the effective area is taken as the whole base).
-func baseShear(n, tanD float64, s Soil, area float64) float64 {
-	if s.Friction == 0 {
-		if n <= 0 {
-			return 0
+// slidingIn returns the worst sliding result over the conditions and
+// action sets, the governing condition stated.
+func (a AnchorBlock) slidingIn(conds []Condition, pulls []AnchorPull, s Soil, ld blockLoads, sets []actionSet, fs float64) (check.Result, error) {
+	var per [2]conditioned
+	for i, cond := range conds {
+		for j, set := range sets {
+			r := a.sliding(pulls, s, cond, ld, set, fs)
+			if j == 0 || r.Ratio > per[i].r.Ratio {
+				per[i] = conditioned{cond, r}
+			}
 		}
-		return area * float64(s.Cohesion)
 	}
-	return math.Max(n, 0) * tanD
+	return governing(sets[0], per[:len(conds)]), nil
 }
 
-// shearNote describes the base shear resistance baseShear used.
-func shearNote(s Soil, n float64, ignored string) string {
-	if s.Friction == 0 {
-		return fmt.Sprintf("undrained: cu %v over the whole base", s.Cohesion)
+// bearingIn returns the worst bearing result over the conditions, action
+// sets and load arrangements (on a partial set: the pulls unfavourable or
+// favourable, the block's weight unfavourable or favourable).
+func (a AnchorBlock) bearingIn(conds []Condition, pulls []AnchorPull, s Soil, m Method, ld blockLoads, sets []actionSet, fs float64) (check.Result, error) {
+	if s.IsRock {
+		conds = drainedOnly[:1]
 	}
-	return fmt.Sprintf("base friction angle δ = %v on normal force %v; %s", s.InterfaceFriction(), units.Force(n), ignored)
+	var per [2]conditioned
+	for i, cond := range conds {
+		first := true
+		for _, set := range sets {
+			arrangements := [][2]bool{{false, false}}
+			if !set.allowable {
+				// The light block under full pulls gives the largest
+				// inclination and eccentricity.
+				arrangements = [][2]bool{{false, false}, {true, false}, {false, true}}
+			}
+			for _, c := range arrangements {
+				r, err := a.bearing(pulls, s, m, cond, ld, set, c[0], c[1], fs)
+				if err != nil {
+					return check.Result{}, err
+				}
+				if first || r.Ratio > per[i].r.Ratio {
+					per[i], first = conditioned{cond, r}, false
+				}
+			}
+		}
+	}
+	if s.IsRock {
+		return per[0].r, nil
+	}
+	return governing(sets[0], per[:len(conds)]), nil
 }
 
-// note returns r with the note appended, or r as it is on a terse basis.
-func (set actionSet) note(r check.Result, note string) check.Result {
+// base returns the resultant on the base with the given factors on the
+// pulls (unfavourable unless favourable) and on the block's weight (gw)
+// and the water's uplift (gu), and the pulls' horizontal component.
+func (a AnchorBlock) base(pulls []AnchorPull, ld blockLoads, set actionSet, favourable bool, gw, gu float64) baseLoad {
+	l := float64(a.Length)
+	n := gw*ld.weight - gu*ld.buoyancy
+	h, m := 0.0, gw*ld.weight*(ld.xw-l/2)-gu*ld.buoyancy*(ld.xu-l/2)
+	for _, p := range pulls {
+		x, z := p.components()
+		g := set.factor(!favourable, p.Variable)
+		n -= g * z
+		h += g * x
+		m += g * (x*float64(p.Z) + z*(l/2-float64(p.X)))
+	}
+	e := 0.0
+	if n > 0 {
+		e = m / n
+	}
+	return baseLoad{n: n, h: h, e: e}
+}
+
+// waterAtBase reports whether water stands at or above the block's base.
+func (a AnchorBlock) waterAtBase() bool { return a.Water.depth() <= float64(a.Depth) }
+
+func (a AnchorBlock) sliding(pulls []AnchorPull, s Soil, cond Condition, ld blockLoads, set actionSet, fs float64) check.Result {
+	st := s.strengthIn(cond, set)
+	// Pulls unfavourable, the block's weight favourable, uplift unfavourable.
+	bl := a.base(pulls, ld, set, false, set.gGfav, set.gG)
+	bsh := shearResistance(bl.n, bl.e, float64(a.Length), float64(a.Width), st, a.waterAtBase())
+	res := bsh.r / set.gRh
+	drive := 0.0
+	for _, p := range pulls {
+		x, _ := p.components()
+		drive += set.factor(x > 0, p.Variable) * x
+	}
+	mu := a.PassiveMobilisation
+	var pp, pa EarthForce
+	if mu > 0 {
+		pp, pa = a.earth(s, st)
+		res += mu * float64(pp.Force) / set.gRe
+		drive += set.gG * float64(pa.Force)
+	}
+	r := check.Stability("anchor.sliding", "Anchor block sliding", units.KindForce, drive, res, fs).
+		WithBasis(basisOf(set, "base shear and mobilised passive resistance", fs))
 	if set.terse {
 		return r
 	}
-	return r.WithNote(note)
-}
-
-// basisOf returns the basis text of a result.
-func basisOf(set actionSet, what string, fs float64) string {
-	if set.terse {
-		return ""
-	}
-	if set.allowable {
-		return fsBasis(what, fs)
-	}
-	return set.label
-}
-
-func (a AnchorBlock) sliding(pulls []Pull, s Soil, ld blockLoads, set actionSet, fs float64) (check.Result, error) {
-	sd := s.factored(set)
-	var fx, fz float64
-	for _, p := range pulls {
-		x, z := p.components()
-		g := set.factor(x > 0, p.Variable)
-		fx += g * x
-		fz += g * z
-	}
-	n := set.gGfav*ld.weight - set.gG*ld.buoyancy - fz
-	tanD := math.Tan(float64(sd.InterfaceFriction()))
-	res := baseShear(n, tanD, sd, float64(a.Length)*float64(a.Width)) / set.gRh
-	drive := fx
-	mu := a.PassiveMobilisation
-	var notes []string
+	vs, note := shearValues(st, bl.n, bsh)
+	vs = append(vs, check.Of("e", "eccentricity of the base resultant", units.Length(bl.e)))
 	if mu > 0 {
-		pp, pa, err := a.earth(sd)
-		if err != nil {
-			return check.Result{}, err
-		}
-		res += mu * float64(pp.Force) / set.gRe
-		drive += set.gG * float64(pa.Force)
-		if !set.terse {
-			notes = append(notes, fmt.Sprintf("passive resistance %v mobilised at %.2f; active thrust on the back face %v",
-				pp.Force, mu, pa.Force))
-		}
+		vs = append(vs,
+			check.Of("μ", "fraction of the passive resistance mobilised", units.Ratio(mu)),
+			check.Of("P_p", "full passive resistance on the front face", pp.Force),
+			check.Of("P_a", "active thrust on the back face", pa.Force))
+		note += fmt.Sprintf("; passive resistance %v mobilised at %.2f, active thrust %v on the back face", pp.Force, mu, pa.Force)
 	}
-	r := check.Stability("anchor.sliding", "Anchor block sliding", units.KindForce, drive, res, fs).
-		WithBasis(basisOf(set, "base friction and mobilised passive resistance", fs))
-	if set.terse {
-		return r, nil
+	if st.cond == Drained {
+		note += "; cohesion ignored at the base"
 	}
-	r = r.WithNote(shearNote(sd, n, "cohesion ignored"))
-	for _, n := range notes {
-		r = r.WithNote(n)
+	r = r.WithValues(vs...).WithNote(note)
+	if a.Water.Present {
+		r = r.WithNote(a.Water.String())
 	}
-	return r, nil
+	return r
 }
 
-func (a AnchorBlock) overturning(pulls []Pull, ld blockLoads, set actionSet, fs float64) (check.Result, error) {
+func (a AnchorBlock) overturning(pulls []AnchorPull, ld blockLoads, set actionSet, fs float64) check.Result {
 	l := float64(a.Length)
 	var dst, stb float64
 	for _, p := range pulls {
@@ -410,13 +439,19 @@ func (a AnchorBlock) overturning(pulls []Pull, ld blockLoads, set actionSet, fs 
 	stb += set.gGfav * ld.weight * (l - ld.xw)
 	r := check.Stability("anchor.overturning", "Anchor block overturning about the front toe", units.KindMoment, dst, stb, fs).
 		WithBasis(basisOf(set, "the restoring moment about the front toe", fs))
-	return set.note(r, "earth pressures on the front and back faces ignored in overturning"), nil
+	r = set.values(r,
+		check.Of("W", "weight of the block, its steps and the soil cover", units.Force(ld.weight)),
+		check.Of("x_W", "centroid of that weight from the back edge", units.Length(ld.xw)),
+		check.Of("U", "uplift of the water on the block", units.Force(ld.buoyancy)),
+		check.Of("x_U", "line of action of the uplift from the back edge", units.Length(ld.xu)))
+	return set.note(r, "earth pressures on the front and back faces ignored in overturning")
 }
 
-func (a AnchorBlock) uplift(pulls []Pull, ld blockLoads, set actionSet, fs float64) check.Result {
-	var dst, stb float64
+func (a AnchorBlock) uplift(pulls []AnchorPull, ld blockLoads, set actionSet, fs float64) check.Result {
+	var dst, stb, fz float64
 	for _, p := range pulls {
 		_, z := p.components()
+		fz += z
 		if z > 0 {
 			dst += set.factor(true, p.Variable) * z
 		} else {
@@ -431,92 +466,34 @@ func (a AnchorBlock) uplift(pulls []Pull, ld blockLoads, set actionSet, fs float
 	}
 	r := check.Stability("anchor.uplift", "Anchor block uplift", units.KindForce, dst, stb, fs).
 		WithBasis(basisOf(set, "the block's effective weight", fs))
+	r = set.values(r,
+		check.Of("F_z", "upward component of the characteristic pulls", units.Force(fz)),
+		check.Of("W", "weight of the block, its steps and the soil cover", units.Force(ld.weight)),
+		check.Of("U", "uplift of the water on the block", units.Force(ld.buoyancy)))
 	return set.note(r, "side friction on the block ignored")
 }
 
-func (a AnchorBlock) bearing(pulls []Pull, s Soil, ld blockLoads, set actionSet, favourable, lightBlock bool, fs float64) (check.Result, error) {
+func (a AnchorBlock) bearing(pulls []AnchorPull, s Soil, m Method, cond Condition, ld blockLoads, set actionSet, favourable, lightBlock bool, fs float64) (check.Result, error) {
 	const id, title = "anchor.bearing", "Anchor block bearing pressure"
-	l := float64(a.Length)
 	gw := set.gG
 	if lightBlock {
 		gw = set.gGfav
 	}
-	n := gw * (ld.weight - ld.buoyancy)
-	h, m := 0.0, gw*(ld.weight*(ld.xw-l/2)-ld.buoyancy*(ld.xu-l/2))
-	for _, p := range pulls {
-		x, z := p.components()
-		g := set.factor(!favourable, p.Variable)
-		n -= g * z
-		h += g * x
-		m += g * (x*float64(p.Z) + z*(l/2-float64(p.X)))
+	bl := a.base(pulls, ld, set, favourable, gw, gw)
+	if bl.n <= 0 {
+		r := check.Compare(id, title, units.KindPressure, 0, 0).WithBasis(basisOf(set, "the bearing pressure", fs))
+		r = set.values(r, check.Of("N", "effective normal force on the base", units.Force(bl.n)))
+		return set.note(r, "the pulls lift the block off its base: uplift governs"), nil
 	}
-	basis := bearingBasis(set, s, fs)
-	if n <= 0 {
-		return set.note(check.Compare(id, title, units.KindPressure, 0, 0).WithBasis(basis),
-			"the pulls lift the block off its base: uplift governs"), nil
-	}
-	e := m / n
-	return baseBearing(id, title, basis, a.Length, a.Width, a.Depth, a.Groundwater, a.WaterDepth,
-		units.Force(n), units.Force(h), units.Length(e), s, EC7, set, fs)
-}
-
-// bearingBasis returns the basis text of a bearing result.
-func bearingBasis(set actionSet, s Soil, fs float64) string {
-	if set.terse {
-		return ""
-	}
-	if set.allowable && s.Allowable > 0 {
-		return "allowable basis: peak contact pressure against the allowable bearing pressure given by the site report"
-	}
-	return basisOf(set, "the ultimate bearing pressure", fs)
-}
-
-// baseBearing checks a rectangular base of side b along the load
-// eccentricity e and l across it, carrying vertical force n and horizontal
-// force h along b.
-func baseBearing(id, title, basis string, b, l, depth units.Length, water bool, waterDepth units.Length,
-	n, h units.Force, e units.Length, s Soil, m Method, set actionSet, fs float64) (check.Result, error) {
-	area := float64(b) * float64(l)
-	if math.Abs(float64(e)) >= float64(b)/2 {
-		r := check.Compare(id, title, units.KindPressure, float64(n)/area, 0).WithBasis(basis)
-		if set.terse {
-			return r, nil
-		}
-		return r.WithNote(fmt.Sprintf("resultant outside the base: eccentricity %v, half base %v", e, b/2)), nil
-	}
-	if set.allowable && s.Allowable > 0 {
-		qmax, _, contact, err := ContactPressure(n, e, b, l)
-		if err != nil {
-			return check.Result{}, err
-		}
-		r := check.Compare(id, title, units.KindPressure, float64(qmax), float64(s.Allowable)).WithBasis(basis)
-		if set.terse {
-			return r, nil
-		}
-		return r.WithNote(fmt.Sprintf("peak contact pressure; eccentricity %v, contact length %v", e, contact)), nil
-	}
-	sd := s.factored(set)
-	br, err := BearingCapacity(BearingInput{B: b, L: l, Depth: depth, Vertical: n, Horizontal: h, EccB: e,
-		Groundwater: water, WaterDepth: waterDepth}, sd, m)
-	if errors.Is(err, ErrOutsideBase) {
-		return set.note(check.Compare(id, title, units.KindPressure, float64(n)/area, 0).WithBasis(basis),
-			"resultant outside the base"), nil
+	var r check.Result
+	var err error
+	if s.IsRock {
+		r, err = rockBaseBearing(id, title, a.Length, a.Width, bl, s, set)
+	} else {
+		r, err = soilBearing(id, title, a.Length, a.Width, a.Depth, a.Water, bl, s, m, cond, set, fs)
 	}
 	if err != nil {
 		return check.Result{}, err
 	}
-	capacity := float64(br.Qult) / fs
-	if !set.allowable {
-		capacity = float64(br.Qult) / set.gRv
-	}
-	r := check.Compare(id, title, units.KindPressure, float64(n)/float64(br.Area()), capacity).WithBasis(basis)
-	if set.terse {
-		return r, nil
-	}
-	r = r.WithNote(fmt.Sprintf("%v: qult %v on effective base %v × %v (eccentricity %v); Nc %.2f, Nq %.2f, Nγ %.2f",
-		br.Method, br.Qult, br.BEff, br.LEff, e, br.Nc, br.Nq, br.Ngamma))
-	for _, note := range br.Notes {
-		r = r.WithNote(note)
-	}
-	return r, nil
+	return set.values(r, check.Of("x_R", "position of the base resultant from the back edge", units.Length(float64(a.Length)/2+bl.e))), nil
 }

@@ -21,8 +21,8 @@ func testSand() foundation.Soil {
 	return foundation.Soil{Name: "invented dense sand", UnitWeight: 19 * kNm3, Friction: deg(36)}
 }
 
-func testPull() foundation.Pull {
-	return foundation.Pull{Force: 80 * units.Kilonewton, Angle: deg(25), X: 2.5, Z: 1.2}
+func testPull() foundation.AnchorPull {
+	return foundation.AnchorPull{Force: 80 * units.Kilonewton, Angle: deg(25), X: 2.5, Z: 1.2}
 }
 
 func TestAnchorBlockHand(t *testing.T) {
@@ -33,7 +33,7 @@ func TestAnchorBlockHand(t *testing.T) {
 	w := 24.0 * 3 * 2.5 * 1.5
 	n := w - fz
 	tanD := math.Tan(24 * math.Pi / 180)
-	rs, err := testBlock().Check([]foundation.Pull{testPull()}, testSand(), nil)
+	rs, err := testBlock().Check([]foundation.AnchorPull{testPull()}, testSand(), foundation.EC7, nil)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -55,8 +55,8 @@ func TestAnchorBlockHand(t *testing.T) {
 	e := (fx*1.2 - fz) / n
 	bear := byID(t, rs, "anchor.bearing")
 	near(t, "bearing demand", bear.Demand/1e3, n/((3-2*e)*2.5), 1e-9)
-	br, err := foundation.BearingCapacity(foundation.BearingInput{B: 3, L: 2.5, Depth: 1.5,
-		Vertical: units.Force(n * 1e3), Horizontal: units.Force(fx * 1e3), EccB: units.Length(e)}, testSand(), foundation.EC7)
+	br, err := foundation.BearingCapacity(foundation.BearingInput{AlongLoad: 3, AcrossLoad: 2.5, Depth: 1.5,
+		Vertical: units.Force(n * 1e3), Horizontal: units.Force(fx * 1e3), EccAlong: units.Length(e)}, testSand(), foundation.EC7, foundation.Drained)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -69,7 +69,7 @@ func TestAnchorBlockHand(t *testing.T) {
 	blk.PassiveMobilisation = 0.5
 	kp, ka := math.Pow(math.Tan(63*math.Pi/180), 2), math.Pow(math.Tan(27*math.Pi/180), 2)
 	pp, pa := 0.5*kp*19*2.25*2.5, 0.5*ka*19*2.25*2.5
-	rs, err = blk.Check([]foundation.Pull{testPull()}, testSand(), nil)
+	rs, err = blk.Check([]foundation.AnchorPull{testPull()}, testSand(), foundation.EC7, nil)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -79,12 +79,12 @@ func TestAnchorBlockHand(t *testing.T) {
 }
 
 func TestAnchorBlockPartialHand(t *testing.T) {
-	// EN 1997-1 Annex A [R, SOURCES §4]: EQU γG,dst 1.1, γG,stb 0.9,
+	// EN 1997-1:2004 Annex A Table A.1 [R]: EQU γG,dst 1.1, γG,stb 0.9,
 	// γQ,dst 1.5. A permanent and a variable part of the pull.
 	perm, vari := testPull(), testPull()
 	perm.Force, vari.Force = 60*units.Kilonewton, 20*units.Kilonewton
 	vari.Variable = true
-	rs, err := testBlock().Check([]foundation.Pull{perm, vari}, testSand(), &foundation.Basis{PartialFactors: true})
+	rs, err := testBlock().Check([]foundation.AnchorPull{perm, vari}, testSand(), foundation.EC7, &foundation.Basis{PartialFactors: true})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -107,7 +107,7 @@ func TestAnchorBlockPartialHand(t *testing.T) {
 		t.Errorf("basis %q", slide.Basis)
 	}
 	// DA1: combination 2 (M2 on tan φ') governs sliding here.
-	rs1, err := testBlock().Check([]foundation.Pull{perm, vari}, testSand(), &foundation.Basis{PartialFactors: true, Approach: foundation.DesignApproach1})
+	rs1, err := testBlock().Check([]foundation.AnchorPull{perm, vari}, testSand(), foundation.EC7, &foundation.Basis{PartialFactors: true, Approach: foundation.DesignApproach1})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -120,8 +120,8 @@ func TestAnchorBlockPartialHand(t *testing.T) {
 
 func TestAnchorBlockZeroPull(t *testing.T) {
 	for _, b := range []*foundation.Basis{nil, {PartialFactors: true}, {PartialFactors: true, Approach: foundation.DesignApproach1}} {
-		for _, pulls := range [][]foundation.Pull{nil, {{Angle: deg(30), X: 1, Z: 1}}} {
-			rs, err := testBlock().Check(pulls, testSand(), b)
+		for _, pulls := range [][]foundation.AnchorPull{nil, {{Angle: deg(30), X: 1, Z: 1}}} {
+			rs, err := testBlock().Check(pulls, testSand(), foundation.EC7, b)
 			if err != nil {
 				t.Fatal(err)
 			}
@@ -139,7 +139,7 @@ func TestAnchorBlockZeroPull(t *testing.T) {
 }
 
 func TestAnchorBlockLargerNeverWorse(t *testing.T) {
-	pulls := []foundation.Pull{testPull(), {Force: 30 * units.Kilonewton, Angle: deg(35), X: 1, Z: 0.5, Variable: true}}
+	pulls := []foundation.AnchorPull{testPull(), {Force: 30 * units.Kilonewton, Angle: deg(35), X: 1, Z: 0.5, Variable: true}}
 	grow := []struct {
 		name string
 		f    func(*foundation.AnchorBlock, float64)
@@ -157,7 +157,7 @@ func TestAnchorBlockLargerNeverWorse(t *testing.T) {
 					blk := testBlock()
 					blk.PassiveMobilisation = mu
 					g.f(&blk, step)
-					rs, err := blk.Check(pulls, testSand(), b)
+					rs, err := blk.Check(pulls, testSand(), foundation.EC7, b)
 					if err != nil {
 						t.Fatal(err)
 					}
@@ -187,12 +187,12 @@ func TestAnchorBlockLargerNeverWorse(t *testing.T) {
 func TestAnchorBlockLinearity(t *testing.T) {
 	// Horizontal pull, no passive: sliding and overturning factors scale
 	// as 1/F; splitting a pull into two at the same point changes nothing.
-	one := foundation.Pull{Force: 50 * units.Kilonewton, X: 2, Z: 1}
-	rs1, _ := testBlock().Check([]foundation.Pull{one}, testSand(), nil)
+	one := foundation.AnchorPull{Force: 50 * units.Kilonewton, X: 2, Z: 1}
+	rs1, _ := testBlock().Check([]foundation.AnchorPull{one}, testSand(), foundation.EC7, nil)
 	two := one
 	two.Force *= 2
-	rs2, _ := testBlock().Check([]foundation.Pull{two}, testSand(), nil)
-	rsSplit, _ := testBlock().Check([]foundation.Pull{one, one}, testSand(), nil)
+	rs2, _ := testBlock().Check([]foundation.AnchorPull{two}, testSand(), foundation.EC7, nil)
+	rsSplit, _ := testBlock().Check([]foundation.AnchorPull{one, one}, testSand(), foundation.EC7, nil)
 	for _, id := range []string{"anchor.sliding", "anchor.overturning"} {
 		near(t, id+" scaling", byID(t, rs2, id).Provided, byID(t, rs1, id).Provided/2, 1e-12)
 		near(t, id+" split", byID(t, rsSplit, id).Provided, byID(t, rs2, id).Provided, 1e-12)
@@ -202,8 +202,8 @@ func TestAnchorBlockLinearity(t *testing.T) {
 
 func TestAnchorBlockEdgeCases(t *testing.T) {
 	// A pull that lifts the block: uplift fails, bearing passes with a note.
-	big := foundation.Pull{Force: 1000 * units.Kilonewton, Angle: deg(80), X: 1.5, Z: 1.5}
-	rs, err := testBlock().Check([]foundation.Pull{big}, testSand(), nil)
+	big := foundation.AnchorPull{Force: 1000 * units.Kilonewton, Angle: deg(80), X: 1.5, Z: 1.5}
+	rs, err := testBlock().Check([]foundation.AnchorPull{big}, testSand(), foundation.EC7, nil)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -216,7 +216,7 @@ func TestAnchorBlockEdgeCases(t *testing.T) {
 	}
 	// A horizontal pull high on a light slab: resultant outside the base.
 	slab := foundation.AnchorBlock{Length: 1, Width: 1, Height: 3, Depth: 0}
-	rs, err = slab.Check([]foundation.Pull{{Force: 60 * units.Kilonewton, X: 1, Z: 3}}, testSand(), nil)
+	rs, err = slab.Check([]foundation.AnchorPull{{Force: 60 * units.Kilonewton, X: 1, Z: 3}}, testSand(), foundation.EC7, nil)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -226,9 +226,9 @@ func TestAnchorBlockEdgeCases(t *testing.T) {
 	}
 	// Groundwater at the surface lowers the uplift factor.
 	wet := testBlock()
-	wet.Groundwater = true
-	dry, _ := testBlock().Check([]foundation.Pull{testPull()}, testSand(), nil)
-	wt, err := wet.Check([]foundation.Pull{testPull()}, testSand(), nil)
+	wet.Water = foundation.WaterAt(0)
+	dry, _ := testBlock().Check([]foundation.AnchorPull{testPull()}, testSand(), foundation.EC7, nil)
+	wt, err := wet.Check([]foundation.AnchorPull{testPull()}, testSand(), foundation.EC7, nil)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -238,7 +238,7 @@ func TestAnchorBlockEdgeCases(t *testing.T) {
 	// A site allowable pressure replaces the bearing-capacity equation.
 	s := testSand()
 	s.Allowable = 150 * units.Kilopascal
-	rs, err = testBlock().Check([]foundation.Pull{testPull()}, s, nil)
+	rs, err = testBlock().Check([]foundation.AnchorPull{testPull()}, s, foundation.EC7, nil)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -252,17 +252,17 @@ func TestAnchorBlockRejects(t *testing.T) {
 	cases := []struct {
 		name  string
 		blk   func(*foundation.AnchorBlock)
-		pull  func(*foundation.Pull)
+		pull  func(*foundation.AnchorPull)
 		basis *foundation.Basis
 	}{
 		{"zero length", func(a *foundation.AnchorBlock) { a.Length = 0 }, nil, nil},
 		{"NaN width", func(a *foundation.AnchorBlock) { a.Width = units.Length(math.NaN()) }, nil, nil},
 		{"negative depth", func(a *foundation.AnchorBlock) { a.Depth = -1 }, nil, nil},
 		{"mobilisation 2", func(a *foundation.AnchorBlock) { a.PassiveMobilisation = 2 }, nil, nil},
-		{"negative pull", nil, func(p *foundation.Pull) { p.Force = -1 }, nil},
-		{"angle 100", nil, func(p *foundation.Pull) { p.Angle = deg(100) }, nil},
-		{"point outside", nil, func(p *foundation.Pull) { p.X = 4 }, nil},
-		{"Inf Z", nil, func(p *foundation.Pull) { p.Z = units.Length(math.Inf(1)) }, nil},
+		{"negative pull", nil, func(p *foundation.AnchorPull) { p.Force = -1 }, nil},
+		{"angle 100", nil, func(p *foundation.AnchorPull) { p.Angle = deg(100) }, nil},
+		{"point outside", nil, func(p *foundation.AnchorPull) { p.X = 4 }, nil},
+		{"Inf Z", nil, func(p *foundation.AnchorPull) { p.Z = units.Length(math.Inf(1)) }, nil},
 		{"factor below 1", nil, nil, &foundation.Basis{Sliding: 0.8}},
 		{"negative partial", nil, nil, &foundation.Basis{PartialFactors: true, GammaRh: -1}},
 		{"bad approach", nil, nil, &foundation.Basis{PartialFactors: true, Approach: 7}},
@@ -275,7 +275,7 @@ func TestAnchorBlockRejects(t *testing.T) {
 		if c.pull != nil {
 			c.pull(&p)
 		}
-		rs, err := blk.Check([]foundation.Pull{p}, testSand(), c.basis)
+		rs, err := blk.Check([]foundation.AnchorPull{p}, testSand(), foundation.EC7, c.basis)
 		if !errors.Is(err, foundation.ErrInvalid) || rs != nil {
 			t.Errorf("%s: err %v, results %d", c.name, err, len(rs))
 		}
@@ -283,7 +283,7 @@ func TestAnchorBlockRejects(t *testing.T) {
 			t.Errorf("%s: message %q lacks the package prefix", c.name, err)
 		}
 	}
-	if _, err := good.Check(nil, foundation.Soil{UnitWeight: 18 * kNm3, Friction: deg(70)}, nil); !errors.Is(err, foundation.ErrInvalid) {
+	if _, err := good.Check(nil, foundation.Soil{UnitWeight: 18 * kNm3, Friction: deg(70)}, foundation.EC7, nil); !errors.Is(err, foundation.ErrInvalid) {
 		t.Errorf("φ 70: %v", err)
 	}
 }
@@ -292,7 +292,7 @@ func TestAnchorBlockSteps(t *testing.T) {
 	// A step covering the whole plan is the same as a taller block; with
 	// passive resistance counted only while the ground is at the block's
 	// top (the step's front face is not counted as a passive face).
-	pulls := []foundation.Pull{testPull(), {Force: 20e3, Angle: deg(40), X: 0.5, Z: 0.3, Variable: true}}
+	pulls := []foundation.AnchorPull{testPull(), {Force: 20e3, Angle: deg(40), X: 0.5, Z: 0.3, Variable: true}}
 	for _, c := range []struct {
 		depth units.Length
 		mu    float64
@@ -300,14 +300,16 @@ func TestAnchorBlockSteps(t *testing.T) {
 		for _, water := range []bool{false, true} {
 			stepped := testBlock()
 			stepped.Depth, stepped.PassiveMobilisation = c.depth, c.mu
-			stepped.Groundwater, stepped.WaterDepth = water, 0.4
+			if water {
+				stepped.Water = foundation.WaterAt(0.4)
+			}
 			stepped.Steps = []foundation.Step{{X0: 0, X1: 3, Z0: 1.5, Z1: 2.3, Width: 2.5}}
 			tall := stepped
 			tall.Steps = nil
 			tall.Height = 2.3
 			for _, b := range []*foundation.Basis{nil, {PartialFactors: true}} {
-				rs, err1 := stepped.Check(pulls, testSand(), b)
-				rt, err2 := tall.Check(pulls, testSand(), b)
+				rs, err1 := stepped.Check(pulls, testSand(), foundation.EC7, b)
+				rt, err2 := tall.Check(pulls, testSand(), foundation.EC7, b)
 				if err1 != nil || err2 != nil {
 					t.Fatal(err1, err2)
 				}
@@ -322,18 +324,18 @@ func TestAnchorBlockSteps(t *testing.T) {
 	back, front := testBlock(), testBlock()
 	back.Steps = []foundation.Step{{X0: 0, X1: 1, Z0: 1.5, Z1: 2.5, Width: 2.5}}
 	front.Steps = []foundation.Step{{X0: 2, X1: 3, Z0: 1.5, Z1: 2.5, Width: 2.5}}
-	rb, _ := back.Check([]foundation.Pull{testPull()}, testSand(), nil)
-	rf, _ := front.Check([]foundation.Pull{testPull()}, testSand(), nil)
+	rb, _ := back.Check([]foundation.AnchorPull{testPull()}, testSand(), foundation.EC7, nil)
+	rf, _ := front.Check([]foundation.AnchorPull{testPull()}, testSand(), foundation.EC7, nil)
 	fx, fz := 80*math.Cos(25*math.Pi/180), 80*math.Sin(25*math.Pi/180)
 	dst := fx*1.2 + fz*0.5
 	near(t, "back step", byID(t, rb, "anchor.overturning").Provided, (270*1.5+60*2.5)/dst, 1e-9)
 	near(t, "front step", byID(t, rf, "anchor.overturning").Provided, (270*1.5+60*0.5)/dst, 1e-9)
 	// A pull may attach on a step, not in the air beside it.
-	on := foundation.Pull{Force: 50e3, Angle: deg(20), X: 0.5, Z: 2.4}
-	if _, err := back.Check([]foundation.Pull{on}, testSand(), nil); err != nil {
+	on := foundation.AnchorPull{Force: 50e3, Angle: deg(20), X: 0.5, Z: 2.4}
+	if _, err := back.Check([]foundation.AnchorPull{on}, testSand(), foundation.EC7, nil); err != nil {
 		t.Errorf("pull on the step: %v", err)
 	}
-	if _, err := front.Check([]foundation.Pull{on}, testSand(), nil); !errors.Is(err, foundation.ErrInvalid) {
+	if _, err := front.Check([]foundation.AnchorPull{on}, testSand(), foundation.EC7, nil); !errors.Is(err, foundation.ErrInvalid) {
 		t.Errorf("pull beside the step: %v", err)
 	}
 	for i, st := range []foundation.Step{
@@ -344,7 +346,7 @@ func TestAnchorBlockSteps(t *testing.T) {
 	} {
 		blk := testBlock()
 		blk.Steps = []foundation.Step{st}
-		if _, err := blk.Check(nil, testSand(), nil); !errors.Is(err, foundation.ErrInvalid) {
+		if _, err := blk.Check(nil, testSand(), foundation.EC7, nil); !errors.Is(err, foundation.ErrInvalid) {
 			t.Errorf("bad step %d: %v", i, err)
 		}
 	}

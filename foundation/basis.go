@@ -34,6 +34,8 @@ type Basis struct {
 	Tendon      float64 // 0 → 2.0 on a rock-anchor bar's yield force (from memory, BS 8081 permanent anchors)
 	Bond        float64 // 0 → 3.0 on ultimate grout bond (from memory, BS 8081 permanent anchors)
 	Cone        float64 // 0 → 2.0 on the weight of a rock-anchor's uplift cone
+	Steel       float64 // 0 → 1.67 on the yield resistance of steel in the ground (AISC 360-16 ASD Ω, from memory)
+	Rope        float64 // 0 → 3.0 on a rope's breaking force at its termination or loop (common practice)
 
 	// Partial factors (EN 1997-1:2004 Annex A; zero → recommended value):
 	Approach  Approach
@@ -52,10 +54,14 @@ type Basis struct {
 	GammaRe   float64 // earth resistance: R2 1.4 (DA2), R1 1.0 (DA1) (Table A.13, from memory)
 	GammaA    float64 // anchorage (grout bond) resistance, 1.1 (Table A.12, from memory)
 	GammaS    float64 // steel bar yield, 1.15 (EN 1992-1-1 Table 2.1N, from memory)
+	GammaM0   float64 // steel sections and rods, 1.0 (EN 1993-1-1 6.1, recommended)
+	GammaM2   float64 // threads and plates in tension, 1.25 (EN 1993-1-8 Table 2.1, recommended)
+	GammaRope float64 // rope resistance γR, 0.90 (EN 1993-1-11 6.2, from memory)
 
-	// Terse leaves out the basis and note text of the anchor-block and
-	// footing results, for callers that only score designs (a design
-	// search); every number is the same. Default false.
+	// Terse leaves out the basis and note text and the named values of the
+	// anchor-block and footing results, for callers that only score designs
+	// (a design search); every demand, capacity and ratio is the same.
+	// Default false.
 	Terse bool
 }
 
@@ -78,7 +84,7 @@ func resolveBasis(b *Basis) (Basis, error) {
 		v    float64
 	}{
 		{"Sliding", r.Sliding}, {"Overturning", r.Overturning}, {"Uplift", r.Uplift}, {"Bearing", r.Bearing},
-		{"Pullout", r.Pullout}, {"Tendon", r.Tendon}, {"Bond", r.Bond}, {"Cone", r.Cone},
+		{"Pullout", r.Pullout}, {"Tendon", r.Tendon}, {"Bond", r.Bond}, {"Cone", r.Cone}, {"Steel", r.Steel}, {"Rope", r.Rope},
 	} {
 		if !(f.v == 0 || f.v >= 1) || math.IsInf(f.v, 0) {
 			return Basis{}, invalid("Basis."+f.name, "must be zero (default) or a finite factor of at least 1")
@@ -91,7 +97,7 @@ func resolveBasis(b *Basis) (Basis, error) {
 		{"GammaGdst", r.GammaGdst}, {"GammaGstb", r.GammaGstb}, {"GammaQdst", r.GammaQdst},
 		{"GammaG", r.GammaG}, {"GammaQ", r.GammaQ}, {"GammaGA2", r.GammaGA2}, {"GammaQA2", r.GammaQA2},
 		{"GammaPhi", r.GammaPhi}, {"GammaC", r.GammaC}, {"GammaCu", r.GammaCu}, {"GammaRh", r.GammaRh}, {"GammaRv", r.GammaRv},
-		{"GammaRe", r.GammaRe}, {"GammaA", r.GammaA}, {"GammaS", r.GammaS},
+		{"GammaRe", r.GammaRe}, {"GammaA", r.GammaA}, {"GammaS", r.GammaS}, {"GammaM0", r.GammaM0}, {"GammaM2", r.GammaM2}, {"GammaRope", r.GammaRope},
 	} {
 		if !(f.v >= 0) || math.IsInf(f.v, 0) { // the field's name is built only on error
 			return Basis{}, nonNegative("Basis."+f.name, f.v)
@@ -184,7 +190,7 @@ func (b Basis) allowableSet() actionSet {
 	return actionSet{gG: 1, gGfav: 1, gQ: 1, gPhi: 1, gC: 1, gCu: 1, gRh: 1, gRv: 1, gRe: 1, allowable: true, terse: b.Terse}
 }
 
-// fsNote describes a global factor of safety.
+// fsBasis describes a global factor of safety.
 func fsBasis(what string, fs float64) string {
 	return fmt.Sprintf("allowable basis: global factor of safety %.2f on %s (common practice)", fs, what)
 }

@@ -15,11 +15,11 @@ var (
 
 // BenchmarkBearingCapacity is on the design-search hot path.
 func BenchmarkBearingCapacity(b *testing.B) {
-	in := foundation.BearingInput{B: 2, L: 3, Depth: 1, Vertical: 800 * units.Kilonewton, Horizontal: 60 * units.Kilonewton, EccB: 0.2}
+	in := foundation.BearingInput{AlongLoad: 2, AcrossLoad: 3, Depth: 1, Vertical: 800 * units.Kilonewton, Horizontal: 60 * units.Kilonewton, EccAlong: 0.2}
 	s := sand30()
 	b.ReportAllocs()
 	for b.Loop() {
-		r, err := foundation.BearingCapacity(in, s, foundation.EC7)
+		r, err := foundation.BearingCapacity(in, s, foundation.EC7, foundation.Drained)
 		if err != nil {
 			b.Fatal(err)
 		}
@@ -32,7 +32,7 @@ func BenchmarkBearingCapacity(b *testing.B) {
 func BenchmarkAnchorBlockCheck(b *testing.B) {
 	blk := testBlock()
 	blk.PassiveMobilisation = 0.5
-	pulls := []foundation.Pull{testPull()}
+	pulls := []foundation.AnchorPull{testPull()}
 	for _, bs := range []struct {
 		name  string
 		basis *foundation.Basis
@@ -40,7 +40,7 @@ func BenchmarkAnchorBlockCheck(b *testing.B) {
 		b.Run(bs.name, func(b *testing.B) {
 			b.ReportAllocs()
 			for b.Loop() {
-				rs, err := blk.Check(pulls, testSand(), bs.basis)
+				rs, err := blk.Check(pulls, testSand(), foundation.EC7, bs.basis)
 				if err != nil {
 					b.Fatal(err)
 				}

@@ -18,10 +18,10 @@ func TestContactPressure(t *testing.T) {
 		qmax, qmin, contact float64 // kPa, kPa, m
 		src                 string
 	}{
-		// SOURCES.md §4 [D], from the kern formulas; re-derived below by
+		// [D] from the kern formulas (Das §3.11, from memory); re-derived below by
 		// quadrature of the pressure block: strip N 300 kN/m, B 2 m.
-		{300 * kN, 0.2 * m, 2 * m, 1 * m, 240, 60, 2, "SOURCES [D] inside kern"},
-		{300 * kN, 0.5 * m, 2 * m, 1 * m, 400, 0, 1.5, "SOURCES [D] outside kern"},
+		{300 * kN, 0.2 * m, 2 * m, 1 * m, 240, 60, 2, "[D] inside kern"},
+		{300 * kN, 0.5 * m, 2 * m, 1 * m, 400, 0, 1.5, "[D] outside kern"},
 		{300 * kN, -0.5 * m, 2 * m, 1 * m, 400, 0, 1.5, "mirrored"},
 		{300 * kN, 0, 2 * m, 1 * m, 150, 150, 2, "centric"},
 		{600 * kN, 2.0 / 6 * m, 2 * m, 2 * m, 300, 0, 2, "kern edge"},

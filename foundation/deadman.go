@@ -27,6 +27,14 @@ type Deadman struct {
 	// EndEffects adds Teng's term for the soil wedges at the ends of a
 	// short deadman (only near the surface, Height ≥ Depth/2).
 	EndEffects bool
+	// Water is the water level at the deadman: effective stresses in the
+	// passive and active pressures, submerged weights in uplift.
+	Water Water
+	// Section is the deadman's steel section, checked in bending and shear
+	// as a beam on the soil reaction; the zero value means the section is
+	// not a steel one described here (a concrete or timber beam), and its
+	// design moment and shear are reported for its own design.
+	Section SteelSection
 }
 
 func (d Deadman) validate() error {
@@ -41,89 +49,141 @@ func (d Deadman) validate() error {
 	if d.Height > d.Depth {
 		return invalid("Deadman.Height", "must not exceed Depth: a deadman is buried")
 	}
+	if err := d.Water.validate("Deadman.Water"); err != nil {
+		return err
+	}
+	if err := d.Section.validate("Deadman.Section", true); err != nil {
+		return err
+	}
 	return nonNegative("Deadman.UnitWeight", float64(d.UnitWeight))
 }
 
 // Resistance returns the ultimate horizontal resistance of the deadman in
-// soil s (Teng, Foundation Design, 1962, from memory; also in Das,
-// Principles of Foundation Engineering, ch. on anchor plates):
+// soil s in condition cond (Teng, Foundation Design, 1962, from memory;
+// also in Das, Principles of Foundation Engineering, ch. on anchor plates):
 //
 //	near the surface (Height ≥ Depth/2): T = Length (Pp − Pa) over 0 … Depth
-//	   + with EndEffects: ⅓ K0 γ (√Kp + √Ka) Depth³ tan φ
+//	   + with EndEffects: ⅓ K0 γ (√Kp + √Ka) Depth³ tan φ  (γ' when water is within Depth)
 //	deeper: the larger of Length (Pp − Pa) over the face only and the
 //	   near-surface value at Depth = 2·Height
 //
-// with Rankine coefficients for level ground and Bell's cohesion terms, the
-// active side's tension cut off. The deeper form is this package's cautious
-// choice (a deeper deadman is never taken as weaker than a shallower one);
-// deep anchors have larger capacities by other methods. The second return
-// value tells which form was used.
-func (d Deadman) Resistance(s Soil) (units.Force, string, error) {
+// with Rankine coefficients for level ground and Bell's cohesion terms
+// (drained), or K = 1 and c_u (undrained, where the end-effect term
+// vanishes with φ), effective stresses with the deadman's water level, the
+// active side's tension cut off. The deeper form is this package's
+// cautious choice (a deeper deadman is never taken as weaker than a
+// shallower one); deep anchors have larger capacities by other methods.
+// The second return value tells which form was used.
+func (d Deadman) Resistance(s Soil, cond Condition) (units.Force, string, error) {
 	if err := d.validate(); err != nil {
 		return 0, "", err
 	}
 	if err := s.Validate(); err != nil {
 		return 0, "", err
 	}
+	if !cond.valid() {
+		return 0, "", invalid("Condition", fmt.Sprintf("%d is not a known condition", int(cond)))
+	}
+	if cond == Undrained && !(s.Undrained > 0) {
+		return 0, "", invalid("Soil.Undrained", "must be positive for the undrained condition")
+	}
+	if cond == Drained && !(s.Friction > 0) {
+		return 0, "", invalid("Soil.Friction", "must be positive for the drained condition")
+	}
+	st := s.strengthIn(cond, Basis{}.allowableSet())
+	t, how := d.resistance(s, st)
+	return units.Force(t), how, nil
+}
+
+// resistance is Resistance for strength st (after partial factors).
+func (d Deadman) resistance(s Soil, st strength) (float64, string) {
 	if d.Height >= d.Depth/2 {
-		t, err := d.teng(s, d.Depth)
 		how := "Teng's continuous anchor near the surface (from memory)"
-		if d.EndEffects {
+		if d.EndEffects && st.cond == Drained {
 			how += ", with end effects"
 		}
-		return t, how, err
+		return d.teng(s, st, float64(d.Depth)), how
 	}
-	face, err := d.passiveLessActive(s, d.Depth-d.Height, d.Depth)
-	if err != nil {
-		return 0, "", err
-	}
-	shallow, err := d.teng(s, 2*d.Height)
-	if err != nil {
-		return 0, "", err
-	}
+	face := d.passiveLessActive(s, st, float64(d.Depth-d.Height), float64(d.Depth))
+	shallow := d.teng(s, st, 2*float64(d.Height))
 	if face >= shallow {
-		return face, "deep deadman: passive less active on the face only (cautious)", nil
+		return face, "deep deadman: passive less active on the face only (cautious)"
 	}
-	return shallow, "deep deadman: Teng's value at depth 2·Height (cautious)", nil
+	return shallow, "deep deadman: Teng's value at depth 2·Height (cautious)"
+}
+
+// coefficients returns Kp and Ka in strength st: Rankine's for level
+// ground drained, 1 undrained.
+func (st strength) coefficients() (kp, ka float64) {
+	if st.cond == Undrained {
+		return 1, 1
+	}
+	return rankineLevel(units.Angle(st.phi), true), rankineLevel(units.Angle(st.phi), false)
 }
 
 // passiveLessActive returns Length (Pp − Pa) between depths top and bottom.
-func (d Deadman) passiveLessActive(s Soil, top, bottom units.Length) (units.Force, error) {
-	kp, ka := rankineLevel(s.Friction, true), rankineLevel(s.Friction, false)
-	pp, err := EarthPressureForce(kp, s.UnitWeight, s.Cohesion, top, bottom, 1)
-	if err != nil {
-		return 0, err
-	}
-	pa, err := EarthPressureForce(ka, s.UnitWeight, s.Cohesion, top, bottom, -1)
-	if err != nil {
-		return 0, err
-	}
-	return units.Force(float64(d.Length) * float64(pp.Force-pa.Force)), nil
+func (d Deadman) passiveLessActive(s Soil, st strength, top, bottom float64) float64 {
+	kp, ka := st.coefficients()
+	g, gs, dw := float64(s.UnitWeight), float64(s.SubmergedWeight()), d.Water.depth()
+	pp := layeredEarth(kp, st.c, 1, top, bottom, g, gs, dw)
+	pa := layeredEarth(ka, st.c, -1, top, bottom, g, gs, dw)
+	return float64(d.Length) * float64(pp.Force-pa.Force)
 }
 
 // teng returns Teng's near-surface resistance for a face reaching depth h.
-func (d Deadman) teng(s Soil, h units.Length) (units.Force, error) {
-	t, err := d.passiveLessActive(s, 0, h)
-	if err != nil || !d.EndEffects {
-		return t, err
+func (d Deadman) teng(s Soil, st strength, h float64) float64 {
+	t := d.passiveLessActive(s, st, 0, h)
+	if !d.EndEffects || st.cond == Undrained {
+		return t
 	}
-	kp, ka := rankineLevel(s.Friction, true), rankineLevel(s.Friction, false)
-	hh := float64(h)
-	t += units.Force(TengK0 * float64(s.UnitWeight) * (math.Sqrt(kp) + math.Sqrt(ka)) * hh * hh * hh * math.Tan(float64(s.Friction)) / 3)
-	return t, nil
+	kp, ka := st.coefficients()
+	g := float64(s.UnitWeight)
+	if d.Water.depth() < h {
+		g = float64(s.SubmergedWeight()) // cautious: the whole wedge at its submerged weight
+	}
+	return t + TengK0*g*(math.Sqrt(kp)+math.Sqrt(ka))*h*h*h*math.Tan(st.phi)/3
+}
+
+// weight returns the effective weight resisting uplift: the deadman
+// (buoyed below the water) and the vertical soil prism above it (at its
+// effective weight below the water).
+func (d Deadman) weight(s Soil) float64 {
+	gd := float64(d.UnitWeight)
+	if gd == 0 {
+		gd = float64(ConcreteUnitWeight)
+	}
+	plan := float64(d.Length) * float64(d.Thickness)
+	top, bottom, dw := float64(d.Depth-d.Height), float64(d.Depth), d.Water.depth()
+	sub := overlap(top, bottom, dw, math.Inf(1)) // height of the beam below the water
+	prism, _ := stress(top, float64(s.UnitWeight), float64(s.SubmergedWeight()), dw)
+	return plan * (gd*(bottom-top) - float64(WaterUnitWeight)*sub + prism)
 }
 
 // Check verifies the deadman against the pulls, with result IDs
 // "anchor.deadman.pullout" (the horizontal components against the
-// ultimate resistance, see Resistance) and "anchor.deadman.uplift" (the
-// vertical components against the weight of the deadman and of the
-// vertical soil prism above it, shear on the prism's sides ignored, common
-// practice). The attachment points X, Z of the pulls are not used.
+// ultimate resistance, see Resistance), "anchor.deadman.uplift" (the
+// vertical components against the effective weight of the deadman and of
+// the vertical soil prism above it, shear on the prism's sides ignored,
+// common practice), and "anchor.deadman.bending" and
+// "anchor.deadman.shear": the beam under the resultant pull T at its
+// middle, on a uniform soil reaction T/Length along it (cautious: the
+// largest moment of any placement of the ropes),
 //
-// Allowable basis: factors Pullout (2.0) and Uplift (1.5). Partial basis:
-// pull-out in GEO by the design approach, resistance divided by γR,e;
-// uplift in EQU. Special cases and errors as AnchorBlock.Check.
-func (d Deadman) Check(pulls []Pull, s Soil, b *Basis) ([]check.Result, error) {
+//	M = T·Length/8,  V = T/2
+//
+// against M_Rd = W_pl f_y/γM0 and V_Rd = A_v (f_y/√3)/γM0 (EN 1993-1-1:2005
+// 6.2.5 and 6.2.6) when Section is given, or reported as values with no
+// limit (check.Record) for a beam not described as steel. The attachment
+// points X, Z of the pulls are not used.
+//
+// A fine soil is checked drained and undrained for pull-out, the worse
+// reported with the governing condition named.
+//
+// Allowable basis: factors Pullout (2.0), Uplift (1.5) and Steel (1.67 on
+// the yield resistance). Partial basis: pull-out in GEO by the design
+// approach, resistance divided by γR,e; uplift in EQU; the beam under set
+// A1 actions with γM0. Special cases and errors as AnchorBlock.Check.
+func (d Deadman) Check(pulls []AnchorPull, s Soil, b *Basis) ([]check.Result, error) {
 	if err := d.validate(); err != nil {
 		return nil, err
 	}
@@ -137,28 +197,21 @@ func (d Deadman) Check(pulls []Pull, s Soil, b *Basis) ([]check.Result, error) {
 	if err != nil {
 		return nil, err
 	}
-	gd := float64(d.UnitWeight)
-	if gd == 0 {
-		gd = float64(ConcreteUnitWeight)
-	}
-	plan := float64(d.Length) * float64(d.Thickness)
-	weight := gd*plan*float64(d.Height) + float64(s.UnitWeight)*plan*float64(d.Depth-d.Height)
+	weight := d.weight(s)
+	conds := s.Conditions()
 
-	pullout := func(set actionSet, fs float64) (check.Result, error) {
-		sd := s.factored(set)
-		t, how, err := d.Resistance(sd)
-		if err != nil {
-			return check.Result{}, err
-		}
+	pullout := func(set actionSet, cond Condition, fs float64) check.Result {
+		st := s.strengthIn(cond, set)
+		t, how := d.resistance(s, st)
 		var fx float64
 		for _, p := range pulls {
 			x, _ := p.components()
 			fx += set.factor(x > 0, p.Variable) * x
 		}
-		return check.Stability("anchor.deadman.pullout", "Deadman pull-out through the soil", units.KindForce,
-			fx, float64(t)/set.gRe, fs).
-			WithBasis(basisOf(set, "the ultimate passive minus active resistance", fs)).
-			WithNote(fmt.Sprintf("ultimate resistance %v: %s", t, how)), nil
+		r := check.Stability("anchor.deadman.pullout", "Deadman pull-out through the soil", units.KindForce,
+			fx, t/set.gRe, fs).WithBasis(basisOf(set, "the ultimate passive minus active resistance", fs))
+		r = set.values(r, check.Of("T_u", "ultimate horizontal resistance of the soil", units.Force(t)))
+		return set.note(r, fmt.Sprintf("ultimate resistance %v: %s; %v", units.Force(t), how, d.Water))
 	}
 	uplift := func(set actionSet, fs float64) check.Result {
 		var dst, stb float64
@@ -171,28 +224,78 @@ func (d Deadman) Check(pulls []Pull, s Soil, b *Basis) ([]check.Result, error) {
 			}
 		}
 		stb += set.gGfav * weight
-		return check.Stability("anchor.deadman.uplift", "Deadman uplift", units.KindForce, dst, stb, fs).
-			WithBasis(basisOf(set, "the weight of the deadman and the soil above it", fs)).
-			WithNote("vertical soil prism above the deadman; shear on its sides ignored")
+		r := check.Stability("anchor.deadman.uplift", "Deadman uplift", units.KindForce, dst, stb, fs).
+			WithBasis(basisOf(set, "the effective weight of the deadman and the soil above it", fs))
+		r = set.values(r, check.Of("W", "effective weight of the deadman and the soil prism above it", units.Force(weight)))
+		return set.note(r, "vertical soil prism above the deadman; shear on its sides ignored")
 	}
-
+	var per [2]conditioned
+	var lift check.Result
+	var sets []actionSet
+	fsPull, fsSteel := 1.0, 1.0
 	if !bs.PartialFactors {
-		set := bs.allowableSet()
-		po, err := pullout(set, def(bs.Pullout, 2))
-		if err != nil {
-			return nil, err
-		}
-		return []check.Result{po, uplift(set, def(bs.Uplift, 1.5))}, nil
+		sets = []actionSet{bs.allowableSet()}
+		fsPull, fsSteel = def(bs.Pullout, 2), def(bs.Steel, defaultSteelFactor)
+		lift = uplift(sets[0], def(bs.Uplift, 1.5))
+	} else {
+		sets = bs.geoSets()
+		lift = uplift(bs.equSet(), 1)
 	}
-	var po check.Result
-	for i, set := range bs.geoSets() {
-		r, err := pullout(set, 1)
-		if err != nil {
-			return nil, err
-		}
-		if i == 0 || r.Ratio > po.Ratio {
-			po = r
+	for i, cond := range conds {
+		for j, set := range sets {
+			r := pullout(set, cond, fsPull)
+			if j == 0 || r.Ratio > per[i].r.Ratio {
+				per[i] = conditioned{cond, r}
+			}
 		}
 	}
-	return []check.Result{po, uplift(bs.equSet(), 1)}, nil
+	out := []check.Result{governing(sets[0], per[:len(conds)]), lift}
+	return append(out, d.beam(pulls, bs, fsSteel)...), nil
+}
+
+// beam returns the bending and shear results of the deadman as a beam.
+func (d Deadman) beam(pulls []AnchorPull, bs Basis, fs float64) []check.Result {
+	set := bs.allowableSet()
+	gM0 := 1.0
+	label := ""
+	if bs.PartialFactors {
+		set = bs.geoSets()[0] // set A1
+		gM0 = def(bs.GammaM0, 1.0)
+		label = fmt.Sprintf("EN 1993-1-1:2005 6.2.5 and 6.2.6, γM0 %.2f, under set A1 actions (EN 1997-1 Annex A)", gM0)
+	} else {
+		label = fsBasis("the plastic resistance of the steel section (EN 1993-1-1:2005 6.2.5 and 6.2.6)", fs)
+	}
+	var fx, fz float64
+	for _, p := range pulls {
+		x, z := p.components()
+		g := set.factor(true, p.Variable)
+		fx, fz = fx+g*x, fz+g*z
+	}
+	t := math.Hypot(fx, fz)
+	l := float64(d.Length)
+	mEd, vEd := t*l/8, t/2
+	beamNote := "beam on a uniform soil reaction T/Length with the resultant pull T at its middle (cautious: the largest moment of any placement of the ropes)"
+	if d.Section.Yield == 0 {
+		note := "the deadman is not described as a steel section: design the beam for this moment and shear (EN 1992-1-1 for concrete); " + beamNote
+		return []check.Result{
+			check.Record("anchor.deadman.bending", "Deadman beam bending moment", units.KindMoment, mEd).
+				WithBasis("common practice: " + beamNote).WithValues(check.Of("T", "resultant pull on the beam", units.Force(t))).WithNote(note),
+			check.Record("anchor.deadman.shear", "Deadman beam shear force", units.KindForce, vEd).
+				WithBasis("common practice: " + beamNote).WithValues(check.Of("T", "resultant pull on the beam", units.Force(t))).WithNote(note),
+		}
+	}
+	sec := d.Section
+	mRd := float64(sec.PlasticModulus) * float64(sec.Yield) / gM0
+	vRd := float64(sec.ShearArea) * float64(sec.Yield) / math.Sqrt(3) / gM0
+	if !bs.PartialFactors {
+		mRd, vRd = mRd/fs, vRd/fs
+	}
+	vals := []check.Value{check.Of("T", "resultant pull on the beam", units.Force(t)),
+		check.Of("f_y", "yield strength of the section", sec.Yield)}
+	return []check.Result{
+		check.Compare("anchor.deadman.bending", "Deadman beam bending", units.KindMoment, mEd, mRd).WithBasis(label).
+			WithValues(append(vals, check.Of("W_pl", "plastic section modulus", sec.PlasticModulus))...).WithNote(beamNote),
+		check.Compare("anchor.deadman.shear", "Deadman beam shear", units.KindForce, vEd, vRd).WithBasis(label).
+			WithValues(append(vals, check.Of("A_v", "shear area", sec.ShearArea))...).WithNote(beamNote),
+	}
 }

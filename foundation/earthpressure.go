@@ -209,3 +209,61 @@ func EarthPressureForce(k float64, gamma units.UnitWeight, c units.Pressure, top
 	y := h * (2*s1 + s2) / (3 * (s1 + s2))
 	return EarthForce{Force: units.Force(f), Height: units.Length(y)}, nil
 }
+
+// layeredEarth returns the resultant, per metre width, of the earth
+// pressure
+//
+//	σ(z) = K σ'v(z) + sign · 2c √K        (sign +1 passive, −1 active)
+//
+// on a vertical face from depth top to depth bottom below the ground, with
+// σ'v the effective vertical stress of stress() (unit weight g above the
+// water at depth dw, gs below it) and the active side's tension cut off at
+// zero: EarthPressureForce with the water table as a break in the stress
+// profile. The water pressure itself acts alike on both faces of a buried
+// block and is left out. Undrained, pass K = 1 and c = c_u.
+func layeredEarth(k, c float64, sign int, top, bottom, g, gs, dw float64) EarthForce {
+	if !(bottom > top) {
+		return EarthForce{}
+	}
+	c0 := float64(sign) * 2 * c * math.Sqrt(k)
+	sigma := func(z float64) float64 {
+		sv, _ := stress(z, g, gs, dw)
+		return k*sv + c0
+	}
+	var force, moment float64
+	add := func(z1, z2 float64) {
+		s1, s2 := sigma(z1), sigma(z2)
+		if sign < 0 { // cut off tension
+			switch {
+			case s1 <= 0 && s2 <= 0:
+				return
+			case s1 < 0:
+				z1 += (z2 - z1) * (-s1) / (s2 - s1)
+				s1 = 0
+			case s2 < 0:
+				z2 = z1 + (z2-z1)*s1/(s1-s2)
+				s2 = 0
+			}
+		}
+		h := z2 - z1
+		f := (s1 + s2) / 2 * h
+		if f <= 0 {
+			return
+		}
+		// Height of the trapezoid's centroid above its lower edge z2, plus
+		// the depth from z2 down to the face's bottom.
+		y := h*(2*s1+s2)/(3*(s1+s2)) + (bottom - z2)
+		force += f
+		moment += f * y
+	}
+	if w := math.Max(dw, 0); w > top && w < bottom {
+		add(top, w)
+		add(w, bottom)
+	} else {
+		add(top, bottom)
+	}
+	if force == 0 {
+		return EarthForce{}
+	}
+	return EarthForce{Force: units.Force(force), Height: units.Length(moment / force)}
+}

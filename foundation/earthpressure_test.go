@@ -19,9 +19,9 @@ func TestRankineValues(t *testing.T) {
 	}{
 		// tan²(45 ∓ φ/2): 1/3 and 3 at φ 30° (textbook values, exact).
 		{30, 0, 1.0 / 3, 3, "exact"},
-		// SOURCES.md §4 [D] (formula values, the formula here is the
+		// [D] (Rankine's formula, Das ch. 7; the formula here is the
 		// general sloping one, a different route at β = 0).
-		{35, 0, 0.2710, 3.6902, "SOURCES [D]"},
+		{35, 0, 0.2710, 3.6902, "[D]"},
 		// Sloping backfill, β 10°, φ 30°: Ka 0.3495 as in Das's table of
 		// Rankine Ka for inclined backfill (from memory); checked below
 		// against the trial wedge too.
@@ -44,7 +44,7 @@ func TestRankineValues(t *testing.T) {
 }
 
 func TestCoulombValues(t *testing.T) {
-	// SOURCES.md §4: Ka (φ 30, δ 20) 0.2973 [D; matches Das's table, from
+	// Ka (φ 30, δ 20) 0.2973 [D, Murthy eq. 11.51; matches Das's table, from
 	// memory]; Kp (φ 30, δ 15) 4.9765 [D]. Both are also reached by the
 	// trial-wedge route in TestCoulombWedge.
 	ka, err := foundation.CoulombActive(deg(30), deg(20), 0, 0)

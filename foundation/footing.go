@@ -9,11 +9,14 @@ import (
 )
 
 // Footing is a rectangular concrete pad under a tower column, with its
-// base at Depth below the ground surface. Frame: x along the bridge (side
-// B), z up, origin at the centre of the base.
+// base at Depth below the ground surface. Frame: x along the side Along
+// (along the bridge for a tower footing), z up, origin at the centre of
+// the base.
 type Footing struct {
-	// B is the side along the bridge (x), L the side across it.
-	B, L units.Length
+	// Along is the side along x, the direction of the horizontal load and
+	// of the moment; Across is the side across it. Either may be the
+	// shorter (the bearing factors take the shorter effective side as B').
+	Along, Across units.Length
 	// Thickness of the pad; Depth of its base below ground. Soil over the
 	// pad (Depth − Thickness, over the plan area less Footprint) is counted
 	// as weight.
@@ -24,10 +27,9 @@ type Footing struct {
 	Footprint units.Area
 	// UnitWeight of the pad; zero → ConcreteUnitWeight (24 kN/m³).
 	UnitWeight units.UnitWeight
-	// Groundwater is true when the water table lies WaterDepth below
-	// ground: the pad is buoyed and the bearing capacity reduced.
-	Groundwater bool
-	WaterDepth  units.Length
+	// Water is the water level at the footing: the pad and its soil cover
+	// are buoyed, and bearing uses effective stresses.
+	Water Water
 }
 
 // FootingLoad is the load from the tower, brought to the underside of the
@@ -103,7 +105,7 @@ func (f Footing) validate() error {
 	for _, x := range []struct {
 		name string
 		v    float64
-	}{{"Footing.B", float64(f.B)}, {"Footing.L", float64(f.L)}, {"Footing.Thickness", float64(f.Thickness)}} {
+	}{{"Footing.Along", float64(f.Along)}, {"Footing.Across", float64(f.Across)}, {"Footing.Thickness", float64(f.Thickness)}} {
 		if err := positive(x.name, x.v); err != nil {
 			return err
 		}
@@ -114,10 +116,7 @@ func (f Footing) validate() error {
 	if err := nonNegative("Footing.UnitWeight", float64(f.UnitWeight)); err != nil {
 		return err
 	}
-	if f.Groundwater {
-		return nonNegative("Footing.WaterDepth", float64(f.WaterDepth))
-	}
-	return nil
+	return f.Water.validate("Footing.Water")
 }
 
 func (ld FootingLoad) validate() error {
@@ -145,14 +144,22 @@ func (ld FootingLoad) validate() error {
 // bearing-capacity method m, with result IDs "footing.bearing",
 // "footing.sliding" and "footing.overturning".
 //
-// With W the pad's and soil cover's weight less buoyancy and N = V + W:
+// With W the pad's and soil cover's weight, U the water's uplift and
+// N = V + W − U:
 //
-//	bearing:     e = M/N along B; N/A' on B' = B − 2|e| against qult (method m),
+//	bearing:     e = M/N along Along; N/A' on B' = Along − 2|e| against qult (method m),
 //	             or, on the allowable basis, the peak contact pressure against
-//	             Soil.Allowable when given
-//	sliding:     driving |H|, resisting N tan δ (cohesion and passive ignored)
+//	             Soil.Allowable when given; on rock the peak contact pressure under
+//	             characteristic actions against RockPressure
+//	sliding:     driving |H|, resisting N tan δ drained (cohesion and passive ignored),
+//	             A'c_u undrained (≤ 0.4 N where water or air reach the base; EN 1997-1 6.5.3)
 //	overturning: about the base edge the moment turns toward:
-//	             driving |M| (+ |V|·B/2 when V pulls up), resisting (W + V⁺)·B/2
+//	             driving |M| + U·Along/2 (+ |V|·Along/2 when V pulls up), resisting (W + V⁺)·Along/2
+//
+// A fine soil (Soil.Undrained given) is checked in the drained and the
+// undrained condition for bearing and sliding; the worse is reported, its
+// basis naming the condition that governs, its values holding the
+// utilisation in each ("U_dr", "U_un") and every number behind it.
 //
 // Allowable basis: the load as given, factors of safety 3.0 (bearing),
 // 1.5 (sliding), 2.0 (overturning) unless set in b. Partial basis:
@@ -165,7 +172,8 @@ func (ld FootingLoad) validate() error {
 // Special cases: no horizontal load or moment gives a provided factor of
 // +Inf; a resultant outside the base fails bearing with a note; N ≤ 0
 // (net uplift) passes bearing with a note while overturning fails.
-// Invalid input returns an error wrapping ErrInvalid.
+// Invalid input, or rock with no allowable pressure or rock strength,
+// returns an error wrapping ErrInvalid.
 func (f Footing) Check(load FootingLoad, s Soil, m Method, b *Basis) ([]check.Result, error) {
 	return f.AppendCheck(nil, load, s, m, b)
 }
@@ -189,8 +197,13 @@ func (f Footing) AppendCheck(dst []check.Result, load FootingLoad, s Soil, m Met
 	if err != nil {
 		return nil, err
 	}
-	ld := AnchorBlock{Length: f.B, Width: f.L, Height: f.Thickness, Depth: f.Depth, UnitWeight: f.UnitWeight,
-		Groundwater: f.Groundwater, WaterDepth: f.WaterDepth}.loads(s)
+	if s.IsRock {
+		if _, err := RockPressure(s, min(f.Along, f.Across)); err != nil {
+			return nil, err
+		}
+	}
+	ld := AnchorBlock{Length: f.Along, Width: f.Across, Height: f.Thickness, Depth: f.Depth, UnitWeight: f.UnitWeight,
+		Water: f.Water}.loads(s)
 	if f.Footprint > 0 {
 		// No soil cover where the column stands: take its share off the
 		// cover, which lies uniformly over the plan.
@@ -198,42 +211,60 @@ func (f Footing) AppendCheck(dst []check.Result, load FootingLoad, s Soil, m Met
 		if gc == 0 {
 			gc = float64(ConcreteUnitWeight)
 		}
-		plan := float64(f.B) * float64(f.L)
+		plan := float64(f.Along) * float64(f.Across)
 		cover := ld.weight - gc*plan*float64(f.Thickness)
 		ld.weight -= cover * math.Min(float64(f.Footprint)/plan, 1)
 	}
+	conds := s.Conditions()
+	sets := bs.geoSets()
+	fsBear, fsSlide, over := 1.0, 1.0, check.Result{}
 	if !bs.PartialFactors {
-		set := bs.allowableSet()
-		bear, err := f.bearing(load, s, m, ld, set, def(bs.Bearing, 3))
-		if err != nil {
-			return nil, err
-		}
-		return append(dst, bear, f.sliding(load, s, ld, set, def(bs.Sliding, 1.5)),
-			f.overturning(load, ld, set, def(bs.Overturning, 2))), nil
+		sets = []actionSet{bs.allowableSet()}
+		fsBear, fsSlide = def(bs.Bearing, 3), def(bs.Sliding, 1.5)
+		over = f.overturning(load, ld, sets[0], def(bs.Overturning, 2))
+	} else {
+		over = f.overturning(load, ld, bs.equSet(), 1)
 	}
-	var bear, slide check.Result
-	for i, set := range bs.geoSets() {
-		r := f.sliding(load, s, ld, set, 1)
-		if i == 0 || r.Ratio > slide.Ratio {
-			slide = r
+	bearSets := sets
+	if s.IsRock { // presumed bearing values go with characteristic actions
+		bearSets = []actionSet{bs.allowableSet()}
+	}
+	var bearPer, slidePer [2]conditioned
+	for i, cond := range conds {
+		for j, set := range sets {
+			r := f.sliding(load, s, cond, ld, set, fsSlide)
+			if j == 0 || r.Ratio > slidePer[i].r.Ratio {
+				slidePer[i] = conditioned{cond, r}
+			}
 		}
-		r, err := f.bearing(load, s, m, ld, set, 1)
-		if err != nil {
-			return nil, err
+		if s.IsRock && i > 0 {
+			continue
 		}
-		if i == 0 || r.Ratio > bear.Ratio {
-			bear = r
+		for j, set := range bearSets {
+			r, err := f.bearing(load, s, m, cond, ld, set, fsBear)
+			if err != nil {
+				return nil, err
+			}
+			if j == 0 || r.Ratio > bearPer[i].r.Ratio {
+				bearPer[i] = conditioned{cond, r}
+			}
 		}
 	}
-	return append(dst, bear, slide, f.overturning(load, ld, bs.equSet(), 1)), nil
+	bear := bearPer[0].r
+	if !s.IsRock {
+		bear = governing(sets[0], bearPer[:len(conds)])
+	}
+	return append(dst, bear, governing(sets[0], slidePer[:len(conds)]), over), nil
 }
+
+// waterAtBase reports whether water stands at or above the footing's base.
+func (f Footing) waterAtBase() bool { return f.Water.depth() <= float64(f.Depth) }
 
 // bearing checks the base pressure under every design load state and
 // weight factor (the pad and its cover unfavourable or favourable) and
 // keeps the worst.
-func (f Footing) bearing(load FootingLoad, s Soil, m Method, ld blockLoads, set actionSet, fs float64) (check.Result, error) {
+func (f Footing) bearing(load FootingLoad, s Soil, m Method, cond Condition, ld blockLoads, set actionSet, fs float64) (check.Result, error) {
 	const id, title = "footing.bearing", "Footing bearing pressure"
-	basis := bearingBasis(set, s, fs)
 	weights := []float64{set.gG}
 	if set.gGfav != set.gG {
 		weights = append(weights, set.gGfav)
@@ -245,12 +276,17 @@ func (f Footing) bearing(load FootingLoad, s Soil, m Method, ld blockLoads, set 
 			n := gw*(ld.weight-ld.buoyancy) + st.v
 			var r check.Result
 			if n <= 0 {
-				r = set.note(check.Compare(id, title, units.KindPressure, 0, 0).WithBasis(basis),
-					"net uplift: the footing lifts off its base")
+				r = check.Compare(id, title, units.KindPressure, 0, 0).WithBasis(basisOf(set, "the bearing pressure", fs))
+				r = set.values(r, check.Of("N", "effective normal force on the base", units.Force(n)))
+				r = set.note(r, "net uplift: the footing lifts off its base")
 			} else {
+				bl := baseLoad{n: n, h: math.Abs(st.h), e: st.m / n}
 				var err error
-				r, err = baseBearing(id, title, basis, f.B, f.L, f.Depth, f.Groundwater, f.WaterDepth,
-					units.Force(n), units.Force(math.Abs(st.h)), units.Length(st.m/n), s, m, set, fs)
+				if s.IsRock {
+					r, err = rockBaseBearing(id, title, f.Along, f.Across, bl, s, set)
+				} else {
+					r, err = soilBearing(id, title, f.Along, f.Across, f.Depth, f.Water, bl, s, m, cond, set, fs)
+				}
 				if err != nil {
 					return check.Result{}, err
 				}
@@ -263,26 +299,42 @@ func (f Footing) bearing(load FootingLoad, s Soil, m Method, ld blockLoads, set 
 	return worst, nil
 }
 
-// sliding checks base friction under every design load state, the pad's
-// weight favourable, and keeps the worst.
-func (f Footing) sliding(load FootingLoad, s Soil, ld blockLoads, set actionSet, fs float64) check.Result {
-	sd := s.factored(set)
-	tanD := math.Tan(float64(sd.InterfaceFriction()))
+// sliding checks base shear under every design load state, the pad's
+// weight favourable and the water's uplift unfavourable, and keeps the
+// worst.
+func (f Footing) sliding(load FootingLoad, s Soil, cond Condition, ld blockLoads, set actionSet, fs float64) check.Result {
+	str := s.strengthIn(cond, set)
 	var worst check.Result
-	var normal float64
+	var worstN, worstE float64
+	var worstShear baseShear
 	for i, st := range set.states(load) {
 		n := set.gGfav*ld.weight - set.gG*ld.buoyancy + st.v
-		res := baseShear(n, tanD, sd, float64(f.B)*float64(f.L)) / set.gRh
-		r := check.Stability("footing.sliding", "Footing sliding", units.KindForce, math.Abs(st.h), res, fs)
+		e := 0.0
+		if n > 0 {
+			e = st.m / n
+		}
+		bsh := shearResistance(n, e, float64(f.Along), float64(f.Across), str, f.waterAtBase())
+		r := check.Stability("footing.sliding", "Footing sliding", units.KindForce, math.Abs(st.h), bsh.r/set.gRh, fs)
 		if i == 0 || r.Ratio > worst.Ratio {
-			worst, normal = r, n
+			worst, worstN, worstE, worstShear = r, n, e, bsh
 		}
 	}
-	worst = worst.WithBasis(basisOf(set, "base friction", fs))
+	worst = worst.WithBasis(basisOf(set, "base shear", fs))
 	if set.terse {
 		return worst
 	}
-	return worst.WithNote(shearNote(sd, normal, "cohesion and passive resistance ignored"))
+	vs, note := shearValues(str, worstN, worstShear)
+	vs = append(vs, check.Of("e", "eccentricity of the base resultant", units.Length(worstE)))
+	if str.cond == Drained {
+		note += "; cohesion and passive resistance ignored"
+	} else {
+		note += "; passive resistance ignored"
+	}
+	worst = worst.WithValues(vs...).WithNote(note)
+	if f.Water.Present {
+		worst = worst.WithNote(f.Water.String())
+	}
+	return worst
 }
 
 // overturning checks the moment about the base edge the load turns the
@@ -291,7 +343,7 @@ func (f Footing) sliding(load FootingLoad, s Soil, ld blockLoads, set actionSet,
 // (destabilising moment parts unfavourable, a downward load favourable),
 // the favourable and unfavourable parts counting as individual actions.
 func (f Footing) overturning(load FootingLoad, ld blockLoads, set actionSet, fs float64) check.Result {
-	half := float64(f.B) / 2
+	half := float64(f.Along) / 2
 	qv, _, qm := load.variable()
 	v, mx := float64(load.Vertical), float64(load.Moment)
 	mo := math.Max(set.design(mx, qm, 1), set.design(mx, qm, -1))
@@ -306,6 +358,9 @@ func (f Footing) overturning(load FootingLoad, ld blockLoads, set actionSet, fs 
 	} else {
 		dst -= down * half
 	}
-	return check.Stability("footing.overturning", "Footing overturning about the base edge", units.KindMoment, dst, stb, fs).
+	r := check.Stability("footing.overturning", "Footing overturning about the base edge", units.KindMoment, dst, stb, fs).
 		WithBasis(basisOf(set, "the restoring moment about the base edge", fs))
+	return set.values(r,
+		check.Of("W", "weight of the pad and its soil cover", units.Force(ld.weight)),
+		check.Of("U", "uplift of the water on the pad", units.Force(ld.buoyancy)))
 }

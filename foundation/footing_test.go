@@ -3,6 +3,7 @@ package foundation_test
 import (
 	"errors"
 	"math"
+	"strings"
 	"testing"
 
 	"github.com/sagspan/sagspan/check"
@@ -11,7 +12,7 @@ import (
 )
 
 func testFooting() foundation.Footing {
-	return foundation.Footing{B: 2, L: 2, Thickness: 0.6, Depth: 1}
+	return foundation.Footing{Along: 2, Across: 2, Thickness: 0.6, Depth: 1}
 }
 
 func testFootingLoad() foundation.FootingLoad {
@@ -36,8 +37,8 @@ func TestFootingHand(t *testing.T) {
 	e := 80 / n
 	bear := byID(t, rs, "footing.bearing")
 	near(t, "bearing demand", bear.Demand/1e3, n/((2-2*e)*2), 1e-9)
-	br, err := foundation.BearingCapacity(foundation.BearingInput{B: 2, L: 2, Depth: 1, Vertical: units.Force(n * 1e3),
-		Horizontal: 40e3, EccB: units.Length(e)}, sand30(), foundation.EC7)
+	br, err := foundation.BearingCapacity(foundation.BearingInput{AlongLoad: 2, AcrossLoad: 2, Depth: 1, Vertical: units.Force(n * 1e3),
+		Horizontal: 40e3, EccAlong: units.Length(e)}, sand30(), foundation.EC7, foundation.Drained)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -81,7 +82,7 @@ func TestFootingConsistency(t *testing.T) {
 			prev := map[string]float64{}
 			for w := 2.0; w <= 4; w += 0.25 {
 				f := testFooting()
-				f.B, f.L = units.Length(w), units.Length(w)
+				f.Along, f.Across = units.Length(w), units.Length(w)
 				rs, err := f.Check(testFootingLoad(), sand30(), m, bs)
 				if err != nil {
 					t.Fatal(err)
@@ -121,8 +122,8 @@ func TestFootingRejects(t *testing.T) {
 		ld foundation.FootingLoad
 		m  foundation.Method
 	}{
-		{foundation.Footing{B: 0, L: 2, Thickness: 0.5, Depth: 1}, testFootingLoad(), foundation.EC7},
-		{foundation.Footing{B: 2, L: 2, Thickness: 0.5, Depth: -1}, testFootingLoad(), foundation.EC7},
+		{foundation.Footing{Along: 0, Across: 2, Thickness: 0.5, Depth: 1}, testFootingLoad(), foundation.EC7},
+		{foundation.Footing{Along: 2, Across: 2, Thickness: 0.5, Depth: -1}, testFootingLoad(), foundation.EC7},
 		{testFooting(), foundation.FootingLoad{Vertical: units.Force(math.NaN())}, foundation.EC7},
 		{testFooting(), foundation.FootingLoad{Vertical: 1, VariableShare: 1.2}, foundation.EC7},
 		{testFooting(), testFootingLoad(), foundation.Method(12)},
@@ -140,10 +141,10 @@ func TestTerseSameNumbers(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	f := foundation.Footing{B: 2.4, L: 3, Thickness: 0.7, Depth: 1.2}
+	f := foundation.Footing{Along: 2.4, Across: 3, Thickness: 0.7, Depth: 1.2}
 	load := foundation.FootingLoad{Vertical: 300e3, Horizontal: 30e3, Moment: 80e3, VariableShare: 0.6}
 	blk := foundation.AnchorBlock{Length: 4.5, Width: 5, Height: 2.6, Depth: 3, PassiveMobilisation: 0.5}
-	pulls := []foundation.Pull{{Force: 500e3, Angle: 0.2, X: 2, Z: 0.8}, {Force: 300e3, Angle: 0.2, X: 2, Z: 0.8, Variable: true}}
+	pulls := []foundation.AnchorPull{{Force: 500e3, Angle: 0.2, X: 2, Z: 0.8}, {Force: 300e3, Angle: 0.2, X: 2, Z: 0.8, Variable: true}}
 	for _, partial := range []bool{false, true} {
 		full, terse := &foundation.Basis{PartialFactors: partial}, &foundation.Basis{PartialFactors: partial, Terse: true}
 		a, err := f.Check(load, soil, foundation.Vesic, full)
@@ -154,11 +155,11 @@ func TestTerseSameNumbers(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		c, err := blk.Check(pulls, soil, full)
+		c, err := blk.Check(pulls, soil, foundation.EC7, full)
 		if err != nil {
 			t.Fatal(err)
 		}
-		d, err := blk.Check(pulls, soil, terse)
+		d, err := blk.Check(pulls, soil, foundation.EC7, terse)
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -188,7 +189,7 @@ func TestSplitOpposingMoment(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	f := foundation.Footing{B: 2.4, L: 3, Thickness: 0.7, Depth: 0.7} // no soil cover, no buoyancy
+	f := foundation.Footing{Along: 2.4, Across: 3, Thickness: 0.7, Depth: 0.7} // no soil cover, no buoyancy
 	load := foundation.FootingLoad{Moment: -17.30e3, Split: true, VariableMoment: -20.96e3}
 	res, err := f.Check(load, soil, foundation.Vesic, &foundation.Basis{PartialFactors: true})
 	if err != nil {
@@ -225,19 +226,65 @@ func TestSplitOpposingMoment(t *testing.T) {
 	}
 }
 
-// TestUndrainedSliding: on a soil with no friction angle the base resists
-// sliding by A·cu (EN 1997-1 6.5.3(12), from memory): 2 m × 2 m × 40 kPa =
-// 160 kN against 40 kN, factor 4.
+// TestUndrainedSliding: on undrained clay the base resists sliding by
+// A'c_u (EN 1997-1:2004 6.5.3(12) [M]): 2 m × 2 m × 40 kPa = 160 kN against
+// 40 kN, factor 4. With water at the ground surface water can reach the
+// base and the resistance is capped at 0.4 N (the same clause): by hand,
+// kN and m, pad 24·2·2·0.6 = 57.6 less its uplift 9.81·2.4 = 23.544, soil
+// cover (18 − 9.81)·2·2·0.4 = 13.104, N = 300 + 57.6 − 23.544 + 13.104 =
+// 347.16, 0.4 N = 138.864 < 160: factor 3.4716.
 func TestUndrainedSliding(t *testing.T) {
-	clay := foundation.Soil{Name: "undrained clay", UnitWeight: 18 * units.KilonewtonPerCubicMetre, Cohesion: 40 * units.Kilopascal}
-	f := foundation.Footing{B: 2, L: 2, Thickness: 0.6, Depth: 1}
-	rs, err := f.Check(foundation.FootingLoad{Vertical: 300e3, Horizontal: 40e3}, clay, foundation.Terzaghi, nil)
+	clay := foundation.Soil{Name: "undrained clay", UnitWeight: 18 * units.KilonewtonPerCubicMetre, Undrained: 40 * units.Kilopascal}
+	f := foundation.Footing{Along: 2, Across: 2, Thickness: 0.6, Depth: 1}
+	load := foundation.FootingLoad{Vertical: 300e3, Horizontal: 40e3}
+	for _, m := range []foundation.Method{foundation.Terzaghi, foundation.EC7, foundation.Vesic} {
+		rs, err := f.Check(load, clay, m, nil)
+		if err != nil {
+			t.Fatal(err)
+		}
+		slide := byID(t, rs, "footing.sliding")
+		near(t, "undrained sliding", slide.Provided, 4, 1e-12)
+		if !strings.Contains(slide.Basis, "undrained") {
+			t.Errorf("basis %q does not name the undrained condition", slide.Basis)
+		}
+	}
+	f.Water = foundation.WaterAt(0)
+	rs, err := f.Check(load, clay, foundation.EC7, nil)
 	if err != nil {
 		t.Fatal(err)
 	}
-	for _, r := range rs {
-		if r.ID == "footing.sliding" && math.Abs(r.Provided-4) > 1e-12 {
-			t.Errorf("undrained sliding factor %v, want 4", r.Provided)
-		}
+	near(t, "capped at 0.4 N", byID(t, rs, "footing.sliding").Provided, 0.4*347.16/40, 1e-9)
+}
+
+// TestFootingGoverningCondition: a fine soil is checked drained and
+// undrained; the report names the condition that governs and carries both
+// utilisations.
+func TestFootingGoverningCondition(t *testing.T) {
+	soft := foundation.Soil{UnitWeight: 17 * kNm3, Friction: deg(24), Undrained: 15 * units.Kilopascal}
+	f := foundation.Footing{Along: 2, Across: 2, Thickness: 0.6, Depth: 1}
+	load := foundation.FootingLoad{Vertical: 250e3, Horizontal: 20e3, Moment: 30e3}
+	rs, err := f.Check(load, soft, foundation.EC7, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	bear := byID(t, rs, "footing.bearing")
+	ud, _ := bear.Value("U_dr")
+	uu, _ := bear.Value("U_un")
+	if !(uu.Value > ud.Value) || bear.Ratio != uu.Value {
+		t.Fatalf("undrained %v should govern drained %v (ratio %v)", uu.Value, ud.Value, bear.Ratio)
+	}
+	if !strings.HasPrefix(bear.Basis, "undrained (short-term) condition governs") {
+		t.Errorf("basis %q", bear.Basis)
+	}
+	// The same soil drained only: its ratio is the drained utilisation.
+	drained := soft
+	drained.Undrained = 0
+	rd, err := f.Check(load, drained, foundation.EC7, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "drained only", byID(t, rd, "footing.bearing").Ratio, ud.Value, 1e-12)
+	if !strings.HasPrefix(byID(t, rd, "footing.bearing").Basis, "drained (long-term) condition only") {
+		t.Errorf("drained-only basis %q", byID(t, rd, "footing.bearing").Basis)
 	}
 }

@@ -7,10 +7,12 @@ import (
 	"github.com/sagspan/sagspan/units"
 )
 
-// Pull is one backstay force on an anchor. The anchor frame has x
+// AnchorPull is one backstay force on an anchor. The anchor frame has x
 // horizontal, positive in the direction the backstays pull (toward the
-// tower and span), z up.
-type Pull struct {
+// tower and span), z up; the angle is measured ABOVE horizontal at the
+// anchor (the backstay rises toward its saddle), unlike the tower package's
+// rope angles, which are measured below horizontal at the saddle.
+type AnchorPull struct {
 	// Force is the rope tension at the anchor; zero or more.
 	Force units.Force
 	// Angle is the backstay's inclination above horizontal at the anchor
@@ -18,11 +20,12 @@ type Pull struct {
 	// and 90°.
 	Angle units.Angle
 	// X, Z locate the attachment point in the anchor's frame (for an
-	// AnchorBlock: from the back bottom edge of the block).
+	// AnchorBlock: from the back bottom edge of the block; not used by a
+	// Deadman).
 	X, Z units.Length
 	// Variable marks a pull from variable actions (live load, wind,
 	// temperature); false marks permanent actions. Split a backstay force
-	// into a permanent and a variable Pull at the same point for the
+	// into a permanent and a variable AnchorPull at the same point for the
 	// partial-factor basis; the allowable basis adds them alike.
 	Variable bool
 }
@@ -30,12 +33,12 @@ type Pull struct {
 // components returns the horizontal and vertical components of p:
 //
 //	Fx = F cos α,  Fz = F sin α
-func (p Pull) components() (fx, fz float64) {
+func (p AnchorPull) components() (fx, fz float64) {
 	f, a := float64(p.Force), float64(p.Angle)
 	return f * math.Cos(a), f * math.Sin(a)
 }
 
-func validatePulls(pulls []Pull, needPoint bool) error {
+func validatePulls(pulls []AnchorPull, needPoint bool) error {
 	for i, p := range pulls {
 		ok := float64(p.Force) >= 0 && !math.IsInf(float64(p.Force), 0) && math.Abs(float64(p.Angle)) <= math.Pi/2 &&
 			(!needPoint || !math.IsNaN(float64(p.X)+float64(p.Z)) && !math.IsInf(float64(p.X)+float64(p.Z), 0))

@@ -1,0 +1,275 @@
+package foundation
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"strings"
+
+	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/units"
+)
+
+// undrainedSlidingCap is the cap on the undrained sliding resistance of a
+// base that water or air can reach, as a fraction of the normal force:
+// R ≤ 0.4 V, EN 1997-1:2004 6.5.3(12) (from memory).
+const undrainedSlidingCap = 0.4
+
+// baseShear is the sliding resistance of a rectangular base and the
+// numbers behind it.
+type baseShear struct {
+	r      float64 // resistance, before any partial factor on it
+	area   float64 // effective area A' (undrained)
+	capped bool    // the 0.4 V cap governed (undrained)
+}
+
+// shearResistance returns the shear resistance of a base of sides along
+// (the load's direction) × across under effective normal force n at
+// eccentricity e along the load, in strength st:
+//
+//	drained:   R = N tan δ
+//	undrained: R = A' c_u,  A' = (along − 2|e|)·across,  R ≤ 0.4 N where water
+//	           or air can reach the interface: water at or above the base, or
+//	           a gap under the base (|e| > along/6)
+//
+// (EN 1997-1:2004 6.5.3(8), (11) and (12), from memory). No contact (N ≤ 0)
+// gives no resistance.
+func shearResistance(n, e, along, across float64, st strength, waterAtBase bool) baseShear {
+	if n <= 0 {
+		return baseShear{}
+	}
+	if st.cond == Drained {
+		return baseShear{r: n * st.tanD}
+	}
+	eff := along - 2*math.Abs(e)
+	if eff <= 0 {
+		return baseShear{}
+	}
+	out := baseShear{area: eff * across}
+	out.r = out.area * st.c
+	if (waterAtBase || math.Abs(e) > along/6) && out.r > undrainedSlidingCap*n {
+		out.r, out.capped = undrainedSlidingCap*n, true
+	}
+	return out
+}
+
+// shearValues returns the values and note of a sliding result.
+func shearValues(st strength, n float64, bs baseShear) ([]check.Value, string) {
+	if st.cond == Drained {
+		return []check.Value{
+				check.Of("N", "effective normal force on the base", units.Force(n)),
+				check.Of("δ", "base friction angle after partial factors", units.Angle(st.delta)),
+				check.Of("R_b", "base shear resistance N tan δ", units.Force(bs.r)),
+			}, fmt.Sprintf("drained: base friction δ = %v on the effective normal force %v",
+				units.Angle(st.delta), units.Force(n))
+	}
+	note := fmt.Sprintf("undrained: c_u %v over the effective base A' = %v", units.Pressure(st.c), units.Area(bs.area))
+	if bs.capped {
+		note += "; capped at 0.4 N because water or air can reach the base (EN 1997-1 6.5.3(12))"
+	}
+	return []check.Value{
+		check.Of("N", "effective normal force on the base", units.Force(n)),
+		check.Of("c_u", "undrained shear strength after partial factors", units.Pressure(st.c)),
+		check.Of("A'", "effective base area in compression", units.Area(bs.area)),
+		check.Of("R_b", "base shear resistance A'c_u, at most 0.4 N where water or air reach the base", units.Force(bs.r)),
+	}, note
+}
+
+// conditioned is one result of a condition-dependent check.
+type conditioned struct {
+	cond Condition
+	r    check.Result
+}
+
+// governing returns the worst of the results, one per condition checked,
+// with the condition that governs stated in its basis and the utilisation
+// in each condition among its values ("U_dr", "U_un"). A terse set gets the
+// worst result only.
+func governing(set actionSet, rs []conditioned) check.Result {
+	worst := 0
+	for i := range rs {
+		if rs[i].r.Ratio > rs[worst].r.Ratio {
+			worst = i
+		}
+	}
+	g := rs[worst].r
+	if set.terse {
+		return g
+	}
+	if len(rs) == 1 {
+		prefix := fmt.Sprintf("%v condition", rs[0].cond)
+		if rs[0].cond == Drained {
+			prefix += " only (no undrained strength given)"
+		}
+		if g.Basis != "" {
+			prefix += "; " + g.Basis
+		}
+		return g.WithBasis(prefix)
+	}
+	var vs []check.Value
+	var other []string
+	for _, c := range rs {
+		sym, mean := "U_dr", "utilisation in the drained (long-term) condition"
+		if c.cond == Undrained {
+			sym, mean = "U_un", "utilisation in the undrained (short-term) condition"
+		}
+		vs = append(vs, check.Of(sym, mean, units.Ratio(c.r.Ratio)))
+		if c.cond != rs[worst].cond {
+			other = append(other, fmt.Sprintf("%v utilisation %.3f", c.cond, c.r.Ratio))
+		}
+	}
+	prefix := fmt.Sprintf("%v condition governs; also checked: %s", rs[worst].cond, strings.Join(other, ", "))
+	if g.Basis != "" {
+		prefix += "; " + g.Basis
+	}
+	return g.WithBasis(prefix).WithValues(vs...)
+}
+
+// note returns r with the note appended, or r as it is on a terse basis.
+func (set actionSet) note(r check.Result, note string) check.Result {
+	if set.terse {
+		return r
+	}
+	return r.WithNote(note)
+}
+
+// values returns r with the values appended, or r as it is on a terse
+// basis.
+func (set actionSet) values(r check.Result, vs ...check.Value) check.Result {
+	if set.terse {
+		return r
+	}
+	return r.WithValues(vs...)
+}
+
+// basisOf returns the basis text of a result.
+func basisOf(set actionSet, what string, fs float64) string {
+	if set.terse {
+		return ""
+	}
+	if set.allowable {
+		return fsBasis(what, fs)
+	}
+	return set.label
+}
+
+// bearingBasis returns the basis text of a bearing result on soil.
+func bearingBasis(set actionSet, s Soil, m Method, fs float64) string {
+	if set.terse {
+		return ""
+	}
+	if set.allowable && s.Allowable > 0 {
+		return "allowable basis: peak contact pressure against the allowable bearing pressure given by the site report"
+	}
+	return fmt.Sprintf("%v; %s", m, basisOf(set, "the ultimate bearing pressure", fs))
+}
+
+// baseLoad is the resultant on a rectangular base: effective normal force
+// n, horizontal force h along the side along, eccentricity e from the
+// centre along it.
+type baseLoad struct {
+	n, h, e float64
+}
+
+// baseValues returns the resultant's values: N, H, e, and the contact
+// pressures of a rigid base.
+func baseValues(ld baseLoad, along, across float64) []check.Value {
+	vs := []check.Value{
+		check.Of("N", "effective normal force on the base", units.Force(ld.n)),
+		check.Of("H", "horizontal force on the base", units.Force(ld.h)),
+		check.Of("e", "eccentricity of the resultant from the base centre", units.Length(ld.e)),
+	}
+	if qmax, qmin, contact, err := ContactPressure(units.Force(ld.n), units.Length(ld.e), units.Length(along), units.Length(across)); err == nil {
+		vs = append(vs,
+			check.Of("q_max", "peak contact pressure of a rigid base", qmax),
+			check.Of("q_min", "least contact pressure of a rigid base", qmin),
+			check.Of("l_c", "contact length along the load", contact))
+	}
+	return vs
+}
+
+// soilBearing checks a rectangular base of side along (the direction of
+// the load and eccentricity) and across on soil s in condition cond by
+// method m, under effective normal force ld.n. Allowable basis with
+// Soil.Allowable: the peak contact pressure against it; otherwise N/A'
+// against qult/fs (allowable) or qult/γR,v (partial), the strength divided
+// by the set's partial factors.
+func soilBearing(id, title string, along, across, depth units.Length, water Water, ld baseLoad,
+	s Soil, m Method, cond Condition, set actionSet, fs float64) (check.Result, error) {
+	basis := bearingBasis(set, s, m, fs)
+	a, w := float64(along), float64(across)
+	area := a * w
+	outside := func() check.Result {
+		r := check.Compare(id, title, units.KindPressure, ld.n/area, 0).WithBasis(basis)
+		r = set.values(r, baseValues(ld, a, w)...)
+		return set.note(r, fmt.Sprintf("resultant outside the base: eccentricity %v, half base %v", units.Length(ld.e), along/2))
+	}
+	if math.Abs(ld.e) >= a/2 {
+		return outside(), nil
+	}
+	if set.allowable && s.Allowable > 0 {
+		qmax, _, _, err := ContactPressure(units.Force(ld.n), units.Length(ld.e), along, across)
+		if err != nil {
+			return check.Result{}, err
+		}
+		r := check.Compare(id, title, units.KindPressure, float64(qmax), float64(s.Allowable)).WithBasis(basis)
+		return set.values(r, append(baseValues(ld, a, w), check.Of("q_a", "allowable bearing pressure given by the site report", s.Allowable))...), nil
+	}
+	sd := s.withStrength(s.strengthIn(cond, set))
+	br, err := BearingCapacity(BearingInput{AlongLoad: along, AcrossLoad: across, Depth: depth, Vertical: units.Force(ld.n),
+		Horizontal: units.Force(ld.h), EccAlong: units.Length(ld.e), Water: water}, sd, m, cond)
+	if errors.Is(err, ErrOutsideBase) {
+		return outside(), nil
+	}
+	if err != nil {
+		return check.Result{}, err
+	}
+	capacity := float64(br.Qult) / fs
+	if !set.allowable {
+		capacity = float64(br.Qult) / set.gRv
+	}
+	r := check.Compare(id, title, units.KindPressure, ld.n/float64(br.Area()), capacity).WithBasis(basis)
+	if set.terse {
+		return r, nil
+	}
+	vs := baseValues(ld, a, w)
+	vs = append(vs, check.Of("A'", "effective base area", br.Area()))
+	r = r.WithValues(br.appendValues(vs)...)
+	r = r.WithNote(fmt.Sprintf("%v, %v: qult %v on the effective base %v × %v", br.Method, cond, br.Qult, br.BEff, br.LEff))
+	if water.Present {
+		r = r.WithNote(water.String() + ": effective stresses")
+	}
+	for _, note := range br.Notes {
+		r = r.WithNote(note)
+	}
+	return r, nil
+}
+
+// rockBaseBearing checks a rectangular base on rock: the peak contact
+// pressure of a rigid base under characteristic actions against the
+// allowable pressure of RockPressure (presumed bearing values are used with
+// characteristic actions, EN 1997-1:2004 2.5 and Annex G approach, from
+// memory).
+func rockBaseBearing(id, title string, along, across units.Length, ld baseLoad, s Soil, set actionSet) (check.Result, error) {
+	rb, err := RockPressure(s, min(along, across))
+	if err != nil {
+		return check.Result{}, err
+	}
+	a, w := float64(along), float64(across)
+	basis := ""
+	if !set.terse {
+		basis = "rock: peak contact pressure under characteristic actions against the allowable pressure, " + rb.Method +
+			"; soil bearing-capacity factors are not used on rock"
+	}
+	if math.Abs(ld.e) >= a/2 {
+		r := check.Compare(id, title, units.KindPressure, ld.n/(a*w), 0).WithBasis(basis)
+		r = set.values(r, baseValues(ld, a, w)...)
+		return set.note(r, "resultant outside the base"), nil
+	}
+	qmax, _, _, err := ContactPressure(units.Force(ld.n), units.Length(ld.e), along, across)
+	if err != nil {
+		return check.Result{}, err
+	}
+	r := check.Compare(id, title, units.KindPressure, float64(qmax), float64(rb.Allowable)).WithBasis(basis)
+	return set.values(r, append(baseValues(ld, a, w), rb.Values()...)...), nil
+}
