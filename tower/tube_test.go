@@ -98,6 +98,28 @@ func TestChiEN1993(t *testing.T) {
 	if tower.ChiEN1993(0.1, 0.49) != 1 || tower.ChiEN1993(0.2, 0.76) != 1 {
 		t.Error("plateau below λ̄ 0.2")
 	}
+	// χ as the buckling-curve tables give it, to the four figures they
+	// print (the tables of χ against λ̄ for curves a0 to d published with
+	// EN 1993-1-1 Figure 6.4 in design handbooks; from memory):
+	table := map[float64][5]float64{
+		0.5: {0.9513, 0.9243, 0.8842, 0.8430, 0.7793},
+		1.5: {0.3953, 0.3724, 0.3422, 0.3145, 0.2766},
+		2.0: {0.2323, 0.2229, 0.2095, 0.1962, 0.1766},
+	}
+	for lam, row := range table {
+		for i, al := range alphas {
+			if got := tower.ChiEN1993(lam, al); math.Abs(got-row[i]) > 0.00005 {
+				t.Errorf("λ̄ %g α %g: χ %.5f, table %.4f", lam, al, got, row[i])
+			}
+		}
+	}
+	// A published worked value [R]: Steel Buildings in Europe, Multi-storey
+	// steel buildings, Part 4: Detailed design, worked example A.5 (pinned
+	// column, HE 300 B): curve b, λ̄_y = 0.655 → Φ_y = 0.792, χ_y = 0.808
+	// (the example carries Φ rounded to three figures, so 0.001).
+	if got := tower.ChiEN1993(0.655, 0.34); math.Abs(got-0.808) > 0.001 {
+		t.Errorf("worked example: χ %g, published 0.808", got)
+	}
 }
 
 func TestTubeCheck(t *testing.T) {
