@@ -119,7 +119,7 @@ func TestSlenderCantileverBuckles(t *testing.T) {
 // eulerCantilever returns the critical load of a cantilever of length l and
 // stiffness EI by finite differences and gonum's symmetric eigensolver, a
 // route independent of the closed form π²EI/(2l)²: with u = δ − w the
-// deflection measured from the top, −u” = (N/EI) u, u'(0) = 0 at the fixed
+// deflection measured from the top, −d²u/dx² = (N/EI) u, du/dx = 0 at the fixed
 // base and u(l) = 0 at the free top; on a cell-centred grid the operator is
 // a symmetric tridiagonal matrix whose least eigenvalue is N_cr/EI.
 func eulerCantilever(t *testing.T, ei, l float64) float64 {
