@@ -40,7 +40,7 @@ func TestTubeSectionProperties(t *testing.T) {
 }
 
 func TestTubeAISCBuckling(t *testing.T) {
-	// AISC 360-16 E3, E 29 000 ksi, Fy 50 ksi (SOURCES.md §5): Lc/r 50 →
+	// AISC 360-16 E3, E 29 000 ksi, Fy 50 ksi: Lc/r 50 →
 	// Fcr 41.7 ksi [R, published table; 0.5 % tolerance for its rounding];
 	// 41.65, 24.07 and 6.275 ksi at Lc/r 50, 100, 200 are [D] values from the
 	// same E3 formula — not independent of the package, kept as regression.
@@ -68,7 +68,8 @@ func TestTubeAISCBuckling(t *testing.T) {
 }
 
 func TestChiEN1993(t *testing.T) {
-	// SOURCES.md §5 [D] values at λ̄ 1.0 for curves a0, a, b, c, d, checked
+	// [D] values of EN 1993-1-1:2005 6.3.1.2 at λ̄ 1.0 for curves a0, a, b,
+	// c, d, checked
 	// by an independent route: χ is the smaller root of the Ayrton–Perry
 	// condition (1 − χ)(1 − χλ̄²) = α(λ̄ − 0.2)χ, found here by bisection.
 	// Curve b at λ̄ 1.0 = 0.5970 also matches the published χ tables (from memory).
@@ -91,7 +92,7 @@ func TestChiEN1993(t *testing.T) {
 				t.Errorf("α %g λ̄ %g: χ %g, Ayrton–Perry %g", al, lam, got, lo)
 			}
 			if lam == 1.0 && !near(got, want[i], 1e-4) {
-				t.Errorf("α %g: χ %g, SOURCES %g", al, got, want[i])
+				t.Errorf("α %g: χ %g, want %g", al, got, want[i])
 			}
 		}
 	}
