@@ -1,12 +1,11 @@
 package sagspan
 
 import (
-	"fmt"
-
 	"github.com/sagspan/sagspan/cable"
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/tower"
 	"github.com/sagspan/sagspan/units"
+	"github.com/sagspan/sagspan/vibration"
 )
 
 // Options tune a whole-bridge check. A nil *Options means the defaults.
@@ -14,9 +13,16 @@ type Options struct {
 	// ErectionStep is the temperature step of the erection table; zero
 	// means 5 K.
 	ErectionStep float64
-	// StrictComfort fails, rather than flags, natural frequencies in the
-	// ranges walkers excite. Default false: flags.
+	// StrictComfort fails, rather than flags, what the comfort assessment
+	// finds: accelerations under walkers beyond their limits and crowds
+	// beyond the lock-in number (with SkipComfort, frequencies in the
+	// ranges walkers excite). Default false: flags.
 	StrictComfort bool
+	// SkipComfort leaves out the modal analysis and the walkers' response,
+	// keeping the closed-form frequencies: for a fast check. Default false.
+	SkipComfort bool
+	// Modal tunes the modal analysis; nil means its defaults.
+	Modal *vibration.Settings
 }
 
 // Side names a bank.
@@ -104,6 +110,9 @@ type ErectionTable struct {
 // Analysis is everything the whole-bridge check found.
 type Analysis struct {
 	Bridge Bridge
+	// Source names the description the bridge was read from, such as its
+	// file name, for the report's design basis; the caller sets it.
+	Source string
 	// Report holds every check result of every case.
 	Report check.Report
 	// Service holds the states under characteristic loads (all factors 1):
@@ -111,8 +120,11 @@ type Analysis struct {
 	// them. Design holds the states under the factored loads of the partial
 	// basis: rope tension (on that basis) and column sections.
 	Service, Design []CaseState
-	Modes           cable.Modes
-	Erection        []ErectionTable
+	// Modes are the closed-form frequencies of Irvine & Caughey; Comfort
+	// the modal analysis and walkers' response (nil when switched off).
+	Modes    cable.Modes
+	Comfort  *Comfort
+	Erection []ErectionTable
 }
 
 // Check runs the whole-bridge check: every load case through rope statics,
@@ -176,7 +188,7 @@ func (m *model) run(a *Analysis, opts *Options) error {
 	}
 	m.grooves = m.variants()[0].grooves
 	a.Report.Add(all.results...)
-	if err := m.checkFrequencies(a, a.Service[0], opts); err != nil {
+	if err := m.comfort(a, a.Service[0], opts); err != nil {
 		return err
 	}
 	return m.erection(a, opts)
@@ -220,7 +232,7 @@ func (m *model) superstructure(out sink, service, design []CaseState) error {
 			}
 			r, err := cable.TensionCheck(t, g.rope, g.Count, basis)
 			if err != nil {
-				return fmt.Errorf("sagspan: %s, case %q: %w", g.Name, name, err)
+				return fieldErr("basis", "%s, case %q: %w; check the rope factors of the basis", g.Name, name, err)
 			}
 			out.add(r.For(g.Name, name))
 		}

@@ -33,7 +33,14 @@ func (m *model) checkClearance(out sink, service []CaseState) {
 	site := m.b.Site
 	for _, cs := range service {
 		soffit, x := m.walkwayLow(cs)
-		clear := soffit - site.Flood
+		if site.Flood.None {
+			out.add(check.Record("bridge.clearance", "Walkway underside above design flood", units.KindLength, float64(soffit)).
+				For("walkway", cs.Case.Name).
+				WithBasis("elevation of the lowest walkway underside, characteristic loads (common practice)").
+				WithNote(fmt.Sprintf("nothing to check: the description declares no design flood (site.flood_elevation \"none\"); lowest underside at x = %s", x)))
+			continue
+		}
+		clear := soffit - site.Flood.Z
 		r := check.Compare("bridge.clearance", "Walkway underside above design flood", units.KindLength,
 			float64(site.Freeboard), float64(clear)).
 			For("walkway", cs.Case.Name).
@@ -41,7 +48,7 @@ func (m *model) checkClearance(out sink, service []CaseState) {
 			WithValues(
 				check.Of("z_w", "elevation of the lowest walkway underside", soffit),
 				check.Of("x_w", "where it lies, from the left saddle", x),
-				check.Of("z_f", "design flood elevation", site.Flood),
+				check.Of("z_f", "design flood elevation", site.Flood.Z),
 				check.Of("c", "clearance above the flood", clear),
 			)
 		if clear <= 0 {
@@ -50,58 +57,6 @@ func (m *model) checkClearance(out sink, service []CaseState) {
 		}
 		out.add(r)
 	}
-}
-
-// Comfort ranges of footbridge frequencies (from memory; widely cited, e.g.
-// Živanović, Pavić & Reynolds, J. Sound Vib. 279, 2005): vertical
-// 1.25–2.3 Hz and its second harmonic 2.5–4.6 Hz, lateral 0.5–1.2 Hz.
-var (
-	verticalRanges = [][2]float64{{1.25, 2.3}, {2.5, 4.6}}
-	lateralRanges  = [][2]float64{{0.5, 1.2}}
-)
-
-const comfortBasis = "Irvine–Caughey linear theory of a sagging cable (from memory); " +
-	"critical ranges vertical 1.25–2.3 and 2.5–4.6 Hz, lateral 0.5–1.2 Hz " +
-	"(Živanović, Pavić & Reynolds 2005, from memory); EN 1990 A2.4.3.2 asks for a " +
-	"comfort check below 5 Hz vertical and 2.5 Hz lateral (from memory)"
-
-func comfort(id, title string, f units.Frequency, ranges [][2]float64, strict bool) check.Result {
-	r := check.Record(id, title, units.KindFrequency, float64(f)).For("span", "permanent").WithBasis(comfortBasis)
-	for _, rg := range ranges {
-		if float64(f) >= rg[0] && float64(f) <= rg[1] {
-			r.Status = check.Flag
-			if strict {
-				r.Status, r.Ratio = check.Fail, math.Inf(1)
-			}
-			return r.WithNote(fmt.Sprintf("%s lies in the range %.2f–%.2f Hz that walkers excite: assess the response or change the design", f, rg[0], rg[1]))
-		}
-	}
-	return r
-}
-
-func (m *model) checkFrequencies(a *Analysis, perm CaseState, opts *Options) error {
-	var h units.Force
-	var w units.LoadPerLength
-	var ea units.AxialStiffness
-	for i, g := range m.groups {
-		h += perm.Groups[i].H
-		w += m.ref[i].Load.Uniform
-		ea += g.elastic.EA
-	}
-	// The bridge hangs at the sag its total weight and tension give,
-	// w l²/(8H): the weighted harmonic mean of the groups' sags.
-	mass := units.MassPerLength(float64(w) / units.StandardGravity)
-	modes, err := cable.Frequencies(m.span, h, mass, ea)
-	if err != nil {
-		return fmt.Errorf("sagspan: natural frequencies: %w", err)
-	}
-	a.Modes = modes
-	a.Report.Add(
-		comfort("bridge.frequency.vertical_antisymmetric", "First in-plane antisymmetric frequency", modes.Antisymmetric, verticalRanges, opts.StrictComfort),
-		comfort("bridge.frequency.vertical_symmetric", "First in-plane symmetric frequency", modes.Symmetric, verticalRanges, opts.StrictComfort),
-		comfort("bridge.frequency.lateral", "First out-of-plane (swing) frequency", modes.Swing, lateralRanges, opts.StrictComfort),
-	)
-	return nil
 }
 
 // maxErectionRows bounds the erection table.
@@ -121,7 +76,7 @@ func (m *model) erection(a *Analysis, opts *Options) error {
 		dead := cable.Load{Uniform: units.LoadPerLength(g.share) * m.dead}
 		rows, err := cable.ErectionTable(m.span, g.elastic, g.self, dead, g.Sag, c.Reference, temps)
 		if err != nil {
-			return fmt.Errorf("sagspan: erection table of %s: %w", g.Name, err)
+			return fieldErr("ropes", "erection table of %s: %w; check its sag, rope and the climate's temperatures", g.Name, err)
 		}
 		a.Erection = append(a.Erection, ErectionTable{Group: g.Name, Rows: rows})
 	}

@@ -57,6 +57,9 @@ type Frequency float64
 // Ratio is a dimensionless ratio, such as a sag ratio or a slope.
 type Ratio float64
 
+// Acceleration is an acceleration in metres per second squared.
+type Acceleration float64
+
 // Constants giving meaning to literals, in coherent SI.
 const (
 	Kilo = 1e3
@@ -105,6 +108,8 @@ const (
 	MetrePerSecond Velocity = 1
 
 	Hertz Frequency = 1
+
+	MetrePerSecondSquared Acceleration = 1
 )
 
 // StandardGravity is the standard acceleration of gravity, 9.80665 m/s²
@@ -202,6 +207,11 @@ func (a ThermalExpansion) Unit() *unit.Unit {
 // Unit returns the gonum unit value of m: mass per length.
 func (m MassPerLength) Unit() *unit.Unit {
 	return unit.New(float64(m), unit.Dimensions{unit.MassDim: 1, unit.LengthDim: -1})
+}
+
+// Unit returns the gonum unit value of a: length per time squared.
+func (a Acceleration) Unit() *unit.Unit {
+	return unit.New(float64(a), unit.Dimensions{unit.LengthDim: 1, unit.TimeDim: -2})
 }
 
 // Unit returns the gonum unit value of r, dimensionless.

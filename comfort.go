@@ -1,0 +1,393 @@
+package sagspan
+
+import (
+	"fmt"
+	"math"
+
+	"github.com/sagspan/sagspan/cable"
+	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/tower"
+	"github.com/sagspan/sagspan/units"
+	"github.com/sagspan/sagspan/vibration"
+)
+
+// ComfortSpec sets the assessment of walkers' comfort: the damping of the
+// modes, the traffic the walkway sees and whether the modal analysis takes
+// in the backstays. Every zero field takes its default.
+type ComfortSpec struct {
+	// Damping is the ratio of critical damping of every mode; zero takes
+	// the default of the deck: 0.4 % for steel, 1.0 % for timber (Sétra
+	// 2006, from memory; the lower values, as for comfort, of common
+	// practice).
+	Damping float64 `json:"damping,omitempty"`
+	// Deck is the walkway's material that sets the default damping:
+	// "steel" or "timber"; empty means steel, the lower damping.
+	Deck string `json:"deck,omitempty"`
+	// Traffic is the walkers' traffic class: "sparse" (default, 0.5
+	// walkers per m², normal use), "dense" (0.8) or "very dense" (1.0).
+	Traffic string `json:"traffic,omitempty"`
+	// Backstays, when true, lets the ropes render over fixed and sliding
+	// saddles into their backstays, and roller saddles move with the
+	// backstays holding them, in the modal analysis; false holds the ropes
+	// at the saddles, as the closed form does.
+	Backstays bool `json:"backstays,omitempty"`
+}
+
+// Default damping ratios by deck (Sétra 2006, from memory).
+const (
+	defaultDampingSteel  = 0.004
+	defaultDampingTimber = 0.010
+	// maxDamping bounds the damping a description may give: beyond 20 % a
+	// footbridge has dampers this analysis does not model.
+	maxDamping = 0.2
+	// crowdDensity is the crowd the walkway holds while people still walk,
+	// for the lock-in number: 1 walker per m², the densest traffic class
+	// of Sétra 2006 (from memory).
+	crowdDensity = 1.0
+)
+
+var trafficNames = map[string]vibration.Traffic{
+	"":           vibration.Sparse,
+	"sparse":     vibration.Sparse,
+	"dense":      vibration.Dense,
+	"very dense": vibration.VeryDense,
+}
+
+func (b Bridge) validateComfort(v *validator) {
+	c := b.Comfort
+	if math.IsNaN(c.Damping) || c.Damping < 0 || c.Damping > maxDamping {
+		v.fail(at("comfort.damping"), "must be zero (default) or a ratio of critical damping up to %v, got %v", maxDamping, c.Damping)
+	}
+	switch c.Deck {
+	case "", "steel", "timber":
+	default:
+		v.fail(at("comfort.deck"), "unknown deck %q; want steel or timber", c.Deck)
+	}
+	if _, ok := trafficNames[c.Traffic]; !ok {
+		v.fail(at("comfort.traffic"), "unknown traffic %q; want sparse, dense or very dense", c.Traffic)
+	}
+}
+
+// damping returns the damping ratio of the description and how it was set.
+func (c ComfortSpec) damping() (float64, string) {
+	switch {
+	case c.Damping > 0:
+		return c.Damping, "given in the description"
+	case c.Deck == "timber":
+		return defaultDampingTimber, "default for a timber deck (Sétra 2006, from memory)"
+	}
+	return defaultDampingSteel, "default for a steel deck or ropes alone (Sétra 2006, from memory)"
+}
+
+// Comfort is the dynamics of the finished bridge under its permanent load:
+// the discretised modes beside the closed form, and the walkers' response.
+type Comfort struct {
+	// Modal holds the discretised modes.
+	Modal vibration.Modal
+	// Closed is the closed form of Irvine & Caughey for the same state.
+	Closed cable.Modes
+	// Walkers is the traffic and damping assessed.
+	Walkers vibration.Walkers
+	// Responses are the accelerations of the modes in a critical range,
+	// and LockIns the lock-in numbers of the lateral ones.
+	Responses []vibration.Response
+	LockIns   []vibration.LockIn
+	// Backstays reports whether the backstays took part.
+	Backstays bool
+}
+
+// closedForm returns the Irvine–Caughey frequencies of the whole rope
+// system in the permanent state: total H, mass and EA; the bridge hangs at
+// the sag its total weight and tension give, w l²/(8H) (the weighted
+// harmonic mean of the groups' sags).
+func (m *model) closedForm(perm CaseState) (cable.Modes, error) {
+	var h units.Force
+	var w units.LoadPerLength
+	var ea units.AxialStiffness
+	for i, g := range m.groups {
+		h += perm.Groups[i].H
+		w += m.ref[i].Load.Uniform
+		ea += g.elastic.EA
+	}
+	mass := units.MassPerLength(float64(w) / units.StandardGravity)
+	modes, err := cable.Frequencies(m.span, h, mass, ea)
+	if err != nil {
+		return cable.Modes{}, fmt.Errorf("sagspan: natural frequencies: %w", err)
+	}
+	return modes, nil
+}
+
+// vibrationModel returns the bridge in its permanent state as a model for
+// modal analysis. Each rope group is split equally between two rope planes
+// at the edges of the walkway, y = ±width/2, every rope tied to the
+// walkway's cross-section (cross-beams, posts and fencing taken as rigid);
+// the walkway's mass spread across its width at the walkway ropes' level.
+func (m *model) vibrationModel(perm CaseState, backstays bool) vibration.Model {
+	b := m.b
+	half := b.Walkway.Width / 2
+	vm := vibration.Model{
+		Span: b.Site.Span, Rise: b.Site.Rise,
+		Walkway: vibration.Walkway{Mass: units.MassPerLength(float64(m.dead) / units.StandardGravity), Width: b.Walkway.Width},
+	}
+	for i, g := range m.groups {
+		gs := perm.Groups[i]
+		var ends [2]vibration.End
+		if backstays {
+			for side := Left; side <= Right; side++ {
+				bs := m.backstays[i][side]
+				kind := vibration.Renders
+				if saddleKind(m.bank(side).Tower.Saddle) == tower.Roller {
+					kind = vibration.Rolls
+				}
+				ends[side] = vibration.End{Kind: kind, Backstay: vibration.Backstay{Length: bs.chord, Angle: bs.angle, Tension: gs.Backstay[side] / 2}}
+			}
+		}
+		for _, y := range [2]units.Length{half, -half} {
+			side := "left"
+			if y < 0 {
+				side = "right"
+			}
+			vm.Ropes = append(vm.Ropes, vibration.Rope{
+				Name: g.Name + ", " + side + " plane", Y: y, Z: g.Offset,
+				Shape: gs.shape, H: gs.H / 2,
+				Mass: units.MassPerLength(float64(g.self)/units.StandardGravity) / 2,
+				EA:   g.elastic.EA / 2, Tied: true, Ends: ends,
+			})
+		}
+	}
+	return vm
+}
+
+const modalBasis = "lumped-mass modal analysis about the permanent state at the reference temperature " +
+	"(tensioned rope elements, axial and geometric stiffness; longitudinal, lateral and vertical degrees of freedom; gonum EigenSym); " +
+	"each rope group split equally between two planes at the walkway's edges, every rope tied to the walkway's rigid cross-section; " +
+	"beside the closed form of Irvine & Caughey (1974, from memory)"
+
+// comfort runs the comfort stage: the closed form always; with it, unless
+// switched off, the modal analysis, the accelerations of the modes in a
+// critical range and the lateral lock-in numbers.
+func (m *model) comfort(a *Analysis, perm CaseState, opts *Options) error {
+	closed, err := m.closedForm(perm)
+	if err != nil {
+		return err
+	}
+	a.Modes = closed
+	if opts.SkipComfort {
+		a.Report.Add(
+			closedFrequency("bridge.frequency.vertical_antisymmetric", "First in-plane antisymmetric frequency", closed.Antisymmetric, vibration.VerticalRanges, opts.StrictComfort),
+			closedFrequency("bridge.frequency.vertical_symmetric", "First in-plane symmetric frequency", closed.Symmetric, vibration.VerticalRanges, opts.StrictComfort),
+			closedFrequency("bridge.frequency.lateral", "First out-of-plane (swing) frequency", closed.Swing, vibration.LateralRanges, opts.StrictComfort),
+		)
+		return nil
+	}
+	spec := m.b.Comfort
+	vm := m.vibrationModel(perm, spec.Backstays)
+	modal, err := vm.Modes(opts.Modal)
+	if err != nil {
+		return fmt.Errorf("sagspan: modal analysis: %w", err)
+	}
+	damping, _ := spec.damping()
+	c := &Comfort{Modal: modal, Closed: closed, Backstays: spec.Backstays,
+		Walkers: vibration.Walkers{Traffic: trafficNames[spec.Traffic], Damping: damping}}
+	a.Comfort = c
+
+	// The first mode of each kind, beside the closed form.
+	for _, f := range []struct {
+		id, title string
+		kind      vibration.Kind
+		symmetric bool
+		closed    units.Frequency
+		ranges    [][2]units.Frequency
+	}{
+		{"bridge.frequency.vertical_antisymmetric", "First vertical antisymmetric frequency", vibration.Vertical, false, closed.Antisymmetric, vibration.VerticalRanges},
+		{"bridge.frequency.vertical_symmetric", "First vertical symmetric frequency", vibration.Vertical, true, closed.Symmetric, vibration.VerticalRanges},
+		{"bridge.frequency.lateral", "First lateral frequency", vibration.Lateral, true, closed.Swing, vibration.LateralRanges},
+		{"bridge.frequency.torsional", "First torsional frequency", vibration.Torsional, true, 0, vibration.VerticalRanges},
+	} {
+		i := c.first(f.kind, f.symmetric)
+		if i < 0 {
+			continue
+		}
+		md := modal.Modes[i]
+		r := check.Record(f.id, f.title, units.KindFrequency, float64(md.Frequency)).
+			For("span", "permanent").
+			WithBasis(modalBasis).
+			WithValues(
+				check.Of("f", "natural frequency, discretised", md.Frequency),
+				check.Of("M*", "modal mass, largest displacement of the walking surface 1", md.ModalMass),
+				check.Of("ε_h", "estimated discretisation error (reads low)", units.Ratio(md.Error)),
+				check.Of("n", "elements along the span", units.Ratio(modal.Elements)),
+			)
+		if f.closed > 0 {
+			r = r.WithValues(
+				check.Of("f_IC", "closed form of Irvine & Caughey", f.closed),
+				check.Of("Δ", "discretised over closed form, less 1", units.Ratio(float64(md.Frequency/f.closed)-1)),
+			)
+		}
+		if k, in := vibration.InRange(md.Frequency, f.ranges); in {
+			r.Status = check.Flag
+			r = r.WithNote(fmt.Sprintf("lies in the range %s–%s that walkers excite: see the acceleration under walkers", f.ranges[k][0], f.ranges[k][1]))
+		}
+		a.Report.Add(r)
+	}
+
+	walkCase := fmt.Sprintf("walkers, %s traffic", c.Walkers.Traffic)
+	area := float64(m.b.Site.Span) * float64(m.b.Walkway.Width)
+	crowd := crowdDensity * area
+	crowdCase := fmt.Sprintf("crowd of %.0f walkers", crowd)
+	for i, md := range modal.Modes {
+		element := fmt.Sprintf("mode %d (%s)", i+1, md.Label())
+		ranges := vibration.VerticalRanges
+		switch md.Kind {
+		case vibration.Vertical, vibration.Torsional:
+		case vibration.Lateral:
+			ranges = vibration.LateralRanges
+		default:
+			continue
+		}
+		if _, in := vibration.InRange(md.Frequency, ranges); !in {
+			continue
+		}
+		resp, err := modal.Response(i, c.Walkers)
+		if err != nil {
+			return fmt.Errorf("sagspan: comfort, %s: %w", element, err)
+		}
+		c.Responses = append(c.Responses, resp)
+		a.Report.Add(strict(resp.Check().For(element, walkCase), opts.StrictComfort))
+		if md.Kind == vibration.Lateral {
+			li, err := modal.LockIn(i, damping, crowd)
+			if err != nil {
+				return fmt.Errorf("sagspan: lock-in, %s: %w", element, err)
+			}
+			c.LockIns = append(c.LockIns, li)
+			a.Report.Add(strict(li.Check().For(element, crowdCase), opts.StrictComfort))
+		}
+	}
+	return nil
+}
+
+// first returns the index of the lowest mode of the kind (and, for
+// vertical modes, symmetry), or -1.
+func (c *Comfort) first(kind vibration.Kind, symmetric bool) int {
+	for i, md := range c.Modal.Modes {
+		if md.Kind == kind && (kind != vibration.Vertical || md.Symmetric == symmetric) {
+			return i
+		}
+	}
+	return -1
+}
+
+// strict fails a flagged result when comfort is a limit state.
+func strict(r check.Result, on bool) check.Result {
+	if on && r.Status == check.Flag {
+		r.Status = check.Fail
+	}
+	return r
+}
+
+const closedBasis = "Irvine–Caughey linear theory of a sagging cable (from memory), the modal analysis switched off; " +
+	"critical ranges vertical 1.25–2.3 and 2.5–4.6 Hz, lateral 0.5–1.2 Hz " +
+	"(Živanović, Pavić & Reynolds 2005, from memory); EN 1990 A2.4.3.2 asks for a " +
+	"comfort check below 5 Hz vertical and 2.5 Hz lateral (from memory)"
+
+// closedFrequency is a closed-form frequency, flagged (failed when strict)
+// in a critical range, for when the modal analysis is switched off.
+func closedFrequency(id, title string, f units.Frequency, ranges [][2]units.Frequency, strictOn bool) check.Result {
+	r := check.Record(id, title, units.KindFrequency, float64(f)).For("span", "permanent").WithBasis(closedBasis).
+		WithValues(check.Of("f_IC", "closed form of Irvine & Caughey", f))
+	if k, in := vibration.InRange(f, ranges); in {
+		r.Status = check.Flag
+		if strictOn {
+			r.Status, r.Ratio = check.Fail, math.Inf(1)
+		}
+		return r.WithNote(fmt.Sprintf("%s lies in the range %s–%s that walkers excite: assess the response or change the design", f, ranges[k][0], ranges[k][1]))
+	}
+	return r
+}
+
+// comfortSection is the comfort part of the report: the modes of the
+// modal analysis beside the closed form, the walkers' response of each mode
+// in a critical range, and the lateral lock-in crowd; the closed form alone
+// when the modal analysis is switched off.
+func (a *Analysis) comfortSection() check.Section {
+	cm := a.Modes
+	c := a.Comfort
+	if c == nil {
+		return check.Section{ID: "comfort", Title: "Natural frequencies (permanent load, closed form; modal analysis switched off)",
+			Head: []string{"Mode", "Frequency"}, Rows: [][]string{
+				{"first out-of-plane (swing)", cm.Swing.String()},
+				{"first in-plane antisymmetric", cm.Antisymmetric.String()},
+				{"first in-plane symmetric", cm.Symmetric.String()},
+				{"Irvine's λ²", fmt.Sprintf("%.1f", cm.LambdaSq)},
+			}}
+	}
+	closedOf := map[int]units.Frequency{}
+	for _, p := range []struct {
+		kind      vibration.Kind
+		symmetric bool
+		f         units.Frequency
+	}{{vibration.Vertical, false, cm.Antisymmetric}, {vibration.Vertical, true, cm.Symmetric}, {vibration.Lateral, true, cm.Swing}} {
+		if i := c.first(p.kind, p.symmetric); i >= 0 {
+			closedOf[i] = p.f
+		}
+	}
+	resp := map[int]vibration.Response{}
+	for _, r := range c.Responses {
+		resp[r.Mode] = r
+	}
+	backstays := "ropes held at the saddles"
+	if c.Backstays {
+		backstays = "ropes rendering over the saddles into the backstays"
+	}
+	damping, how := a.Bridge.Comfort.damping()
+	modes := check.Section{ID: "modes", Title: "Natural modes (permanent load)",
+		Text: []string{fmt.Sprintf("%d elements, %s, beside the closed form of Irvine & Caughey (λ² = %.1f); walkers: %s traffic, damping %.2g %% (%s).",
+			c.Modal.Elements, backstays, cm.LambdaSq, c.Walkers.Traffic, 100*damping, how)},
+		Head: []string{"Mode", "Kind", "Frequency", "Closed form", "Difference", "Modal mass", "Critical range", "Acceleration", "Status"}}
+	for i, md := range c.Modal.Modes {
+		row := []string{fmt.Sprint(i + 1), md.Label(), md.Frequency.String(), "", "", md.ModalMass.String(), "", "", ""}
+		status := check.Info
+		if fc, ok := closedOf[i]; ok {
+			row[3] = fc.String()
+			row[4] = fmt.Sprintf("%+.1f %%", 100*(float64(md.Frequency/fc)-1))
+		}
+		if r, ok := resp[i]; ok {
+			row[6] = rangeOf(r)
+			row[7] = fmt.Sprintf("%s of %s", r.Acceleration, r.Limit)
+			status = check.Pass
+			if r.Acceleration > r.Limit {
+				status = check.Flag
+			}
+			row[8] = status.String()
+		}
+		modes.Rows = append(modes.Rows, row)
+		modes.Status = append(modes.Status, status)
+	}
+	sec := check.Section{ID: "comfort", Title: "Comfort", Sub: []check.Section{modes}}
+	if len(c.LockIns) == 0 {
+		return sec
+	}
+	lock := check.Section{ID: "lock-in", Title: "Lateral lock-in",
+		Text: []string{"N_L = 8πξfM*/k, k = 300 N·s/m (Dallard et al. 2001, from memory), against the crowd the walkway holds at 1 walker per m²."},
+		Head: []string{"Mode", "Frequency", "Modal mass", "N_L", "Crowd", "Status"}}
+	for _, l := range c.LockIns {
+		status := check.Pass
+		if l.Crowd >= l.Critical {
+			status = check.Flag
+		}
+		lock.Rows = append(lock.Rows, []string{fmt.Sprint(l.Mode + 1), l.Frequency.String(), l.ModalMass.String(), fmt.Sprintf("%.1f", l.Critical), fmt.Sprintf("%.0f", l.Crowd), status.String()})
+		lock.Status = append(lock.Status, status)
+	}
+	sec.Sub = append(sec.Sub, lock)
+	return sec
+}
+
+// rangeOf names the critical range a response's mode lies in.
+func rangeOf(r vibration.Response) string {
+	ranges := vibration.VerticalRanges
+	if r.Direction == vibration.Across {
+		ranges = vibration.LateralRanges
+	}
+	k, _ := vibration.InRange(r.Frequency, ranges)
+	return fmt.Sprintf("%.2f–%.2f Hz", float64(ranges[k][0]), float64(ranges[k][1]))
+}
