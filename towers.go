@@ -139,7 +139,7 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 		if err != nil {
 			return m.bankErr(side, "tower.eccentricity", name, err)
 		}
-		if d == tower.Along {
+		if d == tower.Along && !m.fbasis.Terse { // a design search scores results, it does not read them
 			r = r.WithValues(m.saddleValues(side, svc)...)
 		}
 		if legs > 0 {
