@@ -142,6 +142,10 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 		if d == tower.Along && !m.fbasis.Terse { // a design search scores results, it does not read them
 			r = r.WithValues(m.saddleValues(side, svc)...)
 		}
+		if w := svc.ColumnWind[side]; d == tower.Across && w != 0 {
+			r = r.WithValues(check.Of("F_w", "wind on the column face, at mid-height", w)).
+				WithNote("wind on the column face is added to the lateral rope forces (conservative: the rope-line form counts no column weight against it)")
+		}
 		if legs > 0 {
 			// A steel column carries the bending in its members; the
 			// resultant is reported, not limited.
