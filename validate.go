@@ -452,8 +452,6 @@ func between[T units.Quantity](lo, hi T) limit {
 // coefficient.
 func plain(lo, hi float64) limit { return limit{lo: lo, hi: hi, kind: units.KindRatio, plain: true} }
 
-func celsius(c float64) units.Temperature { return units.FromCelsius(c) }
-
 func (l limit) format(x float64) string {
 	if l.plain {
 		return strconv.FormatFloat(x, 'g', -1, 64)
