@@ -88,11 +88,12 @@ func (m *model) variants() []variant {
 }
 
 // restraint returns how the column top of one bank is held along the
-// bridge in the variant analysed: a fixed saddle whose groove holds the
-// rope (clamped or gripping) is braced by the span and backstay; a free
-// groove, a sliding or a roller saddle leaves the top free (cantilever).
+// bridge in the variant analysed: a fixed saddle with the rope clamped is
+// braced by the span and backstay; a free groove, a groove with friction
+// (once the rope renders it no longer braces the top: conservative), a
+// sliding or a roller saddle leaves the top free (cantilever).
 func (m *model) restraint(s Side) tower.Restraint {
-	if saddleKind(m.bank(s).Tower.Saddle) == tower.Fixed && m.grooves[s] != tower.FreeGroove {
+	if saddleKind(m.bank(s).Tower.Saddle) == tower.Fixed && m.grooves[s] == tower.ClampedGroove {
 		return tower.HeldTop
 	}
 	return tower.FreeTop

@@ -22,8 +22,8 @@ const (
 	FreeTop Restraint = iota
 	// HeldTop: the top is held against sway but free to rotate, the base
 	// fixed, l0 = 0.7 l (Figure 5.7 c): a fixed saddle with the rope
-	// clamped or gripped in its groove, the span and backstay bracing the
-	// top along the bridge.
+	// clamped on it, the span and backstay bracing the top along the
+	// bridge.
 	HeldTop
 )
 
