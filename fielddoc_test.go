@@ -8,6 +8,7 @@ import (
 	"go/parser"
 	"go/token"
 	"os"
+	"path/filepath"
 	"reflect"
 	"regexp"
 	"sort"
@@ -63,46 +64,55 @@ func walkTypes(t reflect.Type, fn func(reflect.Type)) {
 func sourceFieldDocs(t *testing.T) map[string]string {
 	t.Helper()
 	fset := token.NewFileSet()
-	pkgs, err := parser.ParseDir(fset, ".", func(fi os.FileInfo) bool { return !strings.HasSuffix(fi.Name(), "_test.go") }, parser.ParseComments)
+	names, err := filepath.Glob("*.go")
 	if err != nil {
 		t.Fatal(err)
 	}
+	var files []*ast.File
+	for _, name := range names {
+		if strings.HasSuffix(name, "_test.go") {
+			continue
+		}
+		f, err := parser.ParseFile(fset, name, nil, parser.ParseComments)
+		if err != nil {
+			t.Fatal(err)
+		}
+		files = append(files, f)
+	}
 	want := descriptionTypes()
 	docs := map[string]string{}
-	for _, pkg := range pkgs {
-		for _, file := range pkg.Files {
-			ast.Inspect(file, func(n ast.Node) bool {
-				ts, ok := n.(*ast.TypeSpec)
-				if !ok || !want[ts.Name.Name] {
-					return true
+	for _, file := range files {
+		ast.Inspect(file, func(n ast.Node) bool {
+			ts, ok := n.(*ast.TypeSpec)
+			if !ok || !want[ts.Name.Name] {
+				return true
+			}
+			st, ok := ts.Type.(*ast.StructType)
+			if !ok {
+				return true
+			}
+			prevDoc, prevLine := "", -1
+			for _, f := range st.Fields.List {
+				doc := f.Doc.Text()
+				line := fset.Position(f.Pos()).Line
+				if doc == "" && f.Comment == nil && line == prevLine+1 && len(f.Names) > 0 &&
+					regexp.MustCompile(`\b`+f.Names[0].Name+`\b`).MatchString(prevDoc) {
+					doc = prevDoc // "Coldest and Hottest bound the rope temperature."
 				}
-				st, ok := ts.Type.(*ast.StructType)
-				if !ok {
-					return true
+				above := doc
+				if f.Comment != nil {
+					doc = f.Comment.Text() // a comment on the field's line says most about it
 				}
-				prevDoc, prevLine := "", -1
-				for _, f := range st.Fields.List {
-					doc := f.Doc.Text()
-					line := fset.Position(f.Pos()).Line
-					if doc == "" && f.Comment == nil && line == prevLine+1 && len(f.Names) > 0 &&
-						regexp.MustCompile(`\b`+f.Names[0].Name+`\b`).MatchString(prevDoc) {
-						doc = prevDoc // "Coldest and Hottest bound the rope temperature."
+				doc = strings.Join(strings.Fields(doc), " ")
+				for _, name := range f.Names {
+					if doc != "" {
+						docs[ts.Name.Name+"."+name.Name] = doc
 					}
-					above := doc
-					if f.Comment != nil {
-						doc = f.Comment.Text() // a comment on the field's line says most about it
-					}
-					doc = strings.Join(strings.Fields(doc), " ")
-					for _, name := range f.Names {
-						if doc != "" {
-							docs[ts.Name.Name+"."+name.Name] = doc
-						}
-					}
-					prevDoc, prevLine = strings.Join(strings.Fields(above), " "), fset.Position(f.End()).Line
 				}
-				return false
-			})
-		}
+				prevDoc, prevLine = strings.Join(strings.Fields(above), " "), fset.Position(f.End()).Line
+			}
+			return false
+		})
 	}
 	return docs
 }
@@ -188,6 +198,9 @@ func referenceRows() [][]string {
 				continue
 			}
 			ft := f.Type
+			if ft.Kind() == reflect.Pointer {
+				ft = ft.Elem()
+			}
 			if ft.Kind() == reflect.Slice {
 				ft, p = ft.Elem(), p+"[]"
 				rows = append(rows, []string{"`" + p + "`", "list of objects", required, "", fi.Doc})

@@ -4,16 +4,20 @@
 // governs the left bank changes.
 //
 // For each anchor position it runs the whole-bridge check and prints the
-// backstay angle, the resultant's angle and eccentricity at the column base
-// under the worst case, and the governing check of the left bank. The left
-// saddle is fixed to its column by default, where the effect is plainest; a
-// sliding saddle caps the horizontal force at friction, a roller removes it.
+// backstay angle, the rope-force resultant's angle and eccentricity along
+// the bridge at the column base under the worst case, and the governing
+// check of the left bank. The left saddle is fixed to its column by
+// default, where the effect is plainest; a sliding saddle caps the
+// horizontal force at friction, a roller removes it. A fixed saddle's
+// groove is free by default (the rope renders, its tension continuous);
+// -groove clamped or -groove friction (with -groove-friction) grips it,
+// and -groove "" checks both bounds.
 //
 // It sweeps the bridge the description file describes, or the built-in
 // demo (an invented bridge at an invented site) when none is given; flags
 // may come before or after the file:
 //
-//	go run ./examples/anchorsweep [bridge.json] [-from 18] [-to 5] [-step 1] [-drop 3.4] [-saddle fixed]
+//	go run ./examples/anchorsweep [bridge.json] [-from 18] [-to 5] [-step 1] [-drop 3.4] [-saddle fixed] [-groove free]
 //
 // The results support, and never replace, the design of a qualified
 // engineer; local codes and licensed practice govern.
@@ -54,6 +58,8 @@ func run(args []string, stdout, stderr io.Writer) int {
 	drop := fs.Float64("drop", 0, "drop of the anchor below the saddle, m (0: the description's)")
 	saddle := fs.String("saddle", "fixed", "left saddle kind: fixed, sliding or roller")
 	friction := fs.Float64("friction", 0.05, "friction coefficient of a sliding saddle")
+	groove := fs.String("groove", "free", `groove of a fixed saddle: free, friction, clamped, or "" for both bounds`)
+	grooveFriction := fs.Float64("groove-friction", 0.1, "friction coefficient between rope and groove, for -groove friction")
 	files, err := cli.Parse(fs, args, usage, stdout, stderr)
 	if errors.Is(err, flag.ErrHelp) {
 		return 0
@@ -76,7 +82,14 @@ func run(args []string, stdout, stderr io.Writer) int {
 	if *drop == 0 {
 		*drop = float64(bs.Drop)
 	}
-	if err := sweep(stdout, b, source, *from, *to, *step, *drop, sagspan.SaddleSpec{Kind: *saddle, Friction: *friction}); err != nil {
+	spec := sagspan.SaddleSpec{Kind: *saddle, Friction: *friction}
+	if *saddle == "fixed" {
+		spec.Groove = *groove
+		if *groove == "friction" {
+			spec.GrooveFriction = *grooveFriction
+		}
+	}
+	if err := sweep(stdout, b, source, *from, *to, *step, *drop, spec); err != nil {
 		fmt.Fprintln(stderr, "anchorsweep:", err)
 		return 1
 	}
@@ -87,7 +100,7 @@ func sweep(w io.Writer, base sagspan.Bridge, source string, from, to, step, drop
 	if !(step > 0) || from < to || !(to > 0) || !(drop > 0) {
 		return fmt.Errorf("want from >= to > 0, step > 0 and drop > 0; got from %v, to %v, step %v, drop %v", from, to, step, drop)
 	}
-	fmt.Fprintf(w, "Left anchor sweep on %q (%s), left saddle %s.\n", base.Name, source, saddle.Kind)
+	fmt.Fprintf(w, "Left anchor sweep on %q (%s), left saddle %s %s.\n", base.Name, source, saddle.Kind, saddle.Groove)
 	fmt.Fprintln(w, check.Caution)
 	fmt.Fprintln(w)
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
@@ -106,15 +119,12 @@ func sweep(w io.Writer, base sagspan.Bridge, source string, from, to, step, drop
 		if !ok {
 			return fmt.Errorf("no left-bank results")
 		}
-		// The resultant under the case that governs the eccentricity.
-		ecc := left.Filter(func(r check.Result) bool { return r.ID == "tower.eccentricity" })
+		// The rope-force resultant along the bridge under the case that
+		// governs its eccentricity: its angle δ from the vertical.
+		ecc := left.Filter(func(r check.Result) bool { return r.ID == "tower.eccentricity" && r.Element == "left tower" })
 		gov, _ := ecc.Worst()
-		var tilt units.Angle
-		for _, cs := range a.Service {
-			if cs.Case.Name == gov.Case {
-				tilt = cs.Tower[sagspan.Left].Angle
-			}
-		}
+		delta, _ := gov.Value("δ")
+		tilt := units.Angle(delta.Value)
 		fmt.Fprintf(tw, "%s\t%s\t%s\t%s of %s\t%s (%s)\t%s\t%.3f\t%s\n",
 			units.Length(h), units.Angle(math.Atan2(drop, h)), tilt,
 			units.Length(gov.Demand), units.Length(gov.Capacity),
