@@ -219,7 +219,10 @@ func (a *Analysis) soilsUsed() BasisGroup {
 			}
 			name := side.String() + " bank, " + soil.Name + ": " + words(f.Name)
 			source := fmt.Sprintf("preset %q", spec.Preset)
-			if !told {
+			switch {
+			case spec.Preset == "":
+				source = "derived from the soil given (" + prefix + ")"
+			case !told:
 				source, told = source+" ("+soil.Source+")", true
 			}
 			if sf, ok := specV.Type().FieldByName(f.Name); ok && !specV.FieldByIndex(sf.Index).IsZero() {
@@ -239,7 +242,11 @@ func (a *Analysis) soilsUsed() BasisGroup {
 				case "Interface":
 					e.Text, e.Source = fmt.Sprintf("%.3g", foundation.DefaultInterface), "default: δ = 2/3 φ' (foundation.DefaultInterface)"
 				default:
-					e.Source += ", which gives none"
+					if spec.Preset == "" {
+						e.Source = "not given: none"
+					} else {
+						e.Source += ", which gives none"
+					}
 				}
 			}
 			g.Entries = append(g.Entries, e)
