@@ -606,13 +606,17 @@ func (v *view) ropesAcross() error {
 		if err != nil {
 			return err
 		}
-		c, _ := v.style(grp.Name, colourRope)
+		c, failing := v.style(grp.Name, colourRope)
 		sc.GlyphStyle.Color, sc.GlyphStyle.Shape = c, draw.CircleGlyph{}
+		if failing {
+			sc.GlyphStyle.Shape = draw.CrossGlyph{} // told by shape, not only colour
+		}
 		sc.GlyphStyle.Radius = vg.Points(math.Max(1.5, math.Min(4, float64(grp.rope.Diameter)*100)))
 		v.p.Add(sc)
 		v.extend(pts...)
 		if i == 0 {
-			v.legend.Add("ropes on the saddle", sc)
+			thumb := &plotter.Scatter{GlyphStyle: draw.GlyphStyle{Color: colourRope, Shape: draw.CircleGlyph{}, Radius: vg.Points(3)}}
+			v.legend.Add("ropes on the saddle", thumb)
 		}
 		text := ropeName(grp)
 		if _, fail := v.failing(grp.Name); fail != "" {
@@ -658,7 +662,7 @@ func dimensionLayer(v *view) error {
 		g := v.bank(v.side)
 		t := v.m.bank(v.side).Tower
 		half := float64(t.Width) / 2
-		v.dim(half+0.4, g.base, half+0.4, g.zs, "height "+t.Height.String(), false)
+		v.dim(-half-0.3, g.base, -half-0.3, g.zs, "height "+t.Height.String(), false)
 		fw := float64(t.Footing.Width) / 2
 		v.dim(-fw, g.base-float64(t.Footing.Thickness)-0.5, fw, g.base-float64(t.Footing.Thickness)-0.5, "footing "+t.Footing.Width.String(), true)
 		return nil
