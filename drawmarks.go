@@ -39,7 +39,8 @@ func (levelTicks) Ticks(min, max float64) []plot.Tick {
 		label = step
 	}
 	var ticks []plot.Tick
-	for x := math.Ceil(min/step) * step; x <= max+1e-9*span; x += step {
+	for k := math.Ceil(min/step - 1e-9); k <= math.Floor(max/step+1e-9); k++ {
+		x := math.Max(min, math.Min(max, k*step))
 		t := plot.Tick{Value: x}
 		if r := math.Mod(math.Abs(x)+1e-9*label, label); r < 1e-6*label {
 			t.Label = strings.TrimSuffix(strings.TrimRight(fmt.Sprintf("%.2f", x), "0"), ".")
