@@ -2,6 +2,7 @@ package sagspan
 
 import (
 	"github.com/sagspan/sagspan/cable"
+	"github.com/sagspan/sagspan/tower"
 	"github.com/sagspan/sagspan/units"
 )
 
@@ -10,6 +11,7 @@ import (
 // crowd it does not carry, the same group in a case's service and design
 // states) is solved once.
 type stateKey struct {
+	grooves                [2]tower.Groove // the variant's
 	group                  int
 	uniform                units.LoadPerLength
 	patches                [3]cable.Patch
@@ -17,13 +19,13 @@ type stateKey struct {
 	dt, dtb, intact, scale float64
 }
 
-// key returns the key of group i's input, false for a load with more
-// patches than a key holds.
-func (in solveInput) key(i int) (stateKey, bool) {
+// key returns the key of group i's input in the variant of groove
+// behaviour grooves, false for a load with more patches than a key holds.
+func (in solveInput) key(i int, grooves [2]tower.Groove) (stateKey, bool) {
 	if len(in.load.Patches) > len(stateKey{}.patches) {
 		return stateKey{}, false
 	}
-	k := stateKey{group: i, uniform: in.load.Uniform, swing: in.swing,
+	k := stateKey{grooves: grooves, group: i, uniform: in.load.Uniform, swing: in.swing,
 		dt: in.dt, dtb: in.dtBackstay, intact: in.intact, scale: in.scale}
 	copy(k.patches[:], in.load.Patches)
 	return k, true
@@ -32,7 +34,7 @@ func (in solveInput) key(i int) (stateKey, bool) {
 // groupState returns group i's state for the input, solved once per
 // distinct input.
 func (m *model) groupState(i int, in solveInput) (GroupState, error) {
-	k, ok := in.key(i)
+	k, ok := in.key(i, m.grooves)
 	if ok {
 		if gs, hit := m.states[k]; hit {
 			return gs, nil
