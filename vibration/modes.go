@@ -58,7 +58,8 @@ type Mode struct {
 	Symmetric bool
 	// HalfWaves counts the half-waves of the main motion along the span.
 	HalfWaves int
-	// ModalMass is M* = φᵀMφ with the mode shape φ scaled so that the
+	// ModalMass is M* = φᵀMφ with the mode shape φ scaled (and signed, the
+	// largest value of its main motion positive) so that the
 	// largest displacement of the walking surface in the mode's direction
 	// is 1 (vertical at the walkway's edge for vertical and torsional
 	// modes, lateral for lateral modes; without a walkway, the largest
@@ -391,9 +392,23 @@ func (s *system) mode(f float64, x []float64) Mode {
 
 	// Scale: the largest displacement of the walking surface in the
 	// mode's direction is 1.
+	// The sign of an eigenvector is arbitrary: take the one that makes the
+	// largest value of the main motion positive.
 	scale := s.scale(md)
+	var peak float64
+	for _, v := range series {
+		if math.Abs(v) > math.Abs(peak) {
+			peak = v
+		}
+	}
+	if md.Kind == Longitudinal {
+		peak = -peak // the series was mirrored above
+	}
 	if scale > 0 {
 		inv := 1 / scale
+		if peak < 0 {
+			inv = -inv
+		}
 		for r := range md.Ropes {
 			for k := range md.Ropes[r] {
 				d := &md.Ropes[r][k]
