@@ -1,6 +1,7 @@
 // Command checkbridge runs the whole-bridge check of sagspan on a bridge
 // description and prints the report: the governing case of every check,
-// the rope states, the natural frequencies and the erection tables.
+// the rope states, the natural modes and walkers' comfort, and the erection
+// tables; -modes-svg draws the first mode shapes.
 //
 // With no argument it checks the built-in demo bridge (an invented bridge at
 // an invented site). Usage:
@@ -36,7 +37,9 @@ func run(args []string, stdout, stderr io.Writer) int {
 	all := fs.Bool("all", false, "list every result of every load case, not only the governing ones")
 	svg := fs.String("svg", "", "write the elevation drawing to this SVG file")
 	demo := fs.Bool("demo-json", false, "print the demo bridge description (a template for your own) and exit")
-	strict := fs.Bool("strict-comfort", false, "fail, rather than flag, frequencies in the ranges walkers excite")
+	modes := fs.String("modes-svg", "", "write the drawing of the first mode shapes to this SVG file")
+	strict := fs.Bool("strict-comfort", false, "fail, rather than flag, accelerations under walkers beyond their limits and crowds beyond the lock-in number")
+	fast := fs.Bool("no-comfort", false, "skip the modal analysis and walkers' response (closed-form frequencies only)")
 	fs.Usage = func() {
 		fmt.Fprintf(stderr, "usage: checkbridge [flags] [bridge.json]\n\nChecks a cable-supported footbridge; with no file, the built-in demo bridge.\n\n")
 		fs.PrintDefaults()
@@ -62,7 +65,7 @@ func run(args []string, stdout, stderr io.Writer) int {
 		fs.Usage()
 		return 1
 	}
-	a, err := sagspan.Check(b, &sagspan.Options{StrictComfort: *strict})
+	a, err := sagspan.Check(b, &sagspan.Options{StrictComfort: *strict, SkipComfort: *fast})
 	if err != nil {
 		fmt.Fprintln(stderr, err)
 		return 1
@@ -94,18 +97,27 @@ func run(args []string, stdout, stderr io.Writer) int {
 		}
 		fmt.Fprintf(stderr, "checkbridge: drawing written to %s\n", *svg)
 	}
+	if *modes != "" {
+		if err := writeFile(*modes, a.WriteModesSVG); err != nil {
+			fmt.Fprintln(stderr, "checkbridge:", err)
+			return 1
+		}
+		fmt.Fprintf(stderr, "checkbridge: mode shapes written to %s\n", *modes)
+	}
 	if a.Report.Status() == check.Fail {
 		return 2
 	}
 	return 0
 }
 
-func writeSVG(a *sagspan.Analysis, name string) error {
+func writeSVG(a *sagspan.Analysis, name string) error { return writeFile(name, a.WriteSVG) }
+
+func writeFile(name string, write func(io.Writer) error) error {
 	f, err := os.Create(name)
 	if err != nil {
 		return err
 	}
-	if err := a.WriteSVG(f); err != nil {
+	if err := write(f); err != nil {
 		f.Close()
 		return err
 	}
