@@ -217,7 +217,7 @@ func (m *model) comfort(a *Analysis, perm CaseState, opts *Options) error {
 				check.Of("f", "natural frequency, discretised", md.Frequency),
 				check.Of("M*", "modal mass, largest displacement of the walking surface 1", md.ModalMass),
 				check.Of("ε_h", "estimated discretisation error (reads low)", units.Ratio(md.Error)),
-				check.Of("n", "elements along the span", units.Ratio(modal.Elements)),
+				check.Of("n_el", "elements along the span", units.Ratio(modal.Elements)),
 			)
 		if f.closed > 0 {
 			r = r.WithValues(

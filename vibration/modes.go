@@ -116,9 +116,11 @@ type Modal struct {
 // tying the tied ropes, M the lumped masses with longitudinal, lateral and
 // vertical degrees of freedom (and the walkway's roll inertia). M is block
 // diagonal by station, M = LLᵀ, and the symmetric problem L⁻¹KL⁻ᵀ y = ω² y
-// is solved by gonum's mat.EigenSym, one uncoupled group of degrees of
-// freedom at a time (a model symmetric about the bridge axis splits into
-// its in-plane and its lateral-torsional motion).
+// is solved one uncoupled group of degrees of freedom at a time (a model
+// symmetric about the bridge axis splits into its in-plane and its
+// lateral-torsional motion): its eigenvalues by gonum's mat.EigenSym, the
+// vectors of those wanted by inverse iteration on the band (see
+// lowestEigen).
 //
 // It returns an error wrapping ErrInvalid for a model that does not
 // validate, a mesh coarser than MinElements or too coarse for the highest
@@ -211,17 +213,17 @@ func (s *system) solve(vmax, lmax float64) ([]Mode, error) {
 				sym.SetSym(i, j, a[gi*N+comp[j]])
 			}
 		}
-		var es mat.EigenSym
-		if !es.Factorize(sym, true) {
+		// Indices of a component keep the station order: its band is at
+		// most the system's, 2p − 1.
+		lamMax := math.Pow(2*math.Pi*fmax, 2) * (1 + 1e-9)
+		vals, vecs, ok := lowestEigen(sym, min(2*p-1, c-1), lamMax)
+		if !ok {
 			return nil, fmt.Errorf("vibration: the eigensolver did not converge on %d degrees of freedom", c)
 		}
-		vals := es.Values(nil)
-		var vecs mat.Dense
-		es.VectorsTo(&vecs)
+		if !(vals[0] > 0) || !finite(vals[0]) {
+			return nil, invalidf("the model has a mode of no stiffness (ω² = %g): a rope without tension, or a walkway free to roll", vals[0])
+		}
 		for col, lam := range vals {
-			if !(lam > 0) || !finite(lam) {
-				return nil, invalidf("the model has a mode of no stiffness (ω² = %g): a rope without tension, or a walkway free to roll", lam)
-			}
 			f := math.Sqrt(lam) / (2 * math.Pi)
 			if f > fmax {
 				break // the values ascend
