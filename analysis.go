@@ -1,8 +1,6 @@
 package sagspan
 
 import (
-	"fmt"
-
 	"github.com/sagspan/sagspan/cable"
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/tower"
@@ -112,6 +110,9 @@ type ErectionTable struct {
 // Analysis is everything the whole-bridge check found.
 type Analysis struct {
 	Bridge Bridge
+	// Source names the description the bridge was read from, such as its
+	// file name, for the report's design basis; the caller sets it.
+	Source string
 	// Report holds every check result of every case.
 	Report check.Report
 	// Service holds the states under characteristic loads (all factors 1):
@@ -150,10 +151,6 @@ func Check(b Bridge, opts *Options) (*Analysis, error) {
 // sink receives check results: a check.Report, or a scorer that keeps
 // only what a design search needs.
 type sink interface{ add(check.Result) }
-
-type reportSink struct{ rep *check.Report }
-
-func (s reportSink) add(r check.Result) { s.rep.Add(r) }
 
 func (m *model) run(a *Analysis, opts *Options) error {
 	// Each variant of groove behaviour (one, unless the description leaves
@@ -231,7 +228,7 @@ func (m *model) superstructure(out sink, service, design []CaseState) error {
 			}
 			r, err := cable.TensionCheck(t, g.rope, g.Count, basis)
 			if err != nil {
-				return fmt.Errorf("sagspan: %s, case %q: %w", g.Name, name, err)
+				return fieldErr("basis", "%s, case %q: %w; check the rope factors of the basis", g.Name, name, err)
 			}
 			out.add(r.For(g.Name, name))
 		}

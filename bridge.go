@@ -8,16 +8,29 @@ import (
 // the rope groups, both banks, the loads and the verification basis. It is
 // plain data with JSON tags; load one from a file with Load, check it with
 // Check. In JSON a quantity may be a bare SI number or a string with its
-// unit ("48 m", "3.2 kN/m").
+// unit ("48 m", "3.2 kN/m"), except where a bare number is ambiguous:
+// temperatures, angles and the fields tagged `unit:"mm"` (diameters,
+// cover, facing) must carry their unit. A field whose JSON tag lacks
+// omitempty is required.
 type Bridge struct {
-	Name    string      `json:"name"`
-	Site    Site        `json:"site"`
-	Climate Climate     `json:"climate"`
-	Walkway Walkway     `json:"walkway"`
-	Ropes   []RopeGroup `json:"ropes"`
-	Banks   Banks       `json:"banks"`
-	Loads   Loads       `json:"loads"`
-	Basis   Basis       `json:"basis"`
+	// Name names the bridge in reports.
+	Name string `json:"name"`
+	// Site is the crossing: span, levels, flood and ground.
+	Site Site `json:"site"`
+	// Climate is the rope temperatures and the wind.
+	Climate Climate `json:"climate"`
+	// Walkway is the deck the walkers use and its weight.
+	Walkway Walkway `json:"walkway"`
+	// Ropes lists the rope groups, walkway ropes and handrail ropes.
+	Ropes []RopeGroup `json:"ropes"`
+	// Banks is what stands on each bank.
+	Banks Banks `json:"banks"`
+	// Loads sets the imposed loads; every one left out takes its default.
+	Loads Loads `json:"loads,omitempty"`
+	// Basis chooses how the checks are verified and their factors.
+	Basis Basis `json:"basis,omitempty"`
+	// Comfort sets the modal analysis and the walkers' response; every
+	// field left out takes its default.
 	Comfort ComfortSpec `json:"comfort,omitempty"`
 }
 
@@ -31,8 +44,9 @@ type Site struct {
 	Rise units.Length `json:"rise"`
 	// LeftSaddle is the elevation of the left walkway-rope saddle.
 	LeftSaddle units.Length `json:"left_saddle_elevation"`
-	// Flood is the elevation of the design flood.
-	Flood units.Length `json:"flood_elevation"`
+	// Flood is the elevation of the design flood, or "none" where no
+	// flood reaches the bridge.
+	Flood Level `json:"flood_elevation"`
 	// Freeboard is the clearance required between the design flood and the
 	// underside of the walkway at its lowest point.
 	Freeboard units.Length `json:"freeboard"`
@@ -44,7 +58,9 @@ type Site struct {
 // Point is a point in the elevation: x horizontal from the left saddle
 // towards the right, z elevation.
 type Point struct {
+	// X is the horizontal distance from the left saddle, negative behind it.
 	X units.Length `json:"x"`
+	// Z is the elevation of the ground there.
 	Z units.Length `json:"z"`
 }
 
@@ -85,7 +101,9 @@ type Walkway struct {
 
 // Part is one component of the walkway dead load.
 type Part struct {
-	Name string              `json:"name"`
+	// Name says what the part is, such as "timber deck planks".
+	Name string `json:"name"`
+	// Load is the part's weight per metre of walkway.
 	Load units.LoadPerLength `json:"load"`
 }
 
@@ -100,10 +118,15 @@ const (
 
 // RopeGroup is a set of identical ropes that hang together at one sag.
 type RopeGroup struct {
-	Name  string   `json:"name"`
-	Role  Role     `json:"role"`
-	Count int      `json:"count"`
-	Rope  RopeSpec `json:"rope"`
+	// Name names the group in reports, such as "walkway ropes".
+	Name string `json:"name"`
+	// Role is "walkway" (the ropes the walkway rests on or hangs from) or
+	// "handrail" (the ropes along the top of the side fencing).
+	Role Role `json:"role"`
+	// Count is the number of identical ropes in the group.
+	Count int `json:"count"`
+	// Rope is the rope every rope of the group is made of.
+	Rope RopeSpec `json:"rope"`
 	// Sag is the design dead-load sag at midspan below the chord, at the
 	// reference temperature.
 	Sag units.Length `json:"sag"`
@@ -123,30 +146,36 @@ type RopeSpec struct {
 	// Construction names the catalogue construction, such as "6x36-IWRC".
 	Construction string `json:"construction,omitempty"`
 	// Diameter is the nominal rope diameter.
-	Diameter units.Length `json:"diameter"`
+	Diameter units.Length `json:"diameter" unit:"mm"`
 	// Grade is the rope grade (nominal wire tensile strength), such as "1770 MPa".
 	Grade units.Pressure `json:"grade,omitempty"`
 
-	// A rope given directly, not from the catalogue.
-	MBF     units.Force            `json:"mbf,omitempty"`
-	Area    units.Area             `json:"area,omitempty"`
-	Modulus units.Pressure         `json:"modulus,omitempty"`
-	Mass    units.MassPerLength    `json:"mass,omitempty"`
-	Alpha   units.ThermalExpansion `json:"alpha,omitempty"`
+	// A rope given directly, not from the catalogue, when MBF is set.
+	MBF     units.Force            `json:"mbf,omitempty"`     // minimum breaking force of one rope; set it to give the rope directly
+	Area    units.Area             `json:"area,omitempty"`    // metallic cross-section of one rope
+	Modulus units.Pressure         `json:"modulus,omitempty"` // effective modulus on the metallic area
+	Mass    units.MassPerLength    `json:"mass,omitempty"`    // mass per metre of one rope
+	Alpha   units.ThermalExpansion `json:"alpha,omitempty"`   // coefficient of thermal expansion
 }
 
 // Banks holds the left and right bank.
 type Banks struct {
-	Left  Bank `json:"left"`
+	// Left is the bank at x = 0.
+	Left Bank `json:"left"`
+	// Right is the bank at x = span.
 	Right Bank `json:"right"`
 }
 
 // Bank is what stands on one bank: tower, backstay, anchor and soil.
 type Bank struct {
-	Tower    TowerSpec  `json:"tower"`
-	Backstay Backstay   `json:"backstay"`
-	Anchor   AnchorSpec `json:"anchor"`
-	Soil     SoilSpec   `json:"soil"`
+	// Tower is the tower column with its saddle, section and footing.
+	Tower TowerSpec `json:"tower"`
+	// Backstay is the run of rope from the saddle down to the anchor.
+	Backstay Backstay `json:"backstay"`
+	// Anchor is the anchorage the backstays run into.
+	Anchor AnchorSpec `json:"anchor"`
+	// Soil is the ground the footing and anchor stand in.
+	Soil SoilSpec `json:"soil"`
 }
 
 // TowerSpec is the tower column, its saddle, section and footing.
@@ -160,12 +189,16 @@ type TowerSpec struct {
 	Width units.Length `json:"width"`
 	// Facing is the thickness of non-structural facing (masonry, formwork)
 	// on each face, left out of the effective section.
-	Facing units.Length `json:"facing,omitempty"`
+	Facing units.Length `json:"facing,omitempty" unit:"mm"`
 	// UnitWeight of the column and footing; zero means 24 kN/m³.
 	UnitWeight units.UnitWeight `json:"unit_weight,omitempty"`
-	Saddle     SaddleSpec       `json:"saddle"`
-	Section    SectionSpec      `json:"section"`
-	Footing    FootingSpec      `json:"footing"`
+	// Saddle says how the ropes sit on the column.
+	Saddle SaddleSpec `json:"saddle"`
+	// Section is the column's section: reinforced concrete, a steel tube
+	// or a steel frame.
+	Section SectionSpec `json:"section"`
+	// Footing is the spread footing under the column.
+	Footing FootingSpec `json:"footing"`
 	// Eccentricity sets how the resultant of the rope forces is checked;
 	// the zero value: the rope-line form at the column base against the
 	// kern of the effective section.
@@ -212,33 +245,50 @@ type SaddleSpec struct {
 // bracing, Spacing apart.
 type SectionSpec struct {
 	// Type is "concrete" (default), "tube" or "frame".
-	Type        string         `json:"type,omitempty"`
-	Concrete    units.Pressure `json:"concrete,omitempty"` // characteristic cylinder strength
-	Steel       units.Pressure `json:"steel,omitempty"`    // yield strength of bars or tube
-	Bars        int            `json:"bars,omitempty"`
-	BarDiameter units.Length   `json:"bar_diameter,omitempty"`
-	Cover       units.Length   `json:"cover,omitempty"` // to the bar centres
+	Type string `json:"type,omitempty"`
+	// Concrete is the characteristic cylinder strength fck.
+	Concrete units.Pressure `json:"concrete,omitempty"`
+	// Steel is the characteristic yield strength fyk of the bars, or fy of
+	// a tube or frame's legs.
+	Steel units.Pressure `json:"steel,omitempty"`
+	// Bars is the number of longitudinal bars, an even number; zero means
+	// plain concrete.
+	Bars int `json:"bars,omitempty"`
+	// BarDiameter is the diameter of each bar.
+	BarDiameter units.Length `json:"bar_diameter,omitempty" unit:"mm"`
+	// Cover is the distance from a face to the centres of the bars.
+	Cover units.Length `json:"cover,omitempty" unit:"mm"`
 	// Creep is the creep coefficient φ(∞, t0) of the concrete; zero means
 	// 2.0 (see tower.DefaultCreep).
 	Creep float64 `json:"creep,omitempty"`
 
-	// Steel tube or frame legs (EN 1993-1-1).
-	Shape      string       `json:"shape,omitempty"` // "circular" (default) or "square"
-	Size       units.Length `json:"size,omitempty"`  // outside diameter or width
-	Wall       units.Length `json:"wall,omitempty"`
-	ColdFormed bool         `json:"cold_formed,omitempty"`
-	// Spacing of a frame's legs across the bridge, centre to centre; Panel
-	// the distance between its bracing nodes (zero: the column height).
+	// Shape of a steel tube or of a frame's legs: "circular" (default) or
+	// "square".
+	Shape string `json:"shape,omitempty"`
+	// Size is the tube's outside diameter or width.
+	Size units.Length `json:"size,omitempty" unit:"mm"`
+	// Wall is the tube's wall thickness.
+	Wall units.Length `json:"wall,omitempty" unit:"mm"`
+	// ColdFormed marks a cold-formed tube (buckling curve c of EN 1993-1-1
+	// Table 6.2 instead of a).
+	ColdFormed bool `json:"cold_formed,omitempty"`
+	// Spacing of a frame's legs across the bridge, centre to centre.
 	Spacing units.Length `json:"spacing,omitempty"`
-	Panel   units.Length `json:"panel,omitempty"`
+	// Panel is the distance between a frame's bracing nodes; zero means
+	// the column height.
+	Panel units.Length `json:"panel,omitempty"`
 }
 
 // FootingSpec is the spread footing under a tower column.
 type FootingSpec struct {
-	Length    units.Length `json:"length"` // along the bridge
-	Width     units.Length `json:"width"`
+	// Length is the footing's size along the bridge.
+	Length units.Length `json:"length"`
+	// Width is the footing's size across the bridge.
+	Width units.Length `json:"width"`
+	// Thickness is the depth of the footing slab.
 	Thickness units.Length `json:"thickness"`
-	Depth     units.Length `json:"depth"` // of the underside below ground
+	// Depth is that of the footing's underside below ground.
+	Depth units.Length `json:"depth"`
 	// ColumnOffset places the column axis from the footing centre, towards
 	// the span positive (a footing often extends further on the backstay
 	// side).
@@ -280,12 +330,18 @@ type AnchorSpec struct {
 	// Type is "block" (gravity anchor block), "deadman" or "rock".
 	Type string `json:"type"`
 
-	// Block and deadman dimensions.
-	Length units.Length `json:"length,omitempty"` // along the pull
-	Width  units.Length `json:"width,omitempty"`
+	// Length is a block's size along the backstay's pull, or a deadman
+	// beam's thickness in the direction of the pull.
+	Length units.Length `json:"length,omitempty"`
+	// Width is a block's size across the pull, or a deadman beam's length.
+	Width units.Length `json:"width,omitempty"`
+	// Height is the height of a block or of a deadman beam.
 	Height units.Length `json:"height,omitempty"`
-	// Depth of the base (block) or of the beam's centre (deadman) below ground.
-	Depth      units.Length     `json:"depth,omitempty"`
+	// Depth is that of a block's base, or of a deadman beam's centre,
+	// below ground.
+	Depth units.Length `json:"depth,omitempty"`
+	// UnitWeight is that of a block's or beam's concrete; zero means
+	// 24 kN/m³.
 	UnitWeight units.UnitWeight `json:"unit_weight,omitempty"`
 	// Passive is the fraction of the passive earth resistance in front of a
 	// block counted on; zero counts none.
@@ -297,22 +353,36 @@ type AnchorSpec struct {
 	AttachX units.Length `json:"attach_x,omitempty"`
 	AttachZ units.Length `json:"attach_z,omitempty"`
 
-	// Rock anchor bars.
-	Bars         int            `json:"bars,omitempty"`
-	BarDiameter  units.Length   `json:"bar_diameter,omitempty"`
-	BarStrength  units.Pressure `json:"bar_strength,omitempty"`
-	HoleDiameter units.Length   `json:"hole_diameter,omitempty"`
-	BondLength   units.Length   `json:"bond_length,omitempty"`
-	FreeLength   units.Length   `json:"free_length,omitempty"`
+	// Bars is the number of a rock anchor's bars.
+	Bars int `json:"bars,omitempty"`
+	// BarDiameter is the diameter of each rock-anchor bar.
+	BarDiameter units.Length `json:"bar_diameter,omitempty" unit:"mm"`
+	// BarStrength is the yield strength of a rock-anchor bar.
+	BarStrength units.Pressure `json:"bar_strength,omitempty"`
+	// HoleDiameter is the diameter of the grouted drill hole.
+	HoleDiameter units.Length `json:"hole_diameter,omitempty" unit:"mm"`
+	// BondLength is the length of bar grouted into the rock.
+	BondLength units.Length `json:"bond_length,omitempty"`
+	// FreeLength is the length of bar free to stretch above the bond.
+	FreeLength units.Length `json:"free_length,omitempty"`
 }
 
 // SoilSpec picks a soil preset and overrides any of its values.
 type SoilSpec struct {
-	Preset     string           `json:"preset,omitempty"`
+	// Preset names the soil whose typical values are taken, such as
+	// "dense sand"; the fields below override them.
+	Preset string `json:"preset,omitempty"`
+	// UnitWeight is the soil's bulk unit weight; zero keeps the preset's.
 	UnitWeight units.UnitWeight `json:"unit_weight,omitempty"`
-	Friction   units.Angle      `json:"friction,omitempty"`
-	Cohesion   units.Pressure   `json:"cohesion,omitempty"`
-	Allowable  units.Pressure   `json:"allowable_bearing,omitempty"`
+	// Friction is the effective angle of shearing resistance φ'; zero
+	// keeps the preset's.
+	Friction units.Angle `json:"friction,omitempty"`
+	// Cohesion is the effective cohesion c' (or cu when the friction angle
+	// is zero); zero keeps the preset's.
+	Cohesion units.Pressure `json:"cohesion,omitempty"`
+	// Allowable is an allowable bearing pressure from a site report; zero
+	// keeps the preset's (none: bearing from the bearing-capacity equation).
+	Allowable units.Pressure `json:"allowable_bearing,omitempty"`
 }
 
 // Loads sets the imposed loads. Every zero field takes its default.
@@ -337,37 +407,36 @@ type Basis struct {
 	// safety) or "partial" (factored loads and resistances).
 	Method string `json:"method,omitempty"`
 
-	// Allowable basis: global factors of safety, zero → default.
-	RopeFactor        float64 `json:"rope_factor,omitempty"`
-	SlidingFactor     float64 `json:"sliding_factor,omitempty"`
-	OverturningFactor float64 `json:"overturning_factor,omitempty"`
-	UpliftFactor      float64 `json:"uplift_factor,omitempty"`
-	BearingFactor     float64 `json:"bearing_factor,omitempty"`
+	// Allowable basis: global factors of safety; zero takes the default.
+	RopeFactor        float64 `json:"rope_factor,omitempty"`        // on the ropes' minimum breaking force; default 3 (cable.DefaultGlobalFactor)
+	SlidingFactor     float64 `json:"sliding_factor,omitempty"`     // against sliding of footings and anchors; default 1.5
+	OverturningFactor float64 `json:"overturning_factor,omitempty"` // against overturning; default 2.0 for footings, 1.5 for anchor blocks
+	UpliftFactor      float64 `json:"uplift_factor,omitempty"`      // against uplift of anchor blocks; default 1.5
+	BearingFactor     float64 `json:"bearing_factor,omitempty"`     // on the ultimate bearing pressure; default 3.0
 
-	// Partial-factor basis: load factors, zero → default.
-	GammaG float64 `json:"gamma_g,omitempty"`
-	GammaQ float64 `json:"gamma_q,omitempty"`
+	// Partial-factor basis, EN 1990 Annex A2; zero takes the default.
+	GammaG float64 `json:"gamma_g,omitempty"` // γG on unfavourable permanent loads; default 1.35
+	GammaQ float64 `json:"gamma_q,omitempty"` // γQ on the crowd and the wind; default 1.5
 	// GammaR is the rope resistance factor of EN 1993-1-11; zero → default.
 	GammaR float64 `json:"gamma_r,omitempty"`
 	// RopeEfficiency is the termination efficiency k_e of EN 1993-1-11;
 	// zero → cable.DefaultKe.
 	RopeEfficiency float64 `json:"rope_efficiency,omitempty"`
 
-	// Ground checks on the partial basis, EN 1997-1 Annex A; zero → the
-	// recommended values documented in foundation.Basis.
-	Approach  string  `json:"approach,omitempty"` // "DA2" (default) or "DA1"
-	GammaGdst float64 `json:"gamma_g_dst,omitempty"`
-	GammaGstb float64 `json:"gamma_g_stb,omitempty"`
-	GammaQdst float64 `json:"gamma_q_dst,omitempty"`
-	GammaPhi  float64 `json:"gamma_phi,omitempty"`
-	GammaC    float64 `json:"gamma_c,omitempty"`
-	GammaRh   float64 `json:"gamma_rh,omitempty"`
-	GammaRv   float64 `json:"gamma_rv,omitempty"`
-	GammaRe   float64 `json:"gamma_re,omitempty"`
+	// Ground checks on the partial basis, EN 1997-1 Annex A; zero takes
+	// the recommended value documented in foundation.Basis.
+	Approach  string  `json:"approach,omitempty"`    // design approach, "DA2" (default) or "DA1"
+	GammaGdst float64 `json:"gamma_g_dst,omitempty"` // EQU, destabilising permanent actions; default 1.1
+	GammaGstb float64 `json:"gamma_g_stb,omitempty"` // EQU, stabilising permanent actions; default 0.9
+	GammaQdst float64 `json:"gamma_q_dst,omitempty"` // EQU, destabilising variable actions; default 1.5
+	GammaPhi  float64 `json:"gamma_phi,omitempty"`   // on tan φ' (set M2); default 1.25
+	GammaC    float64 `json:"gamma_c,omitempty"`     // on c' (set M2); default 1.25
+	GammaRh   float64 `json:"gamma_rh,omitempty"`    // on sliding resistance; default 1.1 (DA2), 1.0 (DA1)
+	GammaRv   float64 `json:"gamma_rv,omitempty"`    // on bearing resistance; default 1.4 (DA2), 1.0 (DA1)
+	GammaRe   float64 `json:"gamma_re,omitempty"`    // on earth resistance; default 1.4 (DA2), 1.0 (DA1)
 
-	// Column sections, EN 1992-1-1; zero → the values documented in
-	// tower.RCSection (γc 1.5, γs 1.15, αcc 1.0).
-	GammaConcrete float64 `json:"gamma_concrete,omitempty"`
-	GammaSteel    float64 `json:"gamma_steel,omitempty"`
-	AlphaCC       float64 `json:"alpha_cc,omitempty"`
+	// Column sections, EN 1992-1-1; zero takes the default of tower.RCSection.
+	GammaConcrete float64 `json:"gamma_concrete,omitempty"` // γc on concrete; default 1.5
+	GammaSteel    float64 `json:"gamma_steel,omitempty"`    // γs on reinforcement; default 1.15
+	AlphaCC       float64 `json:"alpha_cc,omitempty"`       // αcc, long-term effects on concrete strength; default 1.0
 }

@@ -26,10 +26,10 @@ type ComfortSpec struct {
 	// Traffic is the walkers' traffic class: "sparse" (default, 0.5
 	// walkers per m², normal use), "dense" (0.8) or "very dense" (1.0).
 	Traffic string `json:"traffic,omitempty"`
-	// Backstays, when true, lets the ropes render over fixed and sliding
-	// saddles into their backstays, and roller saddles move with the
-	// backstays holding them, in the modal analysis; false holds the ropes
-	// at the saddles, as the closed form does.
+	// Backstays is whether the modal analysis lets the ropes render over
+	// fixed and sliding saddles into their backstays, and roller saddles
+	// move with the backstays holding them; false holds the ropes at the
+	// saddles, as the closed form does.
 	Backstays bool `json:"backstays,omitempty"`
 }
 
@@ -74,9 +74,9 @@ func (c ComfortSpec) damping() (float64, string) {
 	case c.Damping > 0:
 		return c.Damping, "given in the description"
 	case c.Deck == "timber":
-		return defaultDampingTimber, "default for a timber deck (Sétra 2006, from memory)"
+		return defaultDampingTimber, "the default for a timber deck, Sétra 2006, from memory"
 	}
-	return defaultDampingSteel, "default for a steel deck or ropes alone (Sétra 2006, from memory)"
+	return defaultDampingSteel, "the default for a steel deck or bare ropes, Sétra 2006, from memory"
 }
 
 // Comfort is the dynamics of the finished bridge under its permanent load:
@@ -159,10 +159,14 @@ func (m *model) vibrationModel(perm CaseState, backstays bool) vibration.Model {
 	return vm
 }
 
-const modalBasis = "lumped-mass modal analysis about the permanent state at the reference temperature " +
-	"(tensioned rope elements, axial and geometric stiffness; longitudinal, lateral and vertical degrees of freedom; gonum EigenSym); " +
-	"each rope group split equally between two planes at the walkway's edges, every rope tied to the walkway's rigid cross-section; " +
-	"beside the closed form of Irvine & Caughey (1974, from memory)"
+// modalMethod says how the modes were found, and modalBasis that with
+// the closed form beside them.
+const (
+	modalMethod = "lumped-mass modal analysis about the permanent state at the reference temperature " +
+		"(tensioned rope elements, axial and geometric stiffness; longitudinal, lateral and vertical degrees of freedom; gonum EigenSym); " +
+		"each rope group split equally between two planes at the walkway's edges, every rope tied to the walkway's rigid cross-section"
+	modalBasis = modalMethod + "; beside the closed form of Irvine & Caughey (1974, from memory)"
+)
 
 // comfort runs the comfort stage: the closed form always; with it, unless
 // switched off, the modal analysis, the accelerations of the modes in a

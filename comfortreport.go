@@ -2,39 +2,56 @@ package sagspan
 
 import (
 	"fmt"
-	"io"
 
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/vibration"
 )
 
-// writeComfort writes the comfort section: the modes, discretised beside
-// the closed form, with the accelerations of those in a critical range,
-// and the lateral lock-in numbers, each table followed once by its basis;
-// with the modal analysis switched off, the closed form alone.
-func (a *Analysis) writeComfort(w io.Writer, f check.Format) error {
+// comfortSection is the comfort part of the report: the modes of the
+// modal analysis beside the closed form with the walkers' response of each
+// mode in a critical range, and the lateral lock-in crowd, each table with
+// its basis once, in words; the closed form alone when the modal analysis
+// is switched off.
+func (a *Analysis) comfortSection() check.Section {
 	cm := a.Modes
 	c := a.Comfort
 	if c == nil {
-		return check.WriteTable(w, f, "Natural frequencies (permanent load, closed form; modal analysis switched off)", []string{"Mode", "Frequency"}, [][]string{
-			{"first out-of-plane (swing)", cm.Swing.String()},
-			{"first in-plane antisymmetric", cm.Antisymmetric.String()},
-			{"first in-plane symmetric", cm.Symmetric.String()},
-			{"Irvine's λ²", fmt.Sprintf("%.1f", cm.LambdaSq)},
-		})
+		return check.Section{ID: "comfort", Title: "Natural frequencies (permanent load, closed form; modal analysis switched off)",
+			Head: []string{"Mode", "Frequency"}, Rows: [][]string{
+				{"first out-of-plane (swing)", cm.Swing.String()},
+				{"first in-plane antisymmetric", cm.Antisymmetric.String()},
+				{"first in-plane symmetric", cm.Symmetric.String()},
+				{"Irvine's λ²", fmt.Sprintf("%.1f", cm.LambdaSq)},
+			}}
 	}
-	over := "flag"
+	over := check.Flag
 	if c.Strict {
-		over = "FAIL"
+		over = check.Fail
 	}
 	closedOf := c.closedOf()
 	resp := map[int]vibration.Response{}
 	for _, r := range c.Responses {
 		resp[r.Mode] = r
 	}
-	var rows [][]string
+	ends := "the ropes held at the saddles"
+	if c.Backstays {
+		ends = "the ropes rendering over fixed and sliding saddles into the backstays, roller saddles moving with them"
+	}
+	damping, how := a.Bridge.Comfort.damping()
+	modes := check.Section{ID: "modes", Title: "Natural modes (permanent load)",
+		Text: []string{
+			fmt.Sprintf("Modes: %s, %d elements along the span, %s; mesh error is the estimated discretisation error (the lumped chain reads low). "+
+				"Closed form: Irvine & Caughey (1974, from memory), λ² = %.1f, beside the first mode of each kind it gives.",
+				modalMethod, c.Modal.Elements, ends, cm.LambdaSq),
+			fmt.Sprintf("Walkers: %s traffic, %.1f per m²; the harmonic load model of Sétra 2006 (from memory) on each mode in a critical range "+
+				"(Živanović, Pavić & Reynolds 2005, from memory), a single mode at resonance, a = F*/(2ξM*), with the modal mass at unit largest "+
+				"displacement of the walking surface; damping ξ = %.2f %% (%s); limits EN 1990 A2.4.3.2 (from memory).",
+				c.Walkers.Traffic, c.Walkers.Traffic.Density(), 100*damping, how),
+		},
+		Head: []string{"Mode", "Kind", "Frequency", "Mesh error", "Closed form", "Difference", "Modal mass", "Critical range", "Acceleration", "Limit", "Status"}}
 	for i, md := range c.Modal.Modes {
 		row := []string{fmt.Sprint(i + 1), md.Label(), md.Frequency.String(), fmt.Sprintf("%.2f %%", -100*md.Error), "", "", md.ModalMass.String(), "", "", "", ""}
+		status := check.Info
 		if fc, ok := closedOf[i]; ok {
 			row[4] = fc.String()
 			row[5] = fmt.Sprintf("%+.1f %%", 100*(float64(md.Frequency/fc)-1))
@@ -43,48 +60,33 @@ func (a *Analysis) writeComfort(w io.Writer, f check.Format) error {
 			row[7] = rangeOf(r)
 			row[8] = r.Acceleration.String()
 			row[9] = r.Limit.String()
-			row[10] = "pass"
+			status = check.Pass
 			if r.Acceleration > r.Limit {
-				row[10] = over
+				status = over
 			}
+			row[10] = status.String()
 		}
-		rows = append(rows, row)
+		modes.Rows = append(modes.Rows, row)
+		modes.Status = append(modes.Status, status)
 	}
-	if err := check.WriteTable(w, f, "Natural modes and walkers' comfort (permanent load)",
-		[]string{"Mode", "Kind", "Frequency", "Mesh error", "Closed form", "Difference", "Modal mass", "Critical range", "Acceleration", "Limit", "Status"}, rows); err != nil {
-		return err
-	}
-	ends := "the ropes held at the saddles"
-	if c.Backstays {
-		ends = "the ropes rendering over fixed and sliding saddles into the backstays, roller saddles moving with them"
-	}
-	damping, how := a.Bridge.Comfort.damping()
-	basis := fmt.Sprintf("Modes: %s; %d elements along the span, %s; mesh error the estimated discretisation error (the lumped chain reads low). "+
-		"Closed form: Irvine & Caughey (1974, from memory), λ² = %.1f, for the first mode of each kind it gives. "+
-		"Walkers: %s traffic, %.1f per m²; Sétra 2006 harmonic load model (from memory), a single mode at resonance, a = F*/(2ξM*), "+
-		"modal mass at unit largest displacement of the walking surface; damping ξ = %.2f %% (%s); "+
-		"limits EN 1990 A2.4.3.2 (from memory); critical ranges Živanović, Pavić & Reynolds 2005 (from memory).",
-		modalBasis, c.Modal.Elements, ends, cm.LambdaSq, c.Walkers.Traffic, c.Walkers.Traffic.Density(), 100*damping, how)
-	if _, err := io.WriteString(w, basis+"\n\n"); err != nil {
-		return err
-	}
+	sec := check.Section{ID: "comfort", Title: "Comfort", Sub: []check.Section{modes}}
 	if len(c.LockIns) == 0 {
-		return nil
+		return sec
 	}
-	rows = rows[:0]
+	lock := check.Section{ID: "lock-in", Title: "Lateral lock-in",
+		Text: []string{fmt.Sprintf("N_L = 8πξfM*/k, k = %.0f N·s/m (Dallard et al. 2001, from memory), against the crowd the walkway holds at %.0f walker per m² (the densest traffic of Sétra 2006, from memory).",
+			vibration.LateralWalkingCoefficient, crowdDensity)},
+		Head: []string{"Mode", "Frequency", "Modal mass", "N_L", "Crowd", "Status"}}
 	for _, l := range c.LockIns {
-		status := "pass"
+		status := check.Pass
 		if l.Crowd >= l.Critical {
 			status = over
 		}
-		rows = append(rows, []string{fmt.Sprint(l.Mode + 1), l.Frequency.String(), l.ModalMass.String(), fmt.Sprintf("%.1f", l.Critical), fmt.Sprintf("%.0f", l.Crowd), status})
+		lock.Rows = append(lock.Rows, []string{fmt.Sprint(l.Mode + 1), l.Frequency.String(), l.ModalMass.String(), fmt.Sprintf("%.1f", l.Critical), fmt.Sprintf("%.0f", l.Crowd), status.String()})
+		lock.Status = append(lock.Status, status)
 	}
-	if err := check.WriteTable(w, f, "Lateral lock-in", []string{"Mode", "Frequency", "Modal mass", "N_L", "Crowd", "Status"}, rows); err != nil {
-		return err
-	}
-	_, err := io.WriteString(w, fmt.Sprintf("Lock-in: N_L = 8πξfM*/k, k = %.0f N·s/m (Dallard et al. 2001, from memory), against the crowd the walkway holds at %.0f walker per m² (the densest traffic of Sétra 2006).\n\n",
-		vibration.LateralWalkingCoefficient, crowdDensity))
-	return err
+	sec.Sub = append(sec.Sub, lock)
+	return sec
 }
 
 // rangeOf names the critical range a response's mode lies in.

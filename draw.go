@@ -148,11 +148,13 @@ func (a *Analysis) elevation() (*plot.Plot, error) {
 		xmin, xmax = math.Min(xmin, ax), math.Max(xmax, ax)
 	}
 
-	flood := float64(b.Site.Flood)
-	if err := addLine(plotter.XYs{{X: xmin, Y: flood}, {X: xmax, Y: flood}}, colourWater, vg.Points(1.2), false, "design flood"); err != nil {
+	flood := float64(b.Site.Flood.Z)
+	if b.Site.Flood.None {
+		// no flood to draw
+	} else if err := addLine(plotter.XYs{{X: xmin, Y: flood}, {X: xmax, Y: flood}}, colourWater, vg.Points(1.2), false, "design flood"); err != nil {
 		return nil, err
 	}
-	if b.Site.Freeboard > 0 {
+	if b.Site.Freeboard > 0 && !b.Site.Flood.None {
 		fb := flood + float64(b.Site.Freeboard)
 		if err := addLine(plotter.XYs{{X: 0, Y: fb}, {X: float64(b.Site.Span), Y: fb}}, colourWater, vg.Points(0.8), true, "flood + freeboard"); err != nil {
 			return nil, err

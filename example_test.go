@@ -40,9 +40,10 @@ func ExampleCrowdPressure() {
 }
 
 func ExampleParse() {
-	_, err := sagspan.Parse([]byte(`{"site": {"span": "-48 m"}}`))
+	// A decimal comma is a slip, not 72 m.
+	_, err := sagspan.Parse([]byte(`{"site": {"span": "72,5 m"}}`))
 	fmt.Println(err)
-	// Output: sagspan: bridge description: site.span: must be positive, got -48.00 m
+	// Output: sagspan: bridge description: site.span: units: "72,5 m": "72,5 m" has a comma in the number; write it with a decimal point and no thousands separator, such as "72.5 m" (line 1, column 19)
 }
 
 func ExampleSearch() {

@@ -1,7 +1,6 @@
 package sagspan
 
 import (
-	"fmt"
 	"math"
 
 	"github.com/sagspan/sagspan/check"
@@ -17,7 +16,7 @@ func (m *model) footingChecks(out sink, side Side, spec FootingSpec, service []C
 	for _, svc := range service {
 		results, err := m.footing(side, spec, service[0].Tower[side], svc.Tower[side])
 		if err != nil {
-			return fmt.Errorf("sagspan: %s, case %q: %w", element, svc.Case.Name, err)
+			return m.bankErr(side, "tower.footing", svc.Case.Name, err)
 		}
 		for _, r := range results {
 			out.add(r.For(element, svc.Case.Name))
@@ -27,7 +26,7 @@ func (m *model) footingChecks(out sink, side Side, spec FootingSpec, service []C
 		}
 		results, err = m.footingAcross(side, spec, service[0].Tower[side], svc)
 		if err != nil {
-			return fmt.Errorf("sagspan: %s across, case %q: %w", element, svc.Case.Name, err)
+			return m.bankErr(side, "tower.footing", svc.Case.Name+", across the bridge", err)
 		}
 		for _, r := range results {
 			out.add(r.For(footingAcrossElement[side], svc.Case.Name))
@@ -64,7 +63,7 @@ func (m *model) anchorChecks(out sink, side Side, spec AnchorSpec, service []Cas
 	for _, svc := range service {
 		results, err := m.anchor(side, spec, service[0], svc)
 		if err != nil {
-			return fmt.Errorf("sagspan: %s, case %q: %w", element, svc.Case.Name, err)
+			return m.bankErr(side, "anchor", svc.Case.Name, err)
 		}
 		for _, r := range results {
 			out.add(r.For(element, svc.Case.Name))

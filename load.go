@@ -24,14 +24,19 @@ func Demo() Bridge {
 // point for a description of one's own.
 func DemoJSON() []byte { return append([]byte(nil), demoJSON...) }
 
-// Parse reads a bridge description from JSON and validates it. Unknown
-// fields are rejected; every error names the offending field by its path.
+// Parse reads a bridge description from JSON and validates it. Every
+// error is a *FieldError naming the offending field by its path and its
+// line and column in data: syntax errors, unknown or repeated fields,
+// missing required fields, type errors, quantities without their unit where
+// a bare number is ambiguous, and every value Validate refuses.
 func Parse(data []byte) (Bridge, error) {
 	var b Bridge
-	if err := decodeStrict(data, &b); err != nil {
+	at, err := decodeStrict(data, &b)
+	if err != nil {
 		return Bridge{}, err
 	}
 	if err := b.Validate(); err != nil {
+		locate(err, data, at)
 		return Bridge{}, err
 	}
 	return b, nil

@@ -63,7 +63,7 @@ func TestBadDescriptions(t *testing.T) {
 		{"temperature out of this world", func(m map[string]any) { obj(m, "climate")["hottest"] = "1e6 C" }, "climate.hottest", "outside"},
 		{"unknown design approach", func(m map[string]any) { obj(m, "basis")["approach"] = "DA9" }, "basis.approach", "unknown design approach"},
 		{"bad basis", func(m map[string]any) { obj(m, "basis")["method"] = "vibes" }, "basis.method", "unknown method"},
-		{"not JSON", nil, "", "want an object"},
+		{"not JSON", nil, "", "JSON syntax"},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {

@@ -1,7 +1,6 @@
 package sagspan
 
 import (
-	"fmt"
 	"math"
 
 	"github.com/sagspan/sagspan/cable"
@@ -84,13 +83,13 @@ func newModel(b Bridge) (*model, error) {
 		}
 	}
 	l := float64(b.Site.Span)
-	for _, g := range gs {
+	for i, g := range gs {
 		w0 := g.self + units.LoadPerLength(g.share)*m.dead
 		h0 := units.Force(float64(w0) * l * l / (8 * float64(g.Sag))) // H = w l²/(8 f)
 		ref := cable.State{Load: cable.Load{Uniform: w0}, H: h0, Temperature: b.Climate.Reference}
 		m.ref = append(m.ref, ref)
 		if err := m.reference(g, ref); err != nil {
-			return nil, err
+			return nil, m.groupErr(i, LoadCase{Name: "reference state", Temperature: b.Climate.Reference}, err)
 		}
 	}
 	return m, nil
@@ -102,13 +101,13 @@ func newModel(b Bridge) (*model, error) {
 func (m *model) reference(g group, ref cable.State) error {
 	shape, err := cable.NewLoaded(m.span, ref.Load, ref.H)
 	if err != nil {
-		return fmt.Errorf("sagspan: %s, reference state: %w", g.Name, err)
+		return err
 	}
 	// Unstretched length by Hooke's law on the unstretched length, the law
 	// of every rope model here (see package cable).
 	l0, err := cable.UnstretchedLength(m.span, g.elastic.EA, ref.Load, ref.H)
 	if err != nil {
-		return fmt.Errorf("sagspan: %s, reference state: %w", g.Name, err)
+		return err
 	}
 	m.spanUnstretched = append(m.spanUnstretched, float64(l0))
 	ta, tb := shape.SupportTensions()
@@ -124,7 +123,7 @@ func (m *model) reference(g group, ref cable.State) error {
 		// reference tension is what the saddle holds from there.
 		bal, err := m.saddle(Side(side), g, 0).Balance(tower.RopePull{Tension: t, Angle: a}, bs.angle, t)
 		if err != nil {
-			return fmt.Errorf("sagspan: %s, reference state, %s saddle: %w", g.Name, Side(side), err)
+			return m.bankErr(Side(side), "tower.saddle", "reference state", err)
 		}
 		bs.unstretched = bs.unstretchedFor(g.elastic, float64(bal.Backstay))
 		bss[side] = bs

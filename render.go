@@ -4,70 +4,128 @@ import (
 	"encoding/json"
 	"fmt"
 	"io"
+	"strings"
 
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/units"
 )
 
-// WriteText writes the full report as aligned plain text: the caution, the
-// governing result of every check (every result with opts.All), the rope
-// states per load case, the natural frequencies and the erection tables.
-func (a *Analysis) WriteText(w io.Writer, opts *check.RenderOptions) error {
-	if err := a.Report.WriteText(w, opts); err != nil {
-		return err
+// The full report is a list of sections (check.Section) that every
+// format lays out: the design basis, then the check report's sections
+// (failures first, when any; the governing cases; their values, notes and
+// bases), then the parts below. To add a part to the text, Markdown and
+// HTML reports, add its builder to reportParts.
+var reportParts = []func(*Analysis) check.Section{
+	(*Analysis).ropeStatesSection,
+	(*Analysis).comfortSection,
+	(*Analysis).erectionSection,
+}
+
+// Sections returns the sections of the full report, in order.
+func (a *Analysis) Sections(opts *check.RenderOptions) []check.Section {
+	out := []check.Section{a.designBasisSection()}
+	out = append(out, a.Report.Sections(a.renderOptions(opts))...)
+	for _, part := range reportParts {
+		out = append(out, part(a))
 	}
-	return a.writeExtras(w, check.Text)
+	return out
+}
+
+// renderOptions returns opts with Explain set, when the caller has not,
+// to say why a row has nothing to check.
+func (a *Analysis) renderOptions(opts *check.RenderOptions) *check.RenderOptions {
+	o := check.RenderOptions{}
+	if opts != nil {
+		o = *opts
+	}
+	if o.Explain == nil {
+		o.Explain = a.explain
+	}
+	return &o
+}
+
+// explain says why nothing acts on a result, where the description tells.
+func (a *Analysis) explain(r check.Result) string {
+	for side := Left; side <= Right; side++ {
+		bank := a.Bridge.Banks.Left
+		if side == Right {
+			bank = a.Bridge.Banks.Right
+		}
+		if !strings.HasPrefix(r.Element, side.String()+" ") || strings.Contains(r.Element, "across") {
+			continue
+		}
+		if bank.Tower.Saddle.Kind == "roller" && (strings.Contains(r.Element, "tower") || strings.Contains(r.Element, "footing")) {
+			return "roller saddle: the ropes put no horizontal force on the column"
+		}
+	}
+	return ""
+}
+
+// WriteText writes the full report as aligned plain text: the caution and
+// the verdict, the design basis, the failures (when any), the governing
+// result of every check (every result with opts.All), their values, notes
+// and bases, the rope states per load case, the natural frequencies and
+// the erection tables.
+func (a *Analysis) WriteText(w io.Writer, opts *check.RenderOptions) error {
+	return a.write(w, check.Text, opts)
 }
 
 // WriteMarkdown writes the full report as Markdown, with the same content
 // as WriteText.
 func (a *Analysis) WriteMarkdown(w io.Writer, opts *check.RenderOptions) error {
-	if err := a.Report.WriteMarkdown(w, opts); err != nil {
-		return err
-	}
-	return a.writeExtras(w, check.Markdown)
+	return a.write(w, check.Markdown, opts)
 }
 
-func (a *Analysis) writeExtras(w io.Writer, f check.Format) error {
-	var rows [][]string
-	for _, cs := range a.Service {
-		for _, g := range cs.Groups {
-			rows = append(rows, []string{
-				cs.Case.Name, g.Group, g.H.String(), g.MaxTension.String(),
-				g.Angle[Left].String(), g.Angle[Right].String(), g.Sag.String(),
-				fmt.Sprintf("%s at x = %s", units.Format(float64(a.Bridge.Site.LeftSaddle+g.LowZ), units.KindLength), g.LowX),
-			})
-		}
-	}
-	if err := check.WriteTable(w, f, "Rope states, characteristic loads",
-		[]string{"Case", "Group", "H", "Max tension", "Angle left", "Angle right", "Midspan sag", "Lowest rope point"}, rows); err != nil {
+func (a *Analysis) write(w io.Writer, f check.Format, opts *check.RenderOptions) error {
+	if err := a.Report.Head(w, f); err != nil {
 		return err
 	}
-	if err := a.writeComfort(w, f); err != nil {
-		return err
-	}
-	for _, et := range a.Erection {
-		var rows [][]string
-		for _, r := range et.Rows {
-			rows = append(rows, []string{r.Temperature.String(), r.Sag.String(), r.H.String()})
-		}
-		heading := "Erection table: " + et.Group + " (bare ropes, midspan sag below the chord)"
-		if err := check.WriteTable(w, f, heading, []string{"Rope temperature", "Sag to set", "H of the group"}, rows); err != nil {
+	for _, s := range a.Sections(opts) {
+		if err := check.WriteSection(w, f, s, 2); err != nil {
 			return err
 		}
 	}
 	return nil
 }
 
+func (a *Analysis) ropeStatesSection() check.Section {
+	s := check.Section{ID: "rope-states", Title: "Rope states, characteristic loads",
+		Head: []string{"Case", "Group", "H", "Max tension", "Angle left", "Angle right", "Midspan sag", "Lowest rope point"}}
+	for _, cs := range a.Service {
+		for _, g := range cs.Groups {
+			s.Rows = append(s.Rows, []string{
+				cs.Case.Name, g.Group, g.H.String(), g.MaxTension.String(),
+				g.Angle[Left].String(), g.Angle[Right].String(), g.Sag.String(),
+				fmt.Sprintf("%s at x = %s", units.Format(float64(a.Bridge.Site.LeftSaddle+g.LowZ), units.KindLength), g.LowX),
+			})
+		}
+	}
+	return s
+}
+
+func (a *Analysis) erectionSection() check.Section {
+	s := check.Section{ID: "erection", Title: "Erection tables",
+		Text: []string{"The midspan sag below the chord to set the bare ropes to, by rope temperature, so that the finished bridge hangs at its design sag."}}
+	for _, et := range a.Erection {
+		sub := check.Section{Title: et.Group, Head: []string{"Rope temperature", "Sag to set", "H of the group"}}
+		for _, r := range et.Rows {
+			sub.Rows = append(sub.Rows, []string{r.Temperature.String(), r.Sag.String(), r.H.String()})
+		}
+		s.Sub = append(s.Sub, sub)
+	}
+	return s
+}
+
 // analysisJSON is the stable JSON form of an Analysis.
 type analysisJSON struct {
-	Bridge   string         `json:"bridge"`
-	Caution  string         `json:"caution"`
-	Report   check.Report   `json:"report"`
-	Cases    []caseJSON     `json:"cases"`
-	Modes    modesJSON      `json:"modes"`
-	Comfort  *comfortJSON   `json:"comfort,omitempty"`
-	Erection []erectionJSON `json:"erection"`
+	Bridge      string         `json:"bridge"`
+	Caution     string         `json:"caution"`
+	DesignBasis DesignBasis    `json:"design_basis"`
+	Report      check.Report   `json:"report"`
+	Cases       []caseJSON     `json:"cases"`
+	Modes       modesJSON      `json:"modes"`
+	Comfort     *comfortJSON   `json:"comfort,omitempty"`
+	Erection    []erectionJSON `json:"erection"`
 }
 
 type caseJSON struct {
@@ -99,11 +157,11 @@ type erectionJSON struct {
 	Rows  [][3]float64 `json:"rows_k_m_n"` // temperature K, sag m, H N
 }
 
-// MarshalJSON writes the analysis with SI values: the report, the rope
-// states of every characteristic case, the frequencies and the erection
-// tables.
+// MarshalJSON writes the analysis with SI values: the design basis, the
+// report (failures first), the rope states of every characteristic case,
+// the frequencies and the erection tables.
 func (a *Analysis) MarshalJSON() ([]byte, error) {
-	out := analysisJSON{Bridge: a.Bridge.Name, Caution: check.Caution, Report: a.Report}
+	out := analysisJSON{Bridge: a.Bridge.Name, Caution: check.Caution, DesignBasis: a.DesignBasis(), Report: a.Report}
 	for _, cs := range a.Service {
 		c := caseJSON{Name: cs.Case.Name}
 		for _, g := range cs.Groups {

@@ -10,6 +10,7 @@ import (
 	"testing"
 
 	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/units"
 )
 
 var update = flag.Bool("update", false, "rewrite golden files")
@@ -124,5 +125,57 @@ func BenchmarkCheckDemo(b *testing.B) {
 			b.Fatal(err)
 		}
 		sinkAnalysis = a
+	}
+}
+
+// designBasisText renders only the design-basis section of b's report.
+func designBasisText(t *testing.T, b Bridge) string {
+	t.Helper()
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var buf bytes.Buffer
+	if err := check.WriteSection(&buf, check.Text, a.designBasisSection(), 2); err != nil {
+		t.Fatal(err)
+	}
+	return buf.String()
+}
+
+// TestDesignBasis checks the design basis of the demo report against its
+// golden file, and that it follows the description: the inputs as the
+// demo's JSON gives them, and a changed input changed in it, with the loads
+// derived from it.
+func TestDesignBasis(t *testing.T) {
+	got := designBasisText(t, Demo())
+	golden(t, "demo_design_basis.txt", []byte(got))
+	for _, want := range []string{
+		"site.span                   72.00 m", "climate.coldest        -10.00 °C", "rope.diameter      32.00 mm",
+		`walkway.parts[1]    name "timber deck planks", load 450.0 N/m`,
+		"crowd pressure, crowd on the full span", "3.176 kPa", // 2.0 + 120/(72 + 30), EN 1991-2 cl. 5.3.2.1(2)
+		"peak wind pressure q_p", "1.056 kPa", // 2.5 × ½ × 1.25 × 26², EN 1991-1-4 cl. 4.5
+		"walkway dead load g_w, without the ropes", "1.000 kN/m", // 0.30 + 0.45 + 0.25
+		"left bank, dense sand: friction", "SHA-256 " + Demo().Digest(),
+	} {
+		if !strings.Contains(got, want) {
+			t.Errorf("the design basis lacks %q", want)
+		}
+	}
+	b := Demo()
+	b.Site.Span = 60 * units.Metre
+	b.Ropes = append([]RopeGroup(nil), b.Ropes...)
+	b.Ropes[0].Sag, b.Ropes[1].Sag = 3*units.Metre, 3*units.Metre
+	changed := designBasisText(t, b)
+	for _, want := range []string{
+		"site.span                   60.00 m",
+		"3.333 kPa", // 2.0 + 120/(60 + 30)
+		"SHA-256 " + b.Digest(),
+	} {
+		if !strings.Contains(changed, want) {
+			t.Errorf("after changing the span, the design basis lacks %q", want)
+		}
+	}
+	if strings.Contains(changed, "72.00 m") || b.Digest() == Demo().Digest() {
+		t.Error("the design basis still shows the old span, or the digest did not change")
 	}
 }

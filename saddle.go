@@ -112,14 +112,14 @@ func (m *model) analyse(lc LoadCase) (CaseState, error) {
 		load, swing := m.load(g, lc)
 		gs, err := m.solveGroup(i, load, swing, dt)
 		if err != nil {
-			return CaseState{}, fmt.Errorf("sagspan: %s, case %q: %w", g.Name, lc.Name, err)
+			return CaseState{}, m.groupErr(i, lc, err)
 		}
 		for side := Left; side <= Right; side++ {
 			saddle := m.saddle(side, g, gs.Travel[side])
 			spanPull := tower.RopePull{Tension: gs.Tension[side], Angle: gs.Angle[side], Swing: swing}
 			lf, err := saddle.Force(spanPull, tower.RopePull{Tension: gs.Backstay[side], Angle: gs.BackstayAngle[side]})
 			if err != nil {
-				return CaseState{}, fmt.Errorf("sagspan: %s saddle, %s, case %q: %w", side, g.Name, lc.Name, err)
+				return CaseState{}, m.bankErr(side, "tower.saddle", lc.Name, fmt.Errorf("%s: %w", g.Name, err))
 			}
 			gs.Saddle[side] = lf
 			levels[side] = append(levels[side], lf)
@@ -146,7 +146,7 @@ func (m *model) analyse(lc LoadCase) (CaseState, error) {
 		// case (1 on characteristic loads).
 		r, err := tower.Combine(levels[side], units.Force(lc.GammaG)*m.column(side).Weight())
 		if err != nil {
-			return CaseState{}, fmt.Errorf("sagspan: %s tower, case %q: %w", side, lc.Name, err)
+			return CaseState{}, m.bankErr(side, "tower", lc.Name, err)
 		}
 		cs.Tower[side] = r
 	}

@@ -33,7 +33,14 @@ func (m *model) checkClearance(out sink, service []CaseState) {
 	site := m.b.Site
 	for _, cs := range service {
 		soffit, x := m.walkwayLow(cs)
-		clear := soffit - site.Flood
+		if site.Flood.None {
+			out.add(check.Record("bridge.clearance", "Walkway underside above design flood", units.KindLength, float64(soffit)).
+				For("walkway", cs.Case.Name).
+				WithBasis("elevation of the lowest walkway underside, characteristic loads (common practice)").
+				WithNote(fmt.Sprintf("nothing to check: the description declares no design flood (site.flood_elevation \"none\"); lowest underside at x = %s", x)))
+			continue
+		}
+		clear := soffit - site.Flood.Z
 		r := check.Compare("bridge.clearance", "Walkway underside above design flood", units.KindLength,
 			float64(site.Freeboard), float64(clear)).
 			For("walkway", cs.Case.Name).
@@ -41,7 +48,7 @@ func (m *model) checkClearance(out sink, service []CaseState) {
 			WithValues(
 				check.Of("z_w", "elevation of the lowest walkway underside", soffit),
 				check.Of("x_w", "where it lies, from the left saddle", x),
-				check.Of("z_f", "design flood elevation", site.Flood),
+				check.Of("z_f", "design flood elevation", site.Flood.Z),
 				check.Of("c", "clearance above the flood", clear),
 			)
 		if clear <= 0 {
@@ -69,7 +76,7 @@ func (m *model) erection(a *Analysis, opts *Options) error {
 		dead := cable.Load{Uniform: units.LoadPerLength(g.share) * m.dead}
 		rows, err := cable.ErectionTable(m.span, g.elastic, g.self, dead, g.Sag, c.Reference, temps)
 		if err != nil {
-			return fmt.Errorf("sagspan: erection table of %s: %w", g.Name, err)
+			return fieldErr("ropes", "erection table of %s: %w; check its sag, rope and the climate's temperatures", g.Name, err)
 		}
 		a.Erection = append(a.Erection, ErectionTable{Group: g.Name, Rows: rows})
 	}

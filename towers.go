@@ -1,7 +1,6 @@
 package sagspan
 
 import (
-	"fmt"
 	"strconv"
 	"strings"
 
@@ -138,7 +137,7 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 		}
 		r, err := tower.EccentricityCheck(svc.Tower[side], col, m.eccentricity(side, d))
 		if err != nil {
-			return fmt.Errorf("sagspan: %s, case %q: %w", element, name, err)
+			return m.bankErr(side, "tower.eccentricity", name, err)
 		}
 		if d == tower.Along {
 			r = r.WithValues(m.saddleValues(side, svc)...)
@@ -154,7 +153,7 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 	}
 	res, err := m.member(side, des, perm)
 	if err != nil {
-		return fmt.Errorf("sagspan: %s column, case %q: %w", towerElement[side], name, err)
+		return m.bankErr(side, "tower.section", name, err)
 	}
 	out.add(res.Along.WithBasis(res.Along.Basis+basis).For(towerElement[side], name))
 	out.add(res.Across.WithBasis(res.Across.Basis+basis).For(towerAcrossElement[side], name))

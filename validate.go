@@ -4,6 +4,9 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"reflect"
+	"strconv"
+	"sync"
 
 	"github.com/sagspan/sagspan/units"
 )
@@ -12,9 +15,11 @@ import (
 // not meant to be used (common practice for the trade sagspan serves).
 const (
 	maxSpan = 1000 * units.Metre // footbridge spans are 20–250 m; well beyond stays out
-	// Rope temperatures lie within these in any climate a footbridge meets.
-	minTemperature = units.Temperature(273.15 - 100)
-	maxTemperature = units.Temperature(273.15 + 100)
+	// Rope temperatures lie within these in any climate a footbridge meets:
+	// the coldest air recorded is near −90 °C, a dark rope in the sun
+	// reaches some 30 K above the air.
+	minTemperature = units.Temperature(273.15 - 90)
+	maxTemperature = units.Temperature(273.15 + 90)
 )
 
 // Material bounds of column sections.
@@ -33,8 +38,19 @@ const (
 // footbridge sag ratios lie between about 1/25 and 1/8).
 const maxSagRatio = 0.25
 
+// minSagRatio is the smallest dead-load sag ratio accepted: the tension of
+// a rope grows as 1/sag (H = w l²/8f), so a rope drawn tighter than a
+// hundredth of its span carries many times its own weight in tension for
+// nothing (common practice, as for maxSagRatio).
+const minSagRatio = 0.01
+
 // validator gathers the first error found, naming its field.
-type validator struct{ err error }
+type validator struct {
+	err error
+	// names is the path of the struct rangesAt is in, names[:depth].
+	names [16]string
+	depth int
+}
 
 // path is a field's JSON path in two parts, joined only when an error needs
 // it: validation runs in the design search's inner loop.
@@ -96,7 +112,7 @@ func (b Bridge) Validate() error {
 		v.fail(at("site.rise"), "height difference %s is not less than the span %s", s.Rise, s.Span)
 	}
 	v.finite(at("site.left_saddle_elevation"), float64(s.LeftSaddle))
-	v.finite(at("site.flood_elevation"), float64(s.Flood))
+	v.finite(at("site.flood_elevation"), float64(s.Flood.Z))
 	v.nonNegative(at("site.freeboard"), float64(s.Freeboard), units.KindLength)
 	for i, p := range s.Ground {
 		v.finite(at(fmt.Sprintf("site.ground[%d].x", i)), float64(p.X))
@@ -121,9 +137,6 @@ func (b Bridge) Validate() error {
 	}
 	v.nonNegative(at("climate.wind_speed"), float64(c.WindSpeed), units.KindVelocity)
 	v.nonNegative(at("climate.wind_pressure"), float64(c.WindPressure), units.KindPressure)
-	if math.IsNaN(c.Exposure) || c.Exposure < 0 || c.Exposure > 10 {
-		v.fail(at("climate.exposure"), "must be zero (default) or an exposure factor up to 10, got %v", c.Exposure)
-	}
 
 	w := b.Walkway
 	v.positive(at("walkway.width"), float64(w.Width), units.KindLength)
@@ -143,6 +156,7 @@ func (b Bridge) Validate() error {
 	b.validateRopes(v)
 	b.validateBank(v, "banks.left", b.Banks.Left)
 	b.validateBank(v, "banks.right", b.Banks.Right)
+	v.rangesAt("", reflect.ValueOf(&b).Elem())
 	for _, k := range []struct {
 		f    string
 		soil SoilSpec
@@ -162,6 +176,7 @@ func (b Bridge) validateBanks() error {
 	v := &validator{}
 	b.validateBank(v, "banks.left", b.Banks.Left)
 	b.validateBank(v, "banks.right", b.Banks.Right)
+	v.rangesAt("banks", reflect.ValueOf(&b.Banks).Elem())
 	return v.err
 }
 
@@ -187,6 +202,10 @@ func (b Bridge) validateRopes(v *validator) {
 		if v.err == nil && float64(g.Sag) > maxSagRatio*float64(b.Site.Span) {
 			v.fail(path{f, ".sag"}, "sag %s is more than %.2f of the span %s: not a physical footbridge",
 				g.Sag, maxSagRatio, b.Site.Span)
+		}
+		if v.err == nil && float64(g.Sag) < minSagRatio*float64(b.Site.Span) {
+			v.fail(path{f, ".sag"}, "sag %s is less than 1/%.0f of the span %s: a rope that tight carries many times its load in tension; footbridge sag ratios lie between about 1/25 and 1/8",
+				g.Sag, 1/minSagRatio, b.Site.Span)
 		}
 		v.nonNegative(path{f, ".offset"}, float64(g.Offset), units.KindLength)
 		if math.IsNaN(g.Share) || g.Share < 0 || g.Share > 1 {
@@ -381,6 +400,12 @@ func (b Bridge) validateAnchorage(v *validator, f string, k Bank) {
 		if a.Passive < 0 || a.Passive > 1 || math.IsNaN(a.Passive) {
 			v.fail(path{f, ".anchor.passive"}, "must lie between 0 and 1, got %v", a.Passive)
 		}
+		if v.err == nil && a.Type == "block" && a.AttachX > a.Length {
+			v.fail(path{f, ".anchor.attach_x"}, "%s puts the backstay attachment beyond the block's length %s", a.AttachX, a.Length)
+		}
+		if v.err == nil && a.Type == "block" && a.AttachZ > a.Height {
+			v.fail(path{f, ".anchor.attach_z"}, "%s puts the backstay attachment above the block's height %s", a.AttachZ, a.Height)
+		}
 	case "rock":
 		if a.Bars <= 0 {
 			v.fail(path{f, ".anchor.bars"}, "a rock anchor needs at least one bar, got %d", a.Bars)
@@ -395,16 +420,7 @@ func (b Bridge) validateAnchorage(v *validator, f string, k Bank) {
 }
 
 func (b Bridge) validateLoads(v *validator) {
-	l := b.Loads
-	v.nonNegative(at("loads.crowd"), float64(l.Crowd), units.KindPressure)
-	for _, x := range []struct {
-		f string
-		x float64
-	}{{"loads.wind_with_crowd", l.WindWithCrowd}, {"loads.rope_drag", l.DragCoefficient}, {"loads.walkway_drag", l.WalkwayDrag}} {
-		if math.IsNaN(x.x) || x.x < 0 || x.x > 10 {
-			v.fail(at(x.f), "must lie between 0 and 10, got %v", x.x)
-		}
-	}
+	v.nonNegative(at("loads.crowd"), float64(b.Loads.Crowd), units.KindPressure)
 	bs := b.Basis
 	switch bs.Method {
 	case "", "allowable", "partial":
@@ -416,29 +432,256 @@ func (b Bridge) validateLoads(v *validator) {
 	default:
 		v.fail(at("basis.approach"), "unknown design approach %q; want DA1 or DA2", bs.Approach)
 	}
-	for _, x := range []struct {
-		f string
-		x float64
-	}{{"basis.rope_efficiency", bs.RopeEfficiency}, {"basis.alpha_cc", bs.AlphaCC}} {
-		if math.IsNaN(x.x) || x.x < 0 || x.x > 1 {
-			v.fail(at(x.f), "must be zero (default) or a factor up to 1, got %v", x.x)
+}
+
+// limit is the plausible range of one field of a description: a value
+// outside it is refused, naming the field and the range. The bounds are in
+// SI; kind formats them.
+type limit struct {
+	lo, hi float64
+	kind   units.Kind
+	plain  bool // a plain number (float64 or int field), formatted as such
+}
+
+// between returns the range lo..hi of a quantity.
+func between[T units.Quantity](lo, hi T) limit {
+	return limit{lo: float64(lo), hi: float64(hi), kind: lo.Kind()}
+}
+
+// plain returns the range lo..hi of a plain number: a count, a factor, a
+// coefficient.
+func plain(lo, hi float64) limit { return limit{lo: lo, hi: hi, kind: units.KindRatio, plain: true} }
+
+func (l limit) format(x float64) string {
+	if l.plain {
+		return strconv.FormatFloat(x, 'g', -1, 64)
+	}
+	return units.Format(x, l.kind)
+}
+
+// String gives the range as the field reference and errors write it,
+// both ends in one unit.
+func (l limit) String() string {
+	if l.plain {
+		return l.format(l.lo) + " to " + l.format(l.hi)
+	}
+	lo, hi := units.FormatPair(l.lo, l.hi, l.kind)
+	return lo + " to " + hi
+}
+
+// limits holds the plausible range of every number in a description, by Go
+// type and field name ("RopeSpec.Diameter"). A field tagged omitempty whose
+// value is zero is not given, takes its default and is not checked here.
+// Every numeric field must have an entry (TestEveryFieldHasALimit): add one
+// with every new field. Where a checking package has a bound of its own,
+// the range here lies inside it (TestLimitsAgreeWithPackages). The ranges
+// are what footbridges are built with (common practice) unless a source
+// is named.
+var limits = map[string]limit{
+	"Site.Span":       between(5*units.Metre, maxSpan),
+	"Site.Rise":       between(-300*units.Metre, 300*units.Metre),
+	"Site.LeftSaddle": between(-500*units.Metre, 9000*units.Metre),
+	"Site.Flood":      between(-500*units.Metre, 9000*units.Metre),
+	"Site.Freeboard":  between(0*units.Metre, 30*units.Metre),
+	"Point.X":         between(-3000*units.Metre, 4000*units.Metre),
+	"Point.Z":         between(-500*units.Metre, 9000*units.Metre),
+
+	"Climate.Reference":    between(minTemperature, maxTemperature),
+	"Climate.Coldest":      between(minTemperature, maxTemperature),
+	"Climate.Hottest":      between(minTemperature, maxTemperature),
+	"Climate.WindSpeed":    between(0*units.MetrePerSecond, 80*units.MetrePerSecond), // basic wind speeds reach about 70 m/s in cyclone regions
+	"Climate.WindPressure": between(0*units.Pascal, 10*units.Kilopascal),
+	"Climate.Exposure":     plain(0.5, 5), // ce(z) of EN 1991-1-4 Figure 4.2 lies within about 1 to 4.5
+
+	"Walkway.Width":     between(0.3*units.Metre, 5*units.Metre),
+	"Walkway.Depth":     between(0*units.Metre, 3*units.Metre),
+	"Walkway.DeadLoad":  between(0.02*units.KilonewtonPerMetre, 30*units.KilonewtonPerMetre),
+	"Walkway.WindDepth": between(0*units.Metre, 5*units.Metre),
+	"Part.Load":         between(0*units.KilonewtonPerMetre, 30*units.KilonewtonPerMetre),
+
+	"RopeGroup.Count":   plain(1, 50),
+	"RopeGroup.Sag":     between(0.05*units.Metre, 250*units.Metre),
+	"RopeGroup.Share":   plain(0, 1),
+	"RopeGroup.Offset":  between(0*units.Metre, 5*units.Metre),
+	"RopeSpec.Diameter": between(4*units.Millimetre, 120*units.Millimetre),
+	"RopeSpec.Grade":    between(1000*units.Megapascal, 2500*units.Megapascal), // grades 1570 to 2160 of EN 12385-4
+	"RopeSpec.MBF":      between(1*units.Kilonewton, 30*units.Meganewton),
+	"RopeSpec.Area":     between(5*units.SquareMillimetre, 12000*units.SquareMillimetre),
+	"RopeSpec.Modulus":  between(50*units.Gigapascal, 210*units.Gigapascal),
+	"RopeSpec.Mass":     between(0.05*units.KilogramPerMetre, 80*units.KilogramPerMetre),
+	"RopeSpec.Alpha":    between(5e-6*units.PerKelvin, 20e-6*units.PerKelvin),
+
+	"TowerSpec.Height":          between(0.5*units.Metre, 60*units.Metre),
+	"TowerSpec.Depth":           between(0.15*units.Metre, 5*units.Metre),
+	"TowerSpec.Width":           between(0.15*units.Metre, 5*units.Metre),
+	"TowerSpec.Facing":          between(0*units.Millimetre, 300*units.Millimetre),
+	"TowerSpec.UnitWeight":      between(15*units.KilonewtonPerCubicMetre, 30*units.KilonewtonPerCubicMetre),
+	"SaddleSpec.Friction":       plain(0, 0.6),
+	"SaddleSpec.GrooveFriction": plain(0, 0.6),
+	"SectionSpec.Concrete":      between(12*units.Megapascal, maxConcrete), // C12/15 to C90/105, EN 1992-1-1 Table 3.1
+	"SectionSpec.Steel":         between(250*units.Megapascal, maxSteel),
+	"SectionSpec.Bars":          plain(0, 64),
+	"SectionSpec.BarDiameter":   between(6*units.Millimetre, 50*units.Millimetre),
+	"SectionSpec.Cover":         between(15*units.Millimetre, 300*units.Millimetre),
+	"SectionSpec.Creep":         plain(0, 5), // φ(∞, t0) of EN 1992-1-1 Figure 3.1 stays below about 4
+	"SectionSpec.Size":          between(50*units.Millimetre, 2000*units.Millimetre),
+	"SectionSpec.Wall":          between(2*units.Millimetre, 100*units.Millimetre),
+	"SectionSpec.Spacing":       between(0.1*units.Metre, 10*units.Metre),
+	"SectionSpec.Panel":         between(0.1*units.Metre, 60*units.Metre),
+	"TowerSpec.Drag":            plain(0.5, 3),
+	"EccentricitySpec.Section":  between(0*units.Metre, 60*units.Metre),
+	"FootingSpec.Length":        between(0.3*units.Metre, 20*units.Metre),
+	"FootingSpec.Width":         between(0.3*units.Metre, 20*units.Metre),
+	"FootingSpec.Thickness":     between(0.15*units.Metre, 5*units.Metre),
+	"FootingSpec.Depth":         between(0*units.Metre, 10*units.Metre),
+	"FootingSpec.ColumnOffset":  between(-10*units.Metre, 10*units.Metre),
+	"EccentricitySpec.Fraction": plain(0, 1),
+	"EccentricitySpec.Offset":   between(-2*units.Metre, 2*units.Metre),
+
+	"Backstay.Horizontal": between(0.5*units.Metre, 300*units.Metre),
+	"Backstay.Drop":       between(0.1*units.Metre, 200*units.Metre),
+
+	"AnchorSpec.Length":       between(0.2*units.Metre, 20*units.Metre),
+	"AnchorSpec.Width":        between(0.2*units.Metre, 20*units.Metre),
+	"AnchorSpec.Height":       between(0.2*units.Metre, 20*units.Metre),
+	"AnchorSpec.Depth":        between(0*units.Metre, 30*units.Metre),
+	"AnchorSpec.UnitWeight":   between(15*units.KilonewtonPerCubicMetre, 30*units.KilonewtonPerCubicMetre),
+	"AnchorSpec.Passive":      plain(0, 1),
+	"AnchorSpec.AttachX":      between(0*units.Metre, 20*units.Metre),
+	"AnchorSpec.AttachZ":      between(0*units.Metre, 20*units.Metre),
+	"AnchorSpec.Bars":         plain(1, 50),
+	"AnchorSpec.BarDiameter":  between(10*units.Millimetre, 75*units.Millimetre),
+	"AnchorSpec.BarStrength":  between(200*units.Megapascal, 1200*units.Megapascal),
+	"AnchorSpec.HoleDiameter": between(25*units.Millimetre, 400*units.Millimetre),
+	"AnchorSpec.BondLength":   between(0.5*units.Metre, 20*units.Metre),
+	"AnchorSpec.FreeLength":   between(0*units.Metre, 50*units.Metre),
+
+	// A soil lighter than about 12 kN/m³ would float (package foundation
+	// needs it heavier than water); φ' up to the 50° its bearing and earth
+	// pressure formulas are tabulated for.
+	"SoilSpec.UnitWeight": between(12*units.KilonewtonPerCubicMetre, 30*units.KilonewtonPerCubicMetre),
+	"SoilSpec.Friction":   between(0*units.Degree, 50*units.Degree),
+	"SoilSpec.Cohesion":   between(0*units.Pascal, 2*units.Megapascal),
+	"SoilSpec.Allowable":  between(10*units.Kilopascal, 20*units.Megapascal),
+
+	"ComfortSpec.Damping": plain(0.001, maxDamping), // 0.1 % to 20 % of critical
+
+	"Loads.Crowd":           between(1*units.Kilopascal, 10*units.Kilopascal),
+	"Loads.WindWithCrowd":   plain(0, 1),
+	"Loads.DragCoefficient": plain(0.5, 2.5),
+	"Loads.WalkwayDrag":     plain(0.5, 3),
+
+	// Factors of safety are at least 1, as packages cable and foundation
+	// require; partial factors within what EN 1990, EN 1997-1 and
+	// EN 1992-1-1 and their national annexes use.
+	"Basis.RopeFactor":        plain(1, 10),
+	"Basis.SlidingFactor":     plain(1, 10),
+	"Basis.OverturningFactor": plain(1, 10),
+	"Basis.UpliftFactor":      plain(1, 10),
+	"Basis.BearingFactor":     plain(1, 10),
+	"Basis.GammaG":            plain(1, 2),
+	"Basis.GammaQ":            plain(1, 2.5),
+	"Basis.GammaR":            plain(0.5, 2),
+	"Basis.RopeEfficiency":    plain(0.5, 1),
+	"Basis.GammaGdst":         plain(1, 2),
+	"Basis.GammaGstb":         plain(0.5, 1),
+	"Basis.GammaQdst":         plain(1, 2.5),
+	"Basis.GammaPhi":          plain(1, 2),
+	"Basis.GammaC":            plain(1, 2),
+	"Basis.GammaRh":           plain(1, 3),
+	"Basis.GammaRv":           plain(1, 3),
+	"Basis.GammaRe":           plain(1, 3),
+	"Basis.GammaConcrete":     plain(1, 2),
+	"Basis.GammaSteel":        plain(1, 2),
+	"Basis.AlphaCC":           plain(0.8, 1),
+}
+
+// rangeField is one field of a struct type as the range walk sees it.
+type rangeField struct {
+	index    int
+	name     string // JSON name
+	optional bool   // omitempty: zero means not given
+	lim      *limit // nil: no range (not a number, or a struct or list to walk)
+	walk     bool   // a struct, or a list of structs, to walk into
+	level    bool   // a Level: its Z is checked unless None
+}
+
+var rangeFields sync.Map // reflect.Type → []rangeField
+
+// fieldsOf returns the range-walk view of struct type t, built once.
+func fieldsOf(t reflect.Type) []rangeField {
+	if fs, ok := rangeFields.Load(t); ok {
+		return fs.([]rangeField)
+	}
+	var fs []rangeField
+	for i := range t.NumField() {
+		f := t.Field(i)
+		name, optional := jsonName(f)
+		if name == "" {
+			continue
+		}
+		rf := rangeField{index: i, name: name, optional: optional}
+		if l, ok := limits[t.Name()+"."+f.Name]; ok {
+			rf.lim = &l
+		}
+		ft := f.Type
+		if ft.Kind() == reflect.Slice {
+			ft = ft.Elem()
+		}
+		rf.level = f.Type == reflect.TypeFor[Level]()
+		rf.walk = ft.Kind() == reflect.Struct && !rf.level
+		fs = append(fs, rf)
+	}
+	rangeFields.Store(t, fs)
+	return fs
+}
+
+// rangesAt checks every number in struct value x, whose path is name
+// below the struct rangesAt is in, against its limit; the first value
+// outside fails. The path is joined only on failure.
+func (v *validator) rangesAt(name string, x reflect.Value) {
+	if v.err != nil || v.depth == len(v.names) {
+		return
+	}
+	v.names[v.depth] = name
+	v.depth++
+	defer func() { v.depth-- }()
+	for _, f := range fieldsOf(x.Type()) {
+		fv := x.Field(f.index)
+		switch {
+		case f.walk && fv.Kind() == reflect.Slice:
+			for i := range fv.Len() {
+				v.rangesAt(f.name+"["+strconv.Itoa(i)+"]", fv.Index(i))
+			}
+		case f.walk:
+			v.rangesAt(f.name, fv)
+		case f.lim == nil:
+		case f.level:
+			if l := fv.Interface().(Level); !l.None {
+				v.within(f.name, float64(l.Z), false, f.lim)
+			}
+		case fv.CanInt():
+			v.within(f.name, float64(fv.Int()), f.optional, f.lim)
+		case fv.CanFloat():
+			v.within(f.name, fv.Float(), f.optional, f.lim)
+		}
+		if v.err != nil {
+			return
 		}
 	}
-	for _, x := range []struct {
-		f string
-		x float64
-	}{
-		{"basis.rope_factor", bs.RopeFactor}, {"basis.sliding_factor", bs.SlidingFactor},
-		{"basis.overturning_factor", bs.OverturningFactor}, {"basis.uplift_factor", bs.UpliftFactor},
-		{"basis.bearing_factor", bs.BearingFactor}, {"basis.gamma_g", bs.GammaG},
-		{"basis.gamma_q", bs.GammaQ}, {"basis.gamma_r", bs.GammaR},
-		{"basis.gamma_g_dst", bs.GammaGdst}, {"basis.gamma_g_stb", bs.GammaGstb}, {"basis.gamma_q_dst", bs.GammaQdst},
-		{"basis.gamma_phi", bs.GammaPhi}, {"basis.gamma_c", bs.GammaC}, {"basis.gamma_rh", bs.GammaRh},
-		{"basis.gamma_rv", bs.GammaRv}, {"basis.gamma_re", bs.GammaRe},
-		{"basis.gamma_concrete", bs.GammaConcrete}, {"basis.gamma_steel", bs.GammaSteel},
-	} {
-		if math.IsNaN(x.x) || x.x < 0 || (x.x > 0 && x.x < 0.5) || x.x > 20 {
-			v.fail(at(x.f), "must be zero (default) or a factor between 0.5 and 20, got %v", x.x)
+}
+
+// within requires x, the field name of the struct rangesAt is in, to lie
+// in l; zero passes for an optional field (not given: its default applies).
+func (v *validator) within(name string, x float64, optional bool, l *limit) {
+	if optional && x == 0 {
+		return
+	}
+	if math.IsNaN(x) || x < l.lo || x > l.hi {
+		var prefix string
+		for _, n := range v.names[:v.depth] {
+			prefix = join(prefix, n)
 		}
+		v.fail(path{prefix + ".", name}, "%s is outside the plausible range %s", l.format(x), l)
 	}
 }

@@ -44,7 +44,7 @@ func ExampleReport_Governing() {
 	//
 	// > CAUTION: these results support, and never replace, the design of a qualified engineer. Local codes, standards and licensed practice govern. Check every input and every result before anything is built.
 	//
-	// **Overall: pass** (3 results)
+	// **Overall: pass (3 results)**
 	//
 	// ## Governing cases
 	//

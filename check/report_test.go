@@ -7,6 +7,7 @@ import (
 	"math"
 	"os"
 	"path/filepath"
+	"strings"
 	"testing"
 
 	"github.com/stretchr/testify/assert"
@@ -244,4 +245,43 @@ func TestResultString(t *testing.T) {
 	s := Stability("anchor.sliding", "Sliding", units.KindForce, 894e3, 1435e3, 1.5).For("left anchor", "")
 	assert.Equal(t, "anchor.sliding, left anchor: driving 894.0 kN, resisting 1435 kN, factor of safety 1.61 / 1.50, ratio 0.934, pass", s.String())
 	assert.Equal(t, "f, span: 0.2900 Hz, info", Record("f", "f", units.KindFrequency, 0.29).For("span", "").String())
+}
+
+func TestFailuresFirst(t *testing.T) {
+	r := sampleReport()
+	var text bytes.Buffer
+	require.NoError(t, r.WriteText(&text, nil))
+	out := text.String()
+	fails, gov := strings.Index(out, "\nFailures\n"), strings.Index(out, "\nGoverning cases\n")
+	require.True(t, fails > 0 && gov > fails, "the failures come before the governing cases:\n%s", out)
+	assert.Contains(t, out, "Overall: FAIL: 1 of 11 results fails, in 1 check (listed first)")
+	assert.Equal(t, "crowd half", r.AllFailures()[0].Case)
+
+	// Every failing result is listed, the worst first, not only the governing one.
+	var two Report
+	two.Add(Compare("a", "a", units.KindForce, 3, 2).For("e", "one"), Compare("a", "a", units.KindForce, 5, 2).For("e", "two"))
+	f := two.AllFailures()
+	require.Len(t, f, 2)
+	assert.Equal(t, "two", f[0].Case)
+}
+
+func TestBasisStatedOnce(t *testing.T) {
+	var r Report
+	for _, id := range []string{"f.one", "f.two", "f.three"} {
+		r.Add(Record(id, id, units.KindFrequency, 1).For("span", "permanent").WithBasis("one method for all three"))
+	}
+	var md bytes.Buffer
+	require.NoError(t, r.WriteMarkdown(&md, nil))
+	assert.Equal(t, 1, strings.Count(md.String(), "one method for all three"), md.String())
+	assert.Contains(t, md.String(), "`f.one, f.two, f.three`: one method for all three")
+}
+
+func TestRowsInOneUnitAndIdleRowsSayWhy(t *testing.T) {
+	idle := Stability("footing.sliding", "Sliding", units.KindForce, 0, 140.4e3, 1.5).For("right footing", "permanent")
+	row := Row(idle, &RenderOptions{Explain: func(Result) string { return "roller saddle: no horizontal force on the column" }})
+	assert.Equal(t, []string{"footing.sliding", "right footing", "permanent", "0 kN", "140.4 kN", "–", "inf / 1.50",
+		"pass: roller saddle: no horizontal force on the column"}, row)
+	assert.Equal(t, "pass: nothing acts in this case", Row(idle, nil)[7])
+	mixed := Compare("tower.eccentricity", "e", units.KindLength, 0.9, 1.2)
+	assert.Equal(t, []string{"0.9000 m", "1.200 m"}, Row(mixed, nil)[3:5])
 }

@@ -159,12 +159,11 @@ func (s Soil) InterfaceFriction() units.Angle {
 // partial factors: friction angle phi (zero when undrained) and cohesion c
 // (c' drained, c_u undrained).
 type strength struct {
-	cond   Condition
-	phi    float64 // rad
-	c      float64 // Pa
-	tanD   float64 // tan δ of the base interface (drained)
-	delta  float64 // δ, rad
-	factor float64 // the partial factor applied to c (for reports)
+	cond  Condition
+	phi   float64 // rad
+	c     float64 // Pa
+	tanD  float64 // tan δ of the base interface (drained)
+	delta float64 // δ, rad
 }
 
 // strengthIn returns the strength of s in condition cond divided by the

@@ -14,9 +14,16 @@
 // Each type converts to a gonum.org/v1/gonum/unit value through its Unit
 // method, so dimensions can be checked with that package's machinery.
 //
-// In JSON every quantity marshals as a bare SI number, and unmarshals from
+// In JSON a quantity marshals as a bare SI number and unmarshals from
 // either a bare SI number or a string with its unit, parsed as by Parse and
-// checked for the right dimension.
+// checked for the right dimension. Temperatures and angles are the
+// exception: a bare number is ambiguous (°C or K, degrees or radians), so
+// they marshal as a string with the SI unit ("288.15 K", "0.5 rad") and a
+// bare number is refused with ErrNoUnit and an example of how to write it.
+//
+// Parse refuses the slips a person makes writing a quantity by hand: a
+// unit in two pieces that is not a product ("0.35 m m" is not 0.35 mm), a
+// decimal comma ("72,5 m") and a space inside a number ("1 200 m").
 //
 // Temperatures are absolute (kelvin); FromCelsius and Celsius convert.
 // Temperature differences and thermal strains are plain float64 kelvin.

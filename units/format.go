@@ -31,6 +31,33 @@ func Format(x float64, k Kind) string {
 	return v + " " + d.symbol
 }
 
+// FormatPair formats a and b, two values of kind k, in one display unit:
+// the one Format chooses for the larger magnitude, so that a row of a
+// table never reads "0 N" beside "140.4 kN" or "900 mm" beside "1.200 m".
+// Temperatures are both in °C, as Format writes them.
+func FormatPair(a, b float64, k Kind) (string, string) {
+	if k == KindTemperature || k < 0 || int(k) >= len(kinds) {
+		return Format(a, k), Format(b, k)
+	}
+	big := math.Max(math.Abs(a), math.Abs(b))
+	shows := kinds[k].shows
+	d := shows[len(shows)-1]
+	for _, s := range shows {
+		if big >= s.min && big != 0 {
+			d = s
+			break
+		}
+	}
+	in := func(x float64) string {
+		v := fixed(x / d.scale)
+		if d.symbol == "" {
+			return v
+		}
+		return v + " " + d.symbol
+	}
+	return in(a), in(b)
+}
+
 // fixed formats x to four significant figures in fixed notation for the
 // magnitudes met in this trade, and in exponent notation outside them.
 func fixed(x float64) string {

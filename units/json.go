@@ -5,9 +5,11 @@ import (
 	"encoding/json"
 	"fmt"
 	"math"
+	"strconv"
 )
 
-// unmarshal reads a JSON bare number (SI) or a string with a unit into x.
+// unmarshal reads a JSON bare number (SI) or a string with a unit into x;
+// a kind that needs its unit (Kind.NeedsUnit) refuses a bare number.
 func unmarshal(b []byte, k Kind, x *float64) error {
 	b = bytes.TrimSpace(b)
 	if len(b) > 0 && b[0] == '"' {
@@ -30,9 +32,31 @@ func unmarshal(b []byte, k Kind, x *float64) error {
 	if math.IsInf(v, 0) || math.IsNaN(v) {
 		return &ParseError{Input: string(b), Part: string(b), Want: k, Err: ErrRange}
 	}
+	if k.NeedsUnit() {
+		return &ParseError{Input: string(b), Part: string(b), Want: k, Err: ErrNoUnit, Hint: Example(v, k)}
+	}
 	*x = v
 	return nil
 }
+
+// marshalWithUnit writes x of kind k as a JSON string in its coherent SI
+// unit, exactly: "288.15 K", "0.5235987755982988 rad".
+func marshalWithUnit(x float64, k Kind) ([]byte, error) {
+	if math.IsInf(x, 0) || math.IsNaN(x) {
+		return nil, fmt.Errorf("units: cannot write %v %s as JSON", x, k)
+	}
+	return json.Marshal(strconv.FormatFloat(x, 'g', -1, 64) + " " + k.SI())
+}
+
+// MarshalJSON writes the temperature with its unit, "288.15 K": a bare
+// number would be ambiguous, and UnmarshalJSON refuses one.
+func (t Temperature) MarshalJSON() ([]byte, error) {
+	return marshalWithUnit(float64(t), KindTemperature)
+}
+
+// MarshalJSON writes the angle with its unit, "0.5 rad": a bare number
+// would be ambiguous, and UnmarshalJSON refuses one.
+func (a Angle) MarshalJSON() ([]byte, error) { return marshalWithUnit(float64(a), KindAngle) }
 
 func (l *Length) UnmarshalJSON(b []byte) error { return unmarshal(b, KindLength, (*float64)(l)) }
 func (f *Force) UnmarshalJSON(b []byte) error  { return unmarshal(b, KindForce, (*float64)(f)) }

@@ -66,27 +66,30 @@ type kindInfo struct {
 	// shows lists display units from the largest threshold down; the last
 	// entry is the fallback for small magnitudes and for zero.
 	shows []display
+	// needsUnit marks a kind whose bare number is ambiguous: it must be
+	// written with its unit.
+	needsUnit bool
 }
 
 var kinds = [...]kindInfo{
-	KindLength:           {"length", "m", dimLength, []display{{1, 1, "m"}, {0, 1e-3, "mm"}}},
-	KindForce:            {"force", "N", dimForce, []display{{1e3, 1e3, "kN"}, {0, 1, "N"}}},
-	KindPressure:         {"pressure", "Pa", dimPressure, []display{{1e9, 1e9, "GPa"}, {1e6, 1e6, "MPa"}, {1e3, 1e3, "kPa"}, {0, 1, "Pa"}}},
-	KindAngle:            {"angle", "rad", dimAngle, []display{{0, float64(Degree), "deg"}}},
-	KindMass:             {"mass", "kg", dimMass, []display{{1e3, 1e3, "t"}, {0, 1, "kg"}}},
-	KindTemperature:      {"temperature", "K", dimTemperature, nil}, // shown in °C, see format
-	KindArea:             {"area", "m2", dimArea, []display{{1e-2, 1, "m²"}, {0, 1e-6, "mm²"}}},
-	KindVolume:           {"volume", "m3", dimVolume, []display{{0, 1, "m³"}}},
-	KindLoadPerLength:    {"load per length", "N/m", dimLineLoad, []display{{1e3, 1e3, "kN/m"}, {0, 1, "N/m"}}},
-	KindUnitWeight:       {"unit weight", "N/m3", dimUnitWeight, []display{{0, 1e3, "kN/m³"}}},
-	KindMoment:           {"moment", "N m", dimMoment, []display{{1e3, 1e3, "kN·m"}, {0, 1, "N·m"}}},
-	KindAxialStiffness:   {"axial stiffness", "N", dimForce, []display{{1e6, 1e6, "MN"}, {0, 1e3, "kN"}}},
-	KindThermalExpansion: {"thermal expansion", "1/K", dimInvTemp, []display{{0, 1e-6, "µ/K"}}},
-	KindMassPerLength:    {"mass per length", "kg/m", dimMassPerLen, []display{{0, 1, "kg/m"}}},
-	KindVelocity:         {"velocity", "m/s", dimVelocity, []display{{0, 1, "m/s"}}},
-	KindFrequency:        {"frequency", "Hz", dimFrequency, []display{{0, 1, "Hz"}}},
-	KindRatio:            {"ratio", "1", dimNone, []display{{0, 1, ""}}},
-	KindAcceleration:     {"acceleration", "m/s2", dimAccel, []display{{0, 1, "m/s²"}}},
+	KindLength:           {"length", "m", dimLength, []display{{1, 1, "m"}, {0, 1e-3, "mm"}}, false},
+	KindForce:            {"force", "N", dimForce, []display{{1e3, 1e3, "kN"}, {0, 1, "N"}}, false},
+	KindPressure:         {"pressure", "Pa", dimPressure, []display{{1e9, 1e9, "GPa"}, {1e6, 1e6, "MPa"}, {1e3, 1e3, "kPa"}, {0, 1, "Pa"}}, false},
+	KindAngle:            {"angle", "rad", dimAngle, []display{{0, float64(Degree), "deg"}}, true},
+	KindMass:             {"mass", "kg", dimMass, []display{{1e3, 1e3, "t"}, {0, 1, "kg"}}, false},
+	KindTemperature:      {"temperature", "K", dimTemperature, nil, true}, // shown in °C, see format
+	KindArea:             {"area", "m2", dimArea, []display{{1e-2, 1, "m²"}, {0, 1e-6, "mm²"}}, false},
+	KindVolume:           {"volume", "m3", dimVolume, []display{{0, 1, "m³"}}, false},
+	KindLoadPerLength:    {"load per length", "N/m", dimLineLoad, []display{{1e3, 1e3, "kN/m"}, {0, 1, "N/m"}}, false},
+	KindUnitWeight:       {"unit weight", "N/m3", dimUnitWeight, []display{{0, 1e3, "kN/m³"}}, false},
+	KindMoment:           {"moment", "N m", dimMoment, []display{{1e3, 1e3, "kN·m"}, {0, 1, "N·m"}}, false},
+	KindAxialStiffness:   {"axial stiffness", "N", dimForce, []display{{1e6, 1e6, "MN"}, {0, 1e3, "kN"}}, false},
+	KindThermalExpansion: {"thermal expansion", "1/K", dimInvTemp, []display{{0, 1e-6, "µ/K"}}, false},
+	KindMassPerLength:    {"mass per length", "kg/m", dimMassPerLen, []display{{0, 1, "kg/m"}}, false},
+	KindVelocity:         {"velocity", "m/s", dimVelocity, []display{{0, 1, "m/s"}}, false},
+	KindFrequency:        {"frequency", "Hz", dimFrequency, []display{{0, 1, "Hz"}}, false},
+	KindRatio:            {"ratio", "1", dimNone, []display{{0, 1, ""}}, false},
+	KindAcceleration:     {"acceleration", "m/s2", dimAccel, []display{{0, 1, "m/s²"}}, false},
 }
 
 // String returns the name of the kind, such as "load per length".
@@ -95,6 +98,13 @@ func (k Kind) String() string {
 		return "unknown kind"
 	}
 	return kinds[k].name
+}
+
+// NeedsUnit reports whether a bare number of kind k is ambiguous and must
+// be written with its unit: temperatures (°C or K) and angles (degrees or
+// radians).
+func (k Kind) NeedsUnit() bool {
+	return k >= 0 && int(k) < len(kinds) && kinds[k].needsUnit
 }
 
 // SI returns the symbol of the coherent SI unit of the kind, such as "N/m",

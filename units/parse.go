@@ -14,6 +14,10 @@ var (
 	ErrUnknownUnit = errors.New("units: unknown unit")
 	ErrDimension   = errors.New("units: wrong kind of unit")
 	ErrRange       = errors.New("units: value out of range")
+	// ErrNoUnit reports a bare number where the unit cannot be guessed:
+	// a temperature (°C or K?), an angle (degrees or radians?), or a
+	// quantity a caller marks as needing its unit.
+	ErrNoUnit = errors.New("units: number without its unit")
 )
 
 // ParseError reports a quantity string that could not be parsed. Part is
@@ -23,10 +27,19 @@ type ParseError struct {
 	Part  string // the piece that is wrong
 	Want  Kind   // the kind that was expected
 	Err   error  // one of the sentinel errors
+	// Hint, when set, says how to write the quantity instead, such as
+	// `write 72.5 with a decimal point` or, with ErrNoUnit, the example
+	// `"20 mm"`.
+	Hint string
 }
 
 func (e *ParseError) Error() string {
 	switch {
+	case errors.Is(e.Err, ErrNoUnit):
+		return fmt.Sprintf("units: a bare %s is ambiguous for %s; write it with its unit, such as %s",
+			e.Input, article(e.Want.String()), e.Hint)
+	case e.Hint != "":
+		return fmt.Sprintf("units: %q: %s", e.Input, e.Hint)
 	case errors.Is(e.Err, ErrUnknownUnit):
 		return fmt.Sprintf("units: %q: unknown unit %q for a %s", e.Input, e.Part, e.Want)
 	case errors.Is(e.Err, ErrDimension):
@@ -39,6 +52,14 @@ func (e *ParseError) Error() string {
 }
 
 func (e *ParseError) Unwrap() error { return e.Err }
+
+// article returns the noun with "a" or "an" before it.
+func article(noun string) string {
+	if noun != "" && strings.ContainsRune("aeiou", rune(noun[0])) {
+		return "an " + noun
+	}
+	return "a " + noun
+}
 
 // symbol is one unit symbol: SI value = number·scale + offset.
 type symbol struct {
@@ -82,19 +103,89 @@ var symbols = map[string]symbol{
 	"%": {dimNone, 1e-2, 0},
 }
 
-// normalise removes spaces and multiplication dots and folds superscripts
-// and the degree sign, so "kN·m", "kN m" and "kNm" all read "kNm", "kN/m³"
-// reads "kN/m3" and "°C" reads "degC".
+// normalise folds superscripts and the degree sign, so "kN/m³" reads
+// "kN/m3" and "°C" reads "degC". Spaces and multiplication dots are dealt
+// with by lookup.
 var normalise = strings.NewReplacer(
-	" ", "", "\t", "", "·", "", "*", "", "⋅", "",
 	"²", "2", "³", "3", "°", "deg", "μ", "µ",
 ).Replace
+
+// products are the units written as a product of two symbols: "kN·m",
+// "kN m" and "kNm" all read "kNm". No other unit may be split, so that a
+// slip such as "0.35 m m" is an error rather than 0.35 mm.
+var products = map[string]bool{"Nm": true, "kNm": true, "MNm": true}
+
+// unitTokens splits a unit at spaces and multiplication dots, after
+// closing up spaces around a slash ("kN / m" is "kN/m").
+func unitTokens(u string) []string {
+	u = strings.NewReplacer("·", " ", "⋅", " ", "*", " ", "\t", " ").Replace(u)
+	for strings.Contains(u, " /") || strings.Contains(u, "/ ") {
+		u = strings.ReplaceAll(strings.ReplaceAll(u, " /", "/"), "/ ", "/")
+	}
+	return strings.Fields(u)
+}
+
+// lookup finds the unit symbol u: one symbol, or one of the products
+// written in two parts.
+func lookup(u string) (symbol, bool) {
+	tokens := unitTokens(u)
+	joined := normalise(strings.Join(tokens, ""))
+	if len(tokens) > 1 && !products[joined] {
+		return symbol{}, false
+	}
+	sym, ok := symbols[joined]
+	return sym, ok
+}
+
+// numberSlip returns a hint when the text after a number shows the number
+// was mistyped: a decimal comma ("72,5 m"), a thousands separator
+// ("1,200 m") or a space inside the number ("1 200 m"); "" otherwise.
+func numberSlip(number, rest string) string {
+	switch {
+	case strings.HasPrefix(rest, ","):
+		return fmt.Sprintf("%q has a comma in the number; write it with a decimal point and no thousands separator, such as %q",
+			number+rest, number+"."+strings.TrimLeft(rest, ","))
+	case rest[0] >= '0' && rest[0] <= '9':
+		return fmt.Sprintf("a space inside the number %q; write the number without spaces", number+" "+rest)
+	}
+	return ""
+}
+
+// Example returns x written with the unit a person would use for a
+// quantity of kind k, as a quoted JSON string: "12 m" for a length, "-10 C"
+// for a temperature, "30 deg" for an angle. It is the suggestion an error
+// about a missing unit gives.
+func Example(x float64, k Kind) string {
+	switch k {
+	case KindTemperature:
+		return strconv.Quote(strconv.FormatFloat(x, 'g', -1, 64) + " C")
+	case KindAngle:
+		return strconv.Quote(strconv.FormatFloat(x, 'g', -1, 64) + " deg")
+	}
+	u, ok := exampleUnits[k]
+	if !ok {
+		return strconv.Quote(strconv.FormatFloat(x, 'g', -1, 64))
+	}
+	return strconv.Quote(strconv.FormatFloat(x, 'g', -1, 64) + " " + u)
+}
+
+// exampleUnits are the units Example writes each kind in.
+var exampleUnits = map[Kind]string{
+	KindLength: "m", KindForce: "kN", KindPressure: "kPa", KindMass: "kg", KindArea: "mm2",
+	KindVolume: "m3", KindLoadPerLength: "kN/m", KindUnitWeight: "kN/m3", KindMoment: "kN m",
+	KindAxialStiffness: "MN", KindThermalExpansion: "/K", KindMassPerLength: "kg/m",
+	KindVelocity: "m/s", KindFrequency: "Hz",
+}
 
 // Parse reads a quantity of type T from s: a number followed by a unit
 // symbol, such as "12.5 kN", "3.5 kN/m", "24 kN/m3", "30 deg", "-10 C" or,
 // for ratios, "1:12" or "8 %". A bare number is taken as SI (for a Ratio,
-// as the ratio itself). The unit must be one of kind T; errors are
-// *ParseError values naming the offending part.
+// as the ratio itself), except for a temperature or an angle, whose bare
+// number is ambiguous (°C or K, degrees or radians) and refused with
+// ErrNoUnit. The unit must be one of kind T and one symbol (a moment may
+// be written "kN m" or "kN·m"; "0.35 m m" is refused); a decimal comma is
+// refused with a hint. Errors are *ParseError values naming the offending
+// part.
 //
 // Special cases: NaN and infinite numbers are rejected with ErrRange.
 func Parse[T Quantity](s string) (T, error) {
@@ -144,11 +235,21 @@ func parseKind(s string, want Kind) (float64, error) {
 	}
 	rest := strings.TrimSpace(in[n:])
 	if rest == "" {
+		if kinds[want].needsUnit {
+			return 0, &ParseError{Input: in, Part: in, Want: want, Err: ErrNoUnit, Hint: Example(x, want)}
+		}
 		return x, nil
 	}
-	sym, ok := symbols[normalise(rest)]
+	if hint := numberSlip(in[:n], rest); hint != "" {
+		return 0, &ParseError{Input: s, Part: rest, Want: want, Err: ErrSyntax, Hint: hint}
+	}
+	sym, ok := lookup(rest)
 	if !ok {
-		return fail(rest, ErrUnknownUnit)
+		pe := &ParseError{Input: s, Part: rest, Want: want, Err: ErrUnknownUnit}
+		if tokens := unitTokens(rest); len(tokens) > 1 {
+			pe.Hint = fmt.Sprintf("%q is not one unit; write a single unit symbol, such as %q", rest, in[:n]+" "+tokens[0])
+		}
+		return 0, pe
 	}
 	if sym.dim != kinds[want].dim {
 		return fail(rest, ErrDimension)

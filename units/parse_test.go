@@ -111,6 +111,51 @@ func TestParseErrors(t *testing.T) {
 	}
 }
 
+// TestSlips checks the exact error of each slip a person makes writing a
+// quantity by hand.
+func TestSlips(t *testing.T) {
+	tests := []struct {
+		in   string
+		kind Kind
+		want error
+		msg  string
+	}{
+		{"0.35 m m", KindLength, ErrUnknownUnit,
+			`units: "0.35 m m": "m m" is not one unit; write a single unit symbol, such as "0.35 m"`},
+		{"72,5 m", KindLength, ErrSyntax,
+			`units: "72,5 m": "72,5 m" has a comma in the number; write it with a decimal point and no thousands separator, such as "72.5 m"`},
+		{"1 200 m", KindLength, ErrSyntax,
+			`units: "1 200 m": a space inside the number "1 200 m"; write the number without spaces`},
+		{"-10", KindTemperature, ErrNoUnit,
+			`units: a bare -10 is ambiguous for a temperature; write it with its unit, such as "-10 C"`},
+		{"30", KindAngle, ErrNoUnit,
+			`units: a bare 30 is ambiguous for an angle; write it with its unit, such as "30 deg"`},
+		{"12 kN m m", KindMoment, ErrUnknownUnit,
+			`units: "12 kN m m": "kN m m" is not one unit; write a single unit symbol, such as "12 kN"`},
+	}
+	for _, tt := range tests {
+		_, err := parseKind(tt.in, tt.kind)
+		if !errors.Is(err, tt.want) {
+			t.Errorf("parse %q: error %v, want %v", tt.in, err, tt.want)
+			continue
+		}
+		if err.Error() != tt.msg {
+			t.Errorf("parse %q:\n got %s\nwant %s", tt.in, err, tt.msg)
+		}
+	}
+	// What must still read: a moment in two parts, spaces around a slash.
+	for _, ok := range []struct {
+		in   string
+		kind Kind
+		want float64
+	}{{"12 kN m", KindMoment, 12e3}, {"12 kN · m", KindMoment, 12e3}, {"3.2 kN / m", KindLoadPerLength, 3200}, {"15 C", KindTemperature, 288.15}} {
+		got, err := parseKind(ok.in, ok.kind)
+		if err != nil || !scalar.EqualWithinAbsOrRel(got, ok.want, 1e-12, 1e-12) {
+			t.Errorf("parse %q = %v, %v; want %v", ok.in, got, err, ok.want)
+		}
+	}
+}
+
 func TestFormat(t *testing.T) {
 	tests := []struct {
 		x    float64
@@ -136,6 +181,26 @@ func TestFormat(t *testing.T) {
 	for _, tt := range tests {
 		if got := Format(tt.x, tt.kind); got != tt.want {
 			t.Errorf("Format(%v, %s) = %q, want %q", tt.x, tt.kind, got, tt.want)
+		}
+	}
+}
+
+func TestFormatPair(t *testing.T) {
+	tests := []struct {
+		a, b   float64
+		kind   Kind
+		wa, wb string
+	}{
+		{0, 140.4e3, KindForce, "0 kN", "140.4 kN"},
+		{0.9, 1.2, KindLength, "0.9000 m", "1.200 m"},
+		{0.0772, 0.1167, KindLength, "77.20 mm", "116.7 mm"},
+		{263.15, 303.15, KindTemperature, "-10.00 °C", "30.00 °C"},
+		{0, 0, KindMoment, "0 N·m", "0 N·m"},
+	}
+	for _, tt := range tests {
+		a, b := FormatPair(tt.a, tt.b, tt.kind)
+		if a != tt.wa || b != tt.wb {
+			t.Errorf("FormatPair(%v, %v, %s) = %q, %q; want %q, %q", tt.a, tt.b, tt.kind, a, b, tt.wa, tt.wb)
 		}
 	}
 }
@@ -182,10 +247,15 @@ func TestJSON(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if want := `{"span":48,"load":3200,"cold":263.15}`; string(out) != want {
+	// A temperature is written with its unit: a bare number is refused.
+	if want := `{"span":48,"load":3200,"cold":"263.15 K"}`; string(out) != want {
 		t.Errorf("marshal = %s, want %s", out, want)
 	}
-	for _, bad := range []string{`{"span": "48 kN"}`, `{"span": true}`, `{"span": "x"}`} {
+	in.Cold = 0
+	if err := json.Unmarshal(out, &in); err != nil || !scalar.EqualWithinAbsOrRel(float64(in.Cold), 263.15, 1e-12, 1e-12) {
+		t.Errorf("the marshalled form does not read back: %v, %v", err, in.Cold)
+	}
+	for _, bad := range []string{`{"span": "48 kN"}`, `{"span": true}`, `{"span": "x"}`, `{"cold": -10}`, `{"span": "0.35 m m"}`} {
 		if err := json.Unmarshal([]byte(bad), &in); err == nil {
 			t.Errorf("unmarshal %s: no error", bad)
 		}

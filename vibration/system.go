@@ -253,9 +253,8 @@ func (s *system) addElement(r, a, b int, ke *[3][3]float64) {
 	N, p := s.dofs(), s.p
 	interior := func(k int) bool { return k > 0 && k < s.n }
 	type end struct {
-		k    int
-		g    gmap
-		sign float64
+		k int
+		g gmap
 	}
 	var ends []end
 	var buf [2]end

@@ -7,6 +7,8 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
+
+	"github.com/sagspan/sagspan"
 )
 
 func TestRun(t *testing.T) {
@@ -29,7 +31,7 @@ func TestRun(t *testing.T) {
 
 	dir := t.TempDir()
 	bad := filepath.Join(dir, "bad.json")
-	if err := os.WriteFile(bad, []byte(`{"site": {"span": "-3 m"}}`), 0o644); err != nil {
+	if err := os.WriteFile(bad, bytes.Replace(sagspan.DemoJSON(), []byte(`"72 m"`), []byte(`"-3 m"`), 1), 0o644); err != nil {
 		t.Fatal(err)
 	}
 	errOut.Reset()
@@ -76,7 +78,7 @@ func TestRun(t *testing.T) {
 	if code := run(nil, &out, &errOut); code != 0 {
 		t.Fatalf("demo: exit %d", code)
 	}
-	for _, want := range []string{"Natural modes and walkers' comfort", "Closed form", "Acceleration", "Lateral lock-in"} {
+	for _, want := range []string{"Natural modes (permanent load)", "Closed form", "Acceleration", "Lateral lock-in"} {
 		if !strings.Contains(out.String(), want) {
 			t.Errorf("the demo report lacks %q", want)
 		}
