@@ -354,8 +354,13 @@ func (s *system) mode(f float64, x []float64) Mode {
 		ewalk += walk
 	}
 	erot := math.Max(0, etot-eu-ev-ew)
+	// Effective masses at the level of rounding (a symmetric model's lateral
+	// modes have none along z, say) are zero.
+	total := s.totalMass()
 	for i := range gamma {
-		md.Effective[i] = units.Mass(gamma[i] * gamma[i])
+		if e := gamma[i] * gamma[i]; e > 1e-12*total {
+			md.Effective[i] = units.Mass(e)
+		}
 	}
 
 	// Kind: where most of the energy lies.
