@@ -52,7 +52,7 @@ func lowestEigen(a *mat.SymDense, band int, lamMax float64) (vals []float64, vec
 // residual bound ‖Ax − λx‖ ≤ 1e-9‖A‖.
 func inverseIteration(a *mat.SymDense, band int, lams []float64, norm float64, vecs *mat.Dense) bool {
 	n := a.SymmetricDim()
-	w := make([]float64, n*n) // the factors, row-major, band rows only
+	w := make([]float64, n*(3*band+1)) // the band factors, see bandLU
 	piv := make([]int, n)
 	x := make([]float64, n)
 	xv, ax := mat.NewVecDense(n, x), mat.NewVecDense(n, nil)
@@ -119,21 +119,23 @@ func normalise(x []float64) bool {
 }
 
 // bandLU factors A − σI, A symmetric with half-bandwidth b, by Gaussian
-// elimination with partial pivoting into w (row-major n×n, only the band
-// touched: row i holds columns i−b … i+2b, U reaching 2b above the
-// diagonal after the interchanges) and the pivots piv. As in LAPACK's
+// elimination with partial pivoting into w and the pivots piv. Row i of w
+// holds columns i−b … i+2b (w[i(3b+1) + j−i+b]): the multipliers to its
+// left, U reaching 2b above the diagonal after the interchanges. As in LAPACK's
 // dgbtf2, an interchange at step j moves columns j … j+2b only, so that the
 // multipliers of earlier steps stay where the solve replays them. A pivot
 // below tiny is set to tiny: inverse iteration wants the near-singular
 // factor.
 func bandLU(a *mat.SymDense, b int, sigma, tiny float64, w []float64, piv []int) {
 	n := a.SymmetricDim()
+	width := 3*b + 1
+	at := func(i, j int) int { return i*width + j - i + b }
 	raw := a.RawSymmetric() // the upper triangle holds the matrix
 	for i := range n {
-		row := w[i*n : (i+1)*n]
-		for j := max(0, i-b); j <= min(n-1, i+2*b); j++ {
+		for j := i - b; j <= i+2*b; j++ {
 			v := 0.0
 			switch {
+			case j < 0 || j >= n:
 			case j < i:
 				v = raw.Data[j*raw.Stride+i]
 			case j <= i+b:
@@ -142,14 +144,14 @@ func bandLU(a *mat.SymDense, b int, sigma, tiny float64, w []float64, piv []int)
 			if i == j {
 				v -= sigma
 			}
-			row[j] = v
+			w[at(i, j)] = v
 		}
 	}
 	for j := range n {
 		last := min(n-1, j+b)
 		p := j
 		for i := j + 1; i <= last; i++ {
-			if math.Abs(w[i*n+j]) > math.Abs(w[p*n+j]) {
+			if math.Abs(w[at(i, j)]) > math.Abs(w[at(p, j)]) {
 				p = i
 			}
 		}
@@ -157,22 +159,22 @@ func bandLU(a *mat.SymDense, b int, sigma, tiny float64, w []float64, piv []int)
 		end := min(n-1, j+2*b)
 		if p != j {
 			for c := j; c <= end; c++ {
-				w[j*n+c], w[p*n+c] = w[p*n+c], w[j*n+c]
+				w[at(j, c)], w[at(p, c)] = w[at(p, c)], w[at(j, c)]
 			}
 		}
-		d := w[j*n+j]
+		d := w[at(j, j)]
 		if math.Abs(d) < tiny {
 			d = math.Copysign(tiny, d)
-			w[j*n+j] = d
+			w[at(j, j)] = d
 		}
 		for i := j + 1; i <= last; i++ {
-			m := w[i*n+j] / d
-			w[i*n+j] = m
+			m := w[at(i, j)] / d
+			w[at(i, j)] = m
 			if m == 0 {
 				continue
 			}
 			for c := j + 1; c <= end; c++ {
-				w[i*n+c] -= m * w[j*n+c]
+				w[at(i, c)] -= m * w[at(j, c)]
 			}
 		}
 	}
@@ -180,19 +182,21 @@ func bandLU(a *mat.SymDense, b int, sigma, tiny float64, w []float64, piv []int)
 
 // bandSolve solves (A − σI) y = x in place with the factors of bandLU.
 func bandSolve(w []float64, piv []int, n, b int, x []float64) {
+	width := 3*b + 1
+	at := func(i, j int) int { return i*width + j - i + b }
 	for j := range n {
 		if p := piv[j]; p != j {
 			x[j], x[p] = x[p], x[j]
 		}
 		for i := j + 1; i <= min(n-1, j+b); i++ {
-			x[i] -= w[i*n+j] * x[j]
+			x[i] -= w[at(i, j)] * x[j]
 		}
 	}
 	for i := n - 1; i >= 0; i-- {
 		s := x[i]
 		for c := i + 1; c <= min(n-1, i+2*b); c++ {
-			s -= w[i*n+c] * x[c]
+			s -= w[at(i, c)] * x[c]
 		}
-		x[i] = s / w[i*n+i]
+		x[i] = s / w[at(i, i)]
 	}
 }

@@ -25,7 +25,7 @@ func bandMatrix(n, b int) *mat.SymDense {
 func TestBandSolve(t *testing.T) {
 	const n, b, sigma = 40, 3, 0.37
 	a := bandMatrix(n, b)
-	w, piv := make([]float64, n*n), make([]int, n)
+	w, piv := make([]float64, n*(3*b+1)), make([]int, n)
 	bandLU(a, b, sigma, 1e-300, w, piv)
 	x := make([]float64, n)
 	for i := range x {

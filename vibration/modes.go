@@ -172,45 +172,49 @@ func (s *system) solve(vmax, lmax float64) ([]Mode, error) {
 			return nil, invalidf("the lumped mass at x = %.2f m is not positive definite: the walkway's roll has no inertia (give it a mass or tie ropes on both sides of the axis)", s.x[k])
 		}
 	}
-	// A = L⁻¹ K L⁻ᵀ, block tridiagonal by station.
-	a := make([]float64, N*N)
+	// A = L⁻¹ K L⁻ᵀ, block tridiagonal by station as K.
+	a := newBlockTri(s.n-1, p)
 	tmp := make([]float64, p*p)
-	for k := 1; k < s.n; k++ {
-		lk := linv[(k-1)*p*p : k*p*p]
-		for j := max(1, k-1); j <= min(s.n-1, k+1); j++ {
-			lj := linv[(j-1)*p*p : j*p*p]
-			// tmp = L_k⁻¹ K_kj
-			for r := range p {
-				for c := range p {
-					var sum float64
-					for q := 0; q <= r; q++ {
-						sum += lk[r*p+q] * s.k[((k-1)*p+q)*N+(j-1)*p+c]
-					}
-					tmp[r*p+c] = sum
+	form := func(kb, lk, lj, out []float64) {
+		// tmp = L_k⁻¹ K_kj, out = tmp L_j⁻ᵀ
+		for r := range p {
+			for c := range p {
+				var sum float64
+				for q := 0; q <= r; q++ {
+					sum += lk[r*p+q] * kb[q*p+c]
 				}
+				tmp[r*p+c] = sum
 			}
-			// A_kj = tmp L_j⁻ᵀ
-			for r := range p {
-				for c := range p {
-					var sum float64
-					for q := 0; q <= c; q++ {
-						sum += tmp[r*p+q] * lj[c*p+q]
-					}
-					a[((k-1)*p+r)*N+(j-1)*p+c] = sum
+		}
+		for r := range p {
+			for c := range p {
+				var sum float64
+				for q := 0; q <= c; q++ {
+					sum += tmp[r*p+q] * lj[c*p+q]
 				}
+				out[r*p+c] = sum
 			}
+		}
+	}
+	for k := range s.n - 1 {
+		lk := linv[k*p*p : (k+1)*p*p]
+		form(s.k.diag(k), lk, lk, a.diag(k))
+		if k+1 < s.n-1 {
+			form(s.k.off(k), lk, linv[(k+1)*p*p:(k+2)*p*p], a.off(k))
 		}
 	}
 	fmax := max(vmax, lmax)
 	var modes []Mode
 	y := make([]float64, N)
 	x := make([]float64, N)
-	for _, comp := range components(a, N, 2*p) {
+	for _, comp := range components(a) {
 		c := len(comp)
 		sym := mat.NewSymDense(c, nil)
 		for i, gi := range comp {
-			for j := i; j < c; j++ {
-				sym.SetSym(i, j, a[gi*N+comp[j]])
+			// within a station and the next: the block-tridiagonal band
+			end := (gi/p + 2) * p
+			for j := i; j < c && comp[j] < end; j++ {
+				sym.SetSym(i, j, a.at(gi, comp[j]))
 			}
 		}
 		// Indices of a component keep the station order: its band is at
@@ -557,9 +561,9 @@ func halfWaves(c []float64) int {
 
 // components returns the groups of degrees of freedom that A couples, each
 // sorted: i and j are coupled when |A_ij| > 1e-12 √(A_ii A_jj), couplings
-// at the level of rounding being none. A is searched within the band
-// |i − j| < band.
-func components(a []float64, N, band int) [][]int {
+// at the level of rounding being none.
+func components(a blockTri) [][]int {
+	p, N := a.p, a.m*a.p
 	parent := make([]int, N)
 	for i := range parent {
 		parent[i] = i
@@ -571,12 +575,26 @@ func components(a []float64, N, band int) [][]int {
 		}
 		return i
 	}
-	for i := range N {
-		for j := i + 1; j < min(N, i+band); j++ {
-			v := a[i*N+j]
-			if v != 0 && math.Abs(v) > 1e-12*math.Sqrt(math.Abs(a[i*N+i]*a[j*N+j])) {
-				if ri, rj := find(i), find(j); ri != rj {
-					parent[ri] = rj
+	diag := func(i int) float64 { return a.diag(i / p)[(i%p)*p+i%p] }
+	link := func(i, j int, v float64) {
+		if v != 0 && math.Abs(v) > 1e-12*math.Sqrt(math.Abs(diag(i)*diag(j))) {
+			if ri, rj := find(i), find(j); ri != rj {
+				parent[ri] = rj
+			}
+		}
+	}
+	for k := range a.m {
+		d := a.diag(k)
+		for r := range p {
+			for c := r + 1; c < p; c++ {
+				link(k*p+r, k*p+c, d[r*p+c])
+			}
+		}
+		if k+1 < a.m {
+			o := a.off(k)
+			for r := range p {
+				for c := range p {
+					link(k*p+r, (k+1)*p+c, o[r*p+c])
 				}
 			}
 		}
