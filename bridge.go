@@ -335,10 +335,10 @@ type AnchorSpec struct {
 	Length units.Length `json:"length,omitempty"`
 	// Width is a block's size across the pull, or a deadman beam's length.
 	Width units.Length `json:"width,omitempty"`
-	// Height is the height of a block or of a deadman beam.
+	// Height is the height of a block or of a deadman beam's face.
 	Height units.Length `json:"height,omitempty"`
-	// Depth is that of a block's base, or of a deadman beam's centre,
-	// below ground.
+	// Depth is that of a block's base, or of the bottom of a deadman
+	// beam's face, below the ground at the anchor.
 	Depth units.Length `json:"depth,omitempty"`
 	// UnitWeight is that of a block's or beam's concrete; zero means
 	// 24 kN/m³.
@@ -349,41 +349,164 @@ type AnchorSpec struct {
 	// AttachX and AttachZ place the backstay attachment in a block, from its
 	// base edge farthest from the tower, x towards the tower, z up; zero
 	// means the middle of the length and a third of the height (common
-	// practice: the rope loops round a beam cast low in the block).
+	// practice: the rope loops round a beam cast low in the block). For a
+	// deadman AttachZ is the attachment's height above the bottom of its
+	// face; zero means the middle of the face. The attachment lies Drop
+	// below the saddle (banks.*.backstay.drop), which fixes the anchor's
+	// elevation against groundwater and flood levels.
 	AttachX units.Length `json:"attach_x,omitempty"`
 	AttachZ units.Length `json:"attach_z,omitempty"`
+	// Attachment is how the ropes are fixed to the anchor; when it is left
+	// out the rope forces at the anchor are reported for its design, not
+	// checked.
+	Attachment *AttachmentSpec `json:"attachment,omitempty"`
+	// Beam is a deadman's steel section, checked in bending and shear as a
+	// beam on the soil reaction; when it is left out (a concrete or timber
+	// deadman) its design moment and shear are reported.
+	Beam *BeamSpec `json:"beam,omitempty"`
 
-	// Bars is the number of a rock anchor's bars.
+	// Bars is the number of a rock anchor's bars, in a row across the pull.
 	Bars int `json:"bars,omitempty"`
 	// BarDiameter is the diameter of each rock-anchor bar.
 	BarDiameter units.Length `json:"bar_diameter,omitempty" unit:"mm"`
-	// BarStrength is the yield strength of a rock-anchor bar.
+	// BarStrength is the yield strength f_y of a rock-anchor bar.
 	BarStrength units.Pressure `json:"bar_strength,omitempty"`
+	// BarUltimate is the bars' ultimate strength f_u, for the thread; zero
+	// takes f_y (cautious).
+	BarUltimate units.Pressure `json:"bar_ultimate,omitempty"`
+	// BarSpacing is the distance between neighbouring bars; zero takes
+	// their rock cones as one (cautious).
+	BarSpacing units.Length `json:"bar_spacing,omitempty"`
 	// HoleDiameter is the diameter of the grouted drill hole.
 	HoleDiameter units.Length `json:"hole_diameter,omitempty" unit:"mm"`
 	// BondLength is the length of bar grouted into the rock.
 	BondLength units.Length `json:"bond_length,omitempty"`
 	// FreeLength is the length of bar free to stretch above the bond.
 	FreeLength units.Length `json:"free_length,omitempty"`
+	// GroutBond is the ultimate grout–rock bond stress, from anchor tests
+	// (BS 8081, EN 1537); left out, the rock preset's typical value.
+	GroutBond *units.Pressure `json:"grout_bond,omitempty"`
+	// Plate is the square head plate under each bar's nut; when it is left
+	// out the plate is not checked.
+	Plate *PlateSpec `json:"plate,omitempty"`
 }
 
-// SoilSpec picks a soil preset and overrides any of its values.
-type SoilSpec struct {
-	// Preset names the soil whose typical values are taken, such as
-	// "dense sand"; the fields below override them.
-	Preset string `json:"preset,omitempty"`
-	// UnitWeight is the soil's bulk unit weight; zero keeps the preset's.
-	UnitWeight units.UnitWeight `json:"unit_weight,omitempty"`
-	// Friction is the effective angle of shearing resistance φ'; zero
-	// keeps the preset's.
-	Friction units.Angle `json:"friction,omitempty"`
-	// Cohesion is the effective cohesion c' (or cu when the friction angle
-	// is zero); zero keeps the preset's.
-	Cohesion units.Pressure `json:"cohesion,omitempty"`
-	// Allowable is an allowable bearing pressure from a site report; zero
-	// keeps the preset's (none: bearing from the bearing-capacity equation).
-	Allowable units.Pressure `json:"allowable_bearing,omitempty"`
+// AttachmentSpec is how the backstay ropes are fixed to their anchor.
+type AttachmentSpec struct {
+	// Kind is "rod": each rope's eye is fixed (by shackle or turnbuckle) to
+	// steel rods cast into a block or deadman, or to a rock anchor's bars'
+	// heads (then with no rods); or "loop": each rope passes round a pin or
+	// pipe cast into the block and is clamped back on itself.
+	Kind string `json:"kind"`
+	// Termination is the rope's end: "grips" (wire rope grips, k_e 0.80),
+	// "ferrule" (ferrule-secured eye, 0.90) or "socket" (poured or swaged,
+	// 1.0); or give efficiency instead.
+	Termination string `json:"termination,omitempty"`
+	// Efficiency is the termination efficiency k_e of the rope's end, in
+	// place of termination.
+	Efficiency float64 `json:"efficiency,omitempty"`
+	// Rods is the number of rods cast into the block or deadman ("rod"),
+	// sharing the pull of all the backstays.
+	Rods int `json:"rods,omitempty"`
+	// RodDiameter is the rods' gross diameter.
+	RodDiameter units.Length `json:"rod_diameter,omitempty" unit:"mm"`
+	// RodSteel is the rods' yield strength f_y.
+	RodSteel units.Pressure `json:"rod_steel,omitempty"`
+	// RodUltimate is the rods' ultimate strength f_u; zero takes f_y
+	// (cautious).
+	RodUltimate units.Pressure `json:"rod_ultimate,omitempty"`
+	// RodThreadArea is the tensile stress area of a rod's thread; zero
+	// takes 0.78 of its gross area (an M20 thread's ratio, cautious).
+	RodThreadArea units.Area `json:"rod_thread_area,omitempty"`
+	// PinDiameter is the diameter of the pin or pipe the ropes loop round
+	// ("loop").
+	PinDiameter units.Length `json:"pin_diameter,omitempty" unit:"mm"`
 }
+
+// BeamSpec is a deadman's steel section.
+type BeamSpec struct {
+	// Steel is the section's yield strength f_y.
+	Steel units.Pressure `json:"steel"`
+	// PlasticModulus is the plastic section modulus W_pl about the axis the
+	// pull bends the beam about.
+	PlasticModulus units.Volume `json:"plastic_modulus"`
+	// ShearArea is the shear area A_v in the direction of the pull.
+	ShearArea units.Area `json:"shear_area"`
+}
+
+// PlateSpec is a rock anchor's square head plate.
+type PlateSpec struct {
+	// Side is the side of the square plate.
+	Side units.Length `json:"side"`
+	// Thickness is the plate's thickness.
+	Thickness units.Length `json:"thickness" unit:"mm"`
+	// Steel is the plate's yield strength f_y.
+	Steel units.Pressure `json:"steel"`
+}
+
+// SoilSpec describes the ground of one bank: a preset, the site
+// investigation's own parameters, or a preset with some of them
+// overridden. Presence decides, not value: a field given counts even when
+// zero ("cohesion": "0 kPa" removes a preset's c'; "undrained_strength":
+// "0 kPa" checks a clay drained only), a field left out keeps the preset's
+// value. Without a preset, unit_weight and friction (or rock) are needed.
+//
+// A fine soil with an undrained_strength is checked in the short-term
+// (undrained) and the long-term (drained) condition at every footing and
+// anchor; the report names the one that governs.
+type SoilSpec struct {
+	// Preset names a typical soil or rock whose values are taken, such as
+	// "dense sand" (foundation.Presets); the fields below override them.
+	Preset string `json:"preset,omitempty"`
+	// IsRock says whether the ground is rock: its bearing then comes from
+	// allowable_bearing or rock_strength, never from soil theory, and rock
+	// anchors may be grouted in it.
+	IsRock *bool `json:"rock,omitempty"`
+	// UnitWeight is the bulk unit weight γ above the water table.
+	UnitWeight *units.UnitWeight `json:"unit_weight,omitempty"`
+	// Submerged is the effective unit weight γ' below the water table; left
+	// out (and no saturated_unit_weight), γ − 9.81 kN/m³.
+	Submerged *units.UnitWeight `json:"submerged_unit_weight,omitempty"`
+	// Saturated is the saturated unit weight γsat, from which
+	// γ' = γsat − 9.81 kN/m³; give it or submerged_unit_weight, not both.
+	Saturated *units.UnitWeight `json:"saturated_unit_weight,omitempty"`
+	// Friction is the drained (effective) angle of shearing resistance φ'.
+	Friction *units.Angle `json:"friction,omitempty"`
+	// Cohesion is the drained (effective) cohesion c'.
+	Cohesion *units.Pressure `json:"cohesion,omitempty"`
+	// Undrained is the undrained shear strength c_u of a clay or silt: the
+	// short-term condition is checked besides the drained one; "0 kPa"
+	// checks a preset clay drained only.
+	Undrained *units.Pressure `json:"undrained_strength,omitempty"`
+	// Interface is the ratio δ/φ' of base friction between concrete and
+	// this ground; left out, 2/3.
+	Interface *float64 `json:"interface,omitempty"`
+	// Allowable is an allowable bearing pressure from the site
+	// investigation: on rock the bearing limit; on soil it replaces the
+	// bearing-capacity equation on the allowable basis.
+	Allowable *units.Pressure `json:"allowable_bearing,omitempty"`
+	// RockStrength is the uniaxial compressive strength of intact rock
+	// cores, for the K_sp method when no allowable_bearing is given.
+	RockStrength *units.Pressure `json:"rock_strength,omitempty"`
+	// JointSpacing is the spacing of the rock's discontinuities, for the
+	// K_sp method.
+	JointSpacing *units.Length `json:"joint_spacing,omitempty"`
+	// JointAperture is the opening of the rock's discontinuities, for the
+	// K_sp method.
+	JointAperture *units.Length `json:"joint_aperture,omitempty"`
+	// BearingMethod is the bearing-capacity method of this bank's footing
+	// and anchor block: "EN 1997-1 Annex D" (default) or "Vesic".
+	BearingMethod string `json:"bearing_method,omitempty"`
+	// Groundwater is the elevation of the groundwater table at this bank,
+	// on the datum of the site's levels; left out, no groundwater within
+	// reach. In the flood case the design flood raises it where higher.
+	Groundwater *units.Length `json:"groundwater_elevation,omitempty"`
+}
+
+// Given returns a pointer to x, for the optional fields of a description
+// built in Go, such as SoilSpec{Preset: "soft clay",
+// Cohesion: sagspan.Given(0 * units.Kilopascal)}.
+func Given[T any](x T) *T { return &x }
 
 // Loads sets the imposed loads. Every zero field takes its default.
 type Loads struct {

@@ -27,6 +27,10 @@ type LoadCase struct {
 	// the wind (GammaW already includes a combination factor where wind
 	// accompanies the crowd).
 	GammaG, GammaQ, GammaW float64
+	// Flood puts the water at the design flood (site.flood_elevation) at
+	// every footing and anchor it reaches: buoyancy, submerged soil and
+	// effective stresses in the ground checks.
+	Flood bool
 }
 
 // Default load factors of the partial-factor basis. The allowable basis
@@ -53,6 +57,7 @@ func (b Bridge) partial() bool { return b.Basis.Method == "partial" }
 //	hot with crowd                G + Q             hottest
 //	cold, permanent               G                 coldest
 //	hot, permanent                G                 hottest
+//	flood with crowd              G + Q             reference, water at the design flood
 //
 // On the partial-factor basis G, Q and W carry γG, γQ and γQ (γQ ψ0 for
 // wind accompanying the crowd). The wind cases are left out when no wind is
@@ -83,6 +88,9 @@ func (b Bridge) Cases() []LoadCase {
 		LoadCase{Name: "cold, permanent", Temperature: c.Coldest},
 		LoadCase{Name: "hot, permanent", Temperature: c.Hottest},
 	)
+	// The design flood at the foundations, with a crowd watching it from
+	// the walkway (common practice: people gather on a bridge in a flood).
+	cases = append(cases, LoadCase{Name: "flood with crowd", Crowd: FullSpan, Temperature: c.Reference, Flood: true})
 	for i := range cases {
 		cases[i].GammaG = gG
 		if cases[i].Crowd != NoCrowd {

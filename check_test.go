@@ -332,8 +332,8 @@ func TestLoadScaling(t *testing.T) {
 			t.Errorf("case %q has no results", lc.Name)
 		}
 	}
-	if len(names) != 10 {
-		t.Errorf("demo bridge has %d cases, want 10 (wind given)", len(names))
+	if len(names) != 11 {
+		t.Errorf("demo bridge has %d cases, want 11 (wind given, and the flood)", len(names))
 	}
 }
 
@@ -407,7 +407,7 @@ func TestAnchorTypes(t *testing.T) {
 	b.Banks.Left.Anchor = AnchorSpec{Type: "deadman", Length: 1.2 * m, Width: 6 * m, Height: 1.5 * m, Depth: 3 * m}
 	b.Banks.Right.Anchor = AnchorSpec{Type: "rock", Bars: 4, BarDiameter: 32 * units.Millimetre,
 		BarStrength: 500 * units.Megapascal, HoleDiameter: 90 * units.Millimetre, BondLength: 4 * m, FreeLength: 2 * m}
-	b.Banks.Right.Soil = SoilSpec{Preset: "sound rock", Allowable: 2 * units.Megapascal} // rock bears by an allowable pressure
+	b.Banks.Right.Soil = SoilSpec{Preset: "sound rock", Allowable: Given(2 * units.Megapascal)} // rock bears by an allowable pressure
 	if err := b.Validate(); err != nil {
 		t.Fatal(err)
 	}

@@ -334,6 +334,9 @@ func (a *Analysis) loadCases() BasisGroup {
 			parts = append(parts, fmt.Sprintf("wind × %.2g", lc.GammaW))
 		}
 		parts = append(parts, "ropes at "+lc.Temperature.String())
+		if lc.Flood {
+			parts = append(parts, "water at the design flood at the footings and anchors it reaches")
+		}
 		text := strings.Join(parts, ", ")
 		if i < len(a.Design) {
 			d := a.Design[i].Case
@@ -542,6 +545,18 @@ func walkCompact(v reflect.Value, p string, leaf func(fieldInfo, string)) {
 		fp := join(p, name)
 		fv := v.Field(i)
 		fi := fieldOf(t, f, fp)
+		if f.Type.Kind() == reflect.Pointer { // presence decides: a value given counts, zero too
+			switch {
+			case fv.IsNil() && isLeaf(f.Type):
+				leaf(fi, "")
+			case fv.IsNil():
+			case isLeaf(f.Type):
+				leaf(fi, formatLeaf(fv.Elem()))
+			default:
+				walkCompact(fv.Elem(), fp, leaf)
+			}
+			continue
+		}
 		switch {
 		case isLeaf(f.Type):
 			text := formatLeaf(fv)

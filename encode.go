@@ -34,6 +34,12 @@ func encodeValue(buf *bytes.Buffer, v reflect.Value, unit string) error {
 		return err
 	}
 	switch v.Kind() {
+	case reflect.Pointer: // an optional field given: its value, zero too
+		if v.IsNil() {
+			buf.WriteString("null")
+			return nil
+		}
+		return encodeValue(buf, v.Elem(), unit)
 	case reflect.Struct:
 		buf.WriteByte('{')
 		first := true

@@ -43,6 +43,9 @@ func fieldOf(t reflect.Type, f reflect.StructField, p string) fieldInfo {
 // isLeaf reports whether a field of type t is a value rather than a
 // struct or list of structs to walk into.
 func isLeaf(t reflect.Type) bool {
+	if t.Kind() == reflect.Pointer {
+		t = t.Elem() // an optional field whose presence counts
+	}
 	if t == reflect.TypeFor[Level]() {
 		return true
 	}
@@ -64,6 +67,20 @@ func walkValues(v reflect.Value, p string, leaf func(fieldInfo, reflect.Value)) 
 		}
 		fp := join(p, name)
 		fv := v.Field(i)
+		if f.Type.Kind() == reflect.Pointer { // presence decides: nil is not given, a value given counts, zero too
+			fi := fieldOf(t, f, fp)
+			switch {
+			case fv.IsNil() && isLeaf(f.Type):
+				leaf(fi, reflect.Zero(f.Type.Elem()))
+			case fv.IsNil():
+			case isLeaf(f.Type):
+				fi.Optional = false
+				leaf(fi, fv.Elem())
+			default:
+				walkValues(fv.Elem(), fp, leaf)
+			}
+			continue
+		}
 		switch {
 		case isLeaf(f.Type):
 			leaf(fieldOf(t, f, fp), fv)
@@ -146,6 +163,9 @@ func formatLeaf(v reflect.Value) string {
 func describeType(fi fieldInfo) string {
 	t := fi.Type
 	list := ""
+	if t.Kind() == reflect.Pointer {
+		t = t.Elem()
+	}
 	if t.Kind() == reflect.Slice {
 		t, list = t.Elem(), "list of "
 	}

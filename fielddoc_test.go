@@ -198,6 +198,9 @@ func referenceRows() [][]string {
 				continue
 			}
 			ft := f.Type
+			if ft.Kind() == reflect.Pointer {
+				ft = ft.Elem()
+			}
 			if ft.Kind() == reflect.Slice {
 				ft, p = ft.Elem(), p+"[]"
 				rows = append(rows, []string{"`" + p + "`", "list of objects", required, "", fi.Doc})

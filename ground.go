@@ -1,6 +1,7 @@
 package sagspan
 
 import (
+	"fmt"
 	"math"
 
 	"github.com/sagspan/sagspan/check"
@@ -9,12 +10,171 @@ import (
 	"github.com/sagspan/sagspan/units"
 )
 
+// bankGround is one bank's ground resolved for analysis: its soil and
+// bearing method, the elevations of its footing and anchor (on the datum
+// of the site's levels), and its groundwater.
+type bankGround struct {
+	bank   Bank
+	soil   foundation.Soil
+	method foundation.Method
+	// footingTop is the elevation of the column base (the footing's top),
+	// footingGround that of the ground at the footing, anchorGround that
+	// of the ground at the anchor (the rock surface at a rock anchor's
+	// head).
+	footingTop, footingGround, anchorGround units.Length
+	// groundwater is the groundwater elevation, when given.
+	groundwater *units.Length
+	flood       Level
+}
+
+// saddleElevation returns the elevation of a bank's walkway-rope saddle.
+func (b Bridge) saddleElevation(s Side) units.Length {
+	if s == Left {
+		return b.Site.LeftSaddle
+	}
+	return b.Site.LeftSaddle + b.Site.Rise
+}
+
+// bankOf returns one bank of the description.
+func (b Bridge) bankOf(s Side) Bank {
+	if s == Left {
+		return b.Banks.Left
+	}
+	return b.Banks.Right
+}
+
+// attachHeight returns the attachment's height above the base of a block
+// (default a third of its height) or above the bottom of a deadman's face
+// (default its middle).
+func (a AnchorSpec) attachHeight() units.Length {
+	switch {
+	case a.AttachZ != 0:
+		return a.AttachZ
+	case a.Type == "deadman":
+		return a.Height / 2
+	}
+	return a.Height / 3
+}
+
+// groundOf resolves one bank's ground for a validated soil. The footing's
+// top lies the tower's height below its saddle; the anchor's attachment
+// lies the backstay's drop below it.
+func (b Bridge) groundOf(s Side, soil foundation.Soil) bankGround {
+	k := b.bankOf(s)
+	m, _ := k.Soil.method() // validated
+	z := b.saddleElevation(s)
+	g := bankGround{bank: k, soil: soil, method: m, groundwater: k.Soil.Groundwater, flood: b.Site.Flood}
+	ft := k.Tower.Footing
+	g.footingTop = z - k.Tower.Height
+	g.footingGround = g.footingTop + ft.Depth - ft.Thickness
+	attach := z - k.Backstay.Drop
+	switch a := k.Anchor; a.Type {
+	case "rock":
+		g.anchorGround = attach
+	default:
+		g.anchorGround = attach - a.attachHeight() + a.Depth
+	}
+	if a := k.Anchor; a.Type == "rock" {
+		g.soil.GroutBond = a.groutBond(soil)
+	}
+	return g
+}
+
+// waterLevel returns the water level at a bank in case lc, whether there
+// is one, and whether it is the design flood: the groundwater, or in the
+// flood case the design flood where it is higher (the bank taken as
+// saturated up to the flood's level, cautious).
+func (g bankGround) waterLevel(lc LoadCase) (level units.Length, ok, flood bool) {
+	switch {
+	case lc.Flood && !g.flood.None && (g.groundwater == nil || g.flood.Z > *g.groundwater):
+		return g.flood.Z, true, true
+	case g.groundwater != nil:
+		return *g.groundwater, true, false
+	}
+	return 0, false, false
+}
+
+// waterText says in words which water level case lc uses at the bank.
+func (g bankGround) waterText(lc LoadCase) string {
+	level, ok, flood := g.waterLevel(lc)
+	switch {
+	case flood:
+		return fmt.Sprintf("the design flood at %s (site.flood_elevation), the bank saturated up to it", level)
+	case ok:
+		return fmt.Sprintf("groundwater at %s", level)
+	}
+	return "no groundwater given"
+}
+
+// waterAt returns the water at a foundation whose ground lies at
+// elevation ground, in case lc.
+func (g bankGround) waterAt(lc LoadCase, ground units.Length) foundation.Water {
+	level, ok, _ := g.waterLevel(lc)
+	if !ok {
+		return foundation.Water{}
+	}
+	return foundation.WaterAt(ground - level)
+}
+
+// pad returns the bank's tower footing for package foundation, dry: along
+// the bridge, the column's footprint free of soil cover.
+func (g bankGround) pad() foundation.Footing {
+	t, spec := g.bank.Tower, g.bank.Tower.Footing
+	return foundation.Footing{Along: spec.Length, Across: spec.Width, Thickness: spec.Thickness, Depth: spec.Depth,
+		UnitWeight: t.UnitWeight, Footprint: units.Area(float64(t.Depth) * float64(t.Width))}
+}
+
+// block, deadman and rock return the bank's anchor for package foundation.
+func (g bankGround) block(a AnchorSpec) foundation.AnchorBlock {
+	return foundation.AnchorBlock{Length: a.Length, Width: a.Width, Height: a.Height, Depth: a.Depth,
+		UnitWeight: a.UnitWeight, PassiveMobilisation: a.Passive}
+}
+
+func (g bankGround) deadman(a AnchorSpec) foundation.Deadman {
+	d := foundation.Deadman{Length: a.Width, Height: a.Height, Thickness: a.Length, Depth: a.Depth, UnitWeight: a.UnitWeight}
+	if a.Beam != nil {
+		d.Section = foundation.SteelSection{Yield: a.Beam.Steel, PlasticModulus: a.Beam.PlasticModulus, ShearArea: a.Beam.ShearArea}
+	}
+	return d
+}
+
+func (g bankGround) rock(a AnchorSpec) foundation.RockAnchor {
+	ra := foundation.RockAnchor{
+		Count: a.Bars, Spacing: a.BarSpacing, BarDiameter: a.BarDiameter, YieldStrength: a.BarStrength, UltimateStrength: a.BarUltimate,
+		HoleDiameter: a.HoleDiameter, BondLength: a.BondLength, FreeLength: a.FreeLength,
+	}
+	if p := a.Plate; p != nil {
+		ra.Plate = foundation.HeadPlate{Side: p.Side, Thickness: p.Thickness, Yield: p.Steel}
+	}
+	return ra
+}
+
+// anchorDryRun runs the bank's anchor checks with no load, for validation.
+func (g bankGround) anchorDryRun() ([]check.Result, error) {
+	a := g.bank.Anchor
+	switch a.Type {
+	case "rock":
+		return g.rock(a).Check(0, units.FromDegrees(30), g.soil, nil)
+	case "deadman":
+		return g.deadman(a).Check(nil, g.soil, nil)
+	}
+	blk := g.block(a)
+	x, z := a.AttachX, a.AttachZ
+	if x == 0 {
+		x = a.Length / 2
+	}
+	if z == 0 {
+		z = a.Height / 3
+	}
+	return blk.Check([]foundation.AnchorPull{{X: x, Z: z}}, g.soil, g.method, nil)
+}
+
 // footingChecks checks the footing spec of one bank's tower under every
 // service case.
 func (m *model) footingChecks(out sink, side Side, spec FootingSpec, service []CaseState) error {
 	element := footingElement[side]
 	for _, svc := range service {
-		results, err := m.footing(side, spec, service[0].Tower[side], svc.Tower[side])
+		results, err := m.footing(side, spec, service[0].Tower[side], svc)
 		if err != nil {
 			return m.bankErr(side, "tower.footing", svc.Case.Name, err)
 		}
@@ -35,16 +195,31 @@ func (m *model) footingChecks(out sink, side Side, spec FootingSpec, service []C
 	return nil
 }
 
+// columnBuoyancy returns the uplift of the water on the submerged part of
+// a bank's tower column in case lc (the gross section, γw 9.81 kN/m³).
+func (m *model) columnBuoyancy(s Side, lc LoadCase) units.Force {
+	g := m.ground[s]
+	level, ok, _ := g.waterLevel(lc)
+	if !ok {
+		return 0
+	}
+	t := g.bank.Tower
+	h := math.Min(math.Max(float64(level-g.footingTop), 0), float64(t.Height))
+	return units.Force(float64(foundation.WaterUnitWeight) * float64(t.Depth) * float64(t.Width) * h)
+}
+
 // footingAcross checks a tower footing across the bridge under the wind
 // pushing the swung ropes sideways: the footing turned, its width along the
 // lateral force. The whole lateral action is variable.
 func (m *model) footingAcross(s Side, spec FootingSpec, perm tower.Resultant, svc CaseState) ([]check.Result, error) {
-	f := m.padOf(s, spec)
+	g := m.ground[s]
+	f := g.pad()
 	f.Along, f.Across = spec.Width, spec.Length // turned: along the lateral force
+	f.Water = g.waterAt(svc.Case, g.footingGround)
 	lateral := svc.Lateral[s]
 	moment := svc.LateralMoment[s] + units.MomentOf(lateral, spec.Thickness)
 	load := foundation.FootingLoad{
-		Vertical:           svc.Tower[s].Vertical,
+		Vertical:           svc.Tower[s].Vertical - m.columnBuoyancy(s, svc.Case),
 		Horizontal:         lateral,
 		Moment:             moment,
 		Split:              true,
@@ -53,7 +228,8 @@ func (m *model) footingAcross(s Side, spec FootingSpec, perm tower.Resultant, sv
 		VariableMoment:     moment,
 	}
 	var err error
-	m.scratch, err = f.AppendCheck(m.scratch[:0], load, m.soils[s], foundation.Vesic, m.foundationBasis())
+	m.scratch, err = f.AppendCheck(m.scratch[:0], load, g.soil, g.method, m.foundationBasis())
+	m.waterBasis(m.scratch, s, svc.Case, f.Water)
 	return m.scratch, err
 }
 
@@ -81,29 +257,52 @@ func share(x, p float64) float64 {
 	return math.Max(0, math.Min(1, (math.Abs(x)-math.Abs(p))/math.Abs(x)))
 }
 
-// footing checks a tower footing under the column-base resultant r, brought
-// down to the underside of the footing; perm is the permanent case's
-// resultant, for the variable share of the partial basis.
-func (m *model) footing(s Side, spec FootingSpec, perm, r tower.Resultant) ([]check.Result, error) {
-	f := m.padOf(s, spec)
+// footing checks a tower footing under the column-base resultant of case
+// svc, brought down to the underside of the footing; perm is the
+// permanent case's resultant, for the variable share of the partial basis.
+// In a case with water above the footing the column's submerged part is
+// buoyed (a permanent reduction of the vertical load).
+func (m *model) footing(s Side, spec FootingSpec, perm tower.Resultant, svc CaseState) ([]check.Result, error) {
+	g := m.ground[s]
+	f := g.pad()
+	f.Water = g.waterAt(svc.Case, g.footingGround)
+	r := svc.Tower[s]
 	moment := func(r tower.Resultant) units.Moment {
 		return r.BaseMoment + units.MomentOf(r.Horizontal, spec.Thickness) + units.MomentOf(r.Vertical, spec.ColumnOffset)
 	}
+	lift := m.columnBuoyancy(s, svc.Case)
 	// Variable parts: what the case adds to the permanent case, component
 	// by component and signed, so that a permanent part the variable one
 	// opposes is factored as favourable on the partial basis.
 	load := foundation.FootingLoad{
-		Vertical:           r.Vertical,
+		Vertical:           r.Vertical - lift,
 		Horizontal:         r.Horizontal,
-		Moment:             moment(r),
+		Moment:             moment(r) - units.MomentOf(lift, spec.ColumnOffset),
 		Split:              true,
 		VariableVertical:   r.Vertical - perm.Vertical,
 		VariableHorizontal: r.Horizontal - perm.Horizontal,
 		VariableMoment:     moment(r) - moment(perm),
 	}
 	var err error
-	m.scratch, err = f.AppendCheck(m.scratch[:0], load, m.soils[s], foundation.Vesic, m.foundationBasis())
+	m.scratch, err = f.AppendCheck(m.scratch[:0], load, g.soil, g.method, m.foundationBasis())
+	m.waterBasis(m.scratch, s, svc.Case, f.Water)
 	return m.scratch, err
+}
+
+// waterBasis states in each result's basis the water level used, and
+// gives its elevation as the value "z_w" (not on a terse basis).
+func (m *model) waterBasis(rs []check.Result, s Side, lc LoadCase, w foundation.Water) {
+	if m.fbasis.Terse {
+		return
+	}
+	level, ok, _ := m.ground[s].waterLevel(lc)
+	text := m.ground[s].waterText(lc)
+	for i := range rs {
+		rs[i] = rs[i].WithBasis(rs[i].Basis + "; water level used: " + text)
+		if ok {
+			rs[i] = rs[i].WithValues(check.Of("z_w", "elevation of the water level used", level))
+		}
+	}
 }
 
 // foundationBasis returns the verification basis of the anchor and
@@ -112,9 +311,12 @@ func (m *model) footing(s Side, spec FootingSpec, perm, r tower.Resultant) ([]ch
 func (m *model) foundationBasis() *foundation.Basis { return &m.fbasis }
 
 // anchor checks the anchor of one bank under the backstay pulls of every
-// group, split into the permanent case's pull and the rest.
+// group, split into the permanent case's pull and the rest, with the
+// ropes' attachment.
 func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Result, error) {
 	basis := m.foundationBasis()
+	g := m.ground[s]
+	water := g.waterAt(svc.Case, g.anchorGround)
 	x, z := spec.AttachX, spec.AttachZ
 	if x == 0 {
 		x = spec.Length / 2
@@ -124,49 +326,108 @@ func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Re
 	}
 	pulls := m.pulls[:0]
 	defer func() { m.pulls = pulls[:0] }()
-	for i, g := range svc.Groups {
-		t, p := g.Backstay[s], perm.Groups[i].Backstay[s]
-		angle := g.BackstayAngle[s]
+	for i, gs := range svc.Groups {
+		t, p := gs.Backstay[s], perm.Groups[i].Backstay[s]
+		angle := gs.BackstayAngle[s]
 		pulls = append(pulls, foundation.AnchorPull{Force: min(t, p), Angle: angle, X: x, Z: z})
 		if t > p {
 			pulls = append(pulls, foundation.AnchorPull{Force: t - p, Angle: angle, X: x, Z: z, Variable: true})
 		}
 	}
-	soil := m.soils[s]
+	// The resultant of the backstays' pulls, and its permanent part.
+	var fx, fz, fxp, fzp float64
+	for i, gs := range svc.Groups {
+		c, sn := math.Cos(float64(gs.BackstayAngle[s])), math.Sin(float64(gs.BackstayAngle[s]))
+		fx, fz = fx+float64(gs.Backstay[s])*c, fz+float64(gs.Backstay[s])*sn
+		p := perm.Groups[i].Backstay[s]
+		fxp, fzp = fxp+float64(p)*c, fzp+float64(p)*sn
+	}
+	pull, permanent := math.Hypot(fx, fz), math.Hypot(fxp, fzp)
+	var err error
 	switch spec.Type {
 	case "deadman":
-		d := foundation.Deadman{Length: spec.Width, Height: spec.Height, Thickness: spec.Length, Depth: spec.Depth, UnitWeight: spec.UnitWeight}
-		return d.Check(pulls, soil, basis)
+		d := g.deadman(spec)
+		d.Water = water
+		m.scratch, err = d.Check(pulls, g.soil, basis)
 	case "rock":
 		// The bars lie along the resultant of the backstays' pulls.
-		var fx, fz, fxp, fzp float64
-		for i, g := range svc.Groups {
-			c, sn := math.Cos(float64(g.BackstayAngle[s])), math.Sin(float64(g.BackstayAngle[s]))
-			fx, fz = fx+float64(g.Backstay[s])*c, fz+float64(g.Backstay[s])*sn
-			p := perm.Groups[i].Backstay[s]
-			fxp, fzp = fxp+float64(p)*c, fzp+float64(p)*sn
-		}
-		pull, permanent := math.Hypot(fx, fz), math.Hypot(fxp, fzp)
-		ra := foundation.RockAnchor{
-			Count: spec.Bars, BarDiameter: spec.BarDiameter, YieldStrength: spec.BarStrength,
-			HoleDiameter: spec.HoleDiameter, BondLength: spec.BondLength, FreeLength: spec.FreeLength,
-			VariableShare: share(pull, permanent),
-		}
-		return ra.Check(units.Force(pull), units.Angle(math.Atan2(fz, fx)), soil, basis)
+		ra := g.rock(spec)
+		ra.Water, ra.VariableShare = water, share(pull, permanent)
+		m.scratch, err = ra.Check(units.Force(pull), units.Angle(math.Atan2(fz, fx)), g.soil, basis)
+	default:
+		blk := g.block(spec)
+		blk.Water = water
+		m.scratch, err = blk.AppendCheck(m.scratch[:0], pulls, g.soil, g.method, basis)
 	}
-	blk := foundation.AnchorBlock{
-		Length: spec.Length, Width: spec.Width, Height: spec.Height, Depth: spec.Depth,
-		UnitWeight: spec.UnitWeight, PassiveMobilisation: spec.Passive,
+	if err != nil {
+		return nil, err
 	}
-	var err error
-	m.scratch, err = blk.AppendCheck(m.scratch[:0], pulls, soil, foundation.EC7, basis)
+	m.waterBasis(m.scratch, s, svc.Case, water)
+	m.scratch, err = m.attachment(m.scratch, s, spec, perm, svc, pull, permanent)
 	return m.scratch, err
 }
 
-// padOf returns the footing of one bank's tower for package foundation:
-// B along the bridge, the column's footprint free of soil cover.
-func (m *model) padOf(s Side, spec FootingSpec) foundation.Footing {
-	t := m.bank(s).Tower
-	return foundation.Footing{Along: spec.Length, Across: spec.Width, Thickness: spec.Thickness, Depth: spec.Depth,
-		UnitWeight: t.UnitWeight, Footprint: units.Area(float64(t.Depth) * float64(t.Width))}
+// attachment appends the checks of the ropes' attachment at the anchor:
+// the rods cast into a block or deadman (under the resultant pull), and
+// each rope group's termination and loop (the worst group reported). With
+// no attachment described, the largest rope force at the anchor is
+// reported for its design.
+func (m *model) attachment(dst []check.Result, s Side, spec AnchorSpec, perm, svc CaseState, pull, permanent float64) ([]check.Result, error) {
+	basis := m.foundationBasis()
+	at := spec.Attachment
+	if at == nil {
+		var worst float64
+		var name string
+		for i, gs := range svc.Groups {
+			if t := float64(gs.Backstay[s]) / float64(m.groups[i].Count); t >= worst {
+				worst, name = t, m.groups[i].Name
+			}
+		}
+		r := check.Record("anchor.attachment", "Rope force at the anchor, per rope", units.KindForce, worst)
+		if !basis.Terse {
+			r = r.WithBasis("the rope tension at the anchor, for the design of its termination (banks.*.anchor.attachment not given)").
+				WithNote(fmt.Sprintf("largest in %s; describe the attachment (rod or loop, and the rope's termination) to check it", name))
+		}
+		return append(dst, r), nil
+	}
+	if at.Kind == "rod" && spec.Type != "rock" {
+		rod := foundation.AnchorRod{Count: at.Rods, Diameter: at.RodDiameter, Yield: at.RodSteel, Ultimate: at.RodUltimate,
+			ThreadArea: at.RodThreadArea, VariableShare: share(pull, permanent)}
+		rs, err := rod.Check(units.Force(pull), basis)
+		if err != nil {
+			return nil, err
+		}
+		dst = append(dst, rs...)
+	}
+	k, err := at.efficiency()
+	if err != nil {
+		return nil, err
+	}
+	var worst [2]check.Result
+	for i, gs := range svc.Groups {
+		grp := m.groups[i]
+		n := float64(grp.Count)
+		t, p := float64(gs.Backstay[s])/n, float64(perm.Groups[i].Backstay[s])/n
+		ra := foundation.RopeAnchorage{MBF: grp.rope.MBF, Diameter: grp.rope.Diameter, Efficiency: k, VariableShare: share(t, p)}
+		if at.Kind == "loop" {
+			ra.PinDiameter = at.PinDiameter
+		}
+		rs, err := ra.Check(units.Force(t), basis)
+		if err != nil {
+			return nil, err
+		}
+		for j, r := range rs {
+			if i == 0 || r.Ratio > worst[j].Ratio {
+				if !basis.Terse {
+					r = r.WithNote(fmt.Sprintf("%s: %d ropes of %v, the worst group", grp.Name, grp.Count, grp.rope.Diameter))
+				}
+				worst[j] = r
+			}
+		}
+	}
+	dst = append(dst, worst[0])
+	if at.Kind == "loop" {
+		dst = append(dst, worst[1])
+	}
+	return dst, nil
 }

@@ -56,7 +56,7 @@ func TestBadDescriptions(t *testing.T) {
 		}, "ropes", "walkway"},
 		{"temperatures out of order", func(m map[string]any) { obj(m, "climate")["coldest"] = "50 C" }, "climate", "coldest <= reference"},
 		{"unknown saddle kind", func(m map[string]any) { obj(m, "banks", "right", "tower", "saddle")["kind"] = "hinged" }, "banks.right.tower.saddle.kind", "unknown saddle kind"},
-		{"unknown soil", func(m map[string]any) { obj(m, "banks", "right", "soil")["preset"] = "moon dust" }, "banks.right.soil", "moon dust"},
+		{"unknown soil", func(m map[string]any) { obj(m, "banks", "right", "soil")["preset"] = "moon dust" }, "banks.right.soil.preset", "moon dust"},
 		{"zero rope count", func(m map[string]any) { m["ropes"].([]any)[0].(map[string]any)["count"] = 0 }, "ropes[0].count", "at least 1"},
 		{"unknown anchor", func(m map[string]any) { obj(m, "banks", "left", "anchor")["type"] = "tree" }, "banks.left.anchor.type", "unknown anchor type"},
 		{"span beyond a footbridge", func(m map[string]any) { obj(m, "site")["span"] = "5 km" }, "site.span", "beyond"},

@@ -15,7 +15,7 @@ type model struct {
 	b      Bridge
 	span   cable.Span
 	groups []group
-	soils  [2]foundation.Soil
+	ground [2]bankGround
 	dead   units.LoadPerLength // walkway dead load per metre, without ropes
 	// crowd and crowdHalf are the crowd loads per metre of walkway on the
 	// full span and on half of it.
@@ -73,14 +73,18 @@ func newModel(b Bridge) (*model, error) {
 		GammaRh:        bs.GammaRh,
 		GammaRv:        bs.GammaRv,
 		GammaRe:        bs.GammaRe,
+		Rope:           bs.RopeFactor,
+		GammaRope:      bs.GammaR,
 	}
 	if bs.Approach == "DA1" {
 		m.fbasis.Approach = foundation.DesignApproach1
 	}
-	for i, bank := range []Bank{b.Banks.Left, b.Banks.Right} {
-		if m.soils[i], err = bank.Soil.soil(); err != nil {
-			return nil, fieldErr("banks."+Side(i).String()+".soil", "%v", err)
+	for side := Left; side <= Right; side++ {
+		soil, err := b.bankOf(side).Soil.soil()
+		if err != nil {
+			return nil, soilField("banks."+side.String(), err)
 		}
+		m.ground[side] = b.groundOf(side, soil)
 	}
 	l := float64(b.Site.Span)
 	for i, g := range gs {

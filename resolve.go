@@ -6,7 +6,6 @@ import (
 	"strings"
 
 	"github.com/sagspan/sagspan/cable"
-	"github.com/sagspan/sagspan/foundation"
 	"github.com/sagspan/sagspan/units"
 )
 
@@ -56,37 +55,6 @@ func constructionNames() string {
 		names = append(names, fmt.Sprintf("%q", c.Name))
 	}
 	return strings.Join(names, ", ")
-}
-
-// soil returns the preset the spec names with its overrides applied.
-func (s SoilSpec) soil() (foundation.Soil, error) {
-	if s.Preset == "" {
-		return foundation.Soil{}, fmt.Errorf("preset is missing; name one of the soil presets (such as \"dense sand\")")
-	}
-	soil, err := foundation.LookupSoil(s.Preset)
-	if err != nil {
-		return foundation.Soil{}, err
-	}
-	if s.UnitWeight > 0 {
-		soil.UnitWeight = s.UnitWeight
-		soil.Submerged = 0
-	}
-	if s.Friction > 0 {
-		if s.Friction >= units.FromDegrees(60) {
-			return foundation.Soil{}, fmt.Errorf("friction angle %s is not a soil's", s.Friction)
-		}
-		soil.Friction = s.Friction
-	}
-	if s.Cohesion > 0 {
-		soil.Cohesion = s.Cohesion
-	}
-	if s.Allowable > 0 {
-		soil.Allowable = s.Allowable
-	}
-	if s.UnitWeight > 0 || s.Friction > 0 || s.Cohesion > 0 || s.Allowable > 0 {
-		soil.Source += "; overridden in the bridge description"
-	}
-	return soil, nil
 }
 
 // group is a rope group resolved for analysis.

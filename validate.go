@@ -157,14 +157,8 @@ func (b Bridge) Validate() error {
 	b.validateBank(v, "banks.left", b.Banks.Left)
 	b.validateBank(v, "banks.right", b.Banks.Right)
 	v.rangesAt("", reflect.ValueOf(&b).Elem())
-	for _, k := range []struct {
-		f    string
-		soil SoilSpec
-	}{{"banks.left.soil", b.Banks.Left.Soil}, {"banks.right.soil", b.Banks.Right.Soil}} {
-		if _, err := k.soil.soil(); err != nil {
-			v.fail(at(k.f), "%v", err)
-		}
-	}
+	b.validateGround(v, Left)
+	b.validateGround(v, Right)
 	b.validateLoads(v)
 	b.validateComfort(v)
 	return v.err
@@ -389,34 +383,7 @@ func (b Bridge) validateAnchorage(v *validator, f string, k Bank) {
 		v.fail(path{f, ".backstay.drop"}, "the anchor must lie below the saddle, got a drop of %s (anchor above the saddle)", bs.Drop)
 	}
 
-	a := k.Anchor
-	switch a.Type {
-	case "block", "deadman":
-		v.positive(path{f, ".anchor.length"}, float64(a.Length), units.KindLength)
-		v.positive(path{f, ".anchor.width"}, float64(a.Width), units.KindLength)
-		v.positive(path{f, ".anchor.height"}, float64(a.Height), units.KindLength)
-		v.positive(path{f, ".anchor.depth"}, float64(a.Depth), units.KindLength)
-		v.nonNegative(path{f, ".anchor.unit_weight"}, float64(a.UnitWeight), units.KindUnitWeight)
-		if a.Passive < 0 || a.Passive > 1 || math.IsNaN(a.Passive) {
-			v.fail(path{f, ".anchor.passive"}, "must lie between 0 and 1, got %v", a.Passive)
-		}
-		if v.err == nil && a.Type == "block" && a.AttachX > a.Length {
-			v.fail(path{f, ".anchor.attach_x"}, "%s puts the backstay attachment beyond the block's length %s", a.AttachX, a.Length)
-		}
-		if v.err == nil && a.Type == "block" && a.AttachZ > a.Height {
-			v.fail(path{f, ".anchor.attach_z"}, "%s puts the backstay attachment above the block's height %s", a.AttachZ, a.Height)
-		}
-	case "rock":
-		if a.Bars <= 0 {
-			v.fail(path{f, ".anchor.bars"}, "a rock anchor needs at least one bar, got %d", a.Bars)
-		}
-		v.positive(path{f, ".anchor.bar_diameter"}, float64(a.BarDiameter), units.KindLength)
-		v.positive(path{f, ".anchor.bar_strength"}, float64(a.BarStrength), units.KindPressure)
-		v.positive(path{f, ".anchor.hole_diameter"}, float64(a.HoleDiameter), units.KindLength)
-		v.positive(path{f, ".anchor.bond_length"}, float64(a.BondLength), units.KindLength)
-	default:
-		v.fail(path{f, ".anchor.type"}, "unknown anchor type %q; want block, deadman or rock", a.Type)
-	}
+	b.validateAnchor(v, f, k.Anchor)
 }
 
 func (b Bridge) validateLoads(v *validator) {
@@ -555,14 +522,42 @@ var limits = map[string]limit{
 	"AnchorSpec.HoleDiameter": between(25*units.Millimetre, 400*units.Millimetre),
 	"AnchorSpec.BondLength":   between(0.5*units.Metre, 20*units.Metre),
 	"AnchorSpec.FreeLength":   between(0*units.Metre, 50*units.Metre),
+	"AnchorSpec.BarUltimate":  between(200*units.Megapascal, 1500*units.Megapascal),
+	"AnchorSpec.BarSpacing":   between(0*units.Metre, 5*units.Metre),
+	// Grout–rock bond stresses of BS 8081 Table 25 run from about 0.1 MPa
+	// (weak chalk) to 4 MPa (strong granite) (from memory).
+	"AnchorSpec.GroutBond":         between(50*units.Kilopascal, 10*units.Megapascal),
+	"AttachmentSpec.Efficiency":    plain(0.5, 1),
+	"AttachmentSpec.Rods":          plain(1, 20),
+	"AttachmentSpec.RodDiameter":   between(10*units.Millimetre, 150*units.Millimetre),
+	"AttachmentSpec.RodSteel":      between(200*units.Megapascal, 1200*units.Megapascal),
+	"AttachmentSpec.RodUltimate":   between(200*units.Megapascal, 1500*units.Megapascal),
+	"AttachmentSpec.RodThreadArea": between(50*units.SquareMillimetre, 20000*units.SquareMillimetre),
+	"AttachmentSpec.PinDiameter":   between(10*units.Millimetre, 2000*units.Millimetre),
+	"BeamSpec.Steel":               between(200*units.Megapascal, maxSteel),
+	"BeamSpec.PlasticModulus":      between(1e-6*units.CubicMetre, 0.1*units.CubicMetre),
+	"BeamSpec.ShearArea":           between(100*units.SquareMillimetre, 0.5*units.SquareMetre),
+	"PlateSpec.Side":               between(50*units.Millimetre, 1*units.Metre),
+	"PlateSpec.Thickness":          between(5*units.Millimetre, 150*units.Millimetre),
+	"PlateSpec.Steel":              between(200*units.Megapascal, maxSteel),
 
 	// A soil lighter than about 12 kN/m³ would float (package foundation
 	// needs it heavier than water); φ' up to the 50° its bearing and earth
 	// pressure formulas are tabulated for.
-	"SoilSpec.UnitWeight": between(12*units.KilonewtonPerCubicMetre, 30*units.KilonewtonPerCubicMetre),
-	"SoilSpec.Friction":   between(0*units.Degree, 50*units.Degree),
-	"SoilSpec.Cohesion":   between(0*units.Pascal, 2*units.Megapascal),
-	"SoilSpec.Allowable":  between(10*units.Kilopascal, 20*units.Megapascal),
+	// A given zero counts (presence decides): c' and c_u may be zero, the
+	// others not.
+	"SoilSpec.UnitWeight":    between(12*units.KilonewtonPerCubicMetre, 30*units.KilonewtonPerCubicMetre),
+	"SoilSpec.Submerged":     between(2*units.KilonewtonPerCubicMetre, 25*units.KilonewtonPerCubicMetre),
+	"SoilSpec.Saturated":     between(12*units.KilonewtonPerCubicMetre, 32*units.KilonewtonPerCubicMetre),
+	"SoilSpec.Friction":      between(0*units.Degree, 50*units.Degree),
+	"SoilSpec.Cohesion":      between(0*units.Pascal, 2*units.Megapascal),
+	"SoilSpec.Undrained":     between(0*units.Pascal, 2*units.Megapascal), // very soft clay ~10 kPa to hard clay and weak rock
+	"SoilSpec.Interface":     plain(0.1, 1),
+	"SoilSpec.Allowable":     between(10*units.Kilopascal, 20*units.Megapascal),
+	"SoilSpec.RockStrength":  between(1*units.Megapascal, 300*units.Megapascal), // very weak to extremely strong rock
+	"SoilSpec.JointSpacing":  between(0.02*units.Metre, 50*units.Metre),
+	"SoilSpec.JointAperture": between(0*units.Millimetre, 100*units.Millimetre),
+	"SoilSpec.Groundwater":   between(-500*units.Metre, 9000*units.Metre),
 
 	"ComfortSpec.Damping": plain(0.001, maxDamping), // 0.1 % to 20 % of critical
 
@@ -604,6 +599,7 @@ type rangeField struct {
 	lim      *limit // nil: no range (not a number, or a struct or list to walk)
 	walk     bool   // a struct, or a list of structs, to walk into
 	level    bool   // a Level: its Z is checked unless None
+	ptr      bool   // a pointer: nil is not given; a value given is checked, zero too
 }
 
 var rangeFields sync.Map // reflect.Type → []rangeField
@@ -625,6 +621,9 @@ func fieldsOf(t reflect.Type) []rangeField {
 			rf.lim = &l
 		}
 		ft := f.Type
+		if ft.Kind() == reflect.Pointer {
+			ft, rf.ptr = ft.Elem(), true
+		}
 		if ft.Kind() == reflect.Slice {
 			ft = ft.Elem()
 		}
@@ -648,6 +647,13 @@ func (v *validator) rangesAt(name string, x reflect.Value) {
 	defer func() { v.depth-- }()
 	for _, f := range fieldsOf(x.Type()) {
 		fv := x.Field(f.index)
+		optional := f.optional
+		if f.ptr {
+			if fv.IsNil() {
+				continue
+			}
+			fv, optional = fv.Elem(), false // presence decides: a zero given is checked
+		}
 		switch {
 		case f.walk && fv.Kind() == reflect.Slice:
 			for i := range fv.Len() {
@@ -661,9 +667,9 @@ func (v *validator) rangesAt(name string, x reflect.Value) {
 				v.within(f.name, float64(l.Z), false, f.lim)
 			}
 		case fv.CanInt():
-			v.within(f.name, float64(fv.Int()), f.optional, f.lim)
+			v.within(f.name, float64(fv.Int()), optional, f.lim)
 		case fv.CanFloat():
-			v.within(f.name, fv.Float(), f.optional, f.lim)
+			v.within(f.name, fv.Float(), optional, f.lim)
 		}
 		if v.err != nil {
 			return

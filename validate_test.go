@@ -22,6 +22,9 @@ func numericLeaves(t reflect.Type, seen map[reflect.Type]bool, leaf func(key str
 			continue
 		}
 		ft := f.Type
+		if ft.Kind() == reflect.Pointer {
+			ft = ft.Elem()
+		}
 		if ft.Kind() == reflect.Slice {
 			ft = ft.Elem()
 		}
@@ -75,6 +78,24 @@ func setLeaves(v reflect.Value, path string, set func(path string, key string, f
 		}
 		fv := v.Field(i)
 		p := join(path, name)
+		if fv.Kind() == reflect.Pointer { // an optional field whose presence counts: give it
+			if fv.Type().Elem().Kind() == reflect.Struct {
+				continue
+			}
+			if _, ok := limits[t.Name()+"."+f.Name]; ok {
+				// Set a copy; the field is given only if set changed it.
+				tmp := reflect.New(fv.Type().Elem())
+				if !fv.IsNil() {
+					tmp.Elem().Set(fv.Elem())
+				}
+				before := tmp.Elem().Interface()
+				set(p, t.Name()+"."+f.Name, tmp.Elem())
+				if tmp.Elem().Interface() != before || !fv.IsNil() {
+					fv.Set(tmp)
+				}
+			}
+			continue
+		}
 		switch {
 		case f.Type == reflect.TypeFor[Level]():
 			set(p, t.Name()+"."+f.Name, fv.Field(0))

@@ -33,9 +33,16 @@ func (r *Report) Add(results ...Result) { r.Results = append(r.Results, results.
 
 // Worse reports whether a is a worse outcome than b: a more severe status,
 // or the same status with a higher ratio.
+//
+// Two results with no limit (NoLimit) and the same status compare by the
+// magnitude of their demand: the governing case of a reported force is the
+// one with the largest.
 func Worse(a, b Result) bool {
 	if a.Status != b.Status {
 		return a.Status.Worse(b.Status)
+	}
+	if a.NoLimit && b.NoLimit {
+		return math.Abs(a.Demand) > math.Abs(b.Demand)
 	}
 	return a.Ratio > b.Ratio
 }

@@ -285,3 +285,17 @@ func TestRowsInOneUnitAndIdleRowsSayWhy(t *testing.T) {
 	mixed := Compare("tower.eccentricity", "e", units.KindLength, 0.9, 1.2)
 	assert.Equal(t, []string{"0.9000 m", "1.200 m"}, Row(mixed, nil)[3:5])
 }
+
+func TestGoverningRecordIsTheLargest(t *testing.T) {
+	// A value with no limit governs where it is largest, not where it was
+	// first reported.
+	var r Report
+	r.Add(
+		Record("anchor.rod.force", "Rod force", units.KindForce, 100e3).For("left anchor", "permanent"),
+		Record("anchor.rod.force", "Rod force", units.KindForce, 310e3).For("left anchor", "crowd"),
+		Record("anchor.rod.force", "Rod force", units.KindForce, 250e3).For("left anchor", "wind"),
+	)
+	gov := r.Governing()
+	require.Len(t, gov, 1)
+	assert.Equal(t, "crowd", gov[0].Case)
+}

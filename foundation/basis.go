@@ -156,30 +156,34 @@ func (b Basis) equSet() actionSet {
 func (b Basis) geoSets() []actionSet {
 	sets := b.geoSetsLabelled()
 	for i := range sets {
-		if sets[i].terse = b.Terse; b.Terse {
-			sets[i].label = ""
-		}
+		sets[i].terse = b.Terse
 	}
 	return sets
 }
 
 func (b Basis) geoSetsLabelled() []actionSet {
+	label := func(format string, args ...any) string {
+		if b.Terse {
+			return "" // the design search's inner loop: no text
+		}
+		return fmt.Sprintf(format, args...)
+	}
 	if b.Approach == DesignApproach1 {
 		rh, rv, re := def(b.GammaRh, 1), def(b.GammaRv, 1), def(b.GammaRe, 1)
 		g1, q1 := def(b.GammaG, 1.35), def(b.GammaQ, 1.5)
 		g2, q2 := def(b.GammaGA2, 1.0), def(b.GammaQA2, 1.3)
 		p, c := def(b.GammaPhi, 1.25), def(b.GammaC, 1.25)
 		return []actionSet{
-			{label: fmt.Sprintf("EN 1997-1 Annex A, DA1 combination 1 (A1 γG %.2f, γQ %.2f; M1; R1 γR,h %.2f, γR,v %.2f, γR,e %.2f)", g1, q1, rh, rv, re),
+			{label: label("EN 1997-1 Annex A, DA1 combination 1 (A1 γG %.2f, γQ %.2f; M1; R1 γR,h %.2f, γR,v %.2f, γR,e %.2f)", g1, q1, rh, rv, re),
 				gG: g1, gGfav: 1, gQ: q1, gPhi: 1, gC: 1, gCu: 1, gRh: rh, gRv: rv, gRe: re},
-			{label: fmt.Sprintf("EN 1997-1 Annex A, DA1 combination 2 (A2 γG %.2f, γQ %.2f; M2 γφ' %.2f, γc' %.2f; R1)", g2, q2, p, c),
+			{label: label("EN 1997-1 Annex A, DA1 combination 2 (A2 γG %.2f, γQ %.2f; M2 γφ' %.2f, γc' %.2f; R1)", g2, q2, p, c),
 				gG: g2, gGfav: 1, gQ: q2, gPhi: p, gC: c, gCu: def(b.GammaCu, 1.4), gRh: rh, gRv: rv, gRe: re},
 		}
 	}
 	g, q := def(b.GammaG, 1.35), def(b.GammaQ, 1.5)
 	rh, rv, re := def(b.GammaRh, 1.1), def(b.GammaRv, 1.4), def(b.GammaRe, 1.4)
 	return []actionSet{{
-		label: fmt.Sprintf("EN 1997-1 Annex A, DA2 (A1 γG %.2f, γQ %.2f; M1; R2 γR,h %.2f, γR,v %.2f, γR,e %.2f)", g, q, rh, rv, re),
+		label: label("EN 1997-1 Annex A, DA2 (A1 γG %.2f, γQ %.2f; M1; R2 γR,h %.2f, γR,v %.2f, γR,e %.2f)", g, q, rh, rv, re),
 		gG:    g, gGfav: 1, gQ: q, gPhi: 1, gC: 1, gCu: 1, gRh: rh, gRv: rv, gRe: re,
 	}}
 }

@@ -138,6 +138,8 @@
 //   - BS 5930 and EN ISO 14688-2 — BSI, BS 5930:2015 Code of practice for
 //     ground investigations; CEN, EN ISO 14688-2:2018, consistency classes
 //     of undrained shear strength.
+//   - Strukts — "Foundation on clay", a worked example of a square pad on
+//     clay by EN 1997-1 D.3 (R/A = 5.14 s_c c_u + q), strukts.com/foundation-on-clay.
 //   - Abramowitz & Stegun — M. Abramowitz and I. A. Stegun, Handbook of
 //     Mathematical Functions, 1964, Table 25.4 (Gauss–Legendre nodes).
 //

@@ -86,19 +86,25 @@ type loadState struct{ v, h, m float64 }
 // states returns the design load states to try: on the allowable basis the
 // load as given; on a partial-factor set, the permanent part unfavourable
 // or favourable with the variable part present or absent.
-func (s actionSet) states(ld FootingLoad) []loadState {
+//
+// The states are returned in a fixed array with their count, so that the
+// design search's inner loop allocates nothing here.
+func (s actionSet) states(ld FootingLoad) ([4]loadState, int) {
+	var out [4]loadState
 	if s.allowable {
-		return []loadState{{float64(ld.Vertical), float64(ld.Horizontal), float64(ld.Moment)}}
+		out[0] = loadState{float64(ld.Vertical), float64(ld.Horizontal), float64(ld.Moment)}
+		return out, 1
 	}
 	qv, qh, qm := ld.variable()
 	pv, ph, pm := float64(ld.Vertical)-qv, float64(ld.Horizontal)-qh, float64(ld.Moment)-qm
-	var out []loadState
-	for _, gp := range []float64{s.gG, s.gGfav} {
-		for _, gq := range []float64{s.gQ, 0} {
-			out = append(out, loadState{gp*pv + gq*qv, gp*ph + gq*qh, gp*pm + gq*qm})
+	n := 0
+	for _, gp := range [2]float64{s.gG, s.gGfav} {
+		for _, gq := range [2]float64{s.gQ, 0} {
+			out[n] = loadState{gp*pv + gq*qv, gp*ph + gq*qh, gp*pm + gq*qm}
+			n++
 		}
 	}
-	return out
+	return out, n
 }
 
 func (f Footing) validate() error {
@@ -216,13 +222,14 @@ func (f Footing) AppendCheck(dst []check.Result, load FootingLoad, s Soil, m Met
 		ld.weight -= cover * math.Min(float64(f.Footprint)/plan, 1)
 	}
 	conds := s.Conditions()
-	sets := bs.geoSets()
+	var sets []actionSet
 	fsBear, fsSlide, over := 1.0, 1.0, check.Result{}
 	if !bs.PartialFactors {
 		sets = []actionSet{bs.allowableSet()}
 		fsBear, fsSlide = def(bs.Bearing, 3), def(bs.Sliding, 1.5)
 		over = f.overturning(load, ld, sets[0], def(bs.Overturning, 2))
 	} else {
+		sets = bs.geoSets()
 		over = f.overturning(load, ld, bs.equSet(), 1)
 	}
 	bearSets := sets
@@ -271,7 +278,8 @@ func (f Footing) bearing(load FootingLoad, s Soil, m Method, cond Condition, ld 
 	}
 	var worst check.Result
 	first := true
-	for _, st := range set.states(load) {
+	states, ns := set.states(load)
+	for _, st := range states[:ns] {
 		for _, gw := range weights {
 			n := gw*(ld.weight-ld.buoyancy) + st.v
 			var r check.Result
@@ -307,7 +315,8 @@ func (f Footing) sliding(load FootingLoad, s Soil, cond Condition, ld blockLoads
 	var worst check.Result
 	var worstN, worstE float64
 	var worstShear baseShear
-	for i, st := range set.states(load) {
+	states, ns := set.states(load)
+	for i, st := range states[:ns] {
 		n := set.gGfav*ld.weight - set.gG*ld.buoyancy + st.v
 		e := 0.0
 		if n > 0 {

@@ -79,3 +79,41 @@ func FuzzBearingCapacity(f *testing.F) {
 		}
 	})
 }
+
+// FuzzRockAnchorCheck: any rock anchor and pull give an error wrapping
+// ErrInvalid or results with no NaN and a non-negative cone weight.
+func FuzzRockAnchorCheck(f *testing.F) {
+	f.Add(4, 0.8, 0.032, 0.09, 4.0, 2.0, 30.0, 300e3, 25.0, 1.0, false, 0.3, true)
+	f.Add(1, 0.0, 0.025, 0.075, 3.0, 1.0, 0.0, 1e3, 89.0, -2.0, true, 0.0, false)
+	f.Add(12, 3.0, 0.05, 0.15, 10.0, 0.0, 60.0, 5e6, 5.0, 0.5, true, 0.2, true)
+	f.Fuzz(func(t *testing.T, n int, s, d, dh, lb, lf, psi, pull, angle, dw float64, water bool, side float64, partial bool) {
+		ra := foundation.RockAnchor{Count: n, Spacing: units.Length(s), BarDiameter: units.Length(d), YieldStrength: 500e6,
+			HoleDiameter: units.Length(dh), BondLength: units.Length(lb), FreeLength: units.Length(lf), ConeAngle: deg(psi)}
+		if water {
+			ra.Water = foundation.WaterAt(units.Length(dw))
+		}
+		if side > 0 {
+			ra.Plate = foundation.HeadPlate{Side: units.Length(side), Thickness: 0.02, Yield: 275e6}
+		}
+		rock := foundation.Soil{UnitWeight: 25e3, Friction: deg(40), IsRock: true, GroutBond: 1e6, Allowable: 2e6}
+		rs, err := ra.Check(units.Force(pull), deg(angle), rock, &foundation.Basis{PartialFactors: partial})
+		if err != nil {
+			if !errors.Is(err, foundation.ErrInvalid) {
+				t.Fatalf("error wraps no sentinel: %v", err)
+			}
+			return
+		}
+		for _, r := range rs {
+			for _, v := range []float64{r.Demand, r.Capacity, r.Ratio, r.Provided} {
+				if math.IsNaN(v) {
+					t.Fatalf("%s: NaN in %+v", r.ID, r)
+				}
+			}
+			for _, v := range r.Values {
+				if math.IsNaN(v.Value) || (v.Symbol == "W_c" && v.Value < 0) {
+					t.Fatalf("%s: value %s = %v", r.ID, v.Symbol, v.Value)
+				}
+			}
+		}
+	})
+}

@@ -33,8 +33,20 @@ func TestPresets(t *testing.T) {
 		}
 	}
 	_, err := foundation.LookupSoil("peat")
-	if !errors.Is(err, foundation.ErrUnknownSoil) || !strings.Contains(err.Error(), "dense sand") {
+	if !errors.Is(err, foundation.ErrUnknownSoil) || !strings.Contains(err.Error(), "dense sand") || strings.Contains(err.Error(), "did you mean") {
 		t.Errorf("peat: %v", err)
+	}
+	// A typo gets the nearest name.
+	_, err = foundation.LookupSoil("sofft clay")
+	if !errors.Is(err, foundation.ErrUnknownSoil) || !strings.Contains(err.Error(), `did you mean "soft clay"`) {
+		t.Errorf("typo: %v", err)
+	}
+	// Fine soils carry an undrained strength, coarse soils and rock none.
+	for _, p := range ps {
+		fine := strings.Contains(p.Name, "clay")
+		if fine != (p.Undrained > 0) {
+			t.Errorf("%s: undrained strength %v", p.Name, p.Undrained)
+		}
 	}
 }
 
@@ -63,6 +75,12 @@ func TestSoilValidate(t *testing.T) {
 		func(s *foundation.Soil) { s.UnitWeight = 9 * kNm3 }, // lighter than water, no submerged value
 		func(s *foundation.Soil) { s.Allowable = units.Pressure(math.Inf(1)) },
 		func(s *foundation.Soil) { s.GroutBond = -1 },
+		func(s *foundation.Soil) { s.Undrained = -20e3 },
+		func(s *foundation.Soil) { s.Submerged = 19 * kNm3 },                  // γ' > γ
+		func(s *foundation.Soil) { s.IsRock, s.Undrained = true, 50e3 },       // rock has no c_u
+		func(s *foundation.Soil) { s.RockStrength = 30e6 },                    // rock data on soil
+		func(s *foundation.Soil) { s.Friction = 0 },                           // no strength at all
+		func(s *foundation.Soil) { s.Undrained = units.Pressure(math.NaN()) }, // not a number
 	}
 	for i, f := range bad {
 		s := good

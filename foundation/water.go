@@ -49,8 +49,8 @@ type Water struct {
 func WaterAt(d units.Length) Water { return Water{Present: true, Depth: d} }
 
 func (w Water) validate(field string) error {
-	if w.Present {
-		return finite(field+".Depth", float64(w.Depth))
+	if d := float64(w.Depth); w.Present && (math.IsNaN(d) || math.IsInf(d, 0)) {
+		return finite(field+".Depth", d) // the name is built only on error
 	}
 	return nil
 }

@@ -1,0 +1,389 @@
+package sagspan
+
+import (
+	"errors"
+	"math"
+	"strings"
+	"testing"
+
+	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/foundation"
+	"github.com/sagspan/sagspan/units"
+)
+
+// TestSoilPresenceDecides: a field given in the description counts even
+// when it is zero; a field left out keeps the preset's value.
+func TestSoilPresenceDecides(t *testing.T) {
+	stiff, _ := foundation.LookupSoil("stiff clay")
+	data := mutate(t, func(m map[string]any) {
+		obj(m, "banks", "left")["soil"] = map[string]any{"preset": "stiff clay", "cohesion": "0 kPa"}
+		obj(m, "banks", "right")["soil"] = map[string]any{"preset": "stiff clay", "undrained_strength": "0 kPa", "unit_weight": "20 kN/m3"}
+	})
+	b, err := Parse(data)
+	if err != nil {
+		t.Fatal(err)
+	}
+	left, err := b.Banks.Left.Soil.soil()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if left.Cohesion != 0 || left.Friction != stiff.Friction || left.Undrained != stiff.Undrained {
+		t.Errorf("\"cohesion\": \"0 kPa\" over stiff clay gave %+v", left)
+	}
+	if !strings.Contains(left.Source, "overridden in the bridge description: cohesion") {
+		t.Errorf("source %q does not say what was overridden", left.Source)
+	}
+	right, err := b.Banks.Right.Soil.soil()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if right.Undrained != 0 || right.Cohesion != stiff.Cohesion || right.UnitWeight != 20e3 {
+		t.Errorf("overrides gave %+v", right)
+	}
+	// Written back as JSON, a zero given stays given.
+	data, err = b.MarshalJSON()
+	if err != nil {
+		t.Fatal(err)
+	}
+	back, err := Parse(data)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if c := back.Banks.Left.Soil.Cohesion; c == nil || *c != 0 {
+		t.Errorf("round trip lost the given zero cohesion: %v", c)
+	}
+	// The whole chain then checks the right bank drained only.
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, r := range a.Report.Results {
+		if strings.HasPrefix(r.Element, "right") && strings.Contains(r.Basis, "undrained") &&
+			!strings.Contains(r.Basis, "no undrained strength given") {
+			t.Fatalf("%s %s checked undrained with c_u removed: %s", r.ID, r.Element, r.Basis)
+		}
+	}
+}
+
+// TestSiteSoil: a soil from the site's own parameters alone, with a
+// saturated unit weight, in Go with Given.
+func TestSiteSoil(t *testing.T) {
+	kNm3, kPa := units.KilonewtonPerCubicMetre, units.Kilopascal
+	s := SoilSpec{UnitWeight: Given(18 * kNm3), Saturated: Given(19.5 * kNm3), Friction: Given(units.FromDegrees(27)),
+		Cohesion: Given(3 * kPa), Undrained: Given(45 * kPa), BearingMethod: "Vesic"}
+	soil, err := s.soil()
+	if err != nil {
+		t.Fatal(err)
+	}
+	// γ' = γsat − γw = 19.5 − 9.81 kN/m³ [R: definition].
+	near(t, "γ'", float64(soil.Submerged), 19.5e3-9.81e3, 1e-12)
+	if soil.Undrained != 45e3 || soil.Cohesion != 3e3 || soil.IsRock {
+		t.Errorf("site soil %+v", soil)
+	}
+	if m, _ := s.method(); m != foundation.Vesic {
+		t.Errorf("method %v", m)
+	}
+}
+
+// TestBadGround: every soil and anchor combination the analysis cannot
+// take is refused at validation with its field path, never by a panic, a
+// NaN or an error during the analysis.
+func TestBadGround(t *testing.T) {
+	soil := func(side string, s map[string]any) func(map[string]any) {
+		return func(m map[string]any) { obj(m, "banks", side)["soil"] = s }
+	}
+	rockAnchor := map[string]any{"type": "rock", "bars": 4, "bar_diameter": "32 mm", "bar_strength": "500 MPa",
+		"hole_diameter": "90 mm", "bond_length": "4 m", "free_length": "2 m"}
+	tests := []struct {
+		name   string
+		change func(m map[string]any)
+		field  string
+		says   string
+	}{
+		{"negative undrained strength", soil("left", map[string]any{"preset": "soft clay", "undrained_strength": "-20 kPa"}),
+			"banks.left.soil.undrained_strength", "-20.00 kPa is outside"},
+		{"γ' greater than γ", soil("right", map[string]any{"preset": "dense sand", "submerged_unit_weight": "21 kN/m3"}),
+			"banks.right.soil.submerged_unit_weight", "not less than the unit weight"},
+		{"γsat light as water", soil("right", map[string]any{"preset": "dense sand", "saturated_unit_weight": "9 kN/m3"}),
+			"banks.right.soil.saturated_unit_weight", "outside the plausible range"},
+		{"γ' and γsat both", soil("right", map[string]any{"preset": "dense sand", "saturated_unit_weight": "20 kN/m3", "submerged_unit_weight": "10 kN/m3"}),
+			"banks.right.soil.saturated_unit_weight", "not both"},
+		{"water above the flood", soil("left", map[string]any{"preset": "dense sand", "groundwater_elevation": "105 m"}),
+			"banks.left.soil.groundwater_elevation", "above the design flood"},
+		{"preset typo", soil("right", map[string]any{"preset": "sofft clay"}), "banks.right.soil.preset", `did you mean "soft clay"`},
+		{"friction zero for undrained", soil("left", map[string]any{"preset": "soft clay", "friction": "0 deg", "cohesion": "20 kPa"}),
+			"banks.left.soil.friction", "undrained_strength"},
+		{"site soil without friction", soil("left", map[string]any{"unit_weight": "18 kN/m3", "undrained_strength": "30 kPa"}),
+			"banks.left.soil.friction", "missing"},
+		{"site soil without weight", soil("left", map[string]any{"friction": "30 deg"}), "banks.left.soil.unit_weight", "missing"},
+		{"unit weight in the wrong unit", soil("left", map[string]any{"preset": "gravel", "unit_weight": 1900}),
+			"banks.left.soil.unit_weight", "outside the plausible range"},
+		{"rock with undrained strength", soil("left", map[string]any{"preset": "sound rock", "allowable_bearing": "2 MPa", "undrained_strength": "50 kPa"}),
+			"banks.left.soil.undrained_strength", "rock"},
+		{"rock without bearing data", soil("left", map[string]any{"preset": "sound rock"}), "banks.left.soil.allowable_bearing", "K_sp"},
+		{"joints too close for K_sp", soil("left", map[string]any{"preset": "sound rock", "rock_strength": "40 MPa", "joint_spacing": "0.1 m"}),
+			"banks.left.soil.joint_spacing", "0.3 m"},
+		{"rock data on soil", soil("left", map[string]any{"preset": "gravel", "rock_strength": "40 MPa"}), "banks.left.soil.rock_strength", "rock only"},
+		{"unknown bearing method", soil("left", map[string]any{"preset": "gravel", "bearing_method": "Terzagi"}), "banks.left.soil.bearing_method", "Vesic"},
+		{"rock anchor in sand", func(m map[string]any) { obj(m, "banks", "right")["anchor"] = rockAnchor }, "banks.right.anchor.type", "needs rock"},
+		{"rock anchor without grout bond", func(m map[string]any) {
+			obj(m, "banks", "right")["anchor"] = rockAnchor
+			obj(m, "banks", "right")["soil"] = map[string]any{"unit_weight": "25 kN/m3", "friction": "45 deg", "rock": true, "allowable_bearing": "2 MPa"}
+		}, "banks.right.anchor.grout_bond", "missing"},
+		{"deadman taller than its depth", func(m map[string]any) {
+			obj(m, "banks", "left")["anchor"] = map[string]any{"type": "deadman", "length": "1 m", "width": "5 m", "height": "2 m", "depth": "1.5 m"}
+		}, "banks.left.anchor.height", "above the ground"},
+		{"deadman in rock", func(m map[string]any) {
+			obj(m, "banks", "left")["anchor"] = map[string]any{"type": "deadman", "length": "1 m", "width": "5 m", "height": "1 m", "depth": "1.5 m"}
+			obj(m, "banks", "left")["soil"] = map[string]any{"preset": "sound rock", "allowable_bearing": "2 MPa"}
+		}, "banks.left.anchor.type", "deadman"},
+		{"attachment outside the block", func(m map[string]any) { obj(m, "banks", "left", "anchor")["attach_x"] = "6 m" },
+			"banks.left.anchor.attach_x", "beyond the front"},
+		{"unknown termination", func(m map[string]any) {
+			obj(m, "banks", "left", "anchor")["attachment"] = map[string]any{"kind": "loop", "termination": "knot", "pin_diameter": "200 mm"}
+		}, "banks.left.anchor.attachment.termination", "grips"},
+		{"pin thinner than the rope", func(m map[string]any) {
+			obj(m, "banks", "left", "anchor")["attachment"] = map[string]any{"kind": "loop", "termination": "grips", "pin_diameter": "20 mm"}
+		}, "banks.left.anchor.attachment.pin_diameter", "thinner"},
+		{"rods missing", func(m map[string]any) {
+			obj(m, "banks", "left", "anchor")["attachment"] = map[string]any{"kind": "rod", "termination": "ferrule"}
+		}, "banks.left.anchor.attachment.rods", "missing"},
+		{"plate on a block", func(m map[string]any) {
+			obj(m, "banks", "left", "anchor")["plate"] = map[string]any{"side": "0.2 m", "thickness": "20 mm", "steel": "275 MPa"}
+		}, "banks.left.anchor.type", "rock anchor"},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			b, err := Parse(mutate(t, tt.change))
+			if err == nil {
+				a, err2 := Check(b, nil)
+				t.Fatalf("no error at validation (analysis: %v, %d results)", err2, len(resultsOf(a)))
+			}
+			if !errors.Is(err, ErrInvalid) {
+				t.Errorf("error %v does not wrap ErrInvalid", err)
+			}
+			var fe *FieldError
+			if !errors.As(err, &fe) {
+				t.Fatalf("error %T is not a *FieldError: %v", err, err)
+			}
+			if fe.Field != tt.field {
+				t.Errorf("field %q, want %q (error: %v)", fe.Field, tt.field, err)
+			}
+			if !strings.Contains(err.Error(), tt.says) {
+				t.Errorf("error %q does not say %q", err, tt.says)
+			}
+		})
+	}
+}
+
+func resultsOf(a *Analysis) []check.Result {
+	if a == nil {
+		return nil
+	}
+	return a.Report.Results
+}
+
+// loadTestdata loads a bridge description from testdata.
+func loadTestdata(t *testing.T, name string) Bridge {
+	t.Helper()
+	b, err := LoadFile("testdata/" + name)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return b
+}
+
+// governingOf returns the governing result of a check on an element.
+func governingOf(t *testing.T, a *Analysis, id, element string) check.Result {
+	t.Helper()
+	for _, r := range a.Report.Governing() {
+		if r.ID == id && r.Element == element {
+			return r
+		}
+	}
+	t.Fatalf("no %s for %s", id, element)
+	return check.Result{}
+}
+
+// noNaNIn fails t if any number of the report is NaN.
+func noNaNIn(t *testing.T, a *Analysis) {
+	t.Helper()
+	for _, r := range a.Report.Results {
+		for _, x := range []float64{r.Demand, r.Capacity, r.Ratio} {
+			if math.IsNaN(x) {
+				t.Fatalf("NaN in %s %s %s", r.ID, r.Element, r.Case)
+			}
+		}
+		for _, v := range r.Values {
+			if math.IsNaN(v.Value) {
+				t.Fatalf("NaN value %s in %s %s %s", v.Symbol, r.ID, r.Element, r.Case)
+			}
+		}
+	}
+}
+
+// TestSoftClayBridge checks testdata/soft_clay.json end to end: an invented
+// river flat of soft clay (γ 17, γsat 18 kN/m³, φ' 26°, c' 2 kPa,
+// c_u 18 kPa). Its footings and anchor blocks are sized for the long-term
+// (drained) strength and fail in the short-term (undrained) condition,
+// which the report names; the same soil checked drained only passes.
+func TestSoftClayBridge(t *testing.T) {
+	b := loadTestdata(t, "soft_clay.json")
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	noNaNIn(t, a)
+	if len(groundFailures(a)) == 0 {
+		t.Fatal("no ground check of the soft-clay bridge fails; want the undrained condition to fail")
+	}
+	for _, el := range []string{"left footing", "right footing", "left anchor", "right anchor"} {
+		id := "footing.bearing"
+		if strings.Contains(el, "anchor") {
+			id = "anchor.bearing"
+		}
+		r := governingOf(t, a, id, el)
+		uu, _ := r.Value("U_un")
+		ud, _ := r.Value("U_dr")
+		if r.Status != check.Fail || !strings.HasPrefix(r.Basis, "undrained (short-term) condition governs") || !(uu.Value > 1 && ud.Value < 1) {
+			t.Errorf("%s %s: %v, U_un %.3f, U_dr %.3f, basis %q", el, id, r.Status, uu.Value, ud.Value, r.Basis)
+		}
+	}
+	// The left footing's undrained capacity by hand from EN 1997-1 D.3:
+	// qult = (π + 2) c_u s_c i_c + q, s_c = 1 + 0.2 B'/L',
+	// i_c = ½(1 + √(1 − H/(A'c_u))), q = γ·1.0 m (the water lies deep);
+	// the allowable basis divides by 3. B', L' and H are the result's own.
+	r := governingOf(t, a, "footing.bearing", "left footing")
+	val := func(s string) float64 { v, _ := r.Value(s); return v.Value }
+	bp, lp, h := val("B'"), val("L'"), val("H")
+	qult := (math.Pi+2)*18e3*(1+0.2*bp/lp)*0.5*(1+math.Sqrt(1-h/(bp*lp*18e3))) + 17e3*1.0
+	near(t, "undrained footing capacity by hand", r.Capacity, qult/3, 1e-9)
+
+	// The same soil, drained only: every ground check passes.
+	for _, k := range []*Bank{&b.Banks.Left, &b.Banks.Right} {
+		k.Soil.Undrained = Given(units.Pressure(0))
+	}
+	a, err = Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, r := range groundFailures(a) {
+		t.Errorf("drained only: %s %s %s ratio %.3f", r.ID, r.Element, r.Case, r.Ratio)
+	}
+	r = governingOf(t, a, "footing.bearing", "left footing")
+	if !strings.HasPrefix(r.Basis, "drained (long-term) condition only") {
+		t.Errorf("drained-only basis %q", r.Basis)
+	}
+}
+
+// TestRiverBankBridge checks testdata/river_bank.json end to end: the right
+// bank's anchor block stands 0.4 m below the design flood (102.0 m), its
+// base at 98.6 m under groundwater at 99.0 m. The flood case governs the
+// block, whose basis names the design flood; its uplift by hand: the
+// 7 × 6.5 × 3 m block is wholly under water, so it loses γw/γc =
+// 9.81/24 = 40.9 % of its weight; in the other cases 0.4 m of it lies in
+// the groundwater: U = 9.81·7·6.5·0.4 = 178.5 kN.
+func TestRiverBankBridge(t *testing.T) {
+	a, err := Check(loadTestdata(t, "river_bank.json"), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	noNaNIn(t, a)
+	for _, r := range groundFailures(a) {
+		t.Errorf("%s %s %s ratio %.3f", r.ID, r.Element, r.Case, r.Ratio)
+	}
+	for _, id := range []string{"anchor.sliding", "anchor.overturning", "anchor.uplift", "anchor.bearing"} {
+		r := governingOf(t, a, id, "right anchor")
+		if r.Case != "flood with crowd" || !strings.Contains(r.Basis, "design flood at 102.0 m") {
+			t.Errorf("%s: governing case %q, basis %q; want the flood", id, r.Case, r.Basis)
+		}
+	}
+	up := find(t, a.Report, "anchor.uplift", "right anchor", "flood with crowd")
+	w, _ := up.Value("W")
+	u, _ := up.Value("U")
+	near(t, "flooded block's lost weight", u.Value/w.Value, 9.81/24, 1e-12)
+	perm := find(t, a.Report, "anchor.uplift", "right anchor", "permanent")
+	u, _ = perm.Value("U")
+	near(t, "uplift in the groundwater", u.Value, 9.81e3*7*6.5*0.4, 1e-9)
+	if !strings.Contains(perm.Basis, "groundwater at 99.00 m") {
+		t.Errorf("permanent basis %q does not name the groundwater", perm.Basis)
+	}
+}
+
+// TestRockGorgeBridge checks testdata/rock_gorge.json end to end: the left
+// bank is rock described by the site (q_u 35 MPa, joints 0.5 m apart and
+// 1 mm open) with six grouted bars; the right bank weathered rock with an
+// allowable pressure of 1.2 MPa and a block. Footings bear by the K_sp
+// method and the allowable pressure, never by soil N-factors. By hand:
+// K_sp = (3 + 0.5/2)/(10 √(1 + 300·0.001/0.5)) = 0.25693 for the 2 m wide
+// left footing, q_a = 8.993 MPa.
+func TestRockGorgeBridge(t *testing.T) {
+	a, err := Check(loadTestdata(t, "rock_gorge.json"), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	noNaNIn(t, a)
+	for _, r := range groundFailures(a) {
+		t.Errorf("%s %s %s ratio %.3f", r.ID, r.Element, r.Case, r.Ratio)
+	}
+	left := governingOf(t, a, "footing.bearing", "left footing")
+	near(t, "K_sp footing capacity", left.Capacity, 35e6*3.25/(10*math.Sqrt(1.6)), 1e-12)
+	right := governingOf(t, a, "footing.bearing", "right footing")
+	near(t, "allowable on rock", right.Capacity, 1.2e6, 1e-12)
+	for _, r := range []check.Result{left, right, governingOf(t, a, "anchor.bearing", "right anchor")} {
+		if _, ok := r.Value("N_q"); ok || !strings.HasPrefix(r.Basis, "rock:") {
+			t.Errorf("%s %s: soil theory on rock, basis %q", r.ID, r.Element, r.Basis)
+		}
+	}
+	cone := governingOf(t, a, "anchor.rock.cone", "left anchor")
+	if n, _ := cone.Value("n"); n.Value != 6 {
+		t.Errorf("cone of %v bars", n.Value)
+	}
+	for _, id := range []string{"anchor.rock.thread", "anchor.rock.plate", "anchor.rock.platebearing", "anchor.rod.thread", "anchor.attachment"} {
+		found := false
+		for _, r := range a.Report.Governing() {
+			found = found || r.ID == id
+		}
+		if !found {
+			t.Errorf("no %s in the report", id)
+		}
+	}
+}
+
+// groundFailures returns the failing results of the footing and anchor
+// checks (the test bridges' own subject; the superstructure is checked by
+// the tests of its packages).
+func groundFailures(a *Analysis) []check.Result {
+	var out []check.Result
+	for _, r := range a.Report.Failures() {
+		if strings.HasPrefix(r.ID, "footing.") || strings.HasPrefix(r.ID, "anchor.") {
+			out = append(out, r)
+		}
+	}
+	return out
+}
+
+// TestDemoOnSoftClay: the demo bridge set on soft clay with c_u 20 kPa
+// (the case the first version passed) fails in undrained terms: the footing
+// bears about 45 kPa allowed against about 95 kPa acting, and the anchor
+// block slides (undrained factor of safety about 1.0 against 1.5; drained,
+// φ' 22°, it fails too, as it did before).
+func TestDemoOnSoftClay(t *testing.T) {
+	b := Demo()
+	for _, k := range []*Bank{&b.Banks.Left, &b.Banks.Right} {
+		k.Soil = SoilSpec{Preset: "soft clay", Undrained: Given(20 * units.Kilopascal)}
+	}
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	noNaNIn(t, a)
+	bear := governingOf(t, a, "footing.bearing", "left footing")
+	if uu, _ := bear.Value("U_un"); bear.Status != check.Fail || !(uu.Value > 1) || !strings.HasPrefix(bear.Basis, "undrained") {
+		t.Errorf("footing on soft clay: %v, U_un %v, basis %q", bear.Status, uu.Value, bear.Basis)
+	}
+	slide := governingOf(t, a, "anchor.sliding", "left anchor")
+	if uu, _ := slide.Value("U_un"); slide.Status != check.Fail || !(uu.Value > 1) {
+		t.Errorf("anchor sliding on soft clay: %v, U_un %v", slide.Status, uu.Value)
+	}
+}
