@@ -41,7 +41,7 @@ func (a *Analysis) comfortSection() check.Section {
 	modes := check.Section{ID: "modes", Title: "Natural modes (permanent load)",
 		Text: []string{
 			fmt.Sprintf("Modes: %s, %d elements along the span, %s; mesh error is the estimated discretisation error (the lumped chain reads low). "+
-				"Closed form: Irvine & Caughey (1974, from memory), λ² = %.1f, beside the first mode of each kind it gives.",
+				"Closed form: Irvine & Caughey (1974, from memory), ropes held at the saddles, λ² = %.1f, beside the first mode of each kind it gives.",
 				modalMethod, c.Modal.Elements, ends, cm.LambdaSq),
 			fmt.Sprintf("Walkers: %s traffic, %.1f per m²; the harmonic load model of Sétra 2006 (from memory) on each mode in a critical range "+
 				"(Živanović, Pavić & Reynolds 2005, from memory), a single mode at resonance, a = F*/(2ξM*), with the modal mass at unit largest "+
