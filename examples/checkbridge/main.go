@@ -1,7 +1,8 @@
 // Command checkbridge runs the whole-bridge check of sagspan on a bridge
 // description and writes the report: the design basis, the failures first
 // when any, the governing case of every check, the rope states, the
-// natural frequencies and the erection tables.
+// natural modes and walkers' comfort, and the erection tables; -modes-svg
+// draws the first mode shapes.
 //
 // With no file it checks the built-in demo bridge (an invented bridge at an
 // invented site). Flags may come before or after the file:
@@ -48,7 +49,9 @@ func run(args []string, stdout, stderr io.Writer) int {
 	all := fs.Bool("all", false, "list every result of every load case, not only the governing ones")
 	svg := fs.String("svg", "", "write the elevation drawing to this SVG file")
 	demo := fs.Bool("demo-json", false, "print the demo bridge description (a template for your own) and exit")
-	strict := fs.Bool("strict-comfort", false, "fail, rather than flag, frequencies in the ranges walkers excite")
+	modes := fs.String("modes-svg", "", "write the drawing of the first mode shapes to this SVG file")
+	strict := fs.Bool("strict-comfort", false, "fail, rather than flag, accelerations under walkers beyond their limits and crowds beyond the lock-in number")
+	fast := fs.Bool("no-comfort", false, "skip the modal analysis and walkers' response (closed-form frequencies only)")
 	files, err := cli.Parse(fs, args, usage, stdout, stderr)
 	if errors.Is(err, flag.ErrHelp) {
 		return 0
@@ -70,7 +73,7 @@ func run(args []string, stdout, stderr io.Writer) int {
 		fmt.Fprintf(stderr, "checkbridge: unknown format %q; want text, markdown, json or html\n", *format)
 		return 1
 	}
-	a, err := sagspan.Check(b, &sagspan.Options{StrictComfort: *strict})
+	a, err := sagspan.Check(b, &sagspan.Options{StrictComfort: *strict, SkipComfort: *fast})
 	if err != nil {
 		fmt.Fprintln(stderr, err)
 		return 1
@@ -89,6 +92,13 @@ func run(args []string, stdout, stderr io.Writer) int {
 			return 1
 		}
 		fmt.Fprintf(stderr, "checkbridge: drawing written to %s\n", *svg)
+	}
+	if *modes != "" {
+		if err := writeFile(*modes, a.WriteModesSVG); err != nil {
+			fmt.Fprintln(stderr, "checkbridge:", err)
+			return 1
+		}
+		fmt.Fprintf(stderr, "checkbridge: mode shapes written to %s\n", *modes)
 	}
 	if a.Report.Status() == check.Fail {
 		return 2

@@ -63,6 +63,26 @@ func TestRun(t *testing.T) {
 	if b, err := os.ReadFile(svg); err != nil || !bytes.Contains(b, []byte("<svg")) {
 		t.Errorf("no SVG written: %v", err)
 	}
+
+	modes := filepath.Join(dir, "modes.svg")
+	if code := run([]string{"-modes-svg", modes}, &out, &errOut); code != 0 {
+		t.Fatalf("modes-svg: exit %d", code)
+	}
+	if b, err := os.ReadFile(modes); err != nil || !bytes.Contains(b, []byte("Mode 1:")) {
+		t.Errorf("no mode drawing written: %v", err)
+	}
+	if code := run([]string{"-no-comfort", "-modes-svg", modes}, &out, &errOut); code != 1 {
+		t.Errorf("mode drawing with the modal analysis off: exit %d, want 1", code)
+	}
+	out.Reset()
+	if code := run(nil, &out, &errOut); code != 0 {
+		t.Fatalf("demo: exit %d", code)
+	}
+	for _, want := range []string{"Natural modes (permanent load)", "Closed form", "Acceleration", "Lateral lock-in"} {
+		if !strings.Contains(out.String(), want) {
+			t.Errorf("the demo report lacks %q", want)
+		}
+	}
 }
 
 func TestCommandLine(t *testing.T) {
