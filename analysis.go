@@ -85,9 +85,6 @@ type GroupState struct {
 	// Saddle is the force on each tower column from this group's saddle.
 	Saddle [2]tower.LevelForce
 	shape  cable.Loaded
-	// feed is the rope rendered into the span from the backstays, a start
-	// for nearby states.
-	feed float64
 }
 
 // CaseState is the state of the whole bridge under one load case.
