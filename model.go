@@ -42,7 +42,7 @@ type model struct {
 	// variant's grooves): a group that carries no crowd hangs alike under
 	// every crowd, and a case's service and design states often share
 	// groups.
-	states map[stateKey]GroupState
+	states *stateCache
 }
 
 func newModel(b Bridge) (*model, error) {
