@@ -164,22 +164,57 @@ type sink interface{ add(check.Result) }
 
 func (m *model) run(a *Analysis, opts *Options) error {
 	// Each variant of groove behaviour (one, unless the description leaves
-	// a fixed saddle's groove open) is analysed and checked in full; the
-	// report keeps each check's worst variant. The states kept are the
+	// a fixed saddle's groove open) is analysed and checked in full, each
+	// on its own copy of the model and, where there are several, at once;
+	// the report keeps each check's worst variant. The states kept are the
 	// first variant's (free grooves where not given).
-	var all merged
-	for k, v := range m.variants() {
-		m.grooves = v.grooves
-		service, design, err := m.checkAll(labelSink{&all, v.label}, true)
-		if err != nil {
-			return err
-		}
+	vs := m.variants()
+	type variantResult struct {
+		results         collected
+		service, design []CaseState
+		err             error
+	}
+	res := make([]variantResult, len(vs))
+	var wg sync.WaitGroup
+	var first *model
+	for k, v := range vs {
+		c := m.clone()
+		c.grooves = v.grooves
 		if k == 0 {
-			a.Service, a.Design = service, design
+			first = c
+		}
+		check := func() {
+			r := &res[k]
+			r.service, r.design, r.err = c.checkAll(&r.results, true)
+		}
+		if len(vs) == 1 {
+			check()
+		} else {
+			wg.Go(check)
 		}
 	}
-	m.grooves = m.variants()[0].grooves
-	a.Report.Add(all.results...)
+	wg.Wait()
+	for _, r := range res {
+		if r.err != nil {
+			return r.err
+		}
+	}
+	a.Service, a.Design = res[0].service, res[0].design
+	// The model goes on with the first variant's states (its copy is done
+	// with them), as the erection table may meet them again.
+	m.grooves, m.states = vs[0].grooves, first.states
+	if len(vs) == 1 {
+		// One variant: every result is its own (see merged).
+		a.Report.Add(res[0].results...)
+	} else {
+		var all merged
+		for k, r := range res {
+			for _, x := range r.results {
+				all.add(x, vs[k].label)
+			}
+		}
+		a.Report.Add(all.results...)
+	}
 	var grooves collected
 	if err := m.grooveChecks(&grooves); err != nil {
 		return err

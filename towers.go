@@ -271,11 +271,3 @@ func worseOf(a, b check.Result) bool {
 	}
 	return check.Worse(a, b)
 }
-
-// labelSink passes results to a merged report under a variant's label.
-type labelSink struct {
-	m     *merged
-	label string
-}
-
-func (s labelSink) add(r check.Result) { s.m.add(r, s.label) }
