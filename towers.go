@@ -1,6 +1,7 @@
 package sagspan
 
 import (
+	"math"
 	"strconv"
 	"strings"
 
@@ -88,15 +89,40 @@ func (m *model) variants() []variant {
 }
 
 // restraint returns how the column top of one bank is held along the
-// bridge in the variant analysed: a fixed saddle with the rope clamped is
-// braced by the span and backstay; a free groove, a groove with friction
-// (once the rope renders it no longer braces the top: conservative), a
-// sliding or a roller saddle leaves the top free (cantilever).
-func (m *model) restraint(s Side) tower.Restraint {
+// bridge in the variant analysed, and the lateral stiffness (N/m) holding
+// it: a fixed saddle with the rope clamped is held by the stretch of the
+// backstays (a spring: see topSpring); a free groove, a groove with
+// friction (once the rope renders it no longer braces the top:
+// conservative), a sliding or a roller saddle leaves the top free
+// (cantilever).
+func (m *model) restraint(s Side) (tower.Restraint, float64) {
 	if saddleKind(m.bank(s).Tower.Saddle) == tower.Fixed && m.grooves[s] == tower.ClampedGroove {
-		return tower.HeldTop
+		return tower.SpringTop, m.topSpring(s)
 	}
-	return tower.FreeTop
+	return tower.FreeTop, 0
+}
+
+// topSpring returns the lateral stiffness along the bridge with which the
+// clamped ropes hold the top of one bank's column: each group's backstay,
+// of axial stiffness EA over its chord c at angle β, resists a sway δ of
+// its saddle at height y with EA cos²β/c; referred to the column top
+// (length l) by the fourth power of y/l, the square of a sway shape
+// (y/l)² that lies below the column's own, so that a lower saddle counts
+// for less than it does (conservative). The span side, which slackens as
+// the top leans toward it, and the rope tension's own stiffness are not
+// counted (conservative).
+//
+//	K = Σ EA cos²β / c · (y/l)⁴
+func (m *model) topSpring(s Side) float64 {
+	l := float64(m.column(s).Height)
+	var k float64
+	for i, g := range m.groups {
+		bs := m.backstays[i][s]
+		c := math.Cos(float64(bs.angle))
+		y := float64(m.saddle(s, g, 0).Height) / l
+		k += float64(g.elastic.EA) * c * c / float64(bs.chord) * y * y * y * y
+	}
+	return k
 }
 
 // eccentricity returns the eccentricity settings of one bank's tower in
@@ -175,13 +201,14 @@ func (m *model) member(side Side, des, perm CaseState) (tower.ColumnResults, err
 	a := tower.ColumnActions{N: r.Vertical, Along: r.BaseMoment, Across: des.LateralMoment[side],
 		NQP: p.Vertical, AlongQP: p.BaseMoment, AcrossQP: perm.LateralMoment[side]}
 	length := m.column(side).Height
+	along, spring := m.restraint(side)
 	if tube, legs := m.steel(side); legs > 0 {
 		spec := m.bank(side).Tower.Section
 		sc := tower.SteelColumn{Tube: tube, Legs: legs, Spacing: spec.Spacing, Panel: spec.Panel,
-			Length: length, Along: m.restraint(side), Across: tower.FreeTop}
+			Length: length, Along: along, AlongSpring: spring, Across: tower.FreeTop}
 		return sc.Check(a)
 	}
-	rc := tower.RCColumn{Section: m.section(side), Length: length, Along: m.restraint(side), Across: tower.FreeTop,
+	rc := tower.RCColumn{Section: m.section(side), Length: length, Along: along, AlongSpring: spring, Across: tower.FreeTop,
 		Creep: m.bank(side).Tower.Section.Creep}
 	return rc.Check(a)
 }

@@ -7,6 +7,7 @@ import (
 	"testing"
 
 	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/tower"
 	"github.com/sagspan/sagspan/units"
 )
 
@@ -207,7 +208,8 @@ func TestRollerTravel(t *testing.T) {
 }
 
 // TestSlenderTowerInChain: a 7 m tall 0.35 × 0.35 m column under roller
-// saddles is a cantilever (l0 = 14 m) and the chain finds it buckles.
+// saddles is a cantilever on a footing that turns a little (base
+// flexibility 0.1, l0 = 2.199 × 7 m) and the chain finds it buckles.
 func TestSlenderTowerInChain(t *testing.T) {
 	b := loadTestBridge(t, "level.json")
 	for _, bank := range []*Bank{&b.Banks.Left, &b.Banks.Right} {
@@ -223,8 +225,45 @@ func TestSlenderTowerInChain(t *testing.T) {
 	}
 	r := find(t, a.Report, "tower.column_section", "left tower", "crowd, full span")
 	if r.Status != check.Fail || r.Kind != units.KindForce || !strings.Contains(strings.Join(r.Notes, " "), "buckles") ||
-		!strings.Contains(r.Basis, "l0 = 2 l") {
+		!strings.Contains(r.Basis, "top free (cantilever), base flexibility k 0.1") {
 		t.Errorf("slender roller tower: %v %q %q", r, r.Notes, r.Basis)
+	}
+	if l0, _ := r.Value("l0"); math.Abs(l0.Value/7-2.1987) > 1e-3 {
+		t.Errorf("cantilever on the default base: l0 %g m, want 2.199 × 7 m", l0.Value)
+	}
+}
+
+// TestClampedTopIsASpring: a fixed saddle with the rope clamped holds the
+// column top only as stiffly as the backstays stretch; on
+// testdata/level.json that spring is soft against the column and l0 is far
+// above the 0.7 l of a rigidly held top. By hand:
+//
+//	backstay: c = √(10² + 3²) = 10.440 m, cos²β = 100/109, EA = 1.2438e8 N (levelEA)
+//	K = EA cos²β/c · (y/l)⁴ = 1.0930e7 N/m   (saddle at the column top, y = l = 2 m)
+//	EI_max = √(25/20)·0.20·E_cm/1.2·0.6⁴/12 + 200 GPa·4·π·8²e-6·0.25²   (EN 1992-1-1 5.8.7.2, k2 = 0.20, φ_ef = 0)
+//	       with E_cm = 22·3.3^0.3 GPa (Table 3.1)
+//	s = K l³/EI_max,  l0 = l·EffectiveLengthFactor(0.1, s)   (checked against beam finite elements in package tower)
+func TestClampedTopIsASpring(t *testing.T) {
+	b := withGrooves(loadTestBridge(t, "level.json"), "clamped", 0)
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := find(t, a.Report, "tower.column_section", "left tower", "permanent")
+	k := levelEA * (100.0 / 109) / math.Sqrt(109)
+	ei := math.Sqrt(25.0/20)*0.2*22e9*math.Pow(3.3, 0.3)/1.2*math.Pow(0.6, 4)/12 + 200e9*4*math.Pi*64e-6*0.0625
+	s := k * 8 / ei
+	f, err := tower.EffectiveLengthFactor(0.1, s)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for sym, want := range map[string]float64{"K_top": k, "EI_max": ei, "s_top": s, "l0": 2 * f} {
+		if v, ok := r.Value(sym); !ok || math.Abs(v.Value/want-1) > 1e-6 {
+			t.Errorf("%s = %v, want %g", sym, v, want)
+		}
+	}
+	if !(f > 1.2) || !strings.Contains(r.Basis, "ropes' stretch") {
+		t.Errorf("clamped top: l0/l %g (a rigidly held top would give 0.7); basis %q", f, r.Basis)
 	}
 }
 

@@ -27,6 +27,15 @@ type SteelColumn struct {
 	Length units.Length
 	// Along and Across are the restraints of the top in each direction.
 	Along, Across Restraint
+	// AlongSpring and AcrossSpring are the lateral stiffnesses, in N/m, of
+	// what holds the top (of the whole column: both legs of a frame) in
+	// that direction when its restraint is SpringTop.
+	AlongSpring, AcrossSpring float64
+	// BaseFlexibility is the relative flexibility k = (θ/M)(EI/l) of the
+	// base's rotational restraint; zero means DefaultBaseFlexibility (the
+	// minimum EN 1992-1-1:2004 5.8.3.2(3) recommends, taken for a steel
+	// column on its footing too: conservative against a base called rigid).
+	BaseFlexibility float64
 }
 
 func (c SteelColumn) validate() error {
@@ -57,15 +66,7 @@ func (c SteelColumn) validate() error {
 	default:
 		return invalid("SteelColumn.Legs", c.Legs, "must be 1 (a tube) or 2 (a frame)")
 	}
-	for _, r := range []struct {
-		n string
-		r Restraint
-	}{{"SteelColumn.Along", c.Along}, {"SteelColumn.Across", c.Across}} {
-		if r.r != FreeTop && r.r != HeldTop {
-			return invalid(r.n, int(r.r), "is not FreeTop or HeldTop")
-		}
-	}
-	return nil
+	return validRestraints("SteelColumn", c.Along, c.Across, c.AlongSpring, c.AcrossSpring, c.BaseFlexibility)
 }
 
 // Check checks the column under design actions a (the quasi-permanent
@@ -92,7 +93,9 @@ func (c SteelColumn) validate() error {
 //
 // with n = N/(χ N_Rk/γM1), C_m = 1 (uniform moment: conservative for the
 // moment of a force at the top of a cantilever, Table B.3 gives 0.9 for
-// a sway mode), effective lengths l0 = Restraint.Factor · l, and never
+// a sway mode), effective lengths from the restraints and the base
+// flexibility (EffectiveLengthFactor; a spring on a frame is shared by its
+// legs), and never
 // less than the cross-section check N/N_Rd + M_y/M_Rd + M_z/M_Rd
 // (6.2.1(7)), which alone applies in tension. Values are from memory
 // except χ (6.3.1.2, checked against the standard's table in the tests).
@@ -121,7 +124,24 @@ func (c SteelColumn) Check(a ColumnActions) (ColumnResults, error) {
 	}
 	t := c.Tube
 	l := float64(c.Length)
-	l0y, l0z := c.Along.Factor()*l, c.Across.Factor()*l
+	legs := float64(max(c.Legs, 1))
+	kb := baseFlexibility(c.BaseFlexibility)
+	ei := t.e() * t.SecondMoment() // each leg; a spring on the column is shared by its legs
+	l0y, sy, err := effectiveLength(c.Along, l, kb, c.AlongSpring/legs, ei)
+	if err != nil {
+		return ColumnResults{}, err
+	}
+	var l0z, sz float64
+	if c.Legs == 2 {
+		// Across the bridge the frame bends as a whole: I_eff (6.4).
+		s := float64(c.Spacing)
+		l0z, sz, err = effectiveLength(c.Across, l, kb, c.AcrossSpring, t.e()*2*float64(t.Area())*(s/2)*(s/2))
+	} else {
+		l0z, sz, err = effectiveLength(c.Across, l, kb, c.AcrossSpring, ei)
+	}
+	if err != nil {
+		return ColumnResults{}, err
+	}
 	n, my, mz := float64(a.N), math.Abs(float64(a.Along)), math.Abs(float64(a.Across))
 	var frameVals []check.Value
 	member := "tube"
@@ -199,7 +219,7 @@ func (c SteelColumn) Check(a ColumnActions) (ColumnResults, error) {
 		curve = "c (cold-formed)"
 	}
 	basis := fmt.Sprintf("EN 1993-1-1:2005 6.3.1 flexural buckling, curve %s, 6.3.3 eq. 6.61/6.62 with Annex B factors (C_m 1), "+
-		"6.2.1(7) cross-section; %s; along: %s, across: %s (from memory but χ)", curve, member, c.Along, c.Across)
+		"6.2.1(7) cross-section; %s; along: %s; across: %s (from memory but χ)", curve, member, lengthBasis(c.Along, kb), lengthBasis(c.Across, kb))
 	if c.Legs == 2 {
 		basis += "; frame across the bridge as a built-up member (6.4), bracing stiff in shear"
 	}
@@ -207,6 +227,15 @@ func (c SteelColumn) Check(a ColumnActions) (ColumnResults, error) {
 		check.Of("N_Ed", "design axial force (compression +) in the member checked", units.Force(n)),
 		check.Of("N_Rd", "cross-section axial resistance A f_y/γM0", units.Force(cy.pt)),
 		check.Of("M_Rd", "cross-section moment resistance W f_y/γM0", units.Moment(cy.mc)),
+	}
+	common = append(common, check.Of("k_base", "relative flexibility of the base restraint (EN 1992-1-1 5.8.3.2(3))", units.Ratio(kb)))
+	if c.Along == SpringTop {
+		common = append(common, check.Of("K_top,y", "lateral stiffness holding the top along the bridge (N/m)", units.LoadPerLength(c.AlongSpring)),
+			check.Of("s_top,y", "relative stiffness of the top spring along, K l³/EI per leg", units.Ratio(sy)))
+	}
+	if c.Across == SpringTop {
+		common = append(common, check.Of("K_top,z", "lateral stiffness holding the top across the bridge (N/m)", units.LoadPerLength(c.AcrossSpring)),
+			check.Of("s_top,z", "relative stiffness of the top spring across, K l³/EI", units.Ratio(sz)))
 	}
 	common = append(common, frameVals...)
 	dir := func(name string, cc tubeCaps, l0, m, kk float64, sym string) check.Result {
