@@ -162,16 +162,30 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 		if d == tower.Across {
 			element = towerAcrossElement[side]
 		}
-		r, err := tower.EccentricityCheck(svc.Tower[side], col, m.eccentricity(side, d))
+		res := svc.Tower[side]
+		opt := m.eccentricity(side, d)
+		w := svc.ColumnWind[side]
+		var above units.Force
+		if d == tower.Across && w != 0 {
+			// The wind on the column face loads the column above the
+			// checked section only, uniformly: the part above y_c at
+			// (H + y_c)/2 takes the place of the whole at H/2.
+			hc, yc := float64(col.Height), float64(opt.Section)
+			above = units.Force(float64(w) * (hc - yc) / hc)
+			res.Lateral += above - w
+			res.LateralMoment += units.Moment(float64(above)*(hc+yc)/2 - float64(w)*hc/2)
+		}
+		r, err := tower.EccentricityCheck(res, col, opt)
 		if err != nil {
 			return m.bankErr(side, "tower.eccentricity", name, err)
 		}
 		if d == tower.Along && !m.fbasis.Terse { // a design search scores results, it does not read them
 			r = r.WithValues(m.saddleValues(side, svc)...)
 		}
-		if w := svc.ColumnWind[side]; d == tower.Across && w != 0 {
-			r = r.WithValues(check.Of("F_w", "wind on the column face, at mid-height", w)).
-				WithNote("wind on the column face is added to the lateral rope forces (conservative: the rope-line form counts no column weight against it)")
+		if d == tower.Across && w != 0 {
+			r = r.WithValues(check.Of("F_w", "wind on the column face, at mid-height", w),
+				check.Of("F_w,c", "wind on the column face above the checked section, at its mid-height", above)).
+				WithNote("wind on the column face above the checked section is added to the lateral rope forces (conservative: the rope-line form counts no column weight against it)")
 		}
 		if legs > 0 {
 			// A steel column carries the bending in its members; the

@@ -331,3 +331,43 @@ func TestBadTowerDescriptions(t *testing.T) {
 		})
 	}
 }
+
+// TestColumnWindAboveCheckedSection: across the bridge the wind on the
+// column face acts on the part of the column above the checked section
+// only, as a uniform load: by statics of the free body above y_c its
+// moment there is q c_f d (H − y_c)²/2 = F_w (H − y_c)²/(2H). Taking the
+// whole column's wind as one force at mid-height (as at the base) gives
+// F_w (H/2 − y_c), short by F_w y_c²/(2H): unconservative. The rope forces'
+// lateral part L_r = ΣL − F_w moves from its moment at the base by L_r y_c.
+func TestColumnWindAboveCheckedSection(t *testing.T) {
+	base, err := Check(Demo(), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	b := Demo()
+	const yc = 1.6
+	b.Banks.Left.Tower.Eccentricity.Section = yc
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	r0 := find(t, base.Report, "tower.eccentricity", "left tower, across", "wind")
+	r1 := find(t, a.Report, "tower.eccentricity", "left tower, across", "wind")
+	val := func(r check.Result, s string) float64 {
+		v, ok := r.Value(s)
+		if !ok {
+			t.Fatalf("%s has no %s", r.ID, s)
+		}
+		return v.Value
+	}
+	h := 3.5 // column height: walkway saddle 2.4 m + handrail offset 1.1 m
+	fw, sl, v := val(r0, "F_w"), val(r0, "ΣL"), val(r0, "ΣV")
+	m0 := val(r0, "e") * v
+	want := (m0 - (sl-fw)*yc - fw*h/2 + fw*(h-yc)*(h-yc)/(2*h)) / v
+	if got := val(r1, "e"); math.Abs(got/want-1) > 1e-9 {
+		t.Errorf("e at the checked section %g, want %g by statics above it", got, want)
+	}
+	if got := val(r1, "F_w,c"); math.Abs(got/(fw*(h-yc)/h)-1) > 1e-12 {
+		t.Errorf("wind above the section %g, want %g", got, fw*(h-yc)/h)
+	}
+}
