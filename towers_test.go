@@ -316,6 +316,25 @@ func TestBadTowerDescriptions(t *testing.T) {
 			b.Banks.Left.Tower.Section = SectionSpec{Type: "frame", Size: 0.2, Wall: 0.01, Steel: 355e6, Spacing: 0.1}
 		}, "banks.left.tower.section.spacing", "overlap"},
 		{"NaN drag", func(b *Bridge) { b.Banks.Left.Tower.Drag = math.NaN() }, "banks.left.tower.drag", "force coefficient"},
+		// EN 1992-1-1 9.5.2(4): a bar in each corner of a polygonal column;
+		// two bars used to make the section plain without a word.
+		{"two bars", func(b *Bridge) { b.Banks.Left.Tower.Section.Bars = 2 }, "banks.left.tower.section.bars", "at least 4"},
+		{"fraction offset leaves no limit", func(b *Bridge) {
+			b.Banks.Left.Tower.Eccentricity = EccentricitySpec{Rule: "fraction", Fraction: 0.3, Offset: -0.2}
+		}, "banks.left.tower.eccentricity.offset", "no allowed eccentricity"},
+		{"section offset leaves no limit across", func(b *Bridge) {
+			b.Banks.Left.Tower.Depth, b.Banks.Left.Tower.Width = 2.0, 0.6
+			b.Banks.Left.Tower.Eccentricity = EccentricitySpec{Rule: "section", Offset: -0.4}
+		}, "banks.left.tower.eccentricity.offset", "across"},
+		{"offset under the kern", func(b *Bridge) { b.Banks.Left.Tower.Eccentricity = EccentricitySpec{Offset: 0.2} },
+			"banks.left.tower.eccentricity.offset", "kern"},
+		{"fraction under the section rule", func(b *Bridge) { b.Banks.Left.Tower.Eccentricity = EccentricitySpec{Rule: "section", Fraction: 0.5} },
+			"banks.left.tower.eccentricity.fraction", "not \"fraction\""},
+		{"rope does not bear on a gripping groove", func(b *Bridge) {
+			b.Site.Rise = 40
+			b.Banks.Left.Tower.Saddle = SaddleSpec{Kind: "fixed", Groove: "friction", GrooveFriction: 0.2}
+			b.Banks.Left.Backstay.Drop, b.Banks.Left.Backstay.Horizontal = 0.3, 30
+		}, "banks.left.tower.saddle", "wrap angle"},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			b := Demo()
