@@ -3,8 +3,8 @@ package sagspan
 import (
 	"errors"
 	"fmt"
-	"strings"
 	"math"
+	"strings"
 
 	"github.com/sagspan/sagspan/cable"
 	"github.com/sagspan/sagspan/tower"
