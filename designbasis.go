@@ -146,6 +146,9 @@ func (a *Analysis) DesignBasis() DesignBasis {
 	db := DesignBasis{Bridge: b.Name, Library: Version(), Digest: b.Digest(), Source: a.Source}
 	walkValues(reflect.ValueOf(b), "", func(fi fieldInfo, v reflect.Value) {
 		e := BasisEntry{Name: fi.Path, Text: formatLeaf(v), Source: "given"}
+		if v.Kind() == reflect.String {
+			e.Text = v.String() // as given, without the quotes the tables show
+		}
 		if q, ok := v.Interface().(kinded); ok {
 			e.Value, e.Unit = si(v.Float(), q.Kind())
 		} else if l, ok := v.Interface().(Level); ok && !l.None {
@@ -207,6 +210,7 @@ func (a *Analysis) soilsUsed() BasisGroup {
 		}
 		prefix := "banks." + side.String() + ".soil"
 		sv, specV := reflect.ValueOf(soil), reflect.ValueOf(spec)
+		told := false // the preset's source, said once per bank
 		st := sv.Type()
 		for i := range st.NumField() {
 			f := st.Field(i)
@@ -214,7 +218,13 @@ func (a *Analysis) soilsUsed() BasisGroup {
 				continue
 			}
 			name := side.String() + " bank, " + soil.Name + ": " + words(f.Name)
-			source := "preset " + fmt.Sprintf("%q", spec.Preset) + " (" + soil.Source + ")"
+			source := fmt.Sprintf("preset %q", spec.Preset)
+			switch {
+			case spec.Preset == "":
+				source = "derived from the soil given (" + prefix + ")"
+			case !told:
+				source, told = source+" ("+soil.Source+")", true
+			}
 			if sf, ok := specV.Type().FieldByName(f.Name); ok && !specV.FieldByIndex(sf.Index).IsZero() {
 				jn, _ := jsonName(sf)
 				source = "given (" + prefix + "." + jn + ")"
@@ -224,7 +234,20 @@ func (a *Analysis) soilsUsed() BasisGroup {
 				e.Value, e.Unit = si(sv.Field(i).Float(), q.Kind())
 			}
 			if sv.Field(i).IsZero() {
-				e.Source = "not set: the package's default applies (see foundation.Soil." + f.Name + ")"
+				switch f.Name {
+				case "Submerged":
+					w := soil.SubmergedWeight()
+					e.Text, e.Source = w.String(), fmt.Sprintf("default: unit weight less that of water, %s (foundation.WaterUnitWeight)", foundation.WaterUnitWeight)
+					e.Value, e.Unit = si(float64(w), units.KindUnitWeight)
+				case "Interface":
+					e.Text, e.Source = fmt.Sprintf("%.3g", foundation.DefaultInterface), "default: δ = 2/3 φ' (foundation.DefaultInterface)"
+				default:
+					if spec.Preset == "" {
+						e.Source = "not given: none"
+					} else {
+						e.Source += ", which gives none"
+					}
+				}
 			}
 			g.Entries = append(g.Entries, e)
 		}
@@ -508,7 +531,7 @@ func inputTable(name string, f reflect.StructField, v reflect.Value) check.Secti
 		}
 		m := r.meaning
 		if m == last {
-			m = "〃" // as above: the meaning of a list's elements, or of fields documented together
+			m = "(as above)" // the meaning of a list's elements, or of fields documented together
 		} else {
 			last = m
 		}

@@ -3,6 +3,8 @@ package sagspan_test
 import (
 	"context"
 	"fmt"
+	"log"
+	"os"
 
 	"github.com/sagspan/sagspan"
 	"github.com/sagspan/sagspan/units"
@@ -70,4 +72,26 @@ func ExampleSearch() {
 	// Output:
 	// 8 candidates, 8 feasible
 	// best: sag 1/20, 4 ropes, anchor 4.500 m long, cost 40724, utilisation 0.913
+}
+
+// ExampleAnalysis_WriteText is the README's "Using it from Go": read a
+// description, check it, print the whole report. The README quotes its
+// body (TestREADMEUsingItFromGo), so the snippet there always compiles.
+func ExampleAnalysis_WriteText() {
+	b, err := sagspan.LoadFile("testdata/demo.json") // your own description
+	if err != nil {
+		log.Fatal(err) // names the field and its line, such as banks.left.anchor.length
+	}
+	a, err := sagspan.Check(b, nil)
+	if err != nil {
+		log.Fatal(err) // traced to the field that caused it, with advice
+	}
+	a.Source = "testdata/demo.json" // named in the report's design basis
+	// The design basis, every failure, the governing case of every check,
+	// their values, notes and sources, rope states, comfort, erection table.
+	if err := a.WriteText(os.Stdout, nil); err != nil {
+		log.Fatal(err)
+	}
+	// a.WriteMarkdown, a.WriteJSON and a.WriteHTML write the same report in
+	// other forms; a.WriteSVG the elevation drawing.
 }

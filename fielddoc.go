@@ -1,6 +1,6 @@
 package sagspan
 
-//go:generate go test -run ^TestFieldDocs$|^TestFieldReference$ -update .
+//go:generate go test -run ^(TestFieldDocs|TestFieldReference|TestREADMEUsingItFromGo)$ -update .
 
 import (
 	"fmt"

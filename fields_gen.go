@@ -71,7 +71,7 @@ var fieldDocs = map[string]string{
 	"Climate.Reference":         "Reference is the temperature at which the ropes hang at their design dead-load sag.",
 	"Climate.WindPressure":      "WindSpeed is the basic wind speed; the peak velocity pressure is then Exposure · ½ρv² (EN 1991-1-4 cl. 4.5). WindPressure, when set, is the peak velocity pressure itself and is used instead.",
 	"Climate.WindSpeed":         "WindSpeed is the basic wind speed; the peak velocity pressure is then Exposure · ½ρv² (EN 1991-1-4 cl. 4.5). WindPressure, when set, is the peak velocity pressure itself and is used instead.",
-	"ComfortSpec.Backstays":     "Backstays, when true, lets the ropes render over fixed and sliding saddles into their backstays, and roller saddles move with the backstays holding them, in the modal analysis; false holds the ropes at the saddles, as the closed form does.",
+	"ComfortSpec.Backstays":     "Backstays is whether the modal analysis lets the ropes render over fixed and sliding saddles into their backstays, and roller saddles move with the backstays holding them; false holds the ropes at the saddles, as the closed form does.",
 	"ComfortSpec.Damping":       "Damping is the ratio of critical damping of every mode; zero takes the default of the deck: 0.4 % for steel, 1.0 % for timber (Sétra 2006, from memory; the lower values, as for comfort, of common practice).",
 	"ComfortSpec.Deck":          "Deck is the walkway's material that sets the default damping: \"steel\" or \"timber\"; empty means steel, the lower damping.",
 	"ComfortSpec.Traffic":       "Traffic is the walkers' traffic class: \"sparse\" (default, 0.5 walkers per m², normal use), \"dense\" (0.8) or \"very dense\" (1.0).",

@@ -124,6 +124,7 @@ type analysisJSON struct {
 	Report      check.Report   `json:"report"`
 	Cases       []caseJSON     `json:"cases"`
 	Modes       modesJSON      `json:"modes"`
+	Comfort     *comfortJSON   `json:"comfort,omitempty"`
 	Erection    []erectionJSON `json:"erection"`
 }
 
@@ -175,6 +176,7 @@ func (a *Analysis) MarshalJSON() ([]byte, error) {
 		out.Cases = append(out.Cases, c)
 	}
 	out.Modes = modesJSON{float64(a.Modes.Swing), float64(a.Modes.Antisymmetric), float64(a.Modes.Symmetric), a.Modes.LambdaSq}
+	out.Comfort = a.comfortJSON()
 	for _, et := range a.Erection {
 		e := erectionJSON{Group: et.Group}
 		for _, r := range et.Rows {

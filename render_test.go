@@ -179,3 +179,27 @@ func TestDesignBasis(t *testing.T) {
 		t.Error("the design basis still shows the old span, or the digest did not change")
 	}
 }
+
+// TestOneUnitPerCheck requires every check of every element to report in
+// one kind of quantity across its load cases, so that a table's column
+// never switches between kN and kN·m down one check.
+func TestOneUnitPerCheck(t *testing.T) {
+	level, err := LoadFile("testdata/level.json")
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, b := range []Bridge{Demo(), level} {
+		a, err := Check(b, nil)
+		if err != nil {
+			t.Fatal(err)
+		}
+		kinds := map[string]units.Kind{}
+		for _, r := range a.Report.Results {
+			key := r.ID + ", " + r.Element
+			if k, ok := kinds[key]; ok && k != r.Kind {
+				t.Errorf("%s: %s in one case, %s in %q", key, k, r.Kind, r.Case)
+			}
+			kinds[key] = r.Kind
+		}
+	}
+}
