@@ -268,7 +268,8 @@ type columnDirection struct {
 // clause gives (conservative for the triangular moment of a force at the
 // top). N_Ed ≥ N_B fails: the column buckles. φ_ef = φ(∞,t0)·M_0Eqp/M_0Ed
 // (5.19) with the quasi-permanent moment built as M_0Ed from the
-// quasi-permanent actions. The imperfection is applied in both directions
+// quasi-permanent actions, and no cap: φ_ef exceeds φ(∞,t0) where the
+// permanent actions bend the column more than the design case does. The imperfection is applied in both directions
 // (5.8.9(2) allows the more unfavourable one only: conservative). The
 // section resistance M_Rd(N_Ed) is RCSection.MomentCapacity's, and N_Ed
 // beyond the section's axial resistance fails on force.
@@ -407,8 +408,10 @@ func (d *direction) check() (columnDirection, error) {
 	}
 	m0Ed, m0qp := m0(d.nEd, d.m), m0(d.nQP, d.mqp)
 	phiEf := d.phiInf
-	if m0Ed > 0 {
-		phiEf = d.phiInf * math.Min(1, m0qp/m0Ed)
+	if m0Ed > 0 && d.nEd > 0 {
+		// Eq. 5.19, no cap: a permanent moment larger than the design one
+		// locks in more creep than φ(∞,t0) times the design moment.
+		phiEf = math.Min(d.phiInf*m0qp/m0Ed, math.MaxFloat64)
 	}
 	aa := 1 / (1 + 0.2*phiEf)
 	bb := math.Sqrt(1 + 2*omega)
