@@ -157,6 +157,7 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 	col := m.column(side)
 	basis := m.saddleBasis(side)
 	_, legs := m.steel(side)
+	var ecc [2]check.Result // along, across
 	for _, d := range []tower.Direction{tower.Along, tower.Across} {
 		element := towerElement[side]
 		if d == tower.Across {
@@ -194,7 +195,17 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 			rec.Basis, rec.Values, rec.Notes = r.Basis, r.Values, r.Notes
 			r = rec.WithNote("a steel column resists this eccentricity by bending (see tower.column_section): the resultant is reported, not limited")
 		}
+		ecc[d] = r
 		out.add(r.WithBasis(r.Basis+basis).For(element, name))
+	}
+	if lim := m.eccentricity(side, tower.Along).Limit; legs == 0 && (lim == nil || lim.Fraction < 1) {
+		// The kern is a rhombus: the two directions at once.
+		r, err := tower.EccentricityBoth(units.Length(ecc[0].Demand), units.Length(ecc[0].Capacity),
+			units.Length(ecc[1].Demand), units.Length(ecc[1].Capacity))
+		if err != nil {
+			return m.bankErr(side, "tower.eccentricity", name, err)
+		}
+		out.add(r.WithBasis(r.Basis+"; "+strings.SplitN(ecc[0].Basis, ";", 2)[0]+basis).For(towerElement[side], name))
 	}
 	res, err := m.member(side, des, perm)
 	if err != nil {

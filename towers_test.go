@@ -390,3 +390,42 @@ func TestColumnWindAboveCheckedSection(t *testing.T) {
 		t.Errorf("wind above the section %g, want %g", got, fw*(h-yc)/h)
 	}
 }
+
+// TestKernBothDirectionsInChain: the demo with 1.6 × 1.6 m columns and the
+// default kern: under wind with crowd the resultant lies inside the kern
+// along the bridge and inside it across, but not inside the kern of the
+// rectangle, a rhombus (|e_d|/(d/6) + |e_b|/(b/6) ≤ 1): the combined check
+// fails where the two alone pass. A "within the section" limit (a
+// rectangle) needs no combined check.
+func TestKernBothDirectionsInChain(t *testing.T) {
+	b := Demo()
+	for _, bank := range []*Bank{&b.Banks.Left, &b.Banks.Right} {
+		bank.Tower.Eccentricity = EccentricitySpec{}
+		bank.Tower.Depth, bank.Tower.Width = 1.6, 1.6
+		bank.Tower.Footing.Length = 2.6
+	}
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	const lc = "wind with crowd"
+	along := find(t, a.Report, "tower.eccentricity", "left tower", lc)
+	across := find(t, a.Report, "tower.eccentricity", "left tower, across", lc)
+	both := find(t, a.Report, "tower.eccentricity_both", "left tower", lc)
+	if along.Status == check.Fail || across.Status == check.Fail {
+		t.Fatalf("the test wants both directions to pass alone: %v / %v", along, across)
+	}
+	if want := along.Demand/along.Capacity + across.Demand/across.Capacity; math.Abs(both.Demand/want-1) > 1e-12 || both.Status != check.Fail {
+		t.Errorf("both directions: %v, want u = %g failing", both, want)
+	}
+	// The demo's own rule, within the effective section, adds no such row.
+	d, err := Check(Demo(), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, r := range d.Report.Results {
+		if r.ID == "tower.eccentricity_both" {
+			t.Fatalf("a rectangular limit got a rhombus check: %v", r)
+		}
+	}
+}

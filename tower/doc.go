@@ -29,7 +29,8 @@
 // statics form, ΣM/ΣV with the column's own weight, is reported beside it
 // (and may be chosen). Both directions are checked: along the bridge with
 // the saddles' offsets and travel, across it with wind on the swung ropes
-// and on the column.
+// and on the column; EccentricityBoth checks the two at once against the
+// kern of the rectangle, a rhombus.
 //
 // # Columns
 //
