@@ -258,6 +258,7 @@ func EccentricityCheck(r Resultant, c Column, opt *Eccentricity) (check.Result, 
 		res = res.WithNote(fmt.Sprintf("e = %v %s", units.Length(math.Abs(e)), side(e)))
 	}
 	if c.Facing > 0 {
+		res = res.WithValues(check.Of("t_f", "facing left out of the effective section on each face", c.Facing))
 		res = res.WithNote(fmt.Sprintf("effective section %v × %v: %v of facing on each face left out", c.EffectiveDepth(), c.EffectiveWidth(), c.Facing))
 	}
 	return res, nil

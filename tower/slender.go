@@ -428,7 +428,13 @@ func (d *direction) check() (columnDirection, error) {
 		check.Of("k_base", "relative flexibility of the base restraint (5.8.3.2(3))", units.Ratio(d.k)),
 		check.Of("λ", "slenderness l0/i", units.Ratio(lam)),
 		check.Of("n", "relative axial force N_Ed/(A_c f_cd)", units.Ratio(n)),
-		check.Of("φ_ef", "effective creep ratio", units.Ratio(phiEf)),
+		check.Of("ω", "mechanical reinforcement ratio A_s f_yd/(A_c f_cd)", units.Ratio(omega)),
+		check.Of("M_0Eqp", "first-order quasi-permanent moment with imperfection, for creep", units.Moment(m0qp)),
+		check.Of("φ_ef", "effective creep ratio φ(∞,t0) M_0Eqp/M_0Ed (5.19)", units.Ratio(phiEf)),
+		check.Of("A_λ", "factor 1/(1 + 0.2 φ_ef) of the slenderness limit", units.Ratio(aa)),
+		check.Of("B_λ", "factor √(1 + 2ω) of the slenderness limit", units.Ratio(bb)),
+		check.Of("C_λ", "factor of the slenderness limit, 0.7 (unbraced, or moments from transverse load)", units.Ratio(cc)),
+		check.Of("θ_i", "inclination of the geometric imperfection θ0 α_h (5.2(5)), θ0 1/200", units.Ratio(thetaI)),
 		check.Of("e_i", "eccentricity of the geometric imperfection θ_i l0/2 (5.2)", units.Length(ei)),
 		check.Of("e_0", "minimum eccentricity max(h/30, 20 mm) (6.1(4))", units.Length(e0)),
 		check.Of("M_0Ed", "first-order design moment with imperfection, at least N_Ed e_0", units.Moment(m0Ed)),
@@ -436,9 +442,9 @@ func (d *direction) check() (columnDirection, error) {
 	}
 	if d.restraint == SpringTop {
 		vals = append(vals,
-			check.Of("K_top", "lateral stiffness holding the top (N/m)", units.LoadPerLength(d.spring)),
-			check.Of("EI_max", "largest nominal stiffness, for the top spring's share", units.Moment(eiMax)),
-			check.Of("s_top", "relative stiffness of the top spring K l³/EI", units.Ratio(sTop)))
+			check.Of("K_top", "lateral stiffness holding the top (a force per metre of sway)", units.LoadPerLength(d.spring)),
+			check.Of("EI_max/l³", "the column's stiffness scale from its largest nominal stiffness EI_max (k2 0.20, no creep, 5.8.7.2)", units.LoadPerLength(eiMax/(l*l*l))),
+			check.Of("s_top", "relative stiffness of the top spring K l³/EI_max", units.Ratio(sTop)))
 	}
 	if n > 0 { // in tension there is no slenderness limit
 		vals = append(vals, check.Of("λ_lim", "slenderness limit 20·A·B·C/√n (5.8.3.1)", units.Ratio(lamLim)))
@@ -516,6 +522,7 @@ func (d *direction) plainCheck(md rcModel, l0, ei, e0 float64, vals []check.Valu
 	phi := math.Min(1.14*(1-2*etot/h)-0.02*l0/h, 1-2*etot/h)
 	nrd := math.Max(0, b*h*fcdpl*phi)
 	vals = append(vals,
+		check.Of("f_cd,pl", "design strength of plain concrete α_cc,pl f_ck/γ_c (12.3.1)", units.Pressure(fcdpl)),
 		check.Of("e_tot", "total eccentricity e_0 + e_i (12.6.5.2)", units.Length(etot)),
 		check.Of("Φ", "factor for eccentricity and slenderness (12.11)", units.Ratio(phi)),
 		check.Of("N_Rd,pl", "resistance of the plain column (12.10)", units.Force(nrd)))

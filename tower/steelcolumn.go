@@ -156,7 +156,11 @@ func (c SteelColumn) Check(a ColumnActions) (ColumnResults, error) {
 			if n >= ncr {
 				r := check.Compare("tower.column_section", "Column section, axial force and bending", units.KindForce, n, ncr).
 					WithBasis("EN 1993-1-1:2005 6.4 built-up member, the two-leg frame across the bridge, bracing stiff in shear").
-					WithValues(check.Of("N_Ed", "design axial force", a.N), check.Of("N_cr", "critical load of the frame across the bridge", units.Force(ncr))).
+					WithValues(check.Of("N_Ed", "design axial force", a.N), check.Of("N_cr", "critical load of the frame across the bridge", units.Force(ncr)),
+						check.Of("l0_z", "effective length of the frame across the bridge", units.Length(l0z)),
+						check.Of("k_base", "relative flexibility of the base restraint (EN 1992-1-1 5.8.3.2(3))", units.Ratio(kb)),
+						check.Of("A", "area of each leg", t.Area()),
+						check.Of("s", "spacing of the legs", c.Spacing)).
 					WithNote("the frame buckles across the bridge as a whole")
 				both := r
 				both.ID, both.Title = "tower.column_biaxial", "Column section, biaxial bending"
@@ -248,6 +252,7 @@ func (c SteelColumn) Check(a ColumnActions) (ColumnResults, error) {
 			check.Of("N_b,Rd,"+sym, "buckling resistance "+name+" χ A f_y/γM1", units.Force(cc.pc)),
 			check.Of("M_"+sym+",Ed", "design moment "+name, units.Moment(m)),
 			check.Of("k_"+sym+sym, "interaction factor (Annex B)", units.Ratio(kk)),
+			check.Of("class", "section class (Table 5.2)", units.Ratio(cy.class)),
 		).WithNote(fmt.Sprintf("section class %d", cy.class))
 	}
 	along := dir("along the bridge", cy, l0y, my, kyy, "y")
@@ -262,6 +267,7 @@ func (c SteelColumn) Check(a ColumnActions) (ColumnResults, error) {
 		check.Of("u_6.61", "utilisation by eq. 6.61", units.Ratio(e661)),
 		check.Of("u_6.62", "utilisation by eq. 6.62", units.Ratio(e662)),
 		check.Of("u_cs", "cross-section utilisation 6.2.1(7)", units.Ratio(cross)),
+		check.Of("class", "section class (Table 5.2)", units.Ratio(cy.class)),
 	)
 	return ColumnResults{Along: along, Across: across, Both: both}, nil
 }
