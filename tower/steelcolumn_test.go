@@ -130,3 +130,35 @@ func TestSteelColumnErrors(t *testing.T) {
 		}
 	}
 }
+
+func FuzzSteelColumn(f *testing.F) {
+	f.Add(0.273, 0.010, 355e6, 4.0, uint8(1), 1.6, 1.5, uint8(0), uint8(0), 0.0, 0.0, 400e3, 30e3, 15e3, false)
+	f.Add(0.15, 0.008, 355e6, 7.0, uint8(2), 1.6, 1.5, uint8(2), uint8(0), 0.1, 5e6, 500e3, 200e3, 50e3, true)
+	f.Fuzz(func(t *testing.T, size, wall, fy, l float64, legs uint8, spacing, panel float64, along, across uint8, k, spring, n, my, mz float64, square bool) {
+		shape := tower.Circular
+		if square {
+			shape = tower.Square
+		}
+		sc := tower.SteelColumn{Tube: tower.Tube{Shape: shape, Size: units.Length(size), Wall: units.Length(wall), Fy: units.Pressure(fy),
+			E: 210 * units.Gigapascal, Code: tower.EN1993},
+			Legs: int(legs % 3), Spacing: units.Length(spacing), Panel: units.Length(panel), Length: units.Length(l),
+			Along: tower.Restraint(along % 4), Across: tower.Restraint(across % 4), AlongSpring: spring, AcrossSpring: spring, BaseFlexibility: k}
+		res, err := sc.Check(tower.ColumnActions{N: units.Force(n), Along: units.Moment(my), Across: units.Moment(mz)})
+		if err != nil {
+			if !errors.Is(err, tower.ErrInvalid) && !errors.Is(err, tower.ErrUnsupported) {
+				t.Fatalf("unexpected error %v", err)
+			}
+			return
+		}
+		for _, r := range []check.Result{res.Along, res.Across, res.Both} {
+			if math.IsNaN(r.Ratio) || math.IsNaN(r.Demand) || math.IsNaN(r.Capacity) {
+				t.Fatalf("bad result %v", r)
+			}
+			for _, v := range r.Values {
+				if math.IsNaN(v.Value) || math.IsInf(v.Value, 0) {
+					t.Fatalf("non-finite value %v in %v", v, r)
+				}
+			}
+		}
+	})
+}
