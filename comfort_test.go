@@ -323,7 +323,7 @@ func BenchmarkModalDemo(b *testing.B) {
 		b.Fatal(err)
 	}
 	m.grooves = m.variants()[0].grooves
-	perm, err := m.analyse(m.b.Cases()[0].characteristic(m.psi))
+	perm, err := m.analyse(m.characteristic(m.b.Cases()[0]))
 	if err != nil {
 		b.Fatal(err)
 	}

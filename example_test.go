@@ -24,9 +24,9 @@ func ExampleCheck() {
 	}
 	// Output:
 	// overall: flag
-	// cable.tension (walkway ropes): 801.6 kN of 1290 kN under "cold with crowd"
-	// cable.tension (handrail ropes): 11.06 kN of 168.0 kN under "wind"
-	// bridge.clearance (walkway): 1.500 m of 4.164 m under "hot with crowd"
+	// cable.tension (walkway ropes): 147.7 kN of 193.6 kN under "crowd 0.90 L at midspan, coldest rope"
+	// cable.tension (handrail ropes): 5.223 kN of 75.61 kN under "wind, coldest rope"
+	// bridge.clearance (walkway): 1.500 m of 4.042 m under "crowd 0.46 L at midspan, hottest rope"
 }
 
 func ExampleCrowdPressure() {
@@ -70,8 +70,8 @@ func ExampleSearch() {
 			1/d.SagRatio, d.Count, d.Anchor.Length, d.Cost, d.Utilisation)
 	}
 	// Output:
-	// 8 candidates, 8 feasible
-	// best: sag 1/20, 4 ropes, anchor 4.500 m long, cost 40724, utilisation 0.913
+	// 8 candidates, 2 feasible
+	// best: sag 1/20, 6 ropes, anchor 4.500 m long, cost 45958, utilisation 0.976
 }
 
 // ExampleAnalysis_WriteText is the README's "Using it from Go": read a

@@ -26,3 +26,21 @@ func TestRun(t *testing.T) {
 		}
 	}
 }
+
+func TestDescriptionFile(t *testing.T) {
+	var out, errOut bytes.Buffer
+	if code := run([]string{"-h"}, &out, &errOut); code != 0 || !strings.Contains(out.String(), "usage: ropemodes") {
+		t.Errorf("-h: exit %d, stdout %q", code, out.String())
+	}
+	out.Reset()
+	// A file, with a flag after it that overrides the description.
+	if code := run([]string{"../../testdata/level.json", "-fmax", "1.5 Hz"}, &out, &errOut); code != 0 {
+		t.Fatalf("exit %d: %s", code, errOut.String())
+	}
+	// level.json: 50 m span, 2.5 m sag, 4 × 26 mm 6x36-IWRC ropes.
+	for _, want := range []string{"Level test span", "span 50.00 m, sag 2.500 m (1/20)", "modes up to 1.500 Hz"} {
+		if !strings.Contains(out.String(), want) {
+			t.Errorf("output lacks %q:\n%s", want, out.String())
+		}
+	}
+}
