@@ -101,13 +101,14 @@ func (c SteelColumn) validate() error {
 // except χ (6.3.1.2, checked against the standard's table in the tests).
 //
 // A frame of two legs at spacing s carries the moment across the bridge by
-// push and pull in its legs (the bracing stiff in shear: its shear
-// flexibility is not counted, which is unconservative for slender lacing):
-// the frame is a built-up member (6.4) with I_eff = 2 A (s/2)², global
-// bow e0 = l/500 and critical load N_cr = π² E I_eff/l0², l0 from the
-// Across restraint, so that
+// push and pull in its legs: the frame is a built-up member (6.4) with
+// I_eff = 2 A (s/2)², global bow e0 = l/500, critical load
+// N_cr = π² E I_eff/l0² (l0 from the Across restraint) and the bracing's
+// shear stiffness S_v = 2π² E I_ch/a², a the panel (the largest a battened
+// member has, 6.4.3.1; a laced member's is larger, so this is conservative
+// for lacing; the bracing is not described and is not checked), so that
 //
-//	M_across,Ed = (M_across + N e0) / (1 − N/N_cr)
+//	M_across,Ed = (M_across + N e0) / (1 − N/N_cr − N/S_v)      (6.69)
 //	N_leg = N/2 + M_across,Ed / s,   M_y,leg = M_along/2
 //
 // and each leg is checked as above with no moment across and buckling
@@ -150,13 +151,24 @@ func (c SteelColumn) Check(a ColumnActions) (ColumnResults, error) {
 		s := float64(c.Spacing)
 		ieff := 2 * float64(t.Area()) * (s / 2) * (s / 2)
 		ncr := math.Pi * math.Pi * t.e() * ieff / (l0z * l0z)
+		// Shear stiffness of the bracing: the largest a battened member has,
+		// 2π² E I_ch/a² (6.4.3.1); a laced frame's is larger, so taking
+		// this is conservative for lacing (the bracing is not described).
+		panel := l
+		if c.Panel > 0 {
+			panel = float64(c.Panel)
+		}
+		sv := 2 * math.Pi * math.Pi * t.e() * t.SecondMoment() / (panel * panel)
+		neff := 1 / (1/ncr + 1/sv) // the load at which 1 − N/N_cr − N/S_v vanishes
 		e0 := l / 500
 		mzEd := mz
 		if n > 0 {
-			if n >= ncr {
-				r := check.Compare("tower.column_section", "Column section, axial force and bending", units.KindForce, n, ncr).
-					WithBasis("EN 1993-1-1:2005 6.4 built-up member, the two-leg frame across the bridge, bracing stiff in shear").
+			if n >= neff {
+				r := check.Compare("tower.column_section", "Column section, axial force and bending", units.KindForce, n, neff).
+					WithBasis("EN 1993-1-1:2005 6.4 built-up member, the two-leg frame across the bridge, bracing's shear stiffness 2π² E I_ch/a² (6.4.3.1, conservative for lacing)").
 					WithValues(check.Of("N_Ed", "design axial force", a.N), check.Of("N_cr", "critical load of the frame across the bridge", units.Force(ncr)),
+						check.Of("S_v", "shear stiffness of the bracing, 2π² E I_ch/a²", units.Force(sv)),
+						check.Of("N_cr,v", "critical load with the bracing's shear flexibility, 1/(1/N_cr + 1/S_v)", units.Force(neff)),
 						check.Of("l0_z", "effective length of the frame across the bridge", units.Length(l0z)),
 						check.Of("k_base", "relative flexibility of the base restraint (EN 1992-1-1 5.8.3.2(3))", units.Ratio(kb)),
 						check.Of("A", "area of each leg", t.Area()),
@@ -166,10 +178,11 @@ func (c SteelColumn) Check(a ColumnActions) (ColumnResults, error) {
 				both.ID, both.Title = "tower.column_biaxial", "Column section, biaxial bending"
 				return ColumnResults{Along: r, Across: r, Both: both}, nil
 			}
-			mzEd = (mz + n*e0) / (1 - n/ncr)
+			mzEd = (mz + n*e0) / (1 - n/ncr - n/sv) // eq. 6.69
 		}
 		frameVals = []check.Value{
 			check.Of("N_cr,frame", "critical load of the frame across the bridge, π² E I_eff/l0²", units.Force(ncr)),
+			check.Of("S_v", "shear stiffness of the bracing, 2π² E I_ch/a² (6.4.3.1)", units.Force(sv)),
 			check.Of("M_across,Ed", "moment across the bridge with the frame's bow and second-order effects", units.Moment(mzEd)),
 			check.Of("N_leg", "axial force in the more loaded leg", units.Force(n/2+mzEd/s)),
 		}
@@ -225,7 +238,7 @@ func (c SteelColumn) Check(a ColumnActions) (ColumnResults, error) {
 	basis := fmt.Sprintf("EN 1993-1-1:2005 6.3.1 flexural buckling, curve %s, 6.3.3 eq. 6.61/6.62 with Annex B factors (C_m 1), "+
 		"6.2.1(7) cross-section; %s; along: %s; across: %s (from memory but χ)", curve, member, lengthBasis(c.Along, kb), lengthBasis(c.Across, kb))
 	if c.Legs == 2 {
-		basis += "; frame across the bridge as a built-up member (6.4), bracing stiff in shear"
+		basis += "; frame across the bridge as a built-up member (6.4), the bracing's shear stiffness the largest a battened member has, 2π² E I_ch/a² with a the panel (6.4.3.1; a laced frame's is larger: conservative for lacing, the lacing and battens themselves not checked)"
 	}
 	common := []check.Value{
 		check.Of("N_Ed", "design axial force (compression +) in the member checked", units.Force(n)),
