@@ -95,8 +95,15 @@ func (m *model) variants() []variant {
 // friction (once the rope renders it no longer braces the top:
 // conservative), a sliding or a roller saddle leaves the top free
 // (cantilever).
+//
+// Only a groove the description calls clamped braces the top: where the
+// groove is not given, the rope may grip by friction, with moments between
+// the free and clamped bounds and, once it renders, no bracing; the clamped
+// bound is then checked with a free top too, so that the two bounds bound
+// every groove (conservative).
 func (m *model) restraint(s Side) (tower.Restraint, float64) {
-	if saddleKind(m.bank(s).Tower.Saddle) == tower.Fixed && m.grooves[s] == tower.ClampedGroove {
+	g, known := grooveOf(m.bank(s).Tower.Saddle)
+	if saddleKind(m.bank(s).Tower.Saddle) == tower.Fixed && known && g == tower.ClampedGroove {
 		return tower.SpringTop, m.topSpring(s)
 	}
 	return tower.FreeTop, 0
