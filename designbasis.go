@@ -366,7 +366,9 @@ func (a *Analysis) loadCases() BasisGroup {
 		g.Entries = append(g.Entries, BasisEntry{Name: lc.Name, Text: text})
 	}
 	for _, f := range b.LoadedLengths() {
-		d := b.factored(f.Base, true)
+		// the factors of the family's stretches (each carries a stretch; the
+		// base case, without one, would show no crowd factor)
+		d := b.factored(f.at(FromLeft, b.Site.Span, b.Site.Span), true)
 		name := f.Name + " on every loaded length"
 		if f.Label != "" {
 			name += ", " + f.Label
