@@ -184,7 +184,8 @@ func (r RockAnchor) coneWeight(angle units.Angle, s Soil) (w, v float64) {
 //	anchor.rock.thread     T  against  min(A_s fy, k2 fu A_s)                  (EN 1993-1-8:2005 Table 3.4, k2 0.9)
 //	anchor.rock.groutbar   T  against  π d  Lb τ_grout-bar
 //	anchor.rock.groutrock  T  against  π D  Lb τ_grout-rock                     (τ = Soil.GroutBond)
-//	anchor.rock.cone       pull·sin α  against  W of the bars' cones (ConeWeight), rock shear ignored
+//	anchor.rock.cone       pull  against  W sin α, W of the bars' cones (ConeWeight) resolved along their axis,
+//	                       rock shear ignored
 //	anchor.rock.plate      p c²/2  against  fy t²/4 (per unit width), p = T/(a² − π D²/4), c = (a − d_n)/2
 //	anchor.rock.platebearing  p  against the rock's allowable pressure (RockPressure), when known
 //
@@ -192,7 +193,13 @@ func (r RockAnchor) coneWeight(angle units.Angle, s Soil) (w, v float64) {
 // the art, 1977, BS 8081:2015 and EN 1537:2013, from memory; the cone's
 // apex at the middle of the bond length, its axis along the bar, the cones
 // of a row of bars taken together as their union (common practice: the
-// group's combined cone), rock beyond the plane of the heads ignored. The
+// group's combined cone), rock beyond the plane of the heads ignored.
+// With the rock's shear strength ignored, a cone pulled out along its axis
+// is held only by the component of its weight along that axis, W sin α,
+// so the whole pull is checked against it; for a vertical bar this is the
+// usual pull against weight. Checking only the pull's vertical component
+// against the whole weight would pass a flat bar whatever its pull: the
+// cautious form is taken, and said in the result's basis. The
 // head plate is a cantilever from the nut's edge under a uniform bearing
 // pressure (common practice), its plastic resistance per unit width
 // EN 1993-1-1:2005 6.2.5.)
@@ -253,14 +260,21 @@ func (r RockAnchor) Check(pull units.Force, angle units.Angle, s Soil, b *Basis)
 	cone, vol := r.coneWeight(angle, s)
 	geo := r.cone(angle)
 	v := float64(pull) * sinA
+	along := cone * sinA // the cone's weight resolved along the bars' axis
 	coneVals := []check.Value{
+		check.Of("P", "whole pull along the bars", pull),
+		check.Of("α", "inclination of the bars below horizontal", angle),
 		check.Of("V", "upward component of the whole pull", units.Force(v)),
 		check.Of("Vol", "volume of the bars' combined cone", units.Volume(vol)),
 		check.Of("W_c", "effective weight of the combined cone", units.Force(cone)),
+		check.Of("W_a", "the cone's weight resolved along the bars' axis, W_c sin α", units.Force(along)),
 		check.Of("h", "depth of the cones' apex", units.Length(geo.length*sinA)),
 		check.Of("ψ", "cone half-angle", units.Angle(geo.psi)),
 		check.Of("n", "number of bars", units.Ratio(n)),
+		check.Of("s", "spacing of the bars across the pull; zero takes their cones as one", r.Spacing),
 	}
+	coneBasis := "the whole pull against the cone's weight resolved along the bars' axis, W sin α (cautious: with the rock's shear ignored, " +
+		"the pull's vertical component against the whole weight would pass a flat bar whatever its pull)"
 	coneNote := fmt.Sprintf("%d bar(s) at spacing %v sharing %v; cones along the bars' axis, apex %v deep at the middle of the bond length, "+
 		"their union counted, rock shear strength and rock beyond the heads' plane ignored; %v", int(n), r.Spacing, pull, units.Length(geo.length*sinA), r.Water)
 	barVals := []check.Value{check.Of("T", "force per bar", units.Force(t)), check.Of("A", "gross area of a bar", units.Area(gross))}
@@ -293,8 +307,8 @@ func (r RockAnchor) Check(pull units.Force, angle units.Angle, s Soil, b *Basis)
 			check.Stability("anchor.rock.groutrock", "Rock anchor grout-to-rock bond", units.KindForce, t, gRock, bond).
 				WithBasis(fsBasis("ultimate grout-to-rock bond (BS 8081, from memory)", bond)).
 				WithValues(check.Of("τ_r", "ultimate grout-to-rock bond stress", s.GroutBond)),
-			check.Stability("anchor.rock.cone", "Rock cone uplift", units.KindForce, v, cone, cf).
-				WithBasis(fsBasis("the weight of the rock cone", cf)).WithValues(coneVals...).WithNote(coneNote),
+			check.Stability("anchor.rock.cone", "Rock cone pull-out along the bars", units.KindForce, float64(pull), along, cf).
+				WithBasis(fsBasis(coneBasis, cf)).WithValues(coneVals...).WithNote(coneNote),
 		}
 		return append(out, r.plateResults(plate, plate, 1, sf, rockQa, fsBasis("the plate's plastic resistance (EN 1993-1-1:2005 6.2.5)", sf))...), nil
 	}
@@ -324,8 +338,8 @@ func (r RockAnchor) Check(pull units.Force, angle units.Angle, s Soil, b *Basis)
 		check.Stability("anchor.rock.groutrock", "Rock anchor grout-to-rock bond", units.KindForce, td, gRock/gA, 1).
 			WithBasis(label + fmt.Sprintf("anchorage γa %.2f (EN 1997-1 Table A.12, from memory)", gA)).
 			WithValues(check.Of("τ_r", "ultimate grout-to-rock bond stress", s.GroutBond)).WithNote(bondNote),
-		check.Stability("anchor.rock.cone", "Rock cone uplift", units.KindForce, equ.factorOf(true, sh)*v, equ.gGfav*cone, 1).
-			WithBasis(equ.label).WithValues(coneVals...).WithNote(coneNote),
+		check.Stability("anchor.rock.cone", "Rock cone pull-out along the bars", units.KindForce, equ.factorOf(true, sh)*float64(pull), equ.gGfav*along, 1).
+			WithBasis(equ.label+"; "+coneBasis).WithValues(coneVals...).WithNote(coneNote),
 	}
 	design := plate
 	if plate.ok {
