@@ -339,7 +339,7 @@ func (r RockAnchor) Check(pull units.Force, angle units.Angle, s Soil, b *Basis)
 			WithBasis(label + fmt.Sprintf("anchorage γa %.2f (EN 1997-1 Table A.12, from memory)", gA)).
 			WithValues(check.Of("τ_r", "ultimate grout-to-rock bond stress", s.GroutBond)).WithNote(bondNote),
 		check.Stability("anchor.rock.cone", "Rock cone pull-out along the bars", units.KindForce, equ.factorOf(true, sh)*float64(pull), equ.gGfav*along, 1).
-			WithBasis(equ.label+"; "+coneBasis).WithValues(coneVals...).WithNote(coneNote),
+			WithBasis(equ.label + "; " + coneBasis).WithValues(coneVals...).WithNote(coneNote),
 	}
 	design := plate
 	if plate.ok {
