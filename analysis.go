@@ -148,8 +148,8 @@ func Check(b Bridge, opts *Options) (*Analysis, error) {
 	return a, nil
 }
 
-// sink receives check results: a check.Report, or a scorer that keeps
-// only what a design search needs.
+// sink receives check results: the variants' merged report (labelSink),
+// or a scorer that keeps only what a design search needs.
 type sink interface{ add(check.Result) }
 
 func (m *model) run(a *Analysis, opts *Options) error {

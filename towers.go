@@ -88,11 +88,12 @@ func (m *model) variants() []variant {
 }
 
 // restraint returns how the column top of one bank is held along the
-// bridge in the variant analysed: a fixed saddle whose groove holds the
-// rope (clamped or gripping) is braced by the span and backstay; a free
-// groove, a sliding or a roller saddle leaves the top free (cantilever).
+// bridge in the variant analysed: a fixed saddle with the rope clamped is
+// braced by the span and backstay; a free groove, a groove with friction
+// (once the rope renders it no longer braces the top: conservative), a
+// sliding or a roller saddle leaves the top free (cantilever).
 func (m *model) restraint(s Side) tower.Restraint {
-	if saddleKind(m.bank(s).Tower.Saddle) == tower.Fixed && m.grooves[s] != tower.FreeGroove {
+	if saddleKind(m.bank(s).Tower.Saddle) == tower.Fixed && m.grooves[s] == tower.ClampedGroove {
 		return tower.HeldTop
 	}
 	return tower.FreeTop
@@ -139,8 +140,12 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 		if err != nil {
 			return m.bankErr(side, "tower.eccentricity", name, err)
 		}
-		if d == tower.Along {
+		if d == tower.Along && !m.fbasis.Terse { // a design search scores results, it does not read them
 			r = r.WithValues(m.saddleValues(side, svc)...)
+		}
+		if w := svc.ColumnWind[side]; d == tower.Across && w != 0 {
+			r = r.WithValues(check.Of("F_w", "wind on the column face, at mid-height", w)).
+				WithNote("wind on the column face is added to the lateral rope forces (conservative: the rope-line form counts no column weight against it)")
 		}
 		if legs > 0 {
 			// A steel column carries the bending in its members; the

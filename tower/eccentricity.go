@@ -179,7 +179,9 @@ func EccentricityCheck(r Resultant, c Column, opt *Eccentricity) (check.Result, 
 	if err := nonNegative("Eccentricity.Section", yc); err != nil {
 		return check.Result{}, err
 	}
-	if yc > 0 && (yc >= r.Lowest || yc >= c.Height) {
+	// A Resultant built by hand carries no lowest saddle (zero): only the
+	// column top bounds its checked section then.
+	if yc > 0 && ((r.Lowest > 0 && yc >= r.Lowest) || yc >= c.Height) {
 		return check.Result{}, invalid("Eccentricity.Section", yc,
 			fmt.Sprintf("lies at or above the lowest saddle (%v) or the column top (%v): the checked section must lie below where the ropes act", r.Lowest, c.Height))
 	}

@@ -135,3 +135,30 @@ func TestMomentAtClosedFormAgreesWithSampling(t *testing.T) {
 	}
 	t.Logf("%d comparisons; the sampled route missed the least crossing in %d", checked, missed)
 }
+
+// BenchmarkMomentAt compares the closed form with the sampled search it
+// replaced, on a column section of the form the whole-bridge check builds
+// (EN 1992-1-1, 700 × 700 mm, C25/30, B500, 8 Ø20), one sense of bending.
+func BenchmarkMomentAt(b *testing.B) {
+	bar := units.Area(math.Pi * 0.01 * 0.01)
+	s := RCSection{B: 0.7, H: 0.7, Fc: 25e6, Fy: 500e6, Code: EN1992, Bars: RectangularBars(0.7, 0.7, 0.06, 4, 0, bar)}
+	md := s.model(false)
+	b.Run("closed", func(b *testing.B) {
+		b.ReportAllocs()
+		var sink float64
+		for b.Loop() {
+			m, _ := md.momentAt(800e3)
+			sink += m
+		}
+		_ = sink
+	})
+	b.Run("sampled", func(b *testing.B) {
+		b.ReportAllocs()
+		var sink float64
+		for b.Loop() {
+			m, _ := sampledMomentAt(&md, 800e3)
+			sink += m
+		}
+		_ = sink
+	})
+}

@@ -12,8 +12,9 @@ import (
 
 const mpa = units.Megapascal
 
-// sourceSection is the SOURCES.md §5 P–M check section: 400 × 400 mm,
-// f'c 30 MPa, fy 420 MPa, Es 200 GPa, 4 Ø25 (two per face), d' 60 mm.
+// sourceSection is a P–M check section worked by hand with the ACI 318-19
+// 22.2 stress block: 400 × 400 mm, f'c 30 MPa, fy 420 MPa, Es 200 GPa,
+// 4 Ø25 (two per face), d' 60 mm.
 func sourceSection() tower.RCSection {
 	bar := units.Area(math.Pi * 0.0125 * 0.0125)
 	return tower.RCSection{B: 0.4, H: 0.4, Fc: 30 * mpa, Fy: 420 * mpa, Es: 200 * units.Gigapascal,
@@ -56,8 +57,9 @@ func TestRCSectionACIPoints(t *testing.T) {
 	ab := math.Pi * 0.0125 * 0.0125
 	area := []float64{2 * ab, 2 * ab}
 	depth := []float64{0.06, 0.34}
-	// SOURCES.md §5 values are [D] (formula-derived): each is checked here
-	// against the strip integration above as well as against the package.
+	// The values are [D], derived by hand from ACI 318-19 22.2: each is
+	// checked here against the strip integration above as well as against
+	// the package.
 	tests := []struct {
 		c, p, m float64
 	}{
@@ -71,7 +73,7 @@ func TestRCSectionACIPoints(t *testing.T) {
 		}
 		fp, fm := fibreACI(0.4, 0.4, 30e6, 420e6, 200e9, tc.c, area, depth)
 		if !near(fp, tc.p, 2e-5) || !near(fm, tc.m, 2e-5) {
-			t.Errorf("c %g: strip integration %g %g disagrees with SOURCES %g %g", tc.c, fp, fm, tc.p, tc.m)
+			t.Errorf("c %g: strip integration %g %g disagrees with the hand values %g %g", tc.c, fp, fm, tc.p, tc.m)
 		}
 		if !near(float64(pt.Axial), tc.p, 5e-6) || !near(float64(pt.Moment), tc.m, 5e-6) {
 			t.Errorf("c %g: got P %v M %v, want %g %g", tc.c, pt.Axial, pt.Moment, tc.p, tc.m)

@@ -22,8 +22,8 @@ const (
 	FreeTop Restraint = iota
 	// HeldTop: the top is held against sway but free to rotate, the base
 	// fixed, l0 = 0.7 l (Figure 5.7 c): a fixed saddle with the rope
-	// clamped or gripped in its groove, the span and backstay bracing the
-	// top along the bridge.
+	// clamped on it, the span and backstay bracing the top along the
+	// bridge.
 	HeldTop
 )
 
@@ -326,13 +326,15 @@ func (d *direction) check() (columnDirection, error) {
 		check.Of("M_0", "first-order design moment from the applied forces", units.Moment(d.m)),
 		check.Of("l0", "effective length, "+d.restraint.String(), units.Length(l0)),
 		check.Of("λ", "slenderness l0/i", units.Ratio(lam)),
-		check.Of("λ_lim", "slenderness limit 20·A·B·C/√n (5.8.3.1)", units.Ratio(lamLim)),
 		check.Of("n", "relative axial force N_Ed/(A_c f_cd)", units.Ratio(n)),
 		check.Of("φ_ef", "effective creep ratio", units.Ratio(phiEf)),
 		check.Of("e_i", "eccentricity of the geometric imperfection θ_i l0/2 (5.2)", units.Length(ei)),
 		check.Of("e_0", "minimum eccentricity max(h/30, 20 mm) (6.1(4))", units.Length(e0)),
 		check.Of("M_0Ed", "first-order design moment with imperfection, at least N_Ed e_0", units.Moment(m0Ed)),
 		check.Of("N_Rd", "axial resistance of the section in compression", units.Force(comp)),
+	}
+	if n > 0 { // in tension there is no slenderness limit
+		vals = append(vals, check.Of("λ_lim", "slenderness limit 20·A·B·C/√n (5.8.3.1)", units.Ratio(lamLim)))
 	}
 	basis := "EN 1992-1-1:2004, " + d.name + ": slenderness 5.8.3.1 (C 0.7), imperfection 5.2, minimum eccentricity 6.1(4), " +
 		"second-order moments by the nominal-stiffness method 5.8.7 (c0 8), section 3.1.7(3)/6.1 stress block; " + d.restraint.String()

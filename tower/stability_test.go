@@ -70,7 +70,8 @@ func TestStabilityHand(t *testing.T) {
 }
 
 func TestBasePressure(t *testing.T) {
-	// SOURCES.md §4 [D] (formula values; checked here also by equilibrium
+	// [D] values by the middle-third rule (Das, eccentrically loaded
+	// foundations; formula values, checked here also by equilibrium
 	// through quadrature of the returned distribution): strip N 300 kN/m,
 	// B 2 m: e 0.2 → 240/60 kPa; e 0.5 → 400 kPa over 1.5 m.
 	// A 1 m wide footing 2 m long carries 300 kN in total: footing

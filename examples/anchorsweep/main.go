@@ -4,12 +4,17 @@
 // and the check that governs the left bank changes.
 //
 // For each anchor position it runs the whole-bridge check and prints the
-// backstay angle, the resultant's angle and eccentricity at the column base
-// under the worst case, and the governing check of the left bank. The left
+// backstay angle, the rope-force resultant's angle and eccentricity along
+// the bridge at the column base under the worst case, and the governing
+// check of the left bank. The left
 // saddle is fixed to its column by default, where the effect is plainest; a
 // sliding saddle caps the horizontal force at friction, a roller removes it.
 //
-//	go run ./examples/anchorsweep [-from 18] [-to 5] [-step 1] [-drop 3.4] [-saddle fixed]
+//	go run ./examples/anchorsweep [-from 18] [-to 5] [-step 1] [-drop 3.4] [-saddle fixed] [-groove free]
+//
+// A fixed saddle's groove is free by default (the rope renders, its
+// tension continuous); -groove clamped or -groove friction (with
+// -groove-friction) grips it, and -groove "" checks both bounds.
 //
 // The bridge and its numbers are invented. The results support, and never
 // replace, the design of a qualified engineer; local codes and licensed
@@ -37,8 +42,17 @@ func main() {
 	drop := flag.Float64("drop", 3.4, "drop of the anchor below the saddle, m")
 	saddle := flag.String("saddle", "fixed", "left saddle kind: fixed, sliding or roller")
 	friction := flag.Float64("friction", 0.05, "friction coefficient of a sliding saddle")
+	groove := flag.String("groove", "free", `groove of a fixed saddle: free, friction, clamped, or "" for both bounds`)
+	grooveFriction := flag.Float64("groove-friction", 0.1, "friction coefficient between rope and groove, for -groove friction")
 	flag.Parse()
-	if err := sweep(os.Stdout, *from, *to, *step, *drop, sagspan.SaddleSpec{Kind: *saddle, Friction: *friction}); err != nil {
+	spec := sagspan.SaddleSpec{Kind: *saddle, Friction: *friction}
+	if *saddle == "fixed" {
+		spec.Groove = *groove
+		if *groove == "friction" {
+			spec.GrooveFriction = *grooveFriction
+		}
+	}
+	if err := sweep(os.Stdout, *from, *to, *step, *drop, spec); err != nil {
 		fmt.Fprintln(os.Stderr, "anchorsweep:", err)
 		os.Exit(1)
 	}
@@ -48,7 +62,7 @@ func sweep(w io.Writer, from, to, step, drop float64, saddle sagspan.SaddleSpec)
 	if !(step > 0) || from < to || !(to > 0) || !(drop > 0) {
 		return fmt.Errorf("want from >= to > 0, step > 0 and drop > 0; got from %v, to %v, step %v, drop %v", from, to, step, drop)
 	}
-	fmt.Fprintf(w, "Left anchor sweep on the demo bridge (invented site), left saddle %s.\n", saddle.Kind)
+	fmt.Fprintf(w, "Left anchor sweep on the demo bridge (invented site), left saddle %s %s.\n", saddle.Kind, saddle.Groove)
 	fmt.Fprintln(w, check.Caution)
 	fmt.Fprintln(w)
 	tw := tabwriter.NewWriter(w, 0, 0, 2, ' ', 0)
@@ -67,15 +81,12 @@ func sweep(w io.Writer, from, to, step, drop float64, saddle sagspan.SaddleSpec)
 		if !ok {
 			return fmt.Errorf("no left-bank results")
 		}
-		// The resultant under the case that governs the eccentricity.
-		ecc := left.Filter(func(r check.Result) bool { return r.ID == "tower.eccentricity" })
+		// The rope-force resultant along the bridge under the case that
+		// governs its eccentricity: its angle δ from the vertical.
+		ecc := left.Filter(func(r check.Result) bool { return r.ID == "tower.eccentricity" && r.Element == "left tower" })
 		gov, _ := ecc.Worst()
-		var tilt units.Angle
-		for _, cs := range a.Service {
-			if cs.Case.Name == gov.Case {
-				tilt = cs.Tower[sagspan.Left].Angle
-			}
-		}
+		delta, _ := gov.Value("δ")
+		tilt := units.Angle(delta.Value)
 		fmt.Fprintf(tw, "%s\t%s\t%s\t%s of %s\t%s (%s)\t%s\t%.3f\t%s\n",
 			units.Length(h), units.Angle(math.Atan2(drop, h)), tilt,
 			units.Length(gov.Demand), units.Length(gov.Capacity),

@@ -1,0 +1,294 @@
+package sagspan
+
+import (
+	"errors"
+	"math"
+	"strings"
+	"testing"
+
+	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/units"
+)
+
+// withGrooves returns b with both towers' saddle grooves set.
+func withGrooves(b Bridge, groove string, mu float64) Bridge {
+	for _, bank := range []*Bank{&b.Banks.Left, &b.Banks.Right} {
+		bank.Tower.Saddle.Groove = groove
+		bank.Tower.Saddle.GrooveFriction = mu
+	}
+	return b
+}
+
+// levelSpanOnly is the unstretched length of testdata/level.json's span
+// alone (no backstays), hanging with H under w per metre, by Hooke's law
+// on the unstretched length: levelLength without its backstay term.
+func levelSpanOnly(h, w float64) float64 {
+	return levelLength(h, w) - 2*math.Hypot(10, 3)/(1+math.Hypot(h, w*25)/levelEA)
+}
+
+// TestClampedBoundIndependent: with the rope clamped on both fixed saddles
+// of testdata/level.json, span and backstays are independent ropes. The
+// span keeps its own unstretched length (solved here alone by bisection on
+// its length by quadrature), and each backstay its own: over its
+// fixed chord, at the reference temperature, its tension stays the
+// reference tension whatever the span carries.
+func TestClampedBoundIndependent(t *testing.T) {
+	b := withGrooves(loadTestBridge(t, "level.json"), "clamped", 0)
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	perm := a.Service[0].Groups[0]
+	tRef := perm.Tension[Left] // the rope was set with its tension continuous
+	near(t, "reference backstay tension", float64(perm.Backstay[Left]), float64(tRef), 1e-12)
+	h0 := float64(perm.H)
+	w0 := float64(perm.Load.Uniform)
+	target := levelSpanOnly(h0, w0)
+	for _, cs := range a.Service {
+		gs := cs.Groups[0]
+		for side := Left; side <= Right; side++ {
+			near(t, cs.Case.Name+": clamped backstay keeps its tension", float64(gs.Backstay[side]), float64(tRef), 1e-9)
+		}
+		if cs.Case.Crowd != FullSpan || cs.Case.Wind {
+			continue
+		}
+		w := float64(gs.Load.Uniform)
+		lo, hi := h0/10, 100*h0
+		for range 200 {
+			if mid := (lo + hi) / 2; levelSpanOnly(mid, w) > target {
+				lo = mid
+			} else {
+				hi = mid
+			}
+		}
+		near(t, cs.Case.Name+": span H solved alone", float64(gs.H), (lo+hi)/2, 1e-7)
+	}
+}
+
+// TestFrictionChangesVerdict: on testdata/level.json checked within the
+// effective section (limit d_eff/2 = 0.3 m), the resultant passes with a
+// free groove and fails once the groove grips with μ 0.1: the backstay no
+// longer follows the span's tension rise, and the column takes the
+// difference. Friction lies between the free and clamped bounds.
+func TestFrictionChangesVerdict(t *testing.T) {
+	worst := func(groove string, mu float64) check.Result {
+		b := withGrooves(loadTestBridge(t, "level.json"), groove, mu)
+		b.Banks.Left.Tower.Eccentricity.Rule = "section"
+		b.Banks.Right.Tower.Eccentricity.Rule = "section"
+		a, err := Check(b, nil)
+		if err != nil {
+			t.Fatal(err)
+		}
+		var w check.Result
+		for _, r := range a.Report.Results {
+			if r.ID == "tower.eccentricity" && r.Element == "left tower" && (w.ID == "" || r.Ratio > w.Ratio) {
+				w = r
+			}
+		}
+		return w
+	}
+	free, grip, clamped := worst("free", 0), worst("friction", 0.1), worst("clamped", 0)
+	if free.Status != check.Pass || grip.Status != check.Fail {
+		t.Fatalf("free groove %v, μ 0.1 %v: friction should change the verdict", free, grip)
+	}
+	if !(free.Demand < grip.Demand && grip.Demand < clamped.Demand) {
+		t.Errorf("friction's eccentricity %g not between the bounds %g and %g", grip.Demand, free.Demand, clamped.Demand)
+	}
+	if !strings.Contains(grip.Basis, "groove with friction μ 0.1") {
+		t.Errorf("basis %q does not name the saddle behaviour", grip.Basis)
+	}
+	if _, ok := grip.Value("e^μθ_1"); !ok {
+		t.Error("the groove's capstan bound is not among the values")
+	}
+}
+
+// TestUnknownGrooveGoverns: where the description does not say how the
+// rope sits in a fixed saddle, every check reports the worst of the four
+// combinations of the bounds (free groove, rope clamped) on the two banks,
+// and names the one that governs.
+func TestUnknownGrooveGoverns(t *testing.T) {
+	base := loadTestBridge(t, "level.json")
+	unknown, err := Check(withGrooves(base, "", 0), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	type key struct{ id, element, lc string }
+	want := map[key]float64{}
+	for _, l := range []string{"free", "clamped"} {
+		for _, r := range []string{"free", "clamped"} {
+			b := base
+			b.Banks.Left.Tower.Saddle.Groove, b.Banks.Right.Tower.Saddle.Groove = l, r
+			a, err := Check(b, nil)
+			if err != nil {
+				t.Fatal(err)
+			}
+			for _, res := range a.Report.Results {
+				k := key{res.ID, res.Element, res.Case}
+				want[k] = math.Max(want[k], res.Ratio)
+			}
+		}
+	}
+	n := 0
+	for _, res := range unknown.Report.Results {
+		k := key{res.ID, res.Element, res.Case}
+		w, ok := want[k]
+		if !ok || strings.HasPrefix(res.ID, "bridge.frequency") || strings.HasPrefix(res.ID, "vibration.") {
+			continue
+		}
+		n++
+		if res.Ratio != w {
+			t.Errorf("%v: ratio %g, worst of the bounds %g", k, res.Ratio, w)
+		}
+		if !strings.Contains(strings.Join(res.Notes, " "), "saddle behaviour not given") {
+			t.Errorf("%v: no note naming the governing behaviour: %q", k, res.Notes)
+		}
+	}
+	if n < 100 {
+		t.Errorf("only %d results compared", n)
+	}
+}
+
+// TestTowerRowsEveryCase: the demo and the level bridge report the
+// rope-line eccentricity along and across the bridge for every load case,
+// with both forms in their values; every tower result names the saddle
+// behaviour in its basis; rows with nothing to check say why.
+func TestTowerRowsEveryCase(t *testing.T) {
+	for _, name := range []string{"demo.json", "level.json"} {
+		b := loadTestBridge(t, name)
+		a, err := Check(b, nil)
+		if err != nil {
+			t.Fatal(err)
+		}
+		for _, lc := range b.Cases() {
+			for _, el := range []string{"left tower", "left tower, across", "right tower", "right tower, across"} {
+				r := find(t, a.Report, "tower.eccentricity", el, lc.Name)
+				if !strings.Contains(r.Basis, "rope-line form") {
+					t.Errorf("%s %s %s: basis %q", name, el, lc.Name, r.Basis)
+				}
+				for _, sym := range []string{"e", "e_s", "δ", "ΣV", "W", "e_lim"} {
+					if _, ok := r.Value(sym); !ok {
+						t.Errorf("%s %s %s: no value %s", name, el, lc.Name, sym)
+					}
+				}
+				if r.Demand == 0 && !strings.Contains(strings.Join(r.Notes, " "), "e = 0") {
+					t.Errorf("%s %s %s: e = 0 without a word why: %q", name, el, lc.Name, r.Notes)
+				}
+				find(t, a.Report, "tower.column_section", el, lc.Name)
+			}
+		}
+		for _, r := range a.Report.Results {
+			if strings.HasPrefix(r.ID, "tower.") && !strings.Contains(r.Basis, "saddle: ") {
+				t.Errorf("%s: %s %s %s: basis %q does not name the saddle", name, r.ID, r.Element, r.Case, r.Basis)
+			}
+		}
+	}
+}
+
+// TestRollerTravel: the demo's right saddle rolls; the column takes no
+// horizontal force along the bridge, but the saddle's travel puts the rope
+// forces off its axis: e = Σ V_i Δ_i / Σ V by statics, not zero.
+func TestRollerTravel(t *testing.T) {
+	a, err := Check(Demo(), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := find(t, a.Report, "tower.eccentricity", "right tower", "crowd, full span")
+	var mv, v float64
+	for _, k := range []string{"1", "2"} {
+		vi, _ := r.Value("V_" + k)
+		di, _ := r.Value("Δ_" + k)
+		mv += vi.Value * di.Value
+		v += vi.Value
+	}
+	near(t, "roller eccentricity from travel", r.Demand, mv/v, 1e-9)
+	if r.Demand < 0.01 {
+		t.Errorf("roller travel %g m: too small to show", r.Demand)
+	}
+}
+
+// TestSlenderTowerInChain: a 7 m tall 0.35 × 0.35 m column under roller
+// saddles is a cantilever (l0 = 14 m) and the chain finds it buckles.
+func TestSlenderTowerInChain(t *testing.T) {
+	b := loadTestBridge(t, "level.json")
+	for _, bank := range []*Bank{&b.Banks.Left, &b.Banks.Right} {
+		bank.Tower.Height = 7
+		bank.Tower.Depth, bank.Tower.Width = 0.35, 0.35
+		bank.Tower.Saddle = SaddleSpec{Kind: "roller"}
+		bank.Tower.Section.Cover = 0.05
+		bank.Backstay.Drop = 8
+	}
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := find(t, a.Report, "tower.column_section", "left tower", "crowd, full span")
+	if r.Status != check.Fail || r.Kind != units.KindForce || !strings.Contains(strings.Join(r.Notes, " "), "buckles") ||
+		!strings.Contains(r.Basis, "l0 = 2 l") {
+		t.Errorf("slender roller tower: %v %q %q", r, r.Notes, r.Basis)
+	}
+}
+
+// TestSteelTowerInChain: a tower described as a steel frame is checked by
+// EN 1993-1-1 and its resultant is reported, not limited.
+func TestSteelTowerInChain(t *testing.T) {
+	b := Demo()
+	b.Banks.Right.Tower.Section = SectionSpec{Type: "frame", Shape: "circular", Size: 0.2191, Wall: 0.008,
+		Steel: 355 * units.Megapascal, Spacing: 1.8}
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	ecc := find(t, a.Report, "tower.eccentricity", "right tower", "wind")
+	if !ecc.NoLimit || !strings.Contains(strings.Join(ecc.Notes, " "), "steel column") {
+		t.Errorf("steel frame eccentricity: %v %q", ecc, ecc.Notes)
+	}
+	col := find(t, a.Report, "tower.column_biaxial", "right tower", "wind")
+	if !strings.Contains(col.Basis, "EN 1993-1-1") || col.Kind != units.KindRatio {
+		t.Errorf("steel frame member: %v %q", col, col.Basis)
+	}
+	if _, ok := col.Value("N_leg"); !ok {
+		t.Error("no leg force")
+	}
+}
+
+func TestBadTowerDescriptions(t *testing.T) {
+	for _, tc := range []struct {
+		name   string
+		change func(*Bridge)
+		field  string
+		says   string
+	}{
+		{"checked section above the saddle", func(b *Bridge) { b.Banks.Left.Tower.Eccentricity.Section = 3 }, "banks.left.tower.eccentricity.section", "above the saddle"},
+		{"negative checked section", func(b *Bridge) { b.Banks.Left.Tower.Eccentricity.Section = -0.2 }, "banks.left.tower.eccentricity.section", "negative"},
+		{"negative groove friction", func(b *Bridge) {
+			b.Banks.Right.Tower.Saddle = SaddleSpec{Kind: "fixed", Groove: "friction", GrooveFriction: -0.1}
+		}, "banks.right.tower.saddle.groove_friction", "friction coefficient"},
+		{"groove friction missing", func(b *Bridge) { b.Banks.Right.Tower.Saddle = SaddleSpec{Kind: "fixed", Groove: "friction"} },
+			"banks.right.tower.saddle.groove_friction", "missing"},
+		{"free groove on a roller", func(b *Bridge) { b.Banks.Right.Tower.Saddle.Groove = "free" }, "banks.right.tower.saddle.groove", "fixed saddles only"},
+		{"unknown groove", func(b *Bridge) { b.Banks.Right.Tower.Saddle = SaddleSpec{Kind: "fixed", Groove: "greased"} }, "banks.right.tower.saddle.groove", "unknown groove"},
+		{"unknown form", func(b *Bridge) { b.Banks.Left.Tower.Eccentricity.Form = "graphical" }, "banks.left.tower.eccentricity.form", "unknown form"},
+		{"unknown rule", func(b *Bridge) { b.Banks.Left.Tower.Eccentricity.Rule = "half" }, "banks.left.tower.eccentricity.rule", "unknown rule"},
+		{"unknown column type", func(b *Bridge) { b.Banks.Left.Tower.Section.Type = "timber" }, "banks.left.tower.section.type", "unknown column type"},
+		{"tube wall too thick", func(b *Bridge) {
+			b.Banks.Left.Tower.Section = SectionSpec{Type: "tube", Size: 0.2, Wall: 0.1, Steel: 355e6}
+		}, "banks.left.tower.section.wall", "half"},
+		{"frame legs overlap", func(b *Bridge) {
+			b.Banks.Left.Tower.Section = SectionSpec{Type: "frame", Size: 0.2, Wall: 0.01, Steel: 355e6, Spacing: 0.1}
+		}, "banks.left.tower.section.spacing", "overlap"},
+		{"NaN drag", func(b *Bridge) { b.Banks.Left.Tower.Drag = math.NaN() }, "banks.left.tower.drag", "force coefficient"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			b := Demo()
+			tc.change(&b)
+			_, err := Check(b, nil)
+			var fe *FieldError
+			if !errors.As(err, &fe) || !errors.Is(err, ErrInvalid) {
+				t.Fatalf("error %v is not a field error", err)
+			}
+			if fe.Field != tc.field || !strings.Contains(err.Error(), tc.says) {
+				t.Errorf("error %q: field %q, want %q saying %q", err, fe.Field, tc.field, tc.says)
+			}
+		})
+	}
+}
