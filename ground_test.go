@@ -281,11 +281,12 @@ func TestSoftClayBridge(t *testing.T) {
 	}
 	// The left footing's undrained capacity by hand from EN 1997-1 D.3:
 	// qult = (π + 2) c_u s_c i_c + q, s_c = 1 + 0.2 B'/L',
-	// i_c = ½(1 + √(1 − H/(A'c_u))), q = γ·1.0 m (the water lies deep);
-	// the allowable basis divides by 3. B', L' and H are the result's own.
+	// i_c = ½(1 + √(1 − H/(A'c_u))), H the resultant of the forces along
+	// and across the bridge, q = γ·1.0 m (the water lies deep); the
+	// allowable basis divides by 3. B', L', H and H_y are the result's own.
 	r := governingOf(t, a, "footing.bearing", "left footing")
 	val := func(s string) float64 { v, _ := r.Value(s); return v.Value }
-	bp, lp, h := val("B'"), val("L'"), val("H")
+	bp, lp, h := val("B'"), val("L'"), math.Hypot(val("H"), val("H_y"))
 	qult := (math.Pi+2)*18e3*(1+0.2*bp/lp)*0.5*(1+math.Sqrt(1-h/(bp*lp*18e3))) + 17e3*1.0
 	near(t, "undrained footing capacity by hand", r.Capacity, qult/3, 1e-9)
 
@@ -416,4 +417,38 @@ func TestDemoOnSoftClay(t *testing.T) {
 	if uu, _ := slide.Value("U_un"); slide.Status != check.Fail || !(uu.Value > 1) {
 		t.Errorf("anchor sliding on soft clay: %v, U_un %v", slide.Status, uu.Value)
 	}
+}
+
+// TestFootingBothDirections: in a wind case a tower footing carries the
+// rope forces along the bridge and the wind across it at once, and its
+// bearing and sliding are checked under both (EN 1997-1:2004 D.1:
+// A' = B'L' from both eccentricities; the resultant horizontal force).
+// By hand from the case's own column-base forces: e_y = (M_lat + H_lat·t)/N,
+// the sliding force √(H² + H_lat²).
+func TestFootingBothDirections(t *testing.T) {
+	a, err := Check(Demo(), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var svc CaseState
+	for _, s := range a.Service {
+		if s.Case.Name == "wind with crowd" {
+			svc = s
+		}
+	}
+	if svc.Lateral[Left] == 0 {
+		t.Fatal("no lateral force on the left tower in the wind case")
+	}
+	spec := a.Bridge.Banks.Left.Tower.Footing
+	bear := find(t, a.Report, "footing.bearing", "left footing", "wind with crowd")
+	val := func(r check.Result, s string) float64 { v, _ := r.Value(s); return v.Value }
+	n := val(bear, "N")
+	near(t, "e_y", val(bear, "e_y"), float64(svc.LateralMoment[Left]+units.MomentOf(svc.Lateral[Left], spec.Thickness))/n, 1e-12)
+	near(t, "H_y", val(bear, "H_y"), float64(svc.Lateral[Left]), 1e-12)
+	near(t, "A'", val(bear, "A'"), (float64(spec.Length)-2*math.Abs(val(bear, "e")))*(float64(spec.Width)-2*math.Abs(val(bear, "e_y"))), 1e-12)
+	slide := find(t, a.Report, "footing.sliding", "left footing", "wind with crowd")
+	near(t, "sliding force", slide.Demand, math.Hypot(float64(svc.Tower[Left].Horizontal), float64(svc.Lateral[Left])), 1e-12)
+	// The turned footing's bearing is the same check.
+	across := find(t, a.Report, "footing.bearing", "left footing, across", "wind with crowd")
+	near(t, "turned", across.Ratio, bear.Ratio, 1e-12)
 }

@@ -385,7 +385,7 @@ func (a AnchorBlock) sliding(pulls []AnchorPull, s Soil, cond Condition, ld bloc
 	st := s.strengthIn(cond, set)
 	// Pulls unfavourable, the block's weight favourable, uplift unfavourable.
 	bl := a.base(pulls, ld, set, false, set.gGfav, set.gG)
-	bsh := shearResistance(bl.n, bl.e, float64(a.Length), float64(a.Width), st, a.waterAtBase())
+	bsh := shearResistance(bl.n, bl.e, 0, float64(a.Length), float64(a.Width), st, a.waterAtBase())
 	res := bsh.r / set.gRh
 	drive := 0.0
 	for _, p := range pulls {

@@ -98,7 +98,7 @@ func TestAnchorBlockValuesRoundTrip(t *testing.T) {
 		"anchor.bearing": {"N": n, "H": fx, "e": e, "q_max": mean * (1 + 6*e/3), "q_min": mean * (1 - 6*e/3), "l_c": 3,
 			"A'": bp * lEff, "x_R": 1.5 + e, "φ": phi, "c": 0, "q": q, "γ_b": gs, "B'": bp, "L'": lEff,
 			"N_c": nc, "N_q": nq, "N_γ": ng, "s_c": sc, "s_q": sq, "s_γ": sg, "d_c": 1, "d_q": 1, "d_γ": 1,
-			"i_c": ic, "i_q": iq, "i_γ": ig, "m": mExp, "q_c": 0, "q_q": q * nq * sq * iq, "q_γ": 0.5 * gs * bp * ng * sg * ig,
+			"i_c": ic, "i_q": iq, "i_γ": ig, "θ": math.Pi / 2, "m": mExp, "q_c": 0, "q_q": q * nq * sq * iq, "q_γ": 0.5 * gs * bp * ng * sg * ig,
 			"q_ult": q*nq*sq*iq + 0.5*gs*bp*ng*sg*ig},
 	}
 	if e > 0.5 {
