@@ -290,7 +290,7 @@ func (a AnchorBlock) AppendCheck(dst []check.Result, pulls []AnchorPull, s Soil,
 		if bear, err = a.bearingIn(conds, pulls, s, m, ld, []actionSet{set}, def(bs.Bearing, 3)); err != nil {
 			return nil, err
 		}
-		return append(dst, slide, over, lift, bear), nil
+		return append(dst, a.watered(bs, slide), a.watered(bs, over), a.watered(bs, lift), a.watered(bs, bear)), nil
 	}
 	equ := bs.equSet()
 	over = a.overturning(pulls, ld, equ, 1)
@@ -305,7 +305,16 @@ func (a AnchorBlock) AppendCheck(dst []check.Result, pulls []AnchorPull, s Soil,
 	if bear, err = a.bearingIn(conds, pulls, s, m, ld, geo, 1); err != nil {
 		return nil, err
 	}
-	return append(dst, slide, over, lift, bear), nil
+	return append(dst, a.watered(bs, slide), a.watered(bs, over), a.watered(bs, lift), a.watered(bs, bear)), nil
+}
+
+// watered returns r with the water's depth among its values, when there
+// is water and the basis is not terse.
+func (a AnchorBlock) watered(bs Basis, r check.Result) check.Result {
+	if bs.Terse || !a.Water.Present {
+		return r
+	}
+	return r.WithValues(a.Water.values()...)
 }
 
 // slidingIn returns the worst sliding result over the conditions and

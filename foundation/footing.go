@@ -279,7 +279,11 @@ func (f Footing) AppendCheck(dst []check.Result, load FootingLoad, s Soil, m Met
 	if !s.IsRock {
 		bear = governing(sets[0], bearPer[:len(conds)])
 	}
-	return append(dst, bear, governing(sets[0], slidePer[:len(conds)]), over), nil
+	slide := governing(sets[0], slidePer[:len(conds)])
+	if !bs.Terse && f.Water.Present {
+		bear, slide, over = bear.WithValues(f.Water.values()...), slide.WithValues(f.Water.values()...), over.WithValues(f.Water.values()...)
+	}
+	return append(dst, bear, slide, over), nil
 }
 
 // waterAtBase reports whether water stands at or above the footing's base.

@@ -273,13 +273,20 @@ func (r RockAnchor) Check(pull units.Force, angle units.Angle, s Soil, b *Basis)
 		check.Of("n", "number of bars", units.Ratio(n)),
 		check.Of("s", "spacing of the bars across the pull; zero takes their cones as one", r.Spacing),
 	}
+	coneVals = append(coneVals, r.Water.values()...)
 	coneBasis := "the whole pull against the cone's weight resolved along the bars' axis, W sin α (cautious: with the rock's shear ignored, " +
 		"the pull's vertical component against the whole weight would pass a flat bar whatever its pull)"
 	coneNote := fmt.Sprintf("%d bar(s) at spacing %v sharing %v; cones along the bars' axis, apex %v deep at the middle of the bond length, "+
 		"their union counted, rock shear strength and rock beyond the heads' plane ignored; %v", int(n), r.Spacing, pull, units.Length(geo.length*sinA), r.Water)
-	barVals := []check.Value{check.Of("T", "force per bar", units.Force(t)), check.Of("A", "gross area of a bar", units.Area(gross))}
+	barVals := []check.Value{check.Of("T", "force per bar", units.Force(t)), check.Of("A", "gross area of a bar", units.Area(gross)),
+		check.Of("f_y", "yield strength of the bars", r.YieldStrength)}
 	threadVals := []check.Value{check.Of("T", "force per bar", units.Force(t)), check.Of("A_s", "tensile stress area of the thread", units.Area(as)),
+		check.Of("f_y", "yield strength of the bars", r.YieldStrength),
 		check.Of("f_u", "ultimate strength used; f_y when none is given", units.Pressure(fu))}
+	barBondVals := []check.Value{check.Of("τ_b", "ultimate grout-to-bar bond stress", units.Pressure(tauBar)),
+		check.Of("d", "bar diameter", r.BarDiameter), check.Of("L_b", "bond length", r.BondLength)}
+	rockBondVals := []check.Value{check.Of("τ_r", "ultimate grout-to-rock bond stress", s.GroutBond),
+		check.Of("D", "hole diameter", r.HoleDiameter), check.Of("L_b", "bond length", r.BondLength)}
 
 	// The head plate: bearing pressure p under it, cantilever moment per
 	// unit width from the nut's edge, and its plastic moment.
@@ -303,10 +310,10 @@ func (r RockAnchor) Check(pull units.Force, angle units.Angle, s Soil, b *Basis)
 				WithBasis(fsBasis("the thread's resistance min(A_s f_y, 0.9 f_u A_s) (EN 1993-1-8:2005 Table 3.4 with γM2 = 1)", tendon)).WithValues(threadVals...),
 			check.Stability("anchor.rock.groutbar", "Rock anchor grout-to-bar bond", units.KindForce, t, gBar, bond).
 				WithBasis(fsBasis("ultimate grout-to-bar bond (BS 8081, from memory)", bond)).
-				WithValues(check.Of("τ_b", "ultimate grout-to-bar bond stress", units.Pressure(tauBar))),
+				WithValues(barBondVals...),
 			check.Stability("anchor.rock.groutrock", "Rock anchor grout-to-rock bond", units.KindForce, t, gRock, bond).
 				WithBasis(fsBasis("ultimate grout-to-rock bond (BS 8081, from memory)", bond)).
-				WithValues(check.Of("τ_r", "ultimate grout-to-rock bond stress", s.GroutBond)),
+				WithValues(rockBondVals...),
 			check.Stability("anchor.rock.cone", "Rock cone pull-out along the bars", units.KindForce, float64(pull), along, cf).
 				WithBasis(fsBasis(coneBasis, cf)).WithValues(coneVals...).WithNote(coneNote),
 		}
@@ -334,10 +341,10 @@ func (r RockAnchor) Check(pull units.Force, angle units.Angle, s Soil, b *Basis)
 			WithBasis(label + fmt.Sprintf("EN 1993-1-8:2005 Table 3.4, k2 0.9, γM2 %.2f; yield of A_s with γM0 %.2f", gM2, gM0)).WithValues(threadVals...),
 		check.Stability("anchor.rock.groutbar", "Rock anchor grout-to-bar bond", units.KindForce, td, gBar/gA, 1).
 			WithBasis(label + fmt.Sprintf("anchorage γa %.2f (EN 1997-1 Table A.12, from memory)", gA)).
-			WithValues(check.Of("τ_b", "ultimate grout-to-bar bond stress", units.Pressure(tauBar))).WithNote(bondNote),
+			WithValues(barBondVals...).WithNote(bondNote),
 		check.Stability("anchor.rock.groutrock", "Rock anchor grout-to-rock bond", units.KindForce, td, gRock/gA, 1).
 			WithBasis(label + fmt.Sprintf("anchorage γa %.2f (EN 1997-1 Table A.12, from memory)", gA)).
-			WithValues(check.Of("τ_r", "ultimate grout-to-rock bond stress", s.GroutBond)).WithNote(bondNote),
+			WithValues(rockBondVals...).WithNote(bondNote),
 		check.Stability("anchor.rock.cone", "Rock cone pull-out along the bars", units.KindForce, equ.factorOf(true, sh)*float64(pull), equ.gGfav*along, 1).
 			WithBasis(equ.label + "; " + coneBasis).WithValues(coneVals...).WithNote(coneNote),
 	}
@@ -381,6 +388,8 @@ func (r RockAnchor) plateResults(pd, pk plateForces, gM0, fs, qa float64, basis 
 		check.Of("c", "cantilever from the nut's edge", units.Length(pd.c)),
 		check.Of("m", "moment per unit width at the nut's edge, p c²/2", units.Force(pd.m)),
 		check.Of("t_p", "plate thickness", r.Plate.Thickness),
+		check.Of("d_n", "diameter of the nut's bearing face", units.Length(r.nutDiameter())),
+		check.Of("f_y", "yield strength of the plate", r.Plate.Yield),
 	}
 	out := []check.Result{
 		check.Compare("anchor.rock.plate", "Rock anchor head plate bending", units.KindPressure, 4*pd.m/(tp*tp), float64(r.Plate.Yield)/gM0/fs).

@@ -92,14 +92,14 @@ func TestAnchorBlockValuesRoundTrip(t *testing.T) {
 	ic := iq - (1-iq)/(nc*math.Tan(phi))
 	q := sv2
 	want := map[string]map[string]float64{
-		"anchor.sliding":     {"N": n, "δ": 24 * math.Pi / 180, "R_b": n * math.Tan(24*math.Pi/180), "e": e, "μ": 0.5, "P_p": pp, "P_a": pa},
-		"anchor.overturning": {"W": w, "x_W": 1.5, "U": u, "x_U": 1.5},
-		"anchor.uplift":      {"F_z": fz, "W": w, "U": u},
+		"anchor.sliding":     {"N": n, "δ": 24 * math.Pi / 180, "R_b": n * math.Tan(24*math.Pi/180), "e": e, "μ": 0.5, "P_p": pp, "P_a": pa, "d_w": 0.75},
+		"anchor.overturning": {"W": w, "x_W": 1.5, "U": u, "x_U": 1.5, "d_w": 0.75},
+		"anchor.uplift":      {"F_z": fz, "W": w, "U": u, "d_w": 0.75},
 		"anchor.bearing": {"N": n, "H": fx, "e": e, "q_max": mean * (1 + 6*e/3), "q_min": mean * (1 - 6*e/3), "l_c": 3,
 			"A'": bp * lEff, "x_R": 1.5 + e, "φ": phi, "c": 0, "q": q, "γ_b": gs, "B'": bp, "L'": lEff,
 			"N_c": nc, "N_q": nq, "N_γ": ng, "s_c": sc, "s_q": sq, "s_γ": sg, "d_c": 1, "d_q": 1, "d_γ": 1,
 			"i_c": ic, "i_q": iq, "i_γ": ig, "θ": math.Pi / 2, "m": mExp, "q_c": 0, "q_q": q * nq * sq * iq, "q_γ": 0.5 * gs * bp * ng * sg * ig,
-			"q_ult": q*nq*sq*iq + 0.5*gs*bp*ng*sg*ig},
+			"q_ult": q*nq*sq*iq + 0.5*gs*bp*ng*sg*ig, "d_w": 0.75},
 	}
 	if e > 0.5 {
 		t.Fatalf("test geometry: e %v outside the kern", e)
