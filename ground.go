@@ -428,7 +428,9 @@ func (m *model) attachment(dst []check.Result, s Side, spec AnchorSpec, perm, sv
 		for j, r := range rs {
 			if i == 0 || r.Ratio > worst[j].Ratio {
 				if !basis.Terse {
-					r = r.WithNote(fmt.Sprintf("%s: %d ropes of %v, the worst group", grp.Name, grp.Count, grp.rope.Diameter))
+					r = r.WithValues(check.Of("n_r", "number of ropes in the worst group", units.Ratio(grp.Count)),
+						check.Of("d_r", "diameter of those ropes", grp.rope.Diameter)).
+						WithNote(fmt.Sprintf("%s: %d ropes of %v, the worst group", grp.Name, grp.Count, grp.rope.Diameter))
 				}
 				worst[j] = r
 			}

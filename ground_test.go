@@ -452,3 +452,21 @@ func TestFootingBothDirections(t *testing.T) {
 	across := find(t, a.Report, "footing.bearing", "left footing, across", "wind with crowd")
 	near(t, "turned", across.Ratio, bear.Ratio, 1e-12)
 }
+
+// TestAttachmentValues: the rope termination's result names the group it
+// was checked on among its values (the soft-clay bridge's walkway ropes,
+// four of 28 mm, carry the most per rope).
+func TestAttachmentValues(t *testing.T) {
+	a, err := Check(loadTestdata(t, "soft_clay.json"), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, id := range []string{"anchor.attachment", "anchor.loop"} {
+		r := governingOf(t, a, id, "left anchor")
+		n, _ := r.Value("n_r")
+		d, _ := r.Value("d_r")
+		if n.Value != 4 || math.Abs(d.Value-0.028) > 1e-12 {
+			t.Errorf("%s: n_r %v, d_r %v", id, n.Value, d.Value)
+		}
+	}
+}
