@@ -66,7 +66,8 @@ func shearValues(st strength, n float64, bs baseShear) ([]check.Value, string) {
 	}
 	note := fmt.Sprintf("undrained: c_u %v over the effective base A' = %v", units.Pressure(st.c), units.Area(bs.area))
 	if bs.capped {
-		note += "; capped at 0.4 N because water or air can reach the base (EN 1997-1 6.5.3(12))"
+		note += "; capped at 0.4 N because water or air can reach the base (EN 1997-1 6.5.3(12)): for an anchor block always, " +
+			"the pull opening a gap behind it; for a footing where water stands at or above its base or the resultant leaves the kern"
 	}
 	return []check.Value{
 		check.Of("N", "effective normal force on the base", units.Force(n)),
