@@ -94,6 +94,18 @@ func (g bankGround) waterLevel(lc LoadCase) (level units.Length, ok, flood bool)
 	return 0, false, false
 }
 
+// flooded reports whether in case lc the design flood stands above the
+// ground at elevation ground.
+func (g bankGround) flooded(lc LoadCase, ground units.Length) bool {
+	level, ok, flood := g.waterLevel(lc)
+	return ok && flood && level > ground
+}
+
+// scourText is the basis of a block's sliding when the design flood
+// stands over its ground.
+const scourText = "the design flood stands over the block's ground: the passive resistance in front of it is not counted, " +
+	"the flow may scour that soil (EN 1997-1 6.5.3(7); cautious)"
+
 // waterText says in words which water level case lc uses at the bank.
 func (g bankGround) waterText(lc LoadCase) string {
 	level, ok, flood := g.waterLevel(lc)
@@ -366,10 +378,29 @@ func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Re
 	default:
 		blk := g.block(spec)
 		blk.Water = water
+		scoured := blk.PassiveMobilisation > 0 && g.flooded(svc.Case, g.anchorGround)
+		if scoured {
+			blk.PassiveMobilisation = 0
+		}
 		m.scratch, err = blk.AppendCheck(m.scratch[:0], pulls, g.soil, g.method, basis)
+		if err == nil && scoured && !basis.Terse {
+			for i := range m.scratch {
+				if m.scratch[i].ID == "anchor.sliding" {
+					m.scratch[i] = m.scratch[i].WithBasis(m.scratch[i].Basis + "; " + scourText)
+				}
+			}
+		}
 	}
 	if err != nil {
 		return nil, err
+	}
+	if spec.Type == "deadman" && g.flooded(svc.Case, g.anchorGround) && !basis.Terse {
+		for i := range m.scratch {
+			if m.scratch[i].ID == "anchor.deadman.pullout" {
+				m.scratch[i] = m.scratch[i].WithNote("the design flood stands over the deadman's ground: its resistance is the soil in front of it, " +
+					"which scour must not remove (EN 1997-1 6.5.3(7)); protect the ground or place the deadman above the flood")
+			}
+		}
 	}
 	m.waterBasis(m.scratch, s, svc.Case, water)
 	m.scratch, err = m.attachment(m.scratch, s, spec, perm, svc, pull, permanent)

@@ -311,9 +311,12 @@ func TestSoftClayBridge(t *testing.T) {
 // bank's anchor block stands 0.4 m below the design flood (102.0 m), its
 // base at 98.6 m under groundwater at 99.0 m. The flood case governs the
 // block, whose basis names the design flood; its uplift by hand: the
-// 7 × 6.5 × 3 m block is wholly under water, so it loses γw/γc =
+// 9 × 8 × 3 m block is wholly under water, so it loses γw/γc =
 // 9.81/24 = 40.9 % of its weight; in the other cases 0.4 m of it lies in
-// the groundwater: U = 9.81·7·6.5·0.4 = 178.5 kN.
+// the groundwater: U = 9.81·9·8·0.4 = 282.5 kN. With the flood over its
+// ground the passive resistance in front of it is not counted (the flow
+// may scour that soil, EN 1997-1 6.5.3(7)); in the other cases half of it
+// is, as the description asks.
 func TestRiverBankBridge(t *testing.T) {
 	a, err := Check(loadTestdata(t, "river_bank.json"), nil)
 	if err != nil {
@@ -335,7 +338,18 @@ func TestRiverBankBridge(t *testing.T) {
 	near(t, "flooded block's lost weight", u.Value/w.Value, 9.81/24, 1e-12)
 	perm := find(t, a.Report, "anchor.uplift", "right anchor", "permanent")
 	u, _ = perm.Value("U")
-	near(t, "uplift in the groundwater", u.Value, 9.81e3*7*6.5*0.4, 1e-9)
+	near(t, "uplift in the groundwater", u.Value, 9.81e3*9*8*0.4, 1e-9)
+	flooded := find(t, a.Report, "anchor.sliding", "right anchor", "flood with crowd")
+	if _, ok := flooded.Value("P_p"); ok || !strings.Contains(flooded.Basis, "passive resistance in front of it is not counted") {
+		t.Errorf("flooded block counts passive resistance: basis %q", flooded.Basis)
+	}
+	// By hand: N tan δ alone, δ = ⅔·38° (gravel preset, cast block default).
+	n, _ := flooded.Value("N")
+	near(t, "flooded sliding resistance", flooded.Capacity, n.Value*math.Tan(2.0/3*38*math.Pi/180), 1e-12)
+	dry := find(t, a.Report, "anchor.sliding", "right anchor", "crowd, full span")
+	if mu, ok := dry.Value("μ"); !ok || mu.Value != 0.5 {
+		t.Errorf("out of the flood the block counts no passive resistance: %v", dry.Values)
+	}
 	if !strings.Contains(perm.Basis, "groundwater at 99.00 m") {
 		t.Errorf("permanent basis %q does not name the groundwater", perm.Basis)
 	}
