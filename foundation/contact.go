@@ -130,41 +130,46 @@ func BiaxialContactPressure(n units.Force, ex, ey, b, l units.Length) (BiaxialCo
 // noTensionPlane returns the coefficients (a, c_x, c_y) of the pressure
 // max(0, a + c_x x + c_y y) on the base [−b/2, b/2] × [−l/2, l/2] whose
 // resultant is n at (ex, ey): Newton's method on the convex Φ of
-// BiaxialContactPressure.
+// BiaxialContactPressure (the gradient of Φ is the resultant's misfit,
+// its Hessian the second moments of the compressed area). The step is
+// halved until the misfit, scaled by n, n b and n l, shrinks: Φ itself is
+// too large against its last changes for a test in floating point.
 func noTensionPlane(n, ex, ey, b, l float64) ([3]float64, error) {
-	f := [3]float64{n, n * ex, n * ey}
-	// Full-contact start: the linear solution.
-	p := [3]float64{n / (b * l), 12 * n * ex / (b * b * b * l), 12 * n * ey / (b * l * l * l)}
-	phi := func(p [3]float64) (float64, [3]float64, [6]float64) {
-		m := planeMoments(p, b, l)
+	// Coordinates from the resultant's point (ex, ey), where the moments
+	// of even a sliver of contact near an edge stay well conditioned: the
+	// pressure a' + c_x x' + c_y y' must carry n with no moment about it.
+	x0, x1, y0, y1 := -b/2-ex, b/2-ex, -l/2-ey, l/2-ey
+	f := [3]float64{n, 0, 0}
+	scale := [3]float64{n, n * b, n * l}
+	// Full-contact start: the linear solution, about the new origin.
+	cx, cy := 12*n*ex/(b*b*b*l), 12*n*ey/(b*l*l*l)
+	p := [3]float64{n/(b*l) + cx*ex + cy*ey, cx, cy}
+	misfit := func(p [3]float64) ([3]float64, [6]float64, float64) {
+		m := rectMoments(p, x0, x1, y0, y1)
 		// Moments: m = ∫1, ∫x, ∫y, ∫x², ∫xy, ∫y² over the compressed part.
 		g := [3]float64{
-			p[0]*m[0] + p[1]*m[1] + p[2]*m[2],
-			p[0]*m[1] + p[1]*m[3] + p[2]*m[4],
-			p[0]*m[2] + p[1]*m[4] + p[2]*m[5],
+			p[0]*m[0] + p[1]*m[1] + p[2]*m[2] - f[0],
+			p[0]*m[1] + p[1]*m[3] + p[2]*m[4] - f[1],
+			p[0]*m[2] + p[1]*m[4] + p[2]*m[5] - f[2],
 		}
-		val := 0.5*(p[0]*g[0]+p[1]*g[1]+p[2]*g[2]) - (p[0]*f[0] + p[1]*f[1] + p[2]*f[2])
+		r := 0.0
 		for i := range g {
-			g[i] -= f[i]
+			r = math.Max(r, math.Abs(g[i])/scale[i])
 		}
-		return val, g, m
+		return g, m, r
 	}
-	val, g, m := phi(p)
-	for iter := 0; iter < 200; iter++ {
-		if math.Abs(g[0]) <= 1e-12*n && math.Abs(g[1]) <= 1e-12*n*b && math.Abs(g[2]) <= 1e-12*n*l {
-			return p, nil
-		}
+	g, m, r := misfit(p)
+	for iter := 0; iter < 200 && r > 1e-13; iter++ {
 		d, ok := solve3([3][3]float64{{m[0], m[1], m[2]}, {m[1], m[3], m[4]}, {m[2], m[4], m[5]}}, [3]float64{-g[0], -g[1], -g[2]})
 		if !ok {
 			break
 		}
-		slope := g[0]*d[0] + g[1]*d[1] + g[2]*d[2]
 		t := 1.0
 		for ; t > 1e-12; t /= 2 {
 			q := [3]float64{p[0] + t*d[0], p[1] + t*d[1], p[2] + t*d[2]}
-			v, gq, mq := phi(q)
-			if v <= val+1e-4*t*slope {
-				p, val, g, m = q, v, gq, mq
+			gq, mq, rq := misfit(q)
+			if rq < r*(1-1e-4*t) {
+				p, g, m, r = q, gq, mq, rq
 				break
 			}
 		}
@@ -172,18 +177,25 @@ func noTensionPlane(n, ex, ey, b, l float64) ([3]float64, error) {
 			break
 		}
 	}
-	if math.Abs(g[0]) <= 1e-9*n && math.Abs(g[1]) <= 1e-9*n*b && math.Abs(g[2]) <= 1e-9*n*l {
-		return p, nil
+	if r <= 1e-9 {
+		// Back to the base's centre: a + c_x x + c_y y = a' + c_x (x − ex) + c_y (y − ey).
+		return [3]float64{p[0] - p[1]*ex - p[2]*ey, p[1], p[2]}, nil
 	}
 	return p, invalid("BiaxialContactPressure", fmt.Sprintf("found no pressure for eccentricities %g, %g on %g × %g (resultant too near the edge)", ex, ey, b, l))
 }
 
 // planeMoments returns the moments ∫1, ∫x, ∫y, ∫x², ∫xy, ∫y² over the part
-// of the base [−b/2, b/2] × [−l/2, l/2] where a + c_x x + c_y y > 0: the
+// of the base [−b/2, b/2] × [−l/2, l/2] where a + c_x x + c_y y > 0.
+func planeMoments(p [3]float64, b, l float64) [6]float64 {
+	return rectMoments(p, -b/2, b/2, -l/2, l/2)
+}
+
+// rectMoments returns the moments ∫1, ∫x, ∫y, ∫x², ∫xy, ∫y² over the part
+// of the rectangle [x0, x1] × [y0, y1] where a + c_x x + c_y y > 0: the
 // rectangle clipped by that half-plane, fanned into triangles, each moment
 // of degree two exact by the edge-midpoint rule.
-func planeMoments(p [3]float64, b, l float64) [6]float64 {
-	rect := [4][2]float64{{-b / 2, -l / 2}, {b / 2, -l / 2}, {b / 2, l / 2}, {-b / 2, l / 2}}
+func rectMoments(p [3]float64, x0, x1, y0, y1 float64) [6]float64 {
+	rect := [4][2]float64{{x0, y0}, {x1, y0}, {x1, y1}, {x0, y1}}
 	val := func(v [2]float64) float64 { return p[0] + p[1]*v[0] + p[2]*v[1] }
 	var poly [5][2]float64 // a rectangle clipped by a line has at most 5 corners
 	k := 0
