@@ -1,6 +1,8 @@
 package sagspan
 
 import (
+	"sync"
+
 	"github.com/sagspan/sagspan/cable"
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/tower"
@@ -83,6 +85,9 @@ type GroupState struct {
 	// Saddle is the force on each tower column from this group's saddle.
 	Saddle [2]tower.LevelForce
 	shape  cable.Loaded
+	// feed is the rope rendered into the span from the backstays, a start
+	// for nearby states.
+	feed float64
 }
 
 // CaseState is the state of the whole bridge under one load case.
@@ -101,10 +106,17 @@ type CaseState struct {
 	ColumnWind    [2]units.Force
 }
 
-// ErectionTable is the erection-sag table of one rope group.
+// ErectionTable is the erection-sag table of one rope group: the sag and
+// horizontal tension of the bare ropes at each rope temperature of the
+// site's range, from the chain's own rope model.
 type ErectionTable struct {
 	Group string
 	Rows  []cable.ErectionRow
+	// Hold says what the crew holds fixed while setting the sag.
+	Hold string
+	// ConstructionalStretch is the strain the new rope is expected to take
+	// under the walkway, allowed for in the sags.
+	ConstructionalStretch float64
 }
 
 // Analysis is everything the whole-bridge check found.
@@ -160,82 +172,166 @@ func (m *model) run(a *Analysis, opts *Options) error {
 	var all merged
 	for k, v := range m.variants() {
 		m.grooves = v.grooves
-		service, design, err := m.states()
+		service, design, err := m.checkAll(labelSink{&all, v.label}, true)
 		if err != nil {
 			return err
 		}
 		if k == 0 {
 			a.Service, a.Design = service, design
 		}
-		out := labelSink{&all, v.label}
-		if err := m.superstructure(out, service, design); err != nil {
-			return err
-		}
-		for side := Left; side <= Right; side++ {
-			bank := m.bank(side)
-			if err := m.footingChecks(out, side, bank.Tower.Footing, service); err != nil {
-				return err
-			}
-			if err := m.anchorChecks(out, side, bank.Anchor, service); err != nil {
-				return err
-			}
-		}
-		m.checkClearance(out, service)
 	}
 	m.grooves = m.variants()[0].grooves
 	a.Report.Add(all.results...)
+	var grooves collected
+	if err := m.grooveChecks(&grooves); err != nil {
+		return err
+	}
+	a.Report.Add(grooves...)
 	if err := m.comfort(a, a.Service[0], opts); err != nil {
 		return err
 	}
 	return m.erection(a, opts)
 }
 
-// states analyses every load case under characteristic loads (service)
-// and under the factored loads of the partial basis (design). The first
-// case is the permanent one at the reference temperature.
-func (m *model) states() (service, design []CaseState, err error) {
+// checkAll analyses every load case and every loaded-length family in the
+// variant of groove behaviour set, and adds their checks to out (the
+// footing and anchor checks with ground). It returns the states of the
+// cases and of the governing stretches, characteristic and design; the
+// first is the permanent case.
+func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, err error) {
+	// The uplift checks of the cases with wind lifting the walkway follow
+	// the permanent case's checks in the report.
+	var uplift collected
 	for _, lc := range m.b.Cases() {
-		svc, err := m.analyse(lc.characteristic(m.psi))
+		svc, des, ok, err := m.caseStates(&uplift, lc)
 		if err != nil {
 			return nil, nil, err
 		}
-		des := svc
-		if dc := m.designCase(lc); dc != svc.Case {
-			if des, err = m.analyse(dc); err != nil {
+		if ok {
+			service = append(service, svc)
+			design = append(design, des)
+		}
+	}
+	perm := service[0]
+	for k := range service {
+		if k == 1 || len(service) == 1 {
+			for _, r := range uplift {
+				out.add(r)
+			}
+		}
+		if err := m.ropeChecks(out, service[k], design[k], true); err != nil {
+			return nil, nil, err
+		}
+		if err := m.structureChecks(out, perm, service[k], design[k]); err != nil {
+			return nil, nil, err
+		}
+		if ground {
+			if err := m.groundChecks(out, perm, service[k]); err != nil {
 				return nil, nil, err
 			}
 		}
-		service = append(service, svc)
-		design = append(design, des)
+	}
+	found, _, err := m.searchFamilies(out, perm, ground, true)
+	if err != nil {
+		return nil, nil, err
+	}
+	for _, p := range found {
+		service = append(service, p[0])
+		design = append(design, p[1])
 	}
 	return service, design, nil
 }
 
-// superstructure checks, for every case, what the ropes, towers and
-// column sections carry: rope tension, resultant eccentricity, column
-// section.
-func (m *model) superstructure(out sink, service, design []CaseState) error {
-	partial := m.b.partial()
-	for k, svc := range service {
-		des := design[k]
-		name := svc.Case.Name
-		for i, g := range m.groups {
-			var basis cable.TensionBasis = cable.GlobalFactor{Factor: m.b.Basis.RopeFactor}
-			t := svc.Groups[i].MaxTension
-			if partial {
-				basis = cable.PartialFactor{GammaR: m.b.Basis.GammaR, Ke: m.b.Basis.RopeEfficiency}
-				t = des.Groups[i].MaxTension
-			}
-			r, err := cable.TensionCheck(t, g.rope, g.Count, basis)
-			if err != nil {
-				return fieldErr("basis", "%s, case %q: %w; check the rope factors of the basis", g.Name, name, err)
-			}
-			out.add(r.For(g.Name, name))
+// searchFamilies runs the loaded-length search of every family (see
+// searchLength), each on its own copy of the model so that they may run
+// at once (parallel) and, either way, give the same numbers. The results
+// reach out family by family, in order. It returns the states of the
+// governing stretches and the searchers, whose points a design search
+// checks its sizes on.
+func (m *model) searchFamilies(out sink, perm CaseState, ground, parallel bool) (governing [][2]CaseState, searchers []*searcher, err error) {
+	fams := m.b.LoadedLengths()
+	type result struct {
+		results   collected
+		searcher  *searcher
+		governing [][2]CaseState
+		err       error
+	}
+	res := make([]result, len(fams))
+	var wg sync.WaitGroup
+	for i, fam := range fams {
+		c := m.clone()
+		search := func() {
+			r := &res[i]
+			r.searcher, r.governing, r.err = c.searchLength(&r.results, perm, fam, ground)
 		}
-		for side := Left; side <= Right; side++ {
-			if err := m.towerChecks(out, side, svc, des, service[0]); err != nil {
-				return err
-			}
+		if parallel {
+			wg.Go(search)
+		} else {
+			search()
+		}
+	}
+	wg.Wait()
+	for _, r := range res {
+		if r.err != nil {
+			return nil, nil, r.err
+		}
+		for _, x := range r.results {
+			out.add(x)
+		}
+		governing = append(governing, r.governing...)
+		searchers = append(searchers, r.searcher)
+	}
+	return governing, searchers, nil
+}
+
+// collected keeps the results it is given, in order.
+type collected []check.Result
+
+func (c *collected) add(r check.Result) { *c = append(*c, r) }
+
+// caseStates returns the states of case lc, characteristic and design,
+// and false when the wind lifts the walkway so that it has none; a case
+// with wind lifting the walkway adds its uplift check to out.
+func (m *model) caseStates(out sink, lc LoadCase) (svc, des CaseState, ok bool, err error) {
+	if lc.Lift {
+		r, lifted := m.upliftCheck(lc)
+		out.add(r)
+		if lifted {
+			return CaseState{}, CaseState{}, false, nil
+		}
+	}
+	svc, des, err = m.pair(lc, nil)
+	return svc, des, err == nil, err
+}
+
+// structureChecks adds the checks of one case that no foundation size
+// changes, but for the ropes: towers and column members, and in the
+// persistent situation the flood clearance and the walkway gradient. perm
+// is the permanent case, for creep in the columns.
+func (m *model) structureChecks(out sink, perm, svc, des CaseState) error {
+	for side := Left; side <= Right; side++ {
+		if err := m.towerChecks(out, side, svc, des, perm); err != nil {
+			return err
+		}
+	}
+	if svc.Case.Situation == Persistent {
+		m.checkClearance(out, []CaseState{svc})
+		m.checkGradient(out, svc)
+	}
+	return nil
+}
+
+// groundChecks adds the footing and anchor checks of one case at both
+// banks; perm is the permanent case, whose actions they split off as
+// permanent.
+func (m *model) groundChecks(out sink, perm, svc CaseState) error {
+	for side := Left; side <= Right; side++ {
+		bank := m.bank(side)
+		if err := m.footingChecks(out, side, bank.Tower.Footing, perm, []CaseState{svc}); err != nil {
+			return err
+		}
+		if err := m.anchorChecks(out, side, bank.Anchor, perm, []CaseState{svc}); err != nil {
+			return err
 		}
 	}
 	return nil

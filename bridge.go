@@ -97,6 +97,11 @@ type Walkway struct {
 	// WindDepth is the height of the walkway face exposed to wind; zero
 	// means Depth.
 	WindDepth units.Length `json:"wind_depth,omitempty"`
+	// GradientLimit is the steepest gradient (rise over run) the walkway
+	// may take anywhere along the span under the persistent cases; absent
+	// means 1:2.5 (this library's judgement, see walkway.gradient). Give the
+	// limit the users need: 1:12 for wheelchairs, for instance.
+	GradientLimit *float64 `json:"gradient_limit,omitempty"`
 }
 
 // Part is one component of the walkway dead load.
@@ -138,6 +143,15 @@ type RopeGroup struct {
 	// Offset is the height of this group's saddles above the walkway-rope
 	// saddles, the same on both towers (zero for walkway ropes).
 	Offset units.Length `json:"offset,omitempty"`
+	// Sharing is the factor by which the most loaded rope of the group
+	// carries more than an equal share, at least 1; absent means 1.1 for a
+	// group of two ropes or more (common practice, see cable.TensionCheck).
+	Sharing *float64 `json:"sharing,omitempty"`
+	// ConstructionalStretch is the permanent strain new rope takes as its
+	// strands bed in under the first loads; absent means 0.25 % (common
+	// practice for six-strand rope, see the erection table); give 0 for
+	// pre-stretched rope.
+	ConstructionalStretch *float64 `json:"constructional_stretch,omitempty"`
 }
 
 // RopeSpec chooses a rope from the catalogue of a construction, or gives
@@ -235,6 +249,10 @@ type SaddleSpec struct {
 	// GrooveFriction is the coefficient of friction between rope and
 	// groove, for groove "friction".
 	GrooveFriction float64 `json:"groove_friction,omitempty"`
+	// GrooveDiameter is the diameter of the saddle's groove along the rope
+	// (twice its radius of curvature, measured to the rope's axis), checked
+	// against the rope diameter (cable.saddle_ratio); zero when not known.
+	GrooveDiameter units.Length `json:"groove_diameter,omitempty"`
 }
 
 // SectionSpec is the column section. Type "concrete" (the default) is a
@@ -522,6 +540,33 @@ type Loads struct {
 	// WalkwayDrag is the force coefficient of the walkway face; zero means
 	// 1.8 (common practice for a bluff deck with open fencing, from memory).
 	WalkwayDrag float64 `json:"walkway_drag,omitempty"`
+	// WalkwayLift is the force coefficient of the upward wind force on the
+	// walkway, on its width; zero means 0.9 (EN 1991-1-4 8.3.3, from memory).
+	WalkwayLift float64 `json:"walkway_lift,omitempty"`
+	// CrowdInAccident is ψ1 on the crowd with a rope broken; zero means 0.4
+	// (EN 1990 Table A2.2, from memory).
+	CrowdInAccident float64 `json:"crowd_in_accident,omitempty"`
+	// BreakDynamic multiplies the change of tension in the ropes left when
+	// one breaks; zero means 2 (a suddenly applied load on an undamped
+	// elastic system).
+	BreakDynamic float64 `json:"break_dynamic,omitempty"`
+	// SunDifference is how many kelvin cooler the shaded backstays are than
+	// the sunlit span; zero means 10 K (EN 1991-1-5 6.1.6, from memory).
+	SunDifference float64 `json:"sun_difference,omitempty"`
+	// ConstructionLoad is the crew and tools on the placed walkway during
+	// construction; zero means 1.0 kN/m² (EN 1991-1-6 Table 4.1, from
+	// memory).
+	ConstructionLoad units.Pressure `json:"construction_load,omitempty"`
+	// DeckFrom is the bank the walkway is placed from during construction:
+	// "left" (default) or "right".
+	DeckFrom string `json:"deck_from,omitempty"`
+	// Cases are load cases of the description's own, checked beside the
+	// defaults.
+	Cases []CaseSpec `json:"cases,omitempty"`
+	// Omit names default cases or searched families to leave out, as
+	// Bridge.Cases and Bridge.LoadedLengths name them ("wind, coldest
+	// rope", "deck placed").
+	Omit []string `json:"omit,omitempty"`
 }
 
 // Basis chooses how the checks are verified.
@@ -538,13 +583,20 @@ type Basis struct {
 	BearingFactor     float64 `json:"bearing_factor,omitempty"`     // on the ultimate bearing pressure; default 3.0
 
 	// Partial-factor basis, EN 1990 Annex A2; zero takes the default.
-	GammaG float64 `json:"gamma_g,omitempty"` // γG on unfavourable permanent loads; default 1.35
-	GammaQ float64 `json:"gamma_q,omitempty"` // γQ on the crowd and the wind; default 1.5
+	GammaG    float64 `json:"gamma_g,omitempty"`     // γG on unfavourable permanent loads; default 1.35
+	GammaGInf float64 `json:"gamma_g_inf,omitempty"` // γG on favourable permanent loads (wind lifting the walkway); default 1.0
+	GammaQ    float64 `json:"gamma_q,omitempty"`     // γQ on the crowd, the wind and construction loads; default 1.5
 	// GammaR is the rope resistance factor of EN 1993-1-11; zero → default.
 	GammaR float64 `json:"gamma_r,omitempty"`
-	// RopeEfficiency is the termination efficiency k_e of EN 1993-1-11;
-	// zero → cable.DefaultKe.
+	// RopeEfficiency is the termination efficiency k_e of the ropes, on
+	// both bases; zero → that of Termination, else cable.DefaultKe.
 	RopeEfficiency float64 `json:"rope_efficiency,omitempty"`
+	// Termination names the rope terminations, for their efficiency:
+	// "clips", "ferrule" or "socket" (see cable.TerminationEfficiency).
+	Termination string `json:"termination,omitempty"`
+	// MinGrooveRatio is the least saddle groove diameter to rope diameter
+	// ratio D/d; zero → cable.DefaultMinGrooveRatio.
+	MinGrooveRatio float64 `json:"min_groove_ratio,omitempty"`
 
 	// Ground checks on the partial basis, EN 1997-1 Annex A; zero takes
 	// the recommended value documented in foundation.Basis.

@@ -26,10 +26,10 @@ type ComfortSpec struct {
 	// Traffic is the walkers' traffic class: "sparse" (default, 0.5
 	// walkers per m², normal use), "dense" (0.8) or "very dense" (1.0).
 	Traffic string `json:"traffic,omitempty"`
-	// Backstays, when true, lets the ropes render over fixed and sliding
-	// saddles into their backstays, and roller saddles move with the
-	// backstays holding them, in the modal analysis; false holds the ropes
-	// at the saddles, as the closed form does.
+	// Backstays is whether the modal analysis lets the ropes render over
+	// fixed and sliding saddles into their backstays, and roller saddles
+	// move with the backstays holding them; false holds the ropes at the
+	// saddles, as the closed form does.
 	Backstays bool `json:"backstays,omitempty"`
 }
 
@@ -74,9 +74,9 @@ func (c ComfortSpec) damping() (float64, string) {
 	case c.Damping > 0:
 		return c.Damping, "given in the description"
 	case c.Deck == "timber":
-		return defaultDampingTimber, "default for a timber deck (Sétra 2006, from memory)"
+		return defaultDampingTimber, "the default for a timber deck, Sétra 2006, from memory"
 	}
-	return defaultDampingSteel, "default for a steel deck or ropes alone (Sétra 2006, from memory)"
+	return defaultDampingSteel, "the default for a steel deck or bare ropes, Sétra 2006, from memory"
 }
 
 // Comfort is the dynamics of the finished bridge under its permanent load:
@@ -92,8 +92,9 @@ type Comfort struct {
 	// and LockIns the lock-in numbers of the lateral ones.
 	Responses []vibration.Response
 	LockIns   []vibration.LockIn
-	// Backstays reports whether the backstays took part.
-	Backstays bool
+	// Backstays reports whether the backstays took part, Strict whether
+	// comfort was a limit state.
+	Backstays, Strict bool
 }
 
 // closedForm returns the Irvine–Caughey frequencies of the whole rope
@@ -158,10 +159,14 @@ func (m *model) vibrationModel(perm CaseState, backstays bool) vibration.Model {
 	return vm
 }
 
-const modalBasis = "lumped-mass modal analysis about the permanent state at the reference temperature " +
-	"(tensioned rope elements, axial and geometric stiffness; longitudinal, lateral and vertical degrees of freedom; gonum EigenSym); " +
-	"each rope group split equally between two planes at the walkway's edges, every rope tied to the walkway's rigid cross-section; " +
-	"beside the closed form of Irvine & Caughey (1974, from memory)"
+// modalMethod says how the modes were found, and modalBasis that with
+// the closed form beside them.
+const (
+	modalMethod = "lumped-mass modal analysis about the permanent state at the reference temperature " +
+		"(tensioned rope elements, axial and geometric stiffness; longitudinal, lateral and vertical degrees of freedom; gonum EigenSym); " +
+		"each rope group split equally between two planes at the walkway's edges, every rope tied to the walkway's rigid cross-section"
+	modalBasis = modalMethod + "; beside the closed form of Irvine & Caughey (1974, from memory)"
+)
 
 // comfort runs the comfort stage: the closed form always; with it, unless
 // switched off, the modal analysis, the accelerations of the modes in a
@@ -187,7 +192,7 @@ func (m *model) comfort(a *Analysis, perm CaseState, opts *Options) error {
 		return fmt.Errorf("sagspan: modal analysis: %w", err)
 	}
 	damping, _ := spec.damping()
-	c := &Comfort{Modal: modal, Closed: closed, Backstays: spec.Backstays,
+	c := &Comfort{Modal: modal, Closed: closed, Backstays: spec.Backstays, Strict: opts.StrictComfort,
 		Walkers: vibration.Walkers{Traffic: trafficNames[spec.Traffic], Damping: damping}}
 	a.Comfort = c
 
@@ -216,7 +221,7 @@ func (m *model) comfort(a *Analysis, perm CaseState, opts *Options) error {
 				check.Of("f", "natural frequency, discretised", md.Frequency),
 				check.Of("M*", "modal mass, largest displacement of the walking surface 1", md.ModalMass),
 				check.Of("ε_h", "estimated discretisation error (reads low)", units.Ratio(md.Error)),
-				check.Of("n", "elements along the span", units.Ratio(modal.Elements)),
+				check.Of("n_el", "elements along the span", units.Ratio(modal.Elements)),
 			)
 		if f.closed > 0 {
 			r = r.WithValues(
@@ -277,6 +282,22 @@ func (c *Comfort) first(kind vibration.Kind, symmetric bool) int {
 	return -1
 }
 
+// closedOf maps the index of the first mode of each kind the closed form
+// gives to the closed form's frequency.
+func (c *Comfort) closedOf() map[int]units.Frequency {
+	out := map[int]units.Frequency{}
+	for _, p := range []struct {
+		kind      vibration.Kind
+		symmetric bool
+		f         units.Frequency
+	}{{vibration.Vertical, false, c.Closed.Antisymmetric}, {vibration.Vertical, true, c.Closed.Symmetric}, {vibration.Lateral, true, c.Closed.Swing}} {
+		if i := c.first(p.kind, p.symmetric); i >= 0 {
+			out[i] = p.f
+		}
+	}
+	return out
+}
+
 // strict fails a flagged result when comfort is a limit state.
 func strict(r check.Result, on bool) check.Result {
 	if on && r.Status == check.Flag {
@@ -303,91 +324,4 @@ func closedFrequency(id, title string, f units.Frequency, ranges [][2]units.Freq
 		return r.WithNote(fmt.Sprintf("%s lies in the range %s–%s that walkers excite: assess the response or change the design", f, ranges[k][0], ranges[k][1]))
 	}
 	return r
-}
-
-// comfortSection is the comfort part of the report: the modes of the
-// modal analysis beside the closed form, the walkers' response of each mode
-// in a critical range, and the lateral lock-in crowd; the closed form alone
-// when the modal analysis is switched off.
-func (a *Analysis) comfortSection() check.Section {
-	cm := a.Modes
-	c := a.Comfort
-	if c == nil {
-		return check.Section{ID: "comfort", Title: "Natural frequencies (permanent load, closed form; modal analysis switched off)",
-			Head: []string{"Mode", "Frequency"}, Rows: [][]string{
-				{"first out-of-plane (swing)", cm.Swing.String()},
-				{"first in-plane antisymmetric", cm.Antisymmetric.String()},
-				{"first in-plane symmetric", cm.Symmetric.String()},
-				{"Irvine's λ²", fmt.Sprintf("%.1f", cm.LambdaSq)},
-			}}
-	}
-	closedOf := map[int]units.Frequency{}
-	for _, p := range []struct {
-		kind      vibration.Kind
-		symmetric bool
-		f         units.Frequency
-	}{{vibration.Vertical, false, cm.Antisymmetric}, {vibration.Vertical, true, cm.Symmetric}, {vibration.Lateral, true, cm.Swing}} {
-		if i := c.first(p.kind, p.symmetric); i >= 0 {
-			closedOf[i] = p.f
-		}
-	}
-	resp := map[int]vibration.Response{}
-	for _, r := range c.Responses {
-		resp[r.Mode] = r
-	}
-	backstays := "ropes held at the saddles"
-	if c.Backstays {
-		backstays = "ropes rendering over the saddles into the backstays"
-	}
-	damping, how := a.Bridge.Comfort.damping()
-	modes := check.Section{ID: "modes", Title: "Natural modes (permanent load)",
-		Text: []string{fmt.Sprintf("%d elements, %s, beside the closed form of Irvine & Caughey (λ² = %.1f); walkers: %s traffic, damping %.2g %% (%s).",
-			c.Modal.Elements, backstays, cm.LambdaSq, c.Walkers.Traffic, 100*damping, how)},
-		Head: []string{"Mode", "Kind", "Frequency", "Closed form", "Difference", "Modal mass", "Critical range", "Acceleration", "Status"}}
-	for i, md := range c.Modal.Modes {
-		row := []string{fmt.Sprint(i + 1), md.Label(), md.Frequency.String(), "", "", md.ModalMass.String(), "", "", ""}
-		status := check.Info
-		if fc, ok := closedOf[i]; ok {
-			row[3] = fc.String()
-			row[4] = fmt.Sprintf("%+.1f %%", 100*(float64(md.Frequency/fc)-1))
-		}
-		if r, ok := resp[i]; ok {
-			row[6] = rangeOf(r)
-			row[7] = fmt.Sprintf("%s of %s", r.Acceleration, r.Limit)
-			status = check.Pass
-			if r.Acceleration > r.Limit {
-				status = check.Flag
-			}
-			row[8] = status.String()
-		}
-		modes.Rows = append(modes.Rows, row)
-		modes.Status = append(modes.Status, status)
-	}
-	sec := check.Section{ID: "comfort", Title: "Comfort", Sub: []check.Section{modes}}
-	if len(c.LockIns) == 0 {
-		return sec
-	}
-	lock := check.Section{ID: "lock-in", Title: "Lateral lock-in",
-		Text: []string{"N_L = 8πξfM*/k, k = 300 N·s/m (Dallard et al. 2001, from memory), against the crowd the walkway holds at 1 walker per m²."},
-		Head: []string{"Mode", "Frequency", "Modal mass", "N_L", "Crowd", "Status"}}
-	for _, l := range c.LockIns {
-		status := check.Pass
-		if l.Crowd >= l.Critical {
-			status = check.Flag
-		}
-		lock.Rows = append(lock.Rows, []string{fmt.Sprint(l.Mode + 1), l.Frequency.String(), l.ModalMass.String(), fmt.Sprintf("%.1f", l.Critical), fmt.Sprintf("%.0f", l.Crowd), status.String()})
-		lock.Status = append(lock.Status, status)
-	}
-	sec.Sub = append(sec.Sub, lock)
-	return sec
-}
-
-// rangeOf names the critical range a response's mode lies in.
-func rangeOf(r vibration.Response) string {
-	ranges := vibration.VerticalRanges
-	if r.Direction == vibration.Across {
-		ranges = vibration.LateralRanges
-	}
-	k, _ := vibration.InRange(r.Frequency, ranges)
-	return fmt.Sprintf("%.2f–%.2f Hz", float64(ranges[k][0]), float64(ranges[k][1]))
 }

@@ -146,6 +146,9 @@ func (a *Analysis) DesignBasis() DesignBasis {
 	db := DesignBasis{Bridge: b.Name, Library: Version(), Digest: b.Digest(), Source: a.Source}
 	walkValues(reflect.ValueOf(b), "", func(fi fieldInfo, v reflect.Value) {
 		e := BasisEntry{Name: fi.Path, Text: formatLeaf(v), Source: "given"}
+		if v.Kind() == reflect.String {
+			e.Text = v.String() // as given, without the quotes the tables show
+		}
 		if q, ok := v.Interface().(kinded); ok {
 			e.Value, e.Unit = si(v.Float(), q.Kind())
 		} else if l, ok := v.Interface().(Level); ok && !l.None {
@@ -207,6 +210,7 @@ func (a *Analysis) soilsUsed() BasisGroup {
 		}
 		prefix := "banks." + side.String() + ".soil"
 		sv, specV := reflect.ValueOf(soil), reflect.ValueOf(spec)
+		told := false // the preset's source, said once per bank
 		st := sv.Type()
 		for i := range st.NumField() {
 			f := st.Field(i)
@@ -214,7 +218,13 @@ func (a *Analysis) soilsUsed() BasisGroup {
 				continue
 			}
 			name := side.String() + " bank, " + soil.Name + ": " + words(f.Name)
-			source := "preset " + fmt.Sprintf("%q", spec.Preset) + " (" + soil.Source + ")"
+			source := fmt.Sprintf("preset %q", spec.Preset)
+			switch {
+			case spec.Preset == "":
+				source = "derived from the soil given (" + prefix + ")"
+			case !told:
+				source, told = source+" ("+soil.Source+")", true
+			}
 			if sf, ok := specV.Type().FieldByName(f.Name); ok && !specV.FieldByIndex(sf.Index).IsZero() {
 				jn, _ := jsonName(sf)
 				source = "given (" + prefix + "." + jn + ")"
@@ -224,7 +234,20 @@ func (a *Analysis) soilsUsed() BasisGroup {
 				e.Value, e.Unit = si(sv.Field(i).Float(), q.Kind())
 			}
 			if sv.Field(i).IsZero() {
-				e.Source = "not set: the package's default applies (see foundation.Soil." + f.Name + ")"
+				switch f.Name {
+				case "Submerged":
+					w := soil.SubmergedWeight()
+					e.Text, e.Source = w.String(), fmt.Sprintf("default: unit weight less that of water, %s (foundation.WaterUnitWeight)", foundation.WaterUnitWeight)
+					e.Value, e.Unit = si(float64(w), units.KindUnitWeight)
+				case "Interface":
+					e.Text, e.Source = fmt.Sprintf("%.3g", foundation.DefaultInterface), "default: δ = 2/3 φ' (foundation.DefaultInterface)"
+				default:
+					if spec.Preset == "" {
+						e.Source = "not given: none"
+					} else {
+						e.Source += ", which gives none"
+					}
+				}
 			}
 			g.Entries = append(g.Entries, e)
 		}
@@ -267,7 +290,7 @@ func (a *Analysis) derivedLoads() BasisGroup {
 	for _, l := range []struct {
 		name string
 		len  units.Length
-	}{{"full span", b.Site.Span}, {"half span", b.Site.Span / 2}} {
+	}{{"full span", b.Site.Span}} {
 		q := b.crowd(l.len)
 		f := fmt.Sprintf("q = 2.0 + 120/(L + 30) kN/m², 2.5 ≤ q ≤ 5.0, L = %s", l.len)
 		src := "EN 1991-2:2003 cl. 5.3.2.1(2), the loaded length L"
@@ -278,6 +301,16 @@ func (a *Analysis) derivedLoads() BasisGroup {
 			entry("crowd pressure, crowd on the "+l.name, float64(q), units.KindPressure, f, src),
 			entry("crowd load per metre, crowd on the "+l.name, float64(q)*float64(b.Walkway.Width), units.KindLoadPerLength,
 				fmt.Sprintf("q × walkway width = %s × %s", q, b.Walkway.Width), "derived"))
+	}
+	if b.Loads.Crowd == 0 {
+		g.Entries = append(g.Entries, BasisEntry{Name: "crowd pressure on a shorter loaded length",
+			Text:   "each stretch the loaded-length search tries carries the pressure of its own length L by the same formula: 5.000 kPa up to 10 m, 2.500 kPa from 210 m",
+			Source: "EN 1991-2:2003 cl. 5.3.2.1(2)"})
+	}
+	if l := b.lift(); l > 0 {
+		g.Entries = append(g.Entries, entry("upward wind force on the walkway", float64(l), units.KindLoadPerLength,
+			fmt.Sprintf("c_f,z q_p b = %.3g × %s × %s", orDefault(b.Loads.WalkwayLift, defaultLift), b.wind(), b.Walkway.Width),
+			"EN 1991-1-4 8.3.3 (from memory); c_f,z "+givenOr(b.Loads.WalkwayLift, "loads.walkway_lift", "0.9")))
 	}
 	wind := b.wind()
 	switch {
@@ -323,26 +356,25 @@ func (a *Analysis) derivedLoads() BasisGroup {
 }
 
 // loadCases lists the load cases with the actions in each and their
-// factors.
+// factors, and the families searched over the loaded length.
 func (a *Analysis) loadCases() BasisGroup {
 	g := BasisGroup{Title: "Load cases"}
-	crowd := map[Crowd]string{NoCrowd: "no crowd", FullSpan: "crowd on the full span", LeftHalf: "crowd on the left half", RightHalf: "crowd on the right half"}
-	for i, cs := range a.Service {
-		lc := cs.Case
-		parts := []string{crowd[lc.Crowd]}
-		if lc.Wind {
-			parts = append(parts, fmt.Sprintf("wind × %.2g", lc.GammaW))
-		}
-		parts = append(parts, "ropes at "+lc.Temperature.String())
-		if lc.Flood {
-			parts = append(parts, "water at the design flood at the footings and anchors it reaches")
-		}
-		text := strings.Join(parts, ", ")
-		if i < len(a.Design) {
-			d := a.Design[i].Case
-			text += fmt.Sprintf("; factored: γG %.3g, γQ %.3g, γW %.3g", d.GammaG, d.GammaQ, d.GammaW)
-		}
+	b := a.Bridge
+	for _, lc := range b.Cases() {
+		d := b.factored(lc, true)
+		text := lc.describe(b) + fmt.Sprintf("; factored: γG %.3g, γQ %.3g, γW %.3g", d.GammaG, d.GammaQ, d.GammaW)
 		g.Entries = append(g.Entries, BasisEntry{Name: lc.Name, Text: text})
+	}
+	for _, f := range b.LoadedLengths() {
+		// the factors of the family's stretches (each carries a stretch; the
+		// base case, without one, would show no crowd factor)
+		d := b.factored(f.at(FromLeft, b.Site.Span, b.Site.Span), true)
+		name := f.Name + " on every loaded length"
+		if f.Label != "" {
+			name += ", " + f.Label
+		}
+		text := f.describe(b) + fmt.Sprintf("; factored: γG %.3g, γQ %.3g", d.GammaG, d.GammaQ)
+		g.Entries = append(g.Entries, BasisEntry{Name: name, Text: text})
 	}
 	return g
 }
@@ -508,7 +540,7 @@ func inputTable(name string, f reflect.StructField, v reflect.Value) check.Secti
 		}
 		m := r.meaning
 		if m == last {
-			m = "〃" // as above: the meaning of a list's elements, or of fields documented together
+			m = "(as above)" // the meaning of a list's elements, or of fields documented together
 		} else {
 			last = m
 		}

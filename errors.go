@@ -97,7 +97,7 @@ func (m *model) groupErr(i int, lc LoadCase, err error) error {
 	where := fmt.Sprintf("%s, case %q", name, lc.Name)
 	msg := err.Error()
 	switch {
-	case strings.Contains(msg, "strains the rope") && lc.Crowd == NoCrowd && !lc.Wind && lc.Temperature == m.b.Climate.Reference:
+	case strings.Contains(msg, "strains the rope") && !lc.crowded() && !lc.windy() && lc.Temperature == m.b.Climate.Reference:
 		return fieldErr(m.b.deadLoadField(), "%s: %w; the walkway's own weight strains the %s beyond what the rope model covers: lighten the walkway (%s) or use larger or more ropes (%s.rope.diameter, %s.count)",
 			where, err, name, m.b.deadLoadField(), g, g)
 	case strings.Contains(msg, "strains the rope"):

@@ -3,6 +3,8 @@ package sagspan_test
 import (
 	"context"
 	"fmt"
+	"log"
+	"os"
 
 	"github.com/sagspan/sagspan"
 	"github.com/sagspan/sagspan/units"
@@ -22,9 +24,9 @@ func ExampleCheck() {
 	}
 	// Output:
 	// overall: flag
-	// cable.tension (walkway ropes): 801.6 kN of 1290 kN under "cold with crowd"
-	// cable.tension (handrail ropes): 11.06 kN of 168.0 kN under "wind"
-	// bridge.clearance (walkway): 1.500 m of 4.164 m under "hot with crowd"
+	// cable.tension (walkway ropes): 147.7 kN of 193.6 kN under "crowd 0.90 L at midspan, coldest rope"
+	// cable.tension (handrail ropes): 5.223 kN of 75.61 kN under "wind, coldest rope"
+	// bridge.clearance (walkway): 1.500 m of 4.042 m under "crowd 0.46 L at midspan, hottest rope"
 }
 
 func ExampleCrowdPressure() {
@@ -68,6 +70,28 @@ func ExampleSearch() {
 			1/d.SagRatio, d.Count, d.Anchor.Length, d.Cost, d.Utilisation)
 	}
 	// Output:
-	// 8 candidates, 8 feasible
-	// best: sag 1/20, 4 ropes, anchor 4.500 m long, cost 40724, utilisation 0.913
+	// 8 candidates, 2 feasible
+	// best: sag 1/20, 6 ropes, anchor 4.500 m long, cost 45958, utilisation 0.976
+}
+
+// ExampleAnalysis_WriteText is the README's "Using it from Go": read a
+// description, check it, print the whole report. The README quotes its
+// body (TestREADMEUsingItFromGo), so the snippet there always compiles.
+func ExampleAnalysis_WriteText() {
+	b, err := sagspan.LoadFile("testdata/demo.json") // your own description
+	if err != nil {
+		log.Fatal(err) // names the field and its line, such as banks.left.anchor.length
+	}
+	a, err := sagspan.Check(b, nil)
+	if err != nil {
+		log.Fatal(err) // traced to the field that caused it, with advice
+	}
+	a.Source = "testdata/demo.json" // named in the report's design basis
+	// The design basis, every failure, the governing case of every check,
+	// their values, notes and sources, rope states, comfort, erection table.
+	if err := a.WriteText(os.Stdout, nil); err != nil {
+		log.Fatal(err)
+	}
+	// a.WriteMarkdown, a.WriteJSON and a.WriteHTML write the same report in
+	// other forms; a.WriteSVG the elevation drawing.
 }

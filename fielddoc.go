@@ -1,6 +1,6 @@
 package sagspan
 
-//go:generate go test -run ^TestFieldDocs$|^TestFieldReference$ -update .
+//go:generate go test -run ^(TestFieldDocs|TestFieldReference|TestREADMEUsingItFromGo)$ -update .
 
 import (
 	"fmt"
@@ -168,6 +168,12 @@ func describeType(fi fieldInfo) string {
 	}
 	if t.Kind() == reflect.Slice {
 		t, list = t.Elem(), "list of "
+	}
+	if t.Kind() == reflect.Pointer {
+		t = t.Elem() // given or absent; zero counts when given
+	}
+	if t.Kind() == reflect.Map {
+		return list + "object of " + describeType(fieldInfo{Type: t.Elem()}) + " by name"
 	}
 	if t == reflect.TypeFor[Level]() {
 		return list + "elevation (m) or \"none\""

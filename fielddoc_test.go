@@ -254,3 +254,52 @@ func TestFieldReference(t *testing.T) {
 		t.Fatal(err)
 	}
 }
+
+// TestREADMEUsingItFromGo checks that the README's "Using it from Go"
+// program has the body of ExampleAnalysis_WriteText, which the compiler
+// checks; go generate (or -update) copies it in.
+func TestREADMEUsingItFromGo(t *testing.T) {
+	src, err := os.ReadFile("example_test.go")
+	if err != nil {
+		t.Fatal(err)
+	}
+	fset := token.NewFileSet()
+	f, err := parser.ParseFile(fset, "example_test.go", src, parser.ParseComments)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var body string
+	for _, d := range f.Decls {
+		if fn, ok := d.(*ast.FuncDecl); ok && fn.Name.Name == "ExampleAnalysis_WriteText" {
+			body = string(src[fset.Position(fn.Body.Lbrace).Offset+2 : fset.Position(fn.Body.Rbrace).Offset-1])
+		}
+	}
+	if body == "" {
+		t.Fatal("example_test.go has no ExampleAnalysis_WriteText")
+	}
+	readme, err := os.ReadFile("README.md")
+	if err != nil {
+		t.Fatal(err)
+	}
+	s := string(readme)
+	section := strings.Index(s, "## Using it from Go")
+	start := strings.Index(s[max(section, 0):], "func main() {\n")
+	if section < 0 || start < 0 {
+		t.Fatal(`README.md has no "Using it from Go" program`)
+	}
+	start += section + len("func main() {\n")
+	end := strings.Index(s[start:], "\n}\n```")
+	if end < 0 {
+		t.Fatal(`README.md's "Using it from Go" program does not end`)
+	}
+	end += start
+	if s[start:end] == body {
+		return
+	}
+	if !*update {
+		t.Fatal(`README.md's "Using it from Go" differs from ExampleAnalysis_WriteText: run go generate ./... (or go test -run TestREADMEUsingItFromGo -update .)`)
+	}
+	if err := os.WriteFile("README.md", []byte(s[:start]+body+s[end:]), 0o644); err != nil {
+		t.Fatal(err)
+	}
+}

@@ -182,11 +182,11 @@ func (g bankGround) anchorDryRun() ([]check.Result, error) {
 }
 
 // footingChecks checks the footing spec of one bank's tower under every
-// service case.
-func (m *model) footingChecks(out sink, side Side, spec FootingSpec, service []CaseState) error {
+// service case; perm is the permanent case.
+func (m *model) footingChecks(out sink, side Side, spec FootingSpec, perm CaseState, service []CaseState) error {
 	element := footingElement[side]
 	for _, svc := range service {
-		results, err := m.footing(side, spec, service[0].Tower[side], svc)
+		results, err := m.footing(side, spec, perm.Tower[side], svc)
 		if err != nil {
 			return m.bankErr(side, "tower.footing", svc.Case.Name, err)
 		}
@@ -196,7 +196,7 @@ func (m *model) footingChecks(out sink, side Side, spec FootingSpec, service []C
 		if svc.Lateral[side] == 0 {
 			continue
 		}
-		results, err = m.footingAcross(side, spec, service[0].Tower[side], svc)
+		results, err = m.footingAcross(side, spec, perm.Tower[side], svc)
 		if err != nil {
 			return m.bankErr(side, "tower.footing", svc.Case.Name+", across the bridge", err)
 		}
@@ -240,10 +240,10 @@ func (m *model) footingAcross(s Side, spec FootingSpec, perm tower.Resultant, sv
 }
 
 // anchorChecks checks the anchor spec of one bank under every service case.
-func (m *model) anchorChecks(out sink, side Side, spec AnchorSpec, service []CaseState) error {
+func (m *model) anchorChecks(out sink, side Side, spec AnchorSpec, perm CaseState, service []CaseState) error {
 	element := anchorElement[side]
 	for _, svc := range service {
-		results, err := m.anchor(side, spec, service[0], svc)
+		results, err := m.anchor(side, spec, perm, svc)
 		if err != nil {
 			return m.bankErr(side, "anchor", svc.Case.Name, err)
 		}

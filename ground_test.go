@@ -346,7 +346,7 @@ func TestRiverBankBridge(t *testing.T) {
 	// By hand: N tan δ alone, δ = ⅔·38° (gravel preset, cast block default).
 	n, _ := flooded.Value("N")
 	near(t, "flooded sliding resistance", flooded.Capacity, n.Value*math.Tan(2.0/3*38*math.Pi/180), 1e-12)
-	dry := find(t, a.Report, "anchor.sliding", "right anchor", "crowd, full span")
+	dry := find(t, a.Report, "anchor.sliding", "right anchor", "wind with crowd")
 	if mu, ok := dry.Value("μ"); !ok || mu.Value != 0.5 {
 		t.Errorf("out of the flood the block counts no passive resistance: %v", dry.Values)
 	}

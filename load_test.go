@@ -130,3 +130,40 @@ func FuzzParse(f *testing.F) {
 		}
 	})
 }
+
+// FuzzDecode feeds arbitrary bytes and edited demo descriptions to Parse
+// alone: nothing may panic; every error is a *FieldError wrapping
+// ErrInvalid whose place, when given, lies in the text; and a description
+// that loads writes itself (MarshalJSON) as JSON that loads back to the
+// same description (the same digest).
+func FuzzDecode(f *testing.F) {
+	f.Add(DemoJSON())
+	for _, s := range []string{`{"site": {"span": "72,5 m"}}`, `{"site": {"span": 1, "span": 2}}`, `{"ropes": [{"count": 2.5}]}`,
+		`{"climate": {"coldest": -10}}`, `{"site": {"flood_elevation": "none"}}`, `[1, 2`, `"\u00e9"`, `{"a":}`} {
+		f.Add([]byte(s))
+	}
+	f.Fuzz(func(t *testing.T, data []byte) {
+		b, err := Parse(data)
+		if err != nil {
+			var fe *FieldError
+			if !errors.As(err, &fe) || !errors.Is(err, ErrInvalid) {
+				t.Fatalf("error %T is not a *FieldError wrapping ErrInvalid: %v", err, err)
+			}
+			if fe.Line < 0 || fe.Line > strings.Count(string(data), "\n")+1 || fe.Column < 0 {
+				t.Fatalf("error placed at line %d, column %d of a %d-line text: %v", fe.Line, fe.Column, strings.Count(string(data), "\n")+1, err)
+			}
+			return
+		}
+		again, err := json.Marshal(b)
+		if err != nil {
+			t.Fatalf("a loaded description does not write itself: %v", err)
+		}
+		back, err := Parse(again)
+		if err != nil {
+			t.Fatalf("a loaded description, written back, does not load: %v\n%s", err, again)
+		}
+		if back.Digest() != b.Digest() {
+			t.Fatalf("the round trip changed the description:\n%s", again)
+		}
+	})
+}

@@ -14,10 +14,18 @@ import (
 // The clause allows a lower value for long spans where dense crowds cannot
 // occur only by national choice; this function gives the recommended one.
 func CrowdPressure(l units.Length) units.Pressure {
+	// 120/(l + 30) meets 3.0 (the upper bound) at l = 10 m and 0.5 (the
+	// lower bound) at l = 210 m: crowdUpperLength and crowdLowerLength.
 	q := 2.0 + 120/(float64(l)+30)
 	q = math.Max(2.5, math.Min(5.0, q))
 	return units.Pressure(q) * units.Kilopascal
 }
+
+// The loaded lengths where the EN 1991-2 crowd pressure meets its bounds.
+const (
+	crowdUpperLength = 10 * units.Metre
+	crowdLowerLength = 210 * units.Metre
+)
 
 // WindPressure returns the basic velocity pressure of wind speed v, from
 // EN 1991-1-4:2005 cl. 4.5(1), eq. (4.10), with the recommended air density
@@ -87,4 +95,51 @@ func (w Walkway) dead() units.LoadPerLength {
 		sum += p.Load
 	}
 	return sum
+}
+
+// Defaults of the cases the chain adds, each with its source.
+const (
+	// defaultCrowdInAccident is ψ1 on the crowd in the accidental
+	// combination: 0.4 for pedestrian loads (group gr1) in EN 1990
+	// Table A2.2 (footbridges), with eq. (6.11b) (from memory).
+	defaultCrowdInAccident = 0.4
+	// defaultLift is the force coefficient c_f,z of the upward wind force
+	// on a deck: ±0.9, EN 1991-1-4 8.3.3(1) (from memory), on the
+	// walkway's width.
+	defaultLift = 0.9
+	// defaultSunDifference is how much cooler the backstays are than the
+	// sunlit span: 10 K, the difference EN 1991-1-5 6.1.6 recommends
+	// between cables of a light colour and the rest of the structure
+	// (20 K for dark ones; from memory).
+	defaultSunDifference = 10.0
+	// defaultConstructionLoad is the crew and hand tools on the placed
+	// walkway while it is built: 1.0 kN/m², Q_ca of EN 1991-1-6 Table 4.1
+	// (from memory).
+	defaultConstructionLoad = 1.0 * units.Kilopascal
+	// defaultBreakDynamic multiplies the change of tension in the ropes
+	// left when one breaks: 2, the peak of an undamped elastic system under
+	// a suddenly applied load (standard structural dynamics); damping only
+	// lowers it.
+	defaultBreakDynamic = 2.0
+)
+
+func (b Bridge) crowdInAccident() float64 {
+	return orDefault(b.Loads.CrowdInAccident, defaultCrowdInAccident)
+}
+
+func (b Bridge) sunDifference() float64 {
+	return orDefault(b.Loads.SunDifference, defaultSunDifference)
+}
+
+func (b Bridge) constructionLoad() units.Pressure {
+	return units.Pressure(orDefault(float64(b.Loads.ConstructionLoad), float64(defaultConstructionLoad)))
+}
+
+func (b Bridge) breakDynamic() float64 { return orDefault(b.Loads.BreakDynamic, defaultBreakDynamic) }
+
+// lift returns the upward wind force per metre on the whole walkway at
+// wind factor 1: c_f,z q_p b, with b the walkway width (EN 1991-1-4
+// 8.3.3, from memory).
+func (b Bridge) lift() units.LoadPerLength {
+	return units.LoadPerLength(orDefault(b.Loads.WalkwayLift, defaultLift) * float64(b.wind()) * float64(b.Walkway.Width))
 }

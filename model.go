@@ -17,11 +17,7 @@ type model struct {
 	groups []group
 	ground [2]bankGround
 	dead   units.LoadPerLength // walkway dead load per metre, without ropes
-	// crowd and crowdHalf are the crowd loads per metre of walkway on the
-	// full span and on half of it.
-	crowd, crowdHalf units.LoadPerLength
-	wind             units.Pressure
-	psi              float64
+	wind   units.Pressure
 	// ref holds each group's reference state: permanent load at the
 	// reference temperature, hanging at its design sag.
 	ref []cable.State
@@ -38,6 +34,15 @@ type model struct {
 	// grooves is the groove behaviour of each bank's saddle in the
 	// variant being analysed (see variants).
 	grooves [2]tower.Groove
+	// terse leaves out of the results what only a reader needs (values
+	// and text the numbers do not depend on): the loaded-length search's
+	// sweep, which keeps only ratios.
+	terse bool
+	// states holds the group states solved so far, by their input (and the
+	// variant's grooves): a group that carries no crowd hangs alike under
+	// every crowd, and a case's service and design states often share
+	// groups.
+	states map[stateKey]GroupState
 }
 
 func newModel(b Bridge) (*model, error) {
@@ -50,11 +55,8 @@ func newModel(b Bridge) (*model, error) {
 	}
 	m := &model{
 		b: b, span: b.span(), groups: gs,
-		dead:      b.Walkway.dead(),
-		crowd:     units.LoadPerLength(float64(b.crowd(b.Site.Span)) * float64(b.Walkway.Width)),
-		crowdHalf: units.LoadPerLength(float64(b.crowd(b.Site.Span/2)) * float64(b.Walkway.Width)),
-		wind:      b.wind(),
-		psi:       orDefault(b.Loads.WindWithCrowd, defaultWindWithCrowd),
+		dead: b.Walkway.dead(),
+		wind: b.wind(),
 	}
 	bs := b.Basis
 	m.fbasis = foundation.Basis{
@@ -144,33 +146,65 @@ func (m *model) bank(s Side) Bank {
 }
 
 // load returns the in-plane load of group g under case lc and the swing of
-// the rope plane.
+// the rope plane:
+//
+//	vertical  γG (w_rope + s g_walkway) [+ γQ ψ s q(a) b on the crowd's stretch]
+//	lateral   γW ψW q_p (Σ c_f d + s c_f,walkway h_walkway)
+//	lift      γW ψW s c_f,z q_p b          (upward, when the case lifts the walkway)
+//
+// with s the group's share of the walkway, q(a) the crowd pressure of the
+// loaded length a, b the walkway width. The rope plane swings to carry the
+// vector sum of the uniform vertical load and the wind, so the uniform
+// in-plane load is √(vertical² + lateral²). A crowd stretch that is not the
+// whole span stays a vertical patch in the swung plane: it is taken whole
+// in the plane (more than its in-plane component, which is conservative for
+// tensions). In the construction stage the walkway's dead load lies only on
+// the placed stretch.
 func (m *model) load(g group, lc LoadCase) (cable.Load, units.Angle) {
-	vertical := units.LoadPerLength(lc.GammaG) * (g.self + units.LoadPerLength(g.share)*m.dead)
-	crowd := units.LoadPerLength(lc.GammaQ*g.share) * m.crowd
-	half := units.LoadPerLength(lc.GammaQ*g.share) * m.crowdHalf
 	l := m.b.Site.Span
-	load := cable.Load{Uniform: vertical}
-	switch lc.Crowd {
-	case FullSpan:
-		load.Uniform += crowd
-	case LeftHalf:
-		load.Patches = []cable.Patch{{From: 0, To: l / 2, Load: half}}
-	case RightHalf:
-		load.Patches = []cable.Patch{{From: l / 2, To: l, Load: half}}
+	gG := units.LoadPerLength(lc.GammaG)
+	load := cable.Load{Uniform: gG * g.self}
+	walkway := gG * units.LoadPerLength(g.share) * m.dead
+	if lc.Situation == Construction {
+		if deck := clip(lc.Deck, l); !deck.Empty() && walkway > 0 {
+			load.Patches = append(load.Patches, cable.Patch{From: deck.From, To: deck.To, Load: walkway})
+		}
+	} else {
+		load.Uniform += walkway
+	}
+	if crowd := clip(lc.Crowd, l); lc.GammaQ*lc.CrowdFactor*g.share > 0 && !crowd.Empty() {
+		q := lc.CrowdPressure
+		if q == 0 {
+			q = m.b.crowd(crowd.Length())
+		}
+		w := units.LoadPerLength(lc.GammaQ * lc.CrowdFactor * g.share * float64(q) * float64(m.b.Walkway.Width))
+		if crowd.Length() >= l {
+			load.Uniform += w
+		} else {
+			load.Patches = append(load.Patches, cable.Patch{From: crowd.From, To: crowd.To, Load: w})
+		}
 	}
 	var swing units.Angle
-	if lc.Wind && lc.GammaW > 0 && m.wind > 0 {
+	if f := lc.GammaW * lc.Wind; f > 0 && m.wind > 0 {
 		depth := m.b.Walkway.WindDepth
 		if depth == 0 {
 			depth = m.b.Walkway.Depth
 		}
 		face := g.windWidth + units.Length(g.share*orDefault(m.b.Loads.WalkwayDrag, defaultWalkwayDrag))*depth
-		lateral := lc.GammaW * float64(m.wind) * float64(face)
-		swing = units.Angle(math.Atan2(lateral, float64(load.Uniform)))
-		load.Uniform = units.LoadPerLength(math.Hypot(float64(load.Uniform), lateral))
+		lateral := f * float64(m.wind) * float64(face)
+		vertical := float64(load.Uniform)
+		if lc.Lift {
+			vertical -= f * g.share * float64(m.b.lift())
+		}
+		swing = units.Angle(math.Atan2(lateral, vertical))
+		load.Uniform = units.LoadPerLength(math.Hypot(vertical, lateral))
 	}
 	return load, swing
+}
+
+// clip returns the part of s within the span [0, l].
+func clip(s Stretch, l units.Length) Stretch {
+	return Stretch{From: max(s.From, 0), To: min(s.To, l)}
 }
 
 // column returns the tower column of one bank, from its base section up
@@ -200,28 +234,6 @@ func (m *model) topOffset() units.Length {
 		top = max(top, g.Offset)
 	}
 	return top
-}
-
-// designCase returns the case with the factors of the partial-factor basis
-// (EN 1990 set B), whatever the bridge's basis: the column sections are
-// always checked on design actions.
-func (m *model) designCase(lc LoadCase) LoadCase {
-	if m.b.partial() {
-		return lc
-	}
-	gG := orDefault(m.b.Basis.GammaG, defaultGammaG)
-	gQ := orDefault(m.b.Basis.GammaQ, defaultGammaQ)
-	lc.GammaG = gG
-	if lc.Crowd != NoCrowd {
-		lc.GammaQ = gQ
-	}
-	if lc.Wind {
-		lc.GammaW = gQ
-		if lc.Crowd != NoCrowd {
-			lc.GammaW = gQ * m.psi
-		}
-	}
-	return lc
 }
 
 // section returns the effective reinforced-concrete section of a column,

@@ -105,9 +105,9 @@ func (a *Analysis) ropeStatesSection() check.Section {
 
 func (a *Analysis) erectionSection() check.Section {
 	s := check.Section{ID: "erection", Title: "Erection tables",
-		Text: []string{"The midspan sag below the chord to set the bare ropes to, by rope temperature, so that the finished bridge hangs at its design sag."}}
+		Text: []string{"The midspan sag below the chord to set the bare ropes to, by rope temperature, so that the finished bridge hangs at its design sag: the chain's own rope model, the bare ropes over the saddles with the backstays, new rope shorter by its constructional stretch."}}
 	for _, et := range a.Erection {
-		sub := check.Section{Title: et.Group, Head: []string{"Rope temperature", "Sag to set", "H of the group"}}
+		sub := check.Section{Title: et.Group, Head: []string{"Rope temperature", "Sag to set", "H of the group"}, Text: []string{et.Hold}}
 		for _, r := range et.Rows {
 			sub.Rows = append(sub.Rows, []string{r.Temperature.String(), r.Sag.String(), r.H.String()})
 		}
@@ -124,6 +124,7 @@ type analysisJSON struct {
 	Report      check.Report   `json:"report"`
 	Cases       []caseJSON     `json:"cases"`
 	Modes       modesJSON      `json:"modes"`
+	Comfort     *comfortJSON   `json:"comfort,omitempty"`
 	Erection    []erectionJSON `json:"erection"`
 }
 
@@ -152,8 +153,10 @@ type modesJSON struct {
 }
 
 type erectionJSON struct {
-	Group string       `json:"group"`
-	Rows  [][3]float64 `json:"rows_k_m_n"` // temperature K, sag m, H N
+	Group   string       `json:"group"`
+	Rows    [][3]float64 `json:"rows_k_m_n"` // temperature K, sag m, H N
+	Hold    string       `json:"hold"`
+	Stretch float64      `json:"constructional_stretch"`
 }
 
 // MarshalJSON writes the analysis with SI values: the design basis, the
@@ -175,8 +178,9 @@ func (a *Analysis) MarshalJSON() ([]byte, error) {
 		out.Cases = append(out.Cases, c)
 	}
 	out.Modes = modesJSON{float64(a.Modes.Swing), float64(a.Modes.Antisymmetric), float64(a.Modes.Symmetric), a.Modes.LambdaSq}
+	out.Comfort = a.comfortJSON()
 	for _, et := range a.Erection {
-		e := erectionJSON{Group: et.Group}
+		e := erectionJSON{Group: et.Group, Hold: et.Hold, Stretch: et.ConstructionalStretch}
 		for _, r := range et.Rows {
 			e.Rows = append(e.Rows, [3]float64{float64(r.Temperature), float64(r.Sag), float64(r.H)})
 		}

@@ -150,10 +150,10 @@ func TestDesignBasis(t *testing.T) {
 	got := designBasisText(t, Demo())
 	golden(t, "demo_design_basis.txt", []byte(got))
 	for _, want := range []string{
-		"site.span                   72.00 m", "climate.coldest        -10.00 °C", "rope.diameter      32.00 mm",
-		`walkway.parts[1]    name "timber deck planks", load 450.0 N/m`,
+		"site.span                   72.00 m", "climate.coldest        -10.00 °C", "rope.diameter           32.00 mm",
+		`walkway.parts[1]        name "timber deck planks", load 450.0 N/m`,
 		"crowd pressure, crowd on the full span", "3.176 kPa", // 2.0 + 120/(72 + 30), EN 1991-2 cl. 5.3.2.1(2)
-		"peak wind pressure q_p", "1.056 kPa", // 2.5 × ½ × 1.25 × 26², EN 1991-1-4 cl. 4.5
+		"peak wind pressure q_p", "756.2 Pa", // 2.5 × ½ × 1.25 × 22², EN 1991-1-4 cl. 4.5
 		"walkway dead load g_w, without the ropes", "1.000 kN/m", // 0.30 + 0.45 + 0.25
 		"left bank, dense sand: friction", "SHA-256 " + Demo().Digest(),
 	} {
@@ -177,5 +177,29 @@ func TestDesignBasis(t *testing.T) {
 	}
 	if strings.Contains(changed, "72.00 m") || b.Digest() == Demo().Digest() {
 		t.Error("the design basis still shows the old span, or the digest did not change")
+	}
+}
+
+// TestOneUnitPerCheck requires every check of every element to report in
+// one kind of quantity across its load cases, so that a table's column
+// never switches between kN and kN·m down one check.
+func TestOneUnitPerCheck(t *testing.T) {
+	level, err := LoadFile("testdata/level.json")
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, b := range []Bridge{Demo(), level} {
+		a, err := Check(b, nil)
+		if err != nil {
+			t.Fatal(err)
+		}
+		kinds := map[string]units.Kind{}
+		for _, r := range a.Report.Results {
+			key := r.ID + ", " + r.Element
+			if k, ok := kinds[key]; ok && k != r.Kind {
+				t.Errorf("%s: %s in one case, %s in %q", key, k, r.Kind, r.Case)
+			}
+			kinds[key] = r.Kind
+		}
 	}
 }

@@ -105,12 +105,21 @@ const maxFeedIterations = 60
 // and the span and backstay tensions are solved together (the anchors and,
 // but for sliding and roller saddles, the saddles fixed).
 func (m *model) analyse(lc LoadCase) (CaseState, error) {
+	return m.analyseFrom(lc, nil)
+}
+
+// analyseFrom is analyse with the rope fed over the saddles in a nearby
+// state as the start of each group's iteration (warm, nil for none).
+func (m *model) analyseFrom(lc LoadCase, warm *CaseState) (CaseState, error) {
 	cs := CaseState{Case: lc, Groups: make([]GroupState, len(m.groups))}
 	var levels [2][]tower.LevelForce
-	dt := float64(lc.Temperature - m.b.Climate.Reference)
 	for i, g := range m.groups {
-		load, swing := m.load(g, lc)
-		gs, err := m.solveGroup(i, load, swing, dt)
+		in := m.solveInput(g, lc)
+		if warm != nil {
+			in.feed = warm.Groups[i].feed
+		}
+		swing := in.swing
+		gs, err := m.groupState(i, in)
 		if err != nil {
 			return CaseState{}, m.groupErr(i, lc, err)
 		}
@@ -130,8 +139,8 @@ func (m *model) analyse(lc LoadCase) (CaseState, error) {
 	}
 	for side := Left; side <= Right; side++ {
 		// Wind on the column face, across the bridge.
-		if lc.Wind && lc.GammaW > 0 && m.wind > 0 {
-			cw, err := m.column(side).Wind(units.Pressure(lc.GammaW) * m.wind)
+		if f := lc.GammaW * lc.Wind; f > 0 && m.wind > 0 {
+			cw, err := m.column(side).Wind(units.Pressure(f) * m.wind)
 			if err != nil {
 				return CaseState{}, fmt.Errorf("sagspan: %s tower, case %q: %w", side, lc.Name, err)
 			}
@@ -153,18 +162,57 @@ func (m *model) analyse(lc LoadCase) (CaseState, error) {
 	return cs, nil
 }
 
-// solveGroup returns the state of rope group i under load, swung by swing,
-// dt kelvin from the reference temperature.
+// solveInput is what a rope group's state is solved for.
+type solveInput struct {
+	load  cable.Load
+	swing units.Angle
+	// dt and dtBackstay are the rope temperatures of the span and of the
+	// backstays, in kelvin from the reference.
+	dt, dtBackstay float64
+	// intact is the fraction of the group's ropes left (1 but with a rope
+	// broken): the group's stiffness falls with it, the unstretched lengths
+	// of the ropes left stay theirs.
+	intact float64
+	// scale multiplies every unstretched length of the group: 1 but for new
+	// rope before its constructional stretch (the erection table).
+	scale float64
+	// feed starts the iteration on the rope rendered over the saddles.
+	feed float64
+}
+
+// solveInput returns the input of group g's state under case lc.
+func (m *model) solveInput(g group, lc LoadCase) solveInput {
+	load, swing := m.load(g, lc)
+	in := solveInput{load: load, swing: swing, intact: 1, scale: 1,
+		dt: float64(lc.Temperature - m.b.Climate.Reference)}
+	in.dtBackstay = in.dt
+	if lc.BackstayTemperature != 0 {
+		in.dtBackstay = float64(lc.BackstayTemperature - m.b.Climate.Reference)
+	}
+	if lc.Broken > 0 && lc.BrokenGroup == g.Name && g.Count > lc.Broken {
+		in.intact = float64(g.Count-lc.Broken) / float64(g.Count)
+	}
+	return in
+}
+
+// solveGroup returns the state of rope group i under the input's load,
+// swing, temperatures and ropes.
 //
 // The rope rendered into the span, feed, solves r(feed) = g(feed) − feed = 0
 // where g is the rope the backstays give up once the span hangs with that
-// feed; secant steps from feed = 0, safeguarded by plain iteration.
-func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64) (GroupState, error) {
+// feed; secant steps from the input's feed, safeguarded by plain iteration.
+// With ropes broken, the ropes left keep their unstretched lengths and the
+// group's stiffness is theirs.
+func (m *model) solveGroup(i int, in solveInput) (GroupState, error) {
+	load, swing, dt := in.load, in.swing, in.dt
 	g := m.groups[i]
 	e := g.elastic
+	e.EA *= units.AxialStiffness(in.intact)
 	// Linear thermal strain from the reference temperature, on the span and
-	// the backstays alike (package cable's constitutive law).
-	thermal := 1 + float64(e.Alpha)*dt
+	// on the backstays each at its own temperature (package cable's
+	// constitutive law); new rope shorter by the scale.
+	thermal := (1 + float64(e.Alpha)*dt) * in.scale
+	thermalBackstay := (1 + float64(e.Alpha)*in.dtBackstay) * in.scale
 	l0 := m.spanUnstretched[i] * thermal
 	temp := m.ref[i].Temperature + units.Temperature(dt)
 	var gs GroupState
@@ -188,7 +236,7 @@ func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64
 		given := 0.0
 		for side := Left; side <= Right; side++ {
 			bs := m.backstays[i][side]
-			l0b := bs.unstretched * thermal
+			l0b := bs.unstretched * thermalBackstay
 			held := units.Force(bs.heldTension(e, l0b))
 			bal, err := m.saddle(side, g, 0).Balance(tower.RopePull{Tension: gs.Tension[side], Angle: gs.Angle[side], Swing: swing},
 				bs.angle, held)
@@ -207,10 +255,11 @@ func (m *model) solveGroup(i int, load cable.Load, swing units.Angle, dt float64
 			gs.MaxTension = max(gs.MaxTension, units.Force(tback))
 			given += l0b - bs.unstretchedFor(e, tback)
 		}
+		gs.feed = feed
 		return given, nil
 	}
 	tol := 1e-10 * float64(m.span.Length)
-	x0, x1 := 0.0, 0.0
+	x0, x1 := in.feed, 0.0
 	g0, err := step(x0)
 	if err != nil {
 		return GroupState{}, err

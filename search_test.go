@@ -284,3 +284,28 @@ func BenchmarkSearch(b *testing.B) {
 	}
 	b.ReportMetric(float64(n)/b.Elapsed().Seconds(), "candidates/s")
 }
+
+// TestSearchRespectsGradient checks that the walkway gradient limits the
+// sag a design search may choose: on the demo bridge with six ropes, the
+// deeper sags steepen the walkway under a crowd on a short stretch beyond
+// the limit, so the search does not settle on the deepest sag it may try,
+// and says why the deep ones fail.
+func TestSearchRespectsGradient(t *testing.T) {
+	space := SearchSpace{SagRatios: []float64{1.0 / 24, 1.0 / 22, 1.0 / 20, 1.0 / 18, 1.0 / 16}}
+	res, err := Search(context.Background(), Demo(), space, &SearchSettings{KeepAll: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if res.Best == nil {
+		t.Fatal("no feasible sag")
+	}
+	deepest := space.SagRatios[len(space.SagRatios)-1]
+	if res.Best.SagRatio == deepest {
+		t.Errorf("the search settled on the deepest sag 1/%.0f", 1/deepest)
+	}
+	for _, d := range res.All {
+		if d.SagRatio == deepest && (d.Feasible || d.Governing.ID != "walkway.gradient") {
+			t.Errorf("sag 1/%.0f: feasible %v, governed by %s", 1/d.SagRatio, d.Feasible, d.Governing.ID)
+		}
+	}
+}

@@ -6,6 +6,7 @@ import (
 
 	"github.com/sagspan/sagspan/cable"
 	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/tower"
 	"github.com/sagspan/sagspan/units"
 )
 
@@ -62,6 +63,32 @@ func (m *model) checkClearance(out sink, service []CaseState) {
 // maxErectionRows bounds the erection table.
 const maxErectionRows = 1000
 
+// defaultConstructionalStretch is the permanent strain new six-strand rope
+// takes as its strands bed in under the first loads: 0.25 %, the lower end
+// of the 0.25–0.5 % usual for six-strand rope (common practice, from
+// memory); pre-stretched rope takes almost none (give 0). It is the default
+// of groups that carry the walkway; a group that carries only its own
+// weight is too lightly loaded to bed in and defaults to none.
+const defaultConstructionalStretch = 0.0025
+
+// constructionalStretch returns the group's constructional stretch.
+func (g group) constructionalStretch() float64 {
+	if g.ConstructionalStretch != nil {
+		return *g.ConstructionalStretch
+	}
+	if g.share > 0 {
+		return defaultConstructionalStretch
+	}
+	return 0
+}
+
+// erection builds each group's erection-sag table from the chain's own rope
+// model: the bare rope (its own weight) over the saddles as the chain
+// models them, span and backstays one rope fastened at the anchors, new
+// rope shorter by its constructional stretch, at every temperature of the
+// site's range. Hanging the walkway on a rope set to a row's sag at the
+// row's temperature, the rope stretched by its constructional stretch,
+// brings it to the design sag at the reference temperature.
 func (m *model) erection(a *Analysis, opts *Options) error {
 	step := orDefault(opts.ErectionStep, 5)
 	c := m.b.Climate
@@ -72,13 +99,53 @@ func (m *model) erection(a *Analysis, opts *Options) error {
 	for t := float64(c.Coldest); t <= float64(c.Hottest)+1e-9; t += step {
 		temps = append(temps, units.Temperature(t))
 	}
-	for _, g := range m.groups {
-		dead := cable.Load{Uniform: units.LoadPerLength(g.share) * m.dead}
-		rows, err := cable.ErectionTable(m.span, g.elastic, g.self, dead, g.Sag, c.Reference, temps)
-		if err != nil {
-			return fieldErr("ropes", "erection table of %s: %w; check its sag, rope and the climate's temperatures", g.Name, err)
+	for i, g := range m.groups {
+		table := ErectionTable{Group: g.Name, ConstructionalStretch: g.constructionalStretch(), Hold: m.erectionHold(g)}
+		feed := 0.0
+		for _, t := range temps {
+			in := m.bareInput(i, t)
+			in.feed = feed
+			gs, err := m.groupState(i, in)
+			if err != nil {
+				return fieldErr("ropes", "erection table of %s at %s: %w; check its sag, rope and the climate's temperatures", g.Name, t, err)
+			}
+			feed = gs.feed
+			table.Rows = append(table.Rows, cable.ErectionRow{Temperature: t, Sag: gs.Sag, H: gs.H})
 		}
-		a.Erection = append(a.Erection, ErectionTable{Group: g.Name, Rows: rows})
+		a.Erection = append(a.Erection, table)
 	}
 	return nil
+}
+
+// bareInput returns the solve input of group i's new rope, bare, at rope
+// temperature t: its own weight only, every unstretched length shorter by
+// the constructional stretch still to come.
+func (m *model) bareInput(i int, t units.Temperature) solveInput {
+	g := m.groups[i]
+	dt := float64(t - m.b.Climate.Reference)
+	return solveInput{load: cable.Load{Uniform: g.self}, dt: dt, dtBackstay: dt, intact: 1,
+		scale: 1 / (1 + g.constructionalStretch())}
+}
+
+// erectionHold says what the crew holds fixed while setting a group to its
+// erection sag.
+func (m *model) erectionHold(g group) string {
+	var saddles []string
+	for side := Left; side <= Right; side++ {
+		switch saddleKind(m.bank(side).Tower.Saddle) {
+		case tower.Sliding:
+			saddles = append(saddles, "the "+side.String()+" saddle free on its plate (it stays or slides as in service)")
+		case tower.Roller:
+			saddles = append(saddles, "the "+side.String()+" saddle free on its rollers")
+		default:
+			saddles = append(saddles, "the "+side.String()+" saddle bolted down")
+		}
+	}
+	s := fmt.Sprintf("Measure the sag at midspan below the chord between the saddle grooves, the ropes bare and free to render over both saddles, "+
+		"fastened at both anchors at their design positions, %s and %s; the sag then fixes the length of rope between the anchors.",
+		saddles[0], saddles[1])
+	if e := g.constructionalStretch(); e > 0 {
+		s += fmt.Sprintf(" The sags are for new rope that will stretch %.2f %% more as its strands bed in under the walkway: it hangs higher now and settles to the design sag; for pre-stretched rope give a constructional stretch of 0.", 100*e)
+	}
+	return s
 }

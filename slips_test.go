@@ -3,7 +3,11 @@ package sagspan
 import (
 	"bytes"
 	"errors"
+	"fmt"
+	"strings"
 	"testing"
+
+	"github.com/sagspan/sagspan/cable"
 )
 
 // TestSlips feeds the demo description with one slip each, written as a
@@ -92,5 +96,55 @@ func TestSlips(t *testing.T) {
 				t.Errorf("error %T is not a *FieldError wrapping ErrInvalid", err)
 			}
 		})
+	}
+}
+
+// TestAnalysisErrorsNameTheirField checks that an error found only during
+// the analysis is traced to the field that caused it, with advice: the
+// walkway's own weight straining the ropes (the dead load), the crowd
+// straining them (the ropes), rope statics that find no state (the sag).
+func TestAnalysisErrorsNameTheirField(t *testing.T) {
+	tests := []struct {
+		name   string
+		edits  []string // pairs old, new in the demo description
+		field  string
+		advice string
+	}{
+		{"crowd strains thin ropes", []string{`"count": 6`, `"count": 1`, `"loads": {}`, `"loads": {"crowd": "10 kPa"}`, `"diameter": "32 mm"`, `"diameter": "14 mm"`},
+			"ropes[0].rope", "use larger or more ropes (ropes[0].rope.diameter, ropes[0].count) or a larger sag (ropes[0].sag)"},
+		{"walkway strains its ropes", []string{`"count": 6`, `"count": 1`, `"load": "0.45 kN/m"`, `"load": "25 kN/m"`},
+			"walkway.parts", "lighten the walkway (walkway.parts) or use larger or more ropes"},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			data := DemoJSON()
+			for i := 0; i+1 < len(tt.edits); i += 2 {
+				data = bytes.Replace(data, []byte(tt.edits[i]), []byte(tt.edits[i+1]), 1)
+			}
+			b, err := Parse(data)
+			if err != nil {
+				t.Fatalf("Parse: %v", err)
+			}
+			_, err = Check(b, nil)
+			var fe *FieldError
+			if !errors.As(err, &fe) || fe.Field != tt.field || !strings.Contains(err.Error(), tt.advice) {
+				t.Errorf("error %v; want field %s and advice %q", err, tt.field, tt.advice)
+			}
+		})
+	}
+	// Rope statics that overflow or do not settle point at the sag.
+	m, err := newModel(Demo())
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, cause := range []error{
+		fmt.Errorf("cable: input out of range: the result overflows float64: %w", cable.ErrInvalid),
+		fmt.Errorf("rope rendered over the saddles does not settle after 60 iterations"),
+	} {
+		err := m.groupErr(1, LoadCase{Name: "wind"}, cause)
+		var fe *FieldError
+		if !errors.As(err, &fe) || fe.Field != "ropes[1].sag" || !errors.Is(err, cause) || !strings.Contains(err.Error(), "give a sag near 1/12 to 1/20 of the span") {
+			t.Errorf("%v: traced as %v", cause, err)
+		}
 	}
 }

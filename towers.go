@@ -129,7 +129,10 @@ func (m *model) saddleBasis(s Side) string {
 func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error {
 	name := svc.Case.Name
 	col := m.column(side)
-	basis := m.saddleBasis(side)
+	var basis string
+	if !m.terse {
+		basis = m.saddleBasis(side)
+	}
 	_, legs := m.steel(side)
 	for _, d := range []tower.Direction{tower.Along, tower.Across} {
 		element := towerElement[side]
@@ -140,7 +143,7 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 		if err != nil {
 			return m.bankErr(side, "tower.eccentricity", name, err)
 		}
-		if d == tower.Along && !m.fbasis.Terse { // a design search scores results, it does not read them
+		if d == tower.Along && !m.terse && !m.fbasis.Terse { // a sweep or a design search scores results, it does not read them
 			r = r.WithValues(m.saddleValues(side, svc)...)
 		}
 		if w := svc.ColumnWind[side]; d == tower.Across && w != 0 {
@@ -154,15 +157,24 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 			rec.Basis, rec.Values, rec.Notes = r.Basis, r.Values, r.Notes
 			r = rec.WithNote("a steel column resists this eccentricity by bending (see tower.column_section): the resultant is reported, not limited")
 		}
-		out.add(r.WithBasis(r.Basis+basis).For(element, name))
+		if !m.terse {
+			r = r.WithBasis(r.Basis + basis)
+		}
+		out.add(r.For(element, name))
 	}
 	res, err := m.member(side, des, perm)
 	if err != nil {
 		return m.bankErr(side, "tower.section", name, err)
 	}
-	out.add(res.Along.WithBasis(res.Along.Basis+basis).For(towerElement[side], name))
-	out.add(res.Across.WithBasis(res.Across.Basis+basis).For(towerAcrossElement[side], name))
-	out.add(res.Both.WithBasis(res.Both.Basis+basis).For(towerElement[side], name))
+	for _, x := range [...]struct {
+		r       check.Result
+		element string
+	}{{res.Along, towerElement[side]}, {res.Across, towerAcrossElement[side]}, {res.Both, towerElement[side]}} {
+		if !m.terse {
+			x.r = x.r.WithBasis(x.r.Basis + basis)
+		}
+		out.add(x.r.For(x.element, name))
+	}
 	return nil
 }
 

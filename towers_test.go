@@ -46,10 +46,13 @@ func TestClampedBoundIndependent(t *testing.T) {
 	target := levelSpanOnly(h0, w0)
 	for _, cs := range a.Service {
 		gs := cs.Groups[0]
+		if cs.Case.Broken > 0 {
+			continue // the ropes left hold their own strain: the group's backstay tension falls with their number
+		}
 		for side := Left; side <= Right; side++ {
 			near(t, cs.Case.Name+": clamped backstay keeps its tension", float64(gs.Backstay[side]), float64(tRef), 1e-9)
 		}
-		if cs.Case.Crowd != FullSpan || cs.Case.Wind {
+		if cs.Case.Crowd != (Stretch{0, b.Site.Span}) || cs.Case.windy() || len(gs.Load.Patches) > 0 {
 			continue
 		}
 		w := float64(gs.Load.Uniform)
@@ -132,7 +135,9 @@ func TestUnknownGrooveGoverns(t *testing.T) {
 	for _, res := range unknown.Report.Results {
 		k := key{res.ID, res.Element, res.Case}
 		w, ok := want[k]
-		if !ok || strings.HasPrefix(res.ID, "bridge.frequency") || strings.HasPrefix(res.ID, "vibration.") {
+		// The frequencies, the walkers' response and the groove diameter
+		// do not depend on how the rope sits in the groove.
+		if !ok || strings.HasPrefix(res.ID, "bridge.frequency") || strings.HasPrefix(res.ID, "vibration.") || res.ID == "cable.saddle_ratio" {
 			continue
 		}
 		n++
@@ -192,7 +197,7 @@ func TestRollerTravel(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	r := find(t, a.Report, "tower.eccentricity", "right tower", "crowd, full span")
+	r := governingOf(t, a, "tower.eccentricity", "right tower") // a crowd's stretch governs
 	var mv, v float64
 	for _, k := range []string{"1", "2"} {
 		vi, _ := r.Value("V_" + k)
@@ -221,7 +226,7 @@ func TestSlenderTowerInChain(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	r := find(t, a.Report, "tower.column_section", "left tower", "crowd, full span")
+	r := governingOf(t, a, "tower.column_section", "left tower")
 	if r.Status != check.Fail || r.Kind != units.KindForce || !strings.Contains(strings.Join(r.Notes, " "), "buckles") ||
 		!strings.Contains(r.Basis, "l0 = 2 l") {
 		t.Errorf("slender roller tower: %v %q %q", r, r.Notes, r.Basis)

@@ -63,6 +63,12 @@
 //   - EN 1993-1-11:2006. Eurocode 3: Design of steel structures — Part 1-11:
 //     Design of structures with tension components. Cl. 6.2, the design
 //     tension resistance of a rope.
+//   - EN 13411 (parts 1–6). Terminations for steel wire ropes — Safety
+//     (ferrules, sockets, wire rope grips): the efficiency of a termination
+//     (from memory: grips 0.80, ferrule-secured eyes 0.90, sockets 1.0).
+//     The least ratio of saddle groove to rope diameter D/d (20–25 for
+//     six-strand ropes of the 6×36 class) and the sharing of a tension
+//     between parallel ropes are common practice, not a published rule.
 //   - Électricité de France. code_aster validation manual, test case SSNL114:
 //     a suspended cable under its own weight and a temperature change
 //     (published sag 6.352 m and, after +39.26 K, 8.195 m).

@@ -136,16 +136,18 @@ func ExampleErectionTable() {
 	// 40 °C: sag 1.474 m, H 26.67 kN
 }
 
-// Four 20 mm ropes carrying 300 kN between them (service), 405 kN factored.
-func ExampleTensionCheck() {
+// Four 20 mm ropes carrying 300 kN between them (service), 405 kN factored,
+// the most loaded carrying 1.1 of an equal share; socketed ends (k_e 1).
+func ExampleGroup_TensionCheck() {
 	r, _ := cable.ParseRope("6x36-IWRC 20mm 1770")
-	g, _ := cable.TensionCheck(300*units.Kilonewton, r, 4, cable.GlobalFactor{})
-	p, _ := cable.TensionCheck(1.35*300*units.Kilonewton, r, 4, cable.PartialFactor{Ke: 1})
+	ropes := cable.Group{Rope: r, Count: 4, Sharing: 1.1}
+	g, _ := ropes.TensionCheck(300*units.Kilonewton, cable.GlobalFactor{Ke: 1})
+	p, _ := ropes.TensionCheck(1.35*300*units.Kilonewton, cable.PartialFactor{Ke: 1})
 	fmt.Printf("%s global: %s of %s, ratio %.3f, %s\n", g.ID, g.DemandString(), g.CapacityString(), g.Ratio, g.Status)
 	fmt.Printf("%s partial: %s of %s, ratio %.3f, %s\n", p.ID, p.DemandString(), p.CapacityString(), p.Ratio, p.Status)
 	// Output:
-	// cable.tension global: 300.0 kN of 336.1 kN, ratio 0.893, pass
-	// cable.tension partial: 405.0 kN of 746.8 kN, ratio 0.542, pass
+	// cable.tension global: 82.50 kN of 84.02 kN, ratio 0.982, pass
+	// cable.tension partial: 111.4 kN of 186.7 kN, ratio 0.597, pass
 }
 
 func ExampleFrequencies() {

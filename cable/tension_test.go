@@ -1,6 +1,7 @@
 package cable_test
 
 import (
+	"fmt"
 	"math"
 	"testing"
 
@@ -16,14 +17,17 @@ func TestTensionCheck(t *testing.T) {
 		what     string
 		basis    cable.TensionBasis
 		n        int
-		capacity float64
+		capacity float64 // of one rope
 	}{
-		// EN 1993-1-11 cl. 6.2 [D], the same formula by hand: k_e 1 → 186.7 kN
+		// EN 1993-1-11 cl. 6.2 [D], the same formula by hand: k_e 1, γ_R 0.9
+		// → 252.0/(1.5·0.9) = 186.7 kN
 		{"partial factor, k_e 1", cable.PartialFactor{GammaR: 0.9, Ke: 1}, 1, 186.7e3},
-		{"partial factor defaults", cable.PartialFactor{}, 2, 2 * 0.9 * mbf / (1.5 * 0.9)},
-		{"global factor 2.5", cable.GlobalFactor{Factor: 2.5}, 4, 4 * mbf / 2.5},
-		{"global default", cable.GlobalFactor{}, 3, 3 * mbf / cable.DefaultGlobalFactor},
-		{"nil basis", nil, 1, mbf / cable.DefaultGlobalFactor},
+		{"partial factor defaults", cable.PartialFactor{}, 2, 0.9 * mbf / (1.5 * 0.9)},
+		// Allowable basis: k_e MBF/γ, k_e 0.9 by default on this basis too.
+		{"global factor 2.5", cable.GlobalFactor{Factor: 2.5}, 4, 0.9 * mbf / 2.5},
+		{"global factor 2.5, socket", cable.GlobalFactor{Factor: 2.5, Ke: 1}, 4, mbf / 2.5},
+		{"global default", cable.GlobalFactor{}, 3, 0.9 * mbf / cable.DefaultGlobalFactor},
+		{"nil basis", nil, 1, 0.9 * mbf / cable.DefaultGlobalFactor},
 	} {
 		res, err := cable.TensionCheck(150e3, r20, c.n, c.basis)
 		if err != nil {
@@ -34,7 +38,8 @@ func TestTensionCheck(t *testing.T) {
 			tol = 3e-4 // given to 4 figures
 		}
 		approx(t, c.what+" capacity", res.Capacity, c.capacity, tol)
-		approx(t, c.what+" ratio", res.Ratio, 150e3/res.Capacity, 1e-12)
+		approx(t, c.what+" demand (equal shares)", res.Demand, 150e3/float64(c.n), 1e-12)
+		approx(t, c.what+" ratio", res.Ratio, res.Demand/res.Capacity, 1e-12)
 		if res.ID != "cable.tension" || res.Kind != units.KindForce || res.Basis == "" {
 			t.Errorf("%s: result %+v", c.what, res)
 		}
@@ -50,7 +55,7 @@ func TestTensionCheck(t *testing.T) {
 	a, _ := cable.TensionCheck(100e3, r20, 2, cable.GlobalFactor{Factor: 3})
 	b, _ := cable.TensionCheck(200e3, r20, 2, cable.GlobalFactor{Factor: 3})
 	approx(t, "linear ratio", b.Ratio, 2*a.Ratio, 1e-14)
-	over, _ := cable.TensionCheck(units.Force(mbf), r20, 1, cable.GlobalFactor{Factor: 3})
+	over, _ := cable.TensionCheck(units.Force(mbf), r20, 1, cable.GlobalFactor{Factor: 3, Ke: 1})
 	if over.Status != check.Fail {
 		t.Error("MBF on one rope at factor 3 must fail")
 	}
@@ -67,10 +72,91 @@ func TestTensionCheck(t *testing.T) {
 		{"factor below 1", 1, 1, cable.GlobalFactor{Factor: 0.5}},
 		{"negative gamma", 1, 1, cable.PartialFactor{GammaR: -1}},
 		{"k_e above 1", 1, 1, cable.PartialFactor{Ke: 1.2}},
+		{"k_e above 1, allowable", 1, 1, cable.GlobalFactor{Ke: 1.2}},
 	} {
 		_, err := cable.TensionCheck(c.t, r20, c.n, c.basis)
 		wantInvalid(t, c.what, err)
 	}
 	_, err := cable.TensionCheck(1, cable.Rope{}, 1, nil)
 	wantInvalid(t, "empty rope", err)
+}
+
+// TestGroupSharing checks unequal sharing between parallel ropes: the most
+// loaded of n ropes carries k_s T/n (statics of the assumed split), k_s 1.1
+// by default for two ropes or more and 1 for one rope (common practice).
+func TestGroupSharing(t *testing.T) {
+	r20, _ := cable.Strand6x36IWRC.Rope(20*units.Millimetre, 1770*units.Megapascal)
+	for _, c := range []struct {
+		what    string
+		n       int
+		sharing float64
+		want    float64
+	}{
+		{"given", 4, 1.2, 1.2 * 400e3 / 4},
+		{"default, four ropes", 4, 0, cable.DefaultSharing * 400e3 / 4},
+		{"default, one rope", 1, 0, 400e3},
+		{"all on one rope", 4, 4, 400e3},
+	} {
+		res, err := cable.Group{Rope: r20, Count: c.n, Sharing: c.sharing}.TensionCheck(400e3, cable.GlobalFactor{Ke: 1})
+		if err != nil {
+			t.Fatal(err)
+		}
+		approx(t, c.what, res.Demand, c.want, 1e-12)
+		if v, ok := res.Value("k_s"); !ok || v.Value < 1 {
+			t.Errorf("%s: sharing factor value %v", c.what, v)
+		}
+	}
+	for _, ks := range []float64{0.95, 5, math.NaN()} {
+		_, err := cable.Group{Rope: r20, Count: 4, Sharing: ks}.TensionCheck(1, nil)
+		wantInvalid(t, "sharing factor "+fmt.Sprint(ks), err)
+	}
+}
+
+// TestTerminations checks the named terminations' efficiencies (EN 13411
+// family and rope makers' data, from memory; common practice).
+func TestTerminations(t *testing.T) {
+	for name, want := range map[string]float64{"clips": 0.80, "ferrule": 0.90, "socket": 1.00, " Socket ": 1.00} {
+		got, ok := cable.TerminationEfficiency(name)
+		if !ok || got != want {
+			t.Errorf("%q: %v, %v; want %v", name, got, ok, want)
+		}
+	}
+	if _, ok := cable.TerminationEfficiency("knot"); ok {
+		t.Error("an unknown termination has an efficiency")
+	}
+}
+
+// TestSaddleRatioCheck checks the groove diameter against the least D/d:
+// a 32 mm rope on an 800 mm groove has D/d = 25 exactly, the default least
+// ratio (common practice, from memory); a 640 mm groove gives 20.
+func TestSaddleRatioCheck(t *testing.T) {
+	r32, _ := cable.Strand6x36IWRC.Rope(32*units.Millimetre, 1770*units.Megapascal)
+	res, err := cable.SaddleRatioCheck(800*units.Millimetre, r32, 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	approx(t, "ratio at D/d 25", res.Ratio, 1, 1e-12)
+	approx(t, "groove required", res.Demand, 0.8, 1e-12)
+	res, err = cable.SaddleRatioCheck(640*units.Millimetre, r32, 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if res.Status != check.Fail {
+		t.Errorf("D/d 20 against 25 passes: %v", res)
+	}
+	if v, _ := res.Value("D/d"); math.Abs(v.Value-20) > 1e-12 {
+		t.Errorf("D/d = %v, want 20", v.Value)
+	}
+	res, err = cable.SaddleRatioCheck(640*units.Millimetre, r32, 18)
+	if err != nil || res.Status != check.Pass {
+		t.Errorf("D/d 20 against a given 18: %v, %v", res, err)
+	}
+	for _, c := range []struct {
+		what   string
+		groove units.Length
+		min    float64
+	}{{"no groove", 0, 0}, {"negative groove", -1, 0}, {"least ratio below 1", 1, 0.5}} {
+		_, err := cable.SaddleRatioCheck(c.groove, r32, c.min)
+		wantInvalid(t, c.what, err)
+	}
 }

@@ -58,7 +58,8 @@ type Mode struct {
 	Symmetric bool
 	// HalfWaves counts the half-waves of the main motion along the span.
 	HalfWaves int
-	// ModalMass is M* = φᵀMφ with the mode shape φ scaled so that the
+	// ModalMass is M* = φᵀMφ with the mode shape φ scaled (and signed, the
+	// largest value of its main motion positive) so that the
 	// largest displacement of the walking surface in the mode's direction
 	// is 1 (vertical at the walkway's edge for vertical and torsional
 	// modes, lateral for lateral modes; without a walkway, the largest
@@ -115,9 +116,11 @@ type Modal struct {
 // tying the tied ropes, M the lumped masses with longitudinal, lateral and
 // vertical degrees of freedom (and the walkway's roll inertia). M is block
 // diagonal by station, M = LLᵀ, and the symmetric problem L⁻¹KL⁻ᵀ y = ω² y
-// is solved by gonum's mat.EigenSym, one uncoupled group of degrees of
-// freedom at a time (a model symmetric about the bridge axis splits into
-// its in-plane and its lateral-torsional motion).
+// is solved one uncoupled group of degrees of freedom at a time (a model
+// symmetric about the bridge axis splits into its in-plane and its
+// lateral-torsional motion): its eigenvalues by gonum's mat.EigenSym, the
+// vectors of those wanted by inverse iteration on the band (see
+// lowestEigen).
 //
 // It returns an error wrapping ErrInvalid for a model that does not
 // validate, a mesh coarser than MinElements or too coarse for the highest
@@ -169,58 +172,62 @@ func (s *system) solve(vmax, lmax float64) ([]Mode, error) {
 			return nil, invalidf("the lumped mass at x = %.2f m is not positive definite: the walkway's roll has no inertia (give it a mass or tie ropes on both sides of the axis)", s.x[k])
 		}
 	}
-	// A = L⁻¹ K L⁻ᵀ, block tridiagonal by station.
-	a := make([]float64, N*N)
+	// A = L⁻¹ K L⁻ᵀ, block tridiagonal by station as K.
+	a := newBlockTri(s.n-1, p)
 	tmp := make([]float64, p*p)
-	for k := 1; k < s.n; k++ {
-		lk := linv[(k-1)*p*p : k*p*p]
-		for j := max(1, k-1); j <= min(s.n-1, k+1); j++ {
-			lj := linv[(j-1)*p*p : j*p*p]
-			// tmp = L_k⁻¹ K_kj
-			for r := range p {
-				for c := range p {
-					var sum float64
-					for q := 0; q <= r; q++ {
-						sum += lk[r*p+q] * s.k[((k-1)*p+q)*N+(j-1)*p+c]
-					}
-					tmp[r*p+c] = sum
+	form := func(kb, lk, lj, out []float64) {
+		// tmp = L_k⁻¹ K_kj, out = tmp L_j⁻ᵀ
+		for r := range p {
+			for c := range p {
+				var sum float64
+				for q := 0; q <= r; q++ {
+					sum += lk[r*p+q] * kb[q*p+c]
 				}
+				tmp[r*p+c] = sum
 			}
-			// A_kj = tmp L_j⁻ᵀ
-			for r := range p {
-				for c := range p {
-					var sum float64
-					for q := 0; q <= c; q++ {
-						sum += tmp[r*p+q] * lj[c*p+q]
-					}
-					a[((k-1)*p+r)*N+(j-1)*p+c] = sum
+		}
+		for r := range p {
+			for c := range p {
+				var sum float64
+				for q := 0; q <= c; q++ {
+					sum += tmp[r*p+q] * lj[c*p+q]
 				}
+				out[r*p+c] = sum
 			}
+		}
+	}
+	for k := range s.n - 1 {
+		lk := linv[k*p*p : (k+1)*p*p]
+		form(s.k.diag(k), lk, lk, a.diag(k))
+		if k+1 < s.n-1 {
+			form(s.k.off(k), lk, linv[(k+1)*p*p:(k+2)*p*p], a.off(k))
 		}
 	}
 	fmax := max(vmax, lmax)
 	var modes []Mode
 	y := make([]float64, N)
 	x := make([]float64, N)
-	for _, comp := range components(a, N, 2*p) {
+	for _, comp := range components(a) {
 		c := len(comp)
 		sym := mat.NewSymDense(c, nil)
 		for i, gi := range comp {
-			for j := i; j < c; j++ {
-				sym.SetSym(i, j, a[gi*N+comp[j]])
+			// within a station and the next: the block-tridiagonal band
+			end := (gi/p + 2) * p
+			for j := i; j < c && comp[j] < end; j++ {
+				sym.SetSym(i, j, a.at(gi, comp[j]))
 			}
 		}
-		var es mat.EigenSym
-		if !es.Factorize(sym, true) {
+		// Indices of a component keep the station order: its band is at
+		// most the system's, 2p − 1.
+		lamMax := math.Pow(2*math.Pi*fmax, 2) * (1 + 1e-9)
+		vals, vecs, ok := lowestEigen(sym, min(2*p-1, c-1), lamMax)
+		if !ok {
 			return nil, fmt.Errorf("vibration: the eigensolver did not converge on %d degrees of freedom", c)
 		}
-		vals := es.Values(nil)
-		var vecs mat.Dense
-		es.VectorsTo(&vecs)
+		if !(vals[0] > 0) || !finite(vals[0]) {
+			return nil, invalidf("the model has a mode of no stiffness (ω² = %g): a rope without tension, or a walkway free to roll", vals[0])
+		}
 		for col, lam := range vals {
-			if !(lam > 0) || !finite(lam) {
-				return nil, invalidf("the model has a mode of no stiffness (ω² = %g): a rope without tension, or a walkway free to roll", lam)
-			}
 			f := math.Sqrt(lam) / (2 * math.Pi)
 			if f > fmax {
 				break // the values ascend
@@ -351,8 +358,13 @@ func (s *system) mode(f float64, x []float64) Mode {
 		ewalk += walk
 	}
 	erot := math.Max(0, etot-eu-ev-ew)
+	// Effective masses at the level of rounding (a symmetric model's lateral
+	// modes have none along z, say) are zero.
+	total := s.totalMass()
 	for i := range gamma {
-		md.Effective[i] = units.Mass(gamma[i] * gamma[i])
+		if e := gamma[i] * gamma[i]; e > 1e-12*total {
+			md.Effective[i] = units.Mass(e)
+		}
 	}
 
 	// Kind: where most of the energy lies.
@@ -391,9 +403,23 @@ func (s *system) mode(f float64, x []float64) Mode {
 
 	// Scale: the largest displacement of the walking surface in the
 	// mode's direction is 1.
+	// The sign of an eigenvector is arbitrary: take the one that makes the
+	// largest value of the main motion positive.
 	scale := s.scale(md)
+	var peak float64
+	for _, v := range series {
+		if math.Abs(v) > math.Abs(peak) {
+			peak = v
+		}
+	}
+	if md.Kind == Longitudinal {
+		peak = -peak // the series was mirrored above
+	}
 	if scale > 0 {
 		inv := 1 / scale
+		if peak < 0 {
+			inv = -inv
+		}
 		for r := range md.Ropes {
 			for k := range md.Ropes[r] {
 				d := &md.Ropes[r][k]
@@ -535,9 +561,9 @@ func halfWaves(c []float64) int {
 
 // components returns the groups of degrees of freedom that A couples, each
 // sorted: i and j are coupled when |A_ij| > 1e-12 √(A_ii A_jj), couplings
-// at the level of rounding being none. A is searched within the band
-// |i − j| < band.
-func components(a []float64, N, band int) [][]int {
+// at the level of rounding being none.
+func components(a blockTri) [][]int {
+	p, N := a.p, a.m*a.p
 	parent := make([]int, N)
 	for i := range parent {
 		parent[i] = i
@@ -549,12 +575,26 @@ func components(a []float64, N, band int) [][]int {
 		}
 		return i
 	}
-	for i := range N {
-		for j := i + 1; j < min(N, i+band); j++ {
-			v := a[i*N+j]
-			if v != 0 && math.Abs(v) > 1e-12*math.Sqrt(math.Abs(a[i*N+i]*a[j*N+j])) {
-				if ri, rj := find(i), find(j); ri != rj {
-					parent[ri] = rj
+	diag := func(i int) float64 { return a.diag(i / p)[(i%p)*p+i%p] }
+	link := func(i, j int, v float64) {
+		if v != 0 && math.Abs(v) > 1e-12*math.Sqrt(math.Abs(diag(i)*diag(j))) {
+			if ri, rj := find(i), find(j); ri != rj {
+				parent[ri] = rj
+			}
+		}
+	}
+	for k := range a.m {
+		d := a.diag(k)
+		for r := range p {
+			for c := r + 1; c < p; c++ {
+				link(k*p+r, k*p+c, d[r*p+c])
+			}
+		}
+		if k+1 < a.m {
+			o := a.off(k)
+			for r := range p {
+				for c := range p {
+					link(k*p+r, (k+1)*p+c, o[r*p+c])
 				}
 			}
 		}

@@ -28,9 +28,10 @@ type system struct {
 	// support A; zd the walkway's centre of mass.
 	z  [][]float64
 	zd []float64
-	// k is the stiffness on the N = p(n−1) degrees of freedom, row-major;
-	// mass holds the n−1 station blocks of the lumped mass, p×p each.
-	k, mass []float64
+	// k is the stiffness on the N = p(n−1) degrees of freedom; mass holds
+	// the n−1 station blocks of the lumped mass, p×p each.
+	k    blockTri
+	mass []float64
 	// rollers holds the static condensation of each rolling saddle's
 	// massless movement along the bridge.
 	rollers []roller
@@ -183,9 +184,8 @@ func (s *system) dofs() int { return s.p * (s.n - 1) }
 // §6.3, from memory). An end element over a rendering saddle has the
 // backstay's unstretched length l₀,b in series: EA/(l₀ + l₀,b).
 func (s *system) assemble() {
-	N := s.dofs()
 	p := s.p
-	s.k = make([]float64, N*N)
+	s.k = newBlockTri(s.n-1, p)
 	s.mass = make([]float64, (s.n-1)*p*p)
 	m := s.m
 	for k := 1; k < s.n; k++ {
@@ -250,7 +250,7 @@ func (s *system) assemble() {
 // addElement adds an element of stiffness ke between rope r's nodes at
 // stations a and b; nodes at the supports carry no degrees of freedom.
 func (s *system) addElement(r, a, b int, ke *[3][3]float64) {
-	N, p := s.dofs(), s.p
+	p := s.p
 	interior := func(k int) bool { return k > 0 && k < s.n }
 	type end struct {
 		k int
@@ -266,16 +266,22 @@ func (s *system) addElement(r, a, b int, ke *[3][3]float64) {
 	}
 	for _, ei := range ends {
 		for _, ej := range ends {
+			// the diagonal blocks and the one above: the matrix is symmetric
+			var blk []float64
 			sign := 1.0
-			if ei.k != ej.k {
-				sign = -1
+			switch ej.k - ei.k {
+			case 0:
+				blk = s.k.diag(ei.k - 1)
+			case 1:
+				blk, sign = s.k.off(ei.k-1), -1
+			default:
+				continue
 			}
 			for x := 0; x < ei.g.n; x++ {
 				gi := ei.g.e[x]
-				row := (ei.k-1)*p + gi.col
 				for y := 0; y < ej.g.n; y++ {
 					gj := ej.g.e[y]
-					s.k[row*N+(ej.k-1)*p+gj.col] += sign * gi.c * gj.c * ke[gi.row][gj.row]
+					blk[gi.col*p+gj.col] += sign * gi.c * gj.c * ke[gi.row][gj.row]
 				}
 			}
 		}
@@ -312,16 +318,16 @@ func (s *system) addRoller(r, side int, ea float64) {
 	cb := math.Cos(float64(bs.Angle))
 	tb, lb := float64(bs.Tension), float64(bs.Length)
 	kss := row[0] + (ea+tb)/lb*cb*cb + tb/lb*(1-cb*cb)
-	p, N := s.p, s.dofs()
+	p := s.p
 	c := make([]float64, p)
 	g := s.node(r, b)
 	for x := 0; x < g.n; x++ {
 		c[g.e[x].col] -= row[g.e[x].row] * g.e[x].c
 	}
-	base := (b - 1) * p
+	blk := s.k.diag(b - 1)
 	for i := range p {
 		for j := range p {
-			s.k[(base+i)*N+base+j] -= c[i] * c[j] / kss
+			blk[i*p+j] -= c[i] * c[j] / kss
 		}
 	}
 	s.rollers = append(s.rollers, roller{rope: r, station: st, b: b, c: c, kss: kss})
@@ -335,4 +341,37 @@ func (s *system) totalMass() float64 {
 		per += float64(r.Mass)
 	}
 	return per * s.dx * float64(s.n-1)
+}
+
+// blockTri is a symmetric matrix, block tridiagonal by station: the
+// diagonal blocks and the blocks coupling each station to the next, p×p
+// each, row-major, for stations 0 … m−1 (the interior stations 1 … n−1).
+type blockTri struct {
+	m, p int
+	d, o []float64
+}
+
+func newBlockTri(m, p int) blockTri {
+	return blockTri{m: m, p: p, d: make([]float64, m*p*p), o: make([]float64, max(m-1, 0)*p*p)}
+}
+
+// diag returns the diagonal block of station k.
+func (b blockTri) diag(k int) []float64 { return b.d[k*b.p*b.p : (k+1)*b.p*b.p] }
+
+// off returns the block coupling station k (rows) to station k+1.
+func (b blockTri) off(k int) []float64 { return b.o[k*b.p*b.p : (k+1)*b.p*b.p] }
+
+// at returns entry (i, j) of the whole matrix.
+func (b blockTri) at(i, j int) float64 {
+	p := b.p
+	ki, kj := i/p, j/p
+	switch kj - ki {
+	case 0:
+		return b.diag(ki)[(i%p)*p+j%p]
+	case 1:
+		return b.off(ki)[(i%p)*p+j%p]
+	case -1:
+		return b.off(kj)[(j%p)*p+i%p]
+	}
+	return 0
 }

@@ -1,14 +1,18 @@
 // Command checkbridge runs the whole-bridge check of sagspan on a bridge
-// description and prints the report: the governing case of every check,
-// the rope states, the natural frequencies and the erection tables.
+// description and writes the report: the design basis, the failures first
+// when any, the governing case of every check, the rope states, the
+// natural modes and walkers' comfort, and the erection tables; -modes-svg
+// draws the first mode shapes.
 //
-// With no argument it checks the built-in demo bridge (an invented bridge at
-// an invented site). Usage:
+// With no file it checks the built-in demo bridge (an invented bridge at an
+// invented site). Flags may come before or after the file:
 //
-//	go run ./examples/checkbridge [flags] [bridge.json]
+//	go run ./examples/checkbridge [flags] [bridge.json] [flags]
+//	go run ./examples/checkbridge mine.json -format html -o report.html
 //
-// It exits with status 0 when every check passes (flags allowed), 2 when a
-// check fails and 1 when the description cannot be read or analysed.
+// It exits with status 0 when every check passes (flags allowed) and for
+// -h, 2 when a check fails and 1 when the description cannot be read or
+// analysed.
 //
 // The results support, and never replace, the design of a qualified
 // engineer; local codes and licensed practice govern.
@@ -16,6 +20,7 @@ package main
 
 import (
 	"bufio"
+	"errors"
 	"flag"
 	"fmt"
 	"io"
@@ -23,76 +28,77 @@ import (
 
 	"github.com/sagspan/sagspan"
 	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/examples/internal/cli"
 )
 
 func main() {
 	os.Exit(run(os.Args[1:], os.Stdout, os.Stderr))
 }
 
+const usage = `usage: checkbridge [flags] [bridge.json] [flags]
+
+Checks a cable-supported footbridge and writes its report; with no file,
+the built-in demo bridge. Flags may come before or after the file.
+
+`
+
 func run(args []string, stdout, stderr io.Writer) int {
 	fs := flag.NewFlagSet("checkbridge", flag.ContinueOnError)
-	fs.SetOutput(stderr)
-	format := fs.String("format", "text", "report format: text, markdown or json")
+	format := fs.String("format", "text", "report format: text, markdown, json or html (one self-contained page with the drawings)")
+	out := fs.String("o", "", "write the report to this file instead of standard output")
 	all := fs.Bool("all", false, "list every result of every load case, not only the governing ones")
 	svg := fs.String("svg", "", "write the elevation drawing to this SVG file")
 	demo := fs.Bool("demo-json", false, "print the demo bridge description (a template for your own) and exit")
-	strict := fs.Bool("strict-comfort", false, "fail, rather than flag, frequencies in the ranges walkers excite")
-	fs.Usage = func() {
-		fmt.Fprintf(stderr, "usage: checkbridge [flags] [bridge.json]\n\nChecks a cable-supported footbridge; with no file, the built-in demo bridge.\n\n")
-		fs.PrintDefaults()
+	modes := fs.String("modes-svg", "", "write the drawing of the first mode shapes to this SVG file")
+	strict := fs.Bool("strict-comfort", false, "fail, rather than flag, accelerations under walkers beyond their limits and crowds beyond the lock-in number")
+	fast := fs.Bool("no-comfort", false, "skip the modal analysis and walkers' response (closed-form frequencies only)")
+	files, err := cli.Parse(fs, args, usage, stdout, stderr)
+	if errors.Is(err, flag.ErrHelp) {
+		return 0
 	}
-	if err := fs.Parse(args); err != nil {
+	if err != nil {
 		return 1
 	}
 	if *demo {
 		stdout.Write(sagspan.DemoJSON())
 		return 0
 	}
-	var b sagspan.Bridge
-	switch fs.NArg() {
-	case 0:
-		b = sagspan.Demo()
-	case 1:
-		var err error
-		if b, err = sagspan.LoadFile(fs.Arg(0)); err != nil {
-			fmt.Fprintln(stderr, err)
-			return 1
-		}
-	default:
-		fs.Usage()
-		return 1
-	}
-	a, err := sagspan.Check(b, &sagspan.Options{StrictComfort: *strict})
+	b, source, err := cli.Load(files)
 	if err != nil {
 		fmt.Fprintln(stderr, err)
 		return 1
 	}
-	out := bufio.NewWriter(stdout)
-	opts := &check.RenderOptions{All: *all}
-	switch *format {
-	case "text":
-		err = a.WriteText(out, opts)
-	case "markdown", "md":
-		err = a.WriteMarkdown(out, opts)
-	case "json":
-		err = a.WriteJSON(out)
-	default:
-		fmt.Fprintf(stderr, "checkbridge: unknown format %q; want text, markdown or json\n", *format)
+	write, ok := writers[*format]
+	if !ok {
+		fmt.Fprintf(stderr, "checkbridge: unknown format %q; want text, markdown, json or html\n", *format)
 		return 1
 	}
-	if err == nil {
-		err = out.Flush()
-	}
+	a, err := sagspan.Check(b, &sagspan.Options{StrictComfort: *strict, SkipComfort: *fast})
 	if err != nil {
+		fmt.Fprintln(stderr, err)
+		return 1
+	}
+	a.Source = source
+	if err := writeReport(a, write, &check.RenderOptions{All: *all}, *out, stdout); err != nil {
 		fmt.Fprintln(stderr, "checkbridge:", err)
 		return 1
 	}
+	if *out != "" {
+		fmt.Fprintf(stderr, "checkbridge: report written to %s\n", *out)
+	}
 	if *svg != "" {
-		if err := writeSVG(a, *svg); err != nil {
+		if err := writeFile(*svg, a.WriteSVG); err != nil {
 			fmt.Fprintln(stderr, "checkbridge:", err)
 			return 1
 		}
 		fmt.Fprintf(stderr, "checkbridge: drawing written to %s\n", *svg)
+	}
+	if *modes != "" {
+		if err := writeFile(*modes, a.WriteModesSVG); err != nil {
+			fmt.Fprintln(stderr, "checkbridge:", err)
+			return 1
+		}
+		fmt.Fprintf(stderr, "checkbridge: mode shapes written to %s\n", *modes)
 	}
 	if a.Report.Status() == check.Fail {
 		return 2
@@ -100,12 +106,34 @@ func run(args []string, stdout, stderr io.Writer) int {
 	return 0
 }
 
-func writeSVG(a *sagspan.Analysis, name string) error {
+type writer func(a *sagspan.Analysis, w io.Writer, opts *check.RenderOptions) error
+
+var writers = map[string]writer{
+	"text":     (*sagspan.Analysis).WriteText,
+	"markdown": (*sagspan.Analysis).WriteMarkdown,
+	"md":       (*sagspan.Analysis).WriteMarkdown,
+	"html":     (*sagspan.Analysis).WriteHTML,
+	"json":     func(a *sagspan.Analysis, w io.Writer, _ *check.RenderOptions) error { return a.WriteJSON(w) },
+}
+
+// writeReport writes the report to the named file, or to stdout.
+func writeReport(a *sagspan.Analysis, write writer, opts *check.RenderOptions, name string, stdout io.Writer) error {
+	if name != "" {
+		return writeFile(name, func(w io.Writer) error { return write(a, w, opts) })
+	}
+	buf := bufio.NewWriter(stdout)
+	if err := write(a, buf, opts); err != nil {
+		return err
+	}
+	return buf.Flush()
+}
+
+func writeFile(name string, write func(io.Writer) error) error {
 	f, err := os.Create(name)
 	if err != nil {
 		return err
 	}
-	if err := a.WriteSVG(f); err != nil {
+	if err := write(f); err != nil {
 		f.Close()
 		return err
 	}

@@ -1,22 +1,27 @@
-// Command designsearch searches the demo bridge's design space for the
-// cheapest design that passes every check: dead-load sag ratio, walkway
-// rope diameter and count, anchor block size and footing size, priced with
-// an invented demo price list. It prints the best design, the trade-off of
+// Command designsearch searches a bridge's design space for the cheapest
+// design that passes every check: dead-load sag ratio, walkway rope
+// diameter and count, anchor block size and footing size, priced with an
+// invented demo price list. It prints the best design, the trade-off of
 // cost against utilisation, and why the nearest infeasible designs fail,
 // with a progress bar when standard error is a terminal.
 //
-//	go run ./examples/designsearch [-workers N] [-report]
+// It searches around the bridge the description file describes, or the
+// built-in demo (an invented bridge at an invented site) when none is
+// given; flags may come before or after the file:
 //
-// The bridge, the site and the prices are invented. The results support,
-// and never replace, the design of a qualified engineer; local codes and
-// licensed practice govern.
+//	go run ./examples/designsearch [bridge.json] [-workers N] [-report]
+//
+// The prices are invented. The results support, and never replace, the
+// design of a qualified engineer; local codes and licensed practice govern.
 package main
 
 import (
 	"context"
+	"errors"
 	"flag"
 	"fmt"
 	"io"
+	"math"
 	"os"
 	"os/signal"
 	"strings"
@@ -25,41 +30,83 @@ import (
 
 	"github.com/sagspan/sagspan"
 	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/examples/internal/cli"
 	"github.com/sagspan/sagspan/units"
 )
 
 func main() {
-	workers := flag.Int("workers", 0, "worker goroutines (0: one per core)")
-	report := flag.Bool("report", false, "print the full report of the best design")
-	flag.Parse()
 	ctx, stop := signal.NotifyContext(context.Background(), os.Interrupt)
-	defer stop()
-	if err := run(ctx, os.Stdout, os.Stderr, *workers, *report); err != nil {
-		fmt.Fprintln(os.Stderr, "designsearch:", err)
-		os.Exit(1)
-	}
+	code := run(ctx, os.Args[1:], os.Stdout, os.Stderr)
+	stop()
+	os.Exit(code)
 }
 
-// space is the grid searched: 5 sag ratios × 4 diameters × 3 counts,
-// 18 anchor block sizes and 12 footing sizes.
-func space() sagspan.SearchSpace {
-	m := units.Metre
+const usage = `usage: designsearch [flags] [bridge.json] [flags]
+
+Searches sag, walkway ropes, anchor blocks and footings around the bridge
+(the built-in demo when no file is given) for the cheapest design that
+passes every check.
+
+`
+
+func run(ctx context.Context, args []string, stdout, stderr io.Writer) int {
+	fs := flag.NewFlagSet("designsearch", flag.ContinueOnError)
+	workers := fs.Int("workers", 0, "worker goroutines (0: one per core)")
+	report := fs.Bool("report", false, "print the full report of the best design")
+	files, err := cli.Parse(fs, args, usage, stdout, stderr)
+	if errors.Is(err, flag.ErrHelp) {
+		return 0
+	}
+	if err != nil {
+		return 1
+	}
+	b, source, err := cli.Load(files)
+	if err != nil {
+		fmt.Fprintln(stderr, "designsearch:", err)
+		return 1
+	}
+	if err := search(ctx, stdout, stderr, b, source, *workers, *report); err != nil {
+		fmt.Fprintln(stderr, "designsearch:", err)
+		return 1
+	}
+	return 0
+}
+
+// space is the grid searched around bridge b: 5 sag ratios, 4 diameters
+// and 3 counts of the first walkway group's ropes, 18 anchor block sizes
+// and 12 footing sizes scaled from the left bank's.
+func space(b sagspan.Bridge) sagspan.SearchSpace {
+	var rope sagspan.RopeGroup
+	for _, g := range b.Ropes {
+		if g.Role == sagspan.RoleWalkway {
+			rope = g
+			break
+		}
+	}
+	mm := func(x float64) units.Length { return units.Length(math.Round(x*1000)) * units.Millimetre }
+	dm := func(x float64) units.Length { return units.Length(math.Round(x*10)) / 10 * units.Metre }
+	d := float64(rope.Rope.Diameter)
 	s := sagspan.SearchSpace{
 		SagRatios: []float64{1.0 / 24, 1.0 / 22, 1.0 / 20, 1.0 / 18, 1.0 / 16},
-		Diameters: []units.Length{26 * units.Millimetre, 28 * units.Millimetre, 32 * units.Millimetre, 36 * units.Millimetre},
-		Counts:    []int{4, 6, 8},
+		Diameters: []units.Length{mm(0.8 * d), mm(0.9 * d), mm(d), mm(1.12 * d)},
+		Counts:    []int{max(1, rope.Count-2), rope.Count, rope.Count + 2},
 	}
-	for _, l := range []units.Length{3.5, 4.5, 5.5} {
-		for _, w := range []units.Length{4, 5, 6} {
-			for _, h := range []units.Length{2.2, 2.8} {
-				s.Anchors = append(s.Anchors, sagspan.BlockSize{Length: l * m, Width: w * m, Height: h * m, Depth: (h + 0.4) * m})
+	an, ft := b.Banks.Left.Anchor, b.Banks.Left.Tower.Footing
+	if an.Type == "block" {
+		for _, l := range []float64{0.8, 1, 1.2} {
+			for _, w := range []float64{0.8, 1, 1.2} {
+				for _, h := range []float64{0.85, 1.08} {
+					height := dm(h * float64(an.Height))
+					s.Anchors = append(s.Anchors, sagspan.BlockSize{Length: dm(l * float64(an.Length)), Width: dm(w * float64(an.Width)),
+						Height: height, Depth: height + an.Depth - an.Height})
+				}
 			}
 		}
 	}
-	for _, l := range []units.Length{1.8, 2.2, 2.6} {
-		for _, w := range []units.Length{2.6, 3.0} {
-			for _, t := range []units.Length{0.6, 0.8} {
-				s.Footings = append(s.Footings, sagspan.FootingSize{Length: l * m, Width: w * m, Thickness: t * m})
+	for _, l := range []float64{0.75, 0.9, 1.08} {
+		for _, w := range []float64{0.87, 1} {
+			for _, t := range []float64{0.86, 1.14} {
+				s.Footings = append(s.Footings, sagspan.FootingSize{Length: dm(l * float64(ft.Length)), Width: dm(w * float64(ft.Width)), Thickness: dm(t * float64(ft.Thickness))})
 			}
 		}
 	}
@@ -71,8 +118,7 @@ func isTerminal(f *os.File) bool {
 	return err == nil && st.Mode()&os.ModeCharDevice != 0
 }
 
-func run(ctx context.Context, stdout, stderr io.Writer, workers int, report bool) error {
-	b := sagspan.Demo()
+func search(ctx context.Context, stdout, stderr io.Writer, b sagspan.Bridge, source string, workers int, report bool) error {
 	settings := &sagspan.SearchSettings{Workers: workers}
 	if f, ok := stderr.(*os.File); ok && isTerminal(f) {
 		settings.Progress = func(done, total int) {
@@ -85,12 +131,12 @@ func run(ctx context.Context, stdout, stderr io.Writer, workers int, report bool
 		}
 	}
 	start := time.Now()
-	res, err := sagspan.Search(ctx, b, space(), settings)
+	res, err := sagspan.Search(ctx, b, space(b), settings)
 	if err != nil {
 		return err
 	}
 	elapsed := time.Since(start)
-	fmt.Fprintf(stdout, "Design search on %q (invented site, invented prices)\n%s\n\n", b.Name, check.Caution)
+	fmt.Fprintf(stdout, "Design search on %q (%s; invented prices)\n%s\n\n", b.Name, source, check.Caution)
 	fmt.Fprintf(stdout, "%d candidates, %d feasible, in %.2f s.\n\n", res.Evaluated, res.Feasible, elapsed.Seconds())
 	tw := tabwriter.NewWriter(stdout, 0, 0, 2, ' ', 0)
 	row := func(d sagspan.Design) {

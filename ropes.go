@@ -1,0 +1,121 @@
+package sagspan
+
+import (
+	"fmt"
+	"math"
+
+	"github.com/sagspan/sagspan/cable"
+	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/units"
+)
+
+// ropeEfficiency returns the termination efficiency the description gives:
+// basis.rope_efficiency, else that of basis.termination, else zero (the
+// cable package's default).
+func (b Bridge) ropeEfficiency() float64 {
+	if b.Basis.RopeEfficiency > 0 {
+		return b.Basis.RopeEfficiency
+	}
+	ke, _ := cable.TerminationEfficiency(b.Basis.Termination)
+	return ke
+}
+
+// ropeBasis returns the verification basis of rope tension.
+func (m *model) ropeBasis() cable.TensionBasis {
+	if m.b.partial() {
+		return cable.PartialFactor{GammaR: m.b.Basis.GammaR, Ke: m.b.ropeEfficiency()}
+	}
+	return cable.GlobalFactor{Factor: m.b.Basis.RopeFactor, Ke: m.b.ropeEfficiency()}
+}
+
+// sharing returns the group's sharing factor, zero for the default.
+func (g group) sharing() float64 {
+	if g.Sharing == nil {
+		return 0
+	}
+	return *g.Sharing
+}
+
+// ropeChecks adds the tension check of every rope group under one case:
+// the service state on the allowable basis, the design state on the
+// partial one. In a case with a rope broken, the ropes left in that group
+// carry the static tension of the broken state plus the dynamic overshoot
+// of the sudden break, loads.break_dynamic times the change per rope
+// (ropesInSearch false: the loaded-length search skips groups that carry
+// neither crowd nor walkway, whose state no stretch changes).
+func (m *model) ropeChecks(out sink, svc, des CaseState, all bool) error {
+	st := svc
+	if m.b.partial() {
+		st = des
+	}
+	lc := st.Case
+	basis := m.ropeBasis()
+	for i, g := range m.groups {
+		if !all && g.share == 0 {
+			continue
+		}
+		t := st.Groups[i].MaxTension
+		n := g.Count
+		var note string
+		var values []check.Value
+		if lc.Broken > 0 && lc.BrokenGroup == g.Name && n > lc.Broken {
+			in := m.solveInput(g, lc)
+			in.intact = 1
+			intact, err := m.groupState(i, in)
+			if err != nil {
+				return fmt.Errorf("sagspan: %s intact, case %q: %w", g.Name, lc.Name, err)
+			}
+			left := n - lc.Broken
+			before := float64(intact.MaxTension) / float64(n)
+			after := float64(t) / float64(left)
+			k := m.b.breakDynamic()
+			per := before + k*(after-before)
+			values = append(values,
+				check.Of("T_0", "tension of the intact group, same loads", intact.MaxTension),
+				check.Of("T_b", "static tension of the ropes left", t),
+				check.Of("φ_b", "dynamic factor on the change per rope", units.Ratio(k)))
+			t = units.Force(math.Max(per, after) * float64(left))
+			n = left
+			note = fmt.Sprintf("%d of %d ropes left; each carries its intact share plus %.3g times the static change the break causes (a suddenly applied load on an undamped elastic system); the broken rope's weight stays on the walkway", left, g.Count, k)
+		}
+		r, err := cable.Group{Rope: g.rope, Count: n, Sharing: g.sharing()}.TensionCheck(t, basis)
+		if err != nil {
+			return fmt.Errorf("sagspan: %s, case %q: %w", g.Name, lc.Name, err)
+		}
+		if len(values) > 0 {
+			r = r.WithValues(values...).WithNote(note)
+		}
+		out.add(r.For(g.Name, lc.Name))
+	}
+	return nil
+}
+
+// grooveCase names the "case" of a check that no load case changes.
+const grooveCase = "any load case"
+
+// grooveChecks adds the D/d check of every rope group on each tower's
+// saddle; a saddle without a groove diameter gets a flag asking for it.
+func (m *model) grooveChecks(out sink) error {
+	for side := Left; side <= Right; side++ {
+		groove := m.bank(side).Tower.Saddle.GrooveDiameter
+		for _, g := range m.groups {
+			element := side.String() + " saddle, " + g.Name
+			if groove == 0 {
+				need := orDefault(m.b.Basis.MinGrooveRatio, cable.DefaultMinGrooveRatio) * float64(g.rope.Diameter)
+				r := check.Record("cable.saddle_ratio", "Saddle groove diameter to rope diameter, D/d", units.KindLength, need).
+					For(element, grooveCase).
+					WithBasis("groove diameter against the least D/d for the rope's construction (common practice)").
+					WithNote("the groove diameter is not given (banks." + side.String() + ".tower.saddle.groove_diameter): the demand shown is the least groove the rope needs")
+				r.Status = check.Flag
+				out.add(r)
+				continue
+			}
+			r, err := cable.SaddleRatioCheck(groove, g.rope, m.b.Basis.MinGrooveRatio)
+			if err != nil {
+				return fmt.Errorf("sagspan: %s: %w", element, err)
+			}
+			out.add(r.For(element, grooveCase))
+		}
+	}
+	return nil
+}
