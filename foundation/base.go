@@ -240,8 +240,10 @@ func soilBearing(id, title string, along, across, depth units.Length, water Wate
 	area := a * w
 	outside := func() check.Result {
 		r := check.Compare(id, title, units.KindPressure, ld.n/area, 0).WithBasis(basis)
-		r = set.values(r, baseValues(ld, a, w)...)
-		return set.note(r, "resultant outside the base")
+		if set.terse {
+			return r
+		}
+		return r.WithValues(baseValues(ld, a, w)...).WithNote("resultant outside the base")
 	}
 	if ld.outside(a, w) {
 		return outside(), nil
@@ -252,7 +254,10 @@ func soilBearing(id, title string, along, across, depth units.Length, water Wate
 			return check.Result{}, err
 		}
 		r := check.Compare(id, title, units.KindPressure, float64(qmax), float64(s.Allowable)).WithBasis(basis)
-		return set.values(r, append(baseValues(ld, a, w), check.Of("q_a", "allowable bearing pressure given by the site report", s.Allowable))...), nil
+		if set.terse {
+			return r, nil
+		}
+		return r.WithValues(append(baseValues(ld, a, w), check.Of("q_a", "allowable bearing pressure given by the site report", s.Allowable))...), nil
 	}
 	sd := s.withStrength(s.strengthIn(cond, set))
 	br, err := BearingCapacity(BearingInput{AlongLoad: along, AcrossLoad: across, Depth: depth, Vertical: units.Force(ld.n),
@@ -303,13 +308,18 @@ func rockBaseBearing(id, title string, along, across units.Length, ld baseLoad, 
 	}
 	if ld.outside(a, w) {
 		r := check.Compare(id, title, units.KindPressure, ld.n/(a*w), 0).WithBasis(basis)
-		r = set.values(r, baseValues(ld, a, w)...)
-		return set.note(r, "resultant outside the base"), nil
+		if set.terse {
+			return r, nil
+		}
+		return r.WithValues(baseValues(ld, a, w)...).WithNote("resultant outside the base"), nil
 	}
 	qmax, err := ld.contact(along, across)
 	if err != nil {
 		return check.Result{}, err
 	}
 	r := check.Compare(id, title, units.KindPressure, float64(qmax), float64(rb.Allowable)).WithBasis(basis)
-	return set.values(r, append(baseValues(ld, a, w), rb.Values()...)...), nil
+	if set.terse {
+		return r, nil
+	}
+	return r.WithValues(append(baseValues(ld, a, w), rb.Values()...)...), nil
 }
