@@ -42,7 +42,7 @@ func ContactPressure(n units.Force, e units.Length, b, l units.Length) (qmax, qm
 	nn := float64(n)
 	if ae <= bb/6 {
 		mean := nn / (bb * ll)
-		return units.Pressure(mean * (1 + 6*ae/bb)), units.Pressure(mean * (1 - 6*ae/bb)), b, nil
+		return units.Pressure(mean * (1 + 6*ae/bb)), units.Pressure(math.Max(mean*(1-6*ae/bb), 0)), b, nil
 	}
 	a := bb/2 - ae
 	return units.Pressure(2 * nn / (3 * ll * a)), 0, units.Length(3 * a), nil
@@ -116,7 +116,7 @@ func BiaxialContactPressure(n units.Force, ex, ey, b, l units.Length) (BiaxialCo
 	if x0/bb+y0/ll <= 1.0/6 {
 		mean := nn / area
 		return BiaxialContact{Max: units.Pressure(mean * (1 + 6*x0/bb + 6*y0/ll)),
-			Min: units.Pressure(mean * (1 - 6*x0/bb - 6*y0/ll)), Area: units.Area(area)}, nil
+			Min: units.Pressure(math.Max(mean*(1-6*x0/bb-6*y0/ll), 0)), Area: units.Area(area)}, nil
 	}
 	p, err := noTensionPlane(nn, x0, y0, bb, ll)
 	if err != nil {
