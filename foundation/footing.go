@@ -396,7 +396,12 @@ func (f Footing) overturning(load FootingLoad, ld blockLoads, set actionSet, fs 
 	}
 	r := check.Stability("footing.overturning", "Footing overturning about the base edge", units.KindMoment, dst, stb, fs).
 		WithBasis(basisOf(set, "the restoring moment about the base edge", fs))
-	return set.values(r,
+	if set.terse {
+		return r
+	}
+	return r.WithValues(
+		check.Of("V", "vertical load from the column, characteristic, downward positive", load.Vertical),
+		check.Of("M", "moment of the column's load about the base centre, characteristic", load.Moment),
 		check.Of("W", "weight of the pad and its soil cover", units.Force(ld.weight)),
 		check.Of("U", "uplift of the water on the pad", units.Force(ld.buoyancy)))
 }

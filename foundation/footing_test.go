@@ -329,6 +329,14 @@ func TestFootingBiaxialHand(t *testing.T) {
 	near(t, "m_θ", valueOf(t, bear, "m"), mExp, 1e-12)
 	near(t, "e_y", valueOf(t, bear, "e_y"), 0.1, 1e-12)
 	near(t, "q_max", valueOf(t, bear, "q_max"), 170e3, 1e-12)
+	// Overturning about the edges across x, by hand: driving |M| = 120,
+	// restoring (W + V)·3/2 = (72 + 528)·1.5 = 900 kN·m; the column's V and
+	// M among the values.
+	over := byID(t, rs, "footing.overturning")
+	near(t, "overturning driving", over.Demand, 120e3, 1e-12)
+	near(t, "overturning restoring", over.Capacity, 900e3, 1e-12)
+	near(t, "V", valueOf(t, over, "V"), 528e3, 1e-12)
+	near(t, "M", valueOf(t, over, "M"), 120e3, 1e-12)
 	slide := byID(t, rs, "footing.sliding")
 	near(t, "sliding driving", slide.Demand, 50e3, 1e-12)
 	near(t, "sliding resisting", slide.Capacity, 600e3*math.Tan(phi*2/3), 1e-12)
