@@ -301,6 +301,9 @@ func (d Deadman) beam(pulls []AnchorPull, bs Basis, fs float64) []check.Result {
 	} else {
 		label = fsBasis("the plastic resistance of the steel section (EN 1993-1-1:2005 6.2.5 and 6.2.6)", fs)
 	}
+	// W_pl f_y holds for class 1 and 2 sections only (EN 1993-1-1 6.2.5(2)).
+	label += "; the section taken as class 1 or 2 (plastic): for a class 3 section give its elastic modulus as the plastic one; " +
+		"the surrounding soil restrains it against lateral-torsional buckling"
 	var fx, fz float64
 	for _, p := range pulls {
 		x, z := p.components()
