@@ -294,10 +294,10 @@ func (r RockAnchor) Check(pull units.Force, angle units.Angle, s Soil, b *Basis)
 	if r.Plate != (HeadPlate{}) {
 		plate = r.plateForces(t)
 	}
-	var rockQa float64
+	var rockQa RockBearing
 	if plate.ok {
 		if rb, err := RockPressure(s, r.Plate.Side); err == nil {
-			rockQa = float64(rb.Allowable)
+			rockQa = rb
 		}
 	}
 
@@ -376,9 +376,9 @@ func (r RockAnchor) plateForces(t float64) plateForces {
 // plateResults returns the head plate's bending result under design
 // forces pd (the plastic bending stress 4m/t² against f_y/(γM0·fs), so that
 // the ratio is m/m_Rd) and its bearing result under characteristic forces
-// pk against the rock's allowable pressure qa (zero: not known, the
-// pressure is recorded only).
-func (r RockAnchor) plateResults(pd, pk plateForces, gM0, fs, qa float64, basis string) []check.Result {
+// pk against the rock's allowable pressure rb (zero Allowable: not known,
+// the pressure is recorded only), with the numbers behind it.
+func (r RockAnchor) plateResults(pd, pk plateForces, gM0, fs float64, rb RockBearing, basis string) []check.Result {
 	if !pd.ok {
 		return nil
 	}
@@ -397,9 +397,10 @@ func (r RockAnchor) plateResults(pd, pk plateForces, gM0, fs, qa float64, basis 
 			WithNote("plastic bending stress 4m/t² of a cantilever strip from the nut's edge under uniform bearing (common practice)"),
 	}
 	pv := check.Of("p", "bearing pressure under the plate, characteristic", units.Pressure(pk.p))
-	if qa > 0 {
+	if qa := float64(rb.Allowable); qa > 0 {
 		return append(out, check.Compare("anchor.rock.platebearing", "Rock anchor head plate bearing on rock", units.KindPressure, pk.p, qa).
-			WithBasis("the plate's bearing pressure under characteristic actions against the rock's allowable pressure (RockPressure)").WithValues(pv))
+			WithBasis("the plate's bearing pressure under characteristic actions against the rock's allowable pressure (RockPressure): "+rb.Method).
+			WithValues(append([]check.Value{pv}, rb.Values()...)...))
 	}
 	return append(out, check.Record("anchor.rock.platebearing", "Rock anchor head plate bearing pressure", units.KindPressure, pk.p).
 		WithValues(pv).WithNote("no allowable pressure of the rock is known: compare with the rock's or the grout pad's strength"))
