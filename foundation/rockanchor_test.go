@@ -237,6 +237,18 @@ func TestRockAnchorPlate(t *testing.T) {
 	near(t, "plate capacity", plate.Capacity, 275e6/1.67, 1e-9)
 	pb := byID(t, rs, "anchor.rock.platebearing")
 	near(t, "plate bearing", pb.Ratio, p/3e6, 1e-9)
+	near(t, "q_a among the values", valueOf(t, pb, "q_a"), 3e6, 1e-12)
+	// By the K_sp method (q_u 40 MPa, joints 0.5 m apart, 1 mm open) for
+	// the 0.3 m plate: K_sp = (3 + 0.5/0.3)/(10 √(1 + 300·0.001/0.5)),
+	// CFEM 2006 §9.2 [M].
+	rock.Allowable, rock.RockStrength, rock.JointSpacing, rock.JointAperture = 0, 40e6, 0.5, 0.001
+	ra.Plate.Side = 0.3
+	rs, _ = ra.Check(150e3, deg(40), rock, nil)
+	pb = byID(t, rs, "anchor.rock.platebearing")
+	ksp := (3 + 0.5/0.3) / (10 * math.Sqrt(1+300*0.001/0.5))
+	near(t, "K_sp plate capacity", pb.Capacity, ksp*40e6, 1e-12)
+	near(t, "K_sp among the values", valueOf(t, pb, "K_sp"), ksp, 1e-12)
+	near(t, "plate width among the values", valueOf(t, pb, "B_r"), 0.3, 1e-12)
 }
 
 func TestRockAnchorConsistency(t *testing.T) {
