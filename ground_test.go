@@ -484,3 +484,21 @@ func TestAttachmentValues(t *testing.T) {
 		}
 	}
 }
+
+// TestFloodedDeadman: where the design flood stands over a deadman's
+// ground, its pull-out result says that the soil in front of it must be
+// kept from scour (EN 1997-1 6.5.3(7)); in the dry cases it does not.
+func TestFloodedDeadman(t *testing.T) {
+	b := loadTestdata(t, "river_bank.json")
+	b.Banks.Right.Anchor = AnchorSpec{Type: "deadman", Length: 0.8, Width: 8, Height: 1.5, Depth: 2.5}
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	flooded := find(t, a.Report, "anchor.deadman.pullout", "right anchor", "flood with crowd")
+	dry := find(t, a.Report, "anchor.deadman.pullout", "right anchor", "wind with crowd")
+	has := func(r check.Result) bool { return strings.Contains(strings.Join(r.Notes, " "), "scour") }
+	if !has(flooded) || has(dry) {
+		t.Errorf("scour note: flooded %v, dry %v", flooded.Notes, dry.Notes)
+	}
+}
