@@ -211,9 +211,11 @@ func EccentricityCheck(r Resultant, c Column, opt *Eccentricity) (check.Result, 
 			"with these forces gives a weight or moment that is not finite")
 	}
 	delta := math.Atan2(h, v)
-	e, form := ep, "rope-line form (the form practice uses): the line of action of the rope forces alone, the column's weight not counted, e = h·tan δ"
+	e, form := ep, "rope-line form (the form practice uses): the line of action of the rope forces alone, the column's weight not counted, e = h·tan δ; "+
+		"the statics form, ΣM/ΣV with the weight of the column above the section (e_s, smaller: the weight pulls the line back toward the axis), is given beside it"
 	if o.Form == Statics {
-		e, form = es, "statics form: e = ΣM/ΣV at the checked section with the weight of the column above it"
+		e, form = es, "statics form: e = ΣM/ΣV at the checked section with the weight of the column above it; "+
+			"the rope-line form practice checks, e = h·tan δ from the rope forces alone (larger), is given beside it"
 	}
 	where := "the column base section"
 	if yc > 0 {

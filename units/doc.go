@@ -27,4 +27,15 @@
 //
 // Temperatures are absolute (kelvin); FromCelsius and Celsius convert.
 // Temperature differences and thermal strains are plain float64 kelvin.
+//
+// # References
+//
+//   - Bureau International des Poids et Mesures (2019). The International
+//     System of Units (SI), 9th edition (the SI Brochure): the coherent SI
+//     units, the prefixes, the writing of quantities (a space between
+//     number and unit, the decimal marker) and the degree Celsius,
+//     T/K = t/°C + 273.15.
+//   - ISO 80000-3:2019, Quantities and units — Part 3: Space and time:
+//     the standard acceleration of free fall, g_n = 9.806 65 m/s²
+//     (StandardGravity).
 package units
