@@ -73,9 +73,10 @@ type Climate struct {
 	Coldest units.Temperature `json:"coldest"`
 	Hottest units.Temperature `json:"hottest"`
 	// WindSpeed is the basic wind speed; the peak velocity pressure is then
-	// Exposure · ½ρv² (EN 1991-1-4 cl. 4.5). WindPressure, when set, is the
-	// peak velocity pressure itself and is used instead.
-	WindSpeed    units.Velocity `json:"wind_speed,omitempty"`
+	// Exposure · ½ρv² (EN 1991-1-4 cl. 4.5).
+	WindSpeed units.Velocity `json:"wind_speed,omitempty"`
+	// WindPressure, when set, is the peak velocity pressure q_p itself and
+	// is used instead of the one from WindSpeed.
 	WindPressure units.Pressure `json:"wind_pressure,omitempty"`
 	// Exposure is the exposure factor ce(z) of EN 1991-1-4 cl. 4.5; zero
 	// means 2.5 (open country at 10–15 m, from memory).
