@@ -43,6 +43,9 @@ type model struct {
 	// every crowd, and a case's service and design states often share
 	// groups.
 	states *stateCache
+	// columns holds each bank's concrete column member as built for the
+	// variant last analysed (see rcColumn).
+	columns [2]builtColumn
 }
 
 func newModel(b Bridge) (*model, error) {
