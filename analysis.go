@@ -86,6 +86,9 @@ type GroupState struct {
 	// Saddle is the force on each tower column from this group's saddle.
 	Saddle [2]tower.LevelForce
 	shape  cable.Loaded
+	// shear is ∫Q² dx of the load (cable.LengthCurve.ShearIntegral), for
+	// the start of nearby states.
+	shear float64
 }
 
 // CaseState is the state of the whole bridge under one load case.
@@ -246,7 +249,7 @@ func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, er
 	if !ok {
 		return nil, nil, fmt.Errorf("sagspan: the permanent case has no state")
 	}
-	families := m.startFamilies(perm, ground)
+	families := m.families(perm, ground).start()
 	defer families.wait()
 	service, design = []CaseState{perm}, []CaseState{permDes}
 	for _, lc := range cases[1:] {
@@ -288,27 +291,19 @@ func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, er
 	return service, design, nil
 }
 
-// searchFamilies runs the loaded-length search of every family (see
-// searchLength), each on its own copy of the model so that they may run
-// at once (parallel) and, either way, give the same numbers. The results
-// reach out family by family, in order. It returns the states of the
-// governing stretches and the searchers, whose points a design search
-// checks its sizes on.
-func (m *model) searchFamilies(out sink, perm CaseState, ground, parallel bool) (governing [][2]CaseState, searchers []*searcher, err error) {
-	var f *familySearch
-	if parallel {
-		f = m.startFamilies(perm, ground)
-	} else {
-		f = m.runFamilies(perm, ground)
-	}
-	return f.collect(out)
-}
-
-// familySearch is the loaded-length searches of every family, each on its
-// own copy of the model, running or done.
+// familySearch is the loaded-length searches of every family (see
+// searchLength), each on its own copy of the model, taken when the
+// permanent case is solved and before any other case, so that the whole-
+// bridge check and a design search give the families the same states to
+// start from and find the same numbers, whether the families run at once
+// or one after the other.
 type familySearch struct {
-	wg  sync.WaitGroup
-	res []familyResult
+	wg     sync.WaitGroup
+	perm   CaseState
+	ground bool
+	fams   []LoadedLength
+	models []*model
+	res    []familyResult
 }
 
 type familyResult struct {
@@ -318,24 +313,31 @@ type familyResult struct {
 	err       error
 }
 
-// startFamilies starts the search of every family in a goroutine of its
-// own; runFamilies runs them one after the other.
-func (m *model) startFamilies(perm CaseState, ground bool) *familySearch {
-	return m.families(perm, ground, true)
-}
-
-func (m *model) runFamilies(perm CaseState, ground bool) *familySearch {
-	return m.families(perm, ground, false)
-}
-
-func (m *model) families(perm CaseState, ground, parallel bool) *familySearch {
+// families takes the copies of the model for the search of every family
+// from the permanent case perm, with the footing and anchor checks when
+// ground; run or start them, then collect.
+func (m *model) families(perm CaseState, ground bool) *familySearch {
 	fams := m.b.LoadedLengths()
-	f := &familySearch{res: make([]familyResult, len(fams))}
-	for i, fam := range fams {
-		c := m.clone()
+	f := &familySearch{perm: perm, ground: ground, fams: fams, res: make([]familyResult, len(fams))}
+	m.buildColumns() // once, for every copy
+	for range fams {
+		f.models = append(f.models, m.clone())
+	}
+	return f
+}
+
+// start runs the searches in goroutines of their own; run runs them one
+// after the other.
+func (f *familySearch) start() *familySearch { return f.launch(true) }
+
+func (f *familySearch) run() *familySearch { return f.launch(false) }
+
+func (f *familySearch) launch(parallel bool) *familySearch {
+	for i, fam := range f.fams {
+		c := f.models[i]
 		search := func() {
 			r := &f.res[i]
-			r.searcher, r.governing, r.err = c.searchLength(&r.results, perm, fam, ground)
+			r.searcher, r.governing, r.err = c.searchLength(&r.results, f.perm, fam, f.ground)
 		}
 		if parallel {
 			f.wg.Go(search)

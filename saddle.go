@@ -138,7 +138,7 @@ func (m *model) analyseFrom(lc LoadCase, warm *CaseState) (CaseState, error) {
 	for i, g := range m.groups {
 		in := m.solveInput(g, lc)
 		if warm != nil {
-			in.start = warm.Groups[i].H
+			in.start, in.startShear = warm.Groups[i].H, warm.Groups[i].shear
 		}
 		swing := in.swing
 		gs, err := m.groupState(i, in)
@@ -202,9 +202,12 @@ type solveInput struct {
 	// scale multiplies every unstretched length of the group: 1 but for new
 	// rope before its constructional stretch (the erection table).
 	scale float64
-	// start, when positive, starts the iteration on the group's horizontal
-	// tension (a nearby state's).
-	start units.Force
+	// start, when positive, is the group's horizontal tension in a nearby
+	// state at the same temperature, whose load has the shear integral
+	// startShear (cable.LengthCurve.ShearIntegral): the iteration starts
+	// from the change-of-state cubic's estimate from there.
+	start      units.Force
+	startShear float64
 }
 
 // solveInput returns the input of group g's state under case lc.
@@ -285,8 +288,8 @@ func (m *model) solveGroup(i int, in solveInput) (GroupState, error) {
 		}
 		return out
 	}
-	h := float64(in.start)
-	if !(h > 0) {
+	h := float64(curve.Estimate(in.startShear, in.start))
+	if !(in.start > 0) || !(in.startShear > 0) {
 		st, err := cable.StateForLength(m.span, e.EA, load, units.Length(l0), m.ref[i].Temperature+units.Temperature(dt))
 		if err != nil {
 			return GroupState{}, err
@@ -333,7 +336,10 @@ func (m *model) solveGroup(i int, in solveInput) (GroupState, error) {
 				next = lo + (hi-lo)/2
 			}
 		}
-		if math.Abs(next-h) <= 1e-13*next || hi-lo <= 1e-13*next {
+		// Newton converges quadratically, the backstays' difference
+		// slope adding a linear factor of about 1e-6: after a step below
+		// 1e-9 of H what is left is below 1e-14 of H.
+		if math.Abs(next-h) <= 1e-9*next || hi-lo <= 1e-13*next {
 			h, converged = next, true
 			break
 		}
@@ -353,7 +359,7 @@ func (m *model) solveGroup(i int, in solveInput) (GroupState, error) {
 	if err != nil {
 		return GroupState{}, err
 	}
-	gs := GroupState{Group: g.Name, Load: load, Swing: swing, H: units.Force(h), shape: shape}
+	gs := GroupState{Group: g.Name, Load: load, Swing: swing, H: units.Force(h), shape: shape, shear: curve.ShearIntegral()}
 	ta, tb := shape.SupportTensions()
 	aa, ab := shape.SupportAngles()
 	gs.Tension = [2]units.Force{ta, tb}

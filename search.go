@@ -471,13 +471,19 @@ func ropeStage(b Bridge, out sink) (*model, []stage, error) {
 	for _, v := range m.variants() {
 		m.grooves = v.grooves
 		var st stage
-		for _, lc := range b.Cases() {
+		var families *familySearch
+		for k, lc := range b.Cases() {
 			svc, des, ok, err := m.caseStates(out, lc)
 			if err != nil {
 				return nil, nil, err
 			}
 			if !ok {
 				continue
+			}
+			if k == 0 {
+				// The families start from the permanent case alone, as
+				// in the whole-bridge check (see familySearch).
+				families = m.families(svc, false)
 			}
 			if err := m.ropeChecks(out, svc, des, true); err != nil {
 				return nil, nil, err
@@ -490,7 +496,7 @@ func ropeStage(b Bridge, out sink) (*model, []stage, error) {
 		st.perm = st.service[0]
 		// One search worker per candidate already uses every core: the
 		// families run one after the other, with the same numbers.
-		if _, st.searchers, err = m.searchFamilies(out, st.perm, false, false); err != nil {
+		if _, st.searchers, err = families.run().collect(out); err != nil {
 			return nil, nil, err
 		}
 		stages = append(stages, st)

@@ -102,14 +102,15 @@ func (m *model) erection(a *Analysis, opts *Options) error {
 	for i, g := range m.groups {
 		table := ErectionTable{Group: g.Name, ConstructionalStretch: g.constructionalStretch(), Hold: m.erectionHold(g)}
 		var start units.Force
+		var shear float64
 		for _, t := range temps {
 			in := m.bareInput(i, t)
-			in.start = start
+			in.start, in.startShear = start, shear
 			gs, err := m.groupState(i, in)
 			if err != nil {
 				return fieldErr("ropes", "erection table of %s at %s: %w; check its sag, rope and the climate's temperatures", g.Name, t, err)
 			}
-			start = gs.H
+			start, shear = gs.H, gs.shear
 			table.Rows = append(table.Rows, cable.ErectionRow{Temperature: t, Sag: gs.Sag, H: gs.H})
 		}
 		a.Erection = append(a.Erection, table)

@@ -275,6 +275,17 @@ func (m *model) rcColumn(side Side, length units.Length, along tower.Restraint, 
 	return rc
 }
 
+// buildColumns builds the concrete column members of both banks for the
+// variant set (see rcColumn).
+func (m *model) buildColumns() {
+	for side := Left; side <= Right; side++ {
+		if _, legs := m.steel(side); legs == 0 {
+			along, spring := m.restraint(side)
+			m.rcColumn(side, m.column(side).Height, along, spring)
+		}
+	}
+}
+
 // builtColumn is a bank's column member built for a variant of groove
 // behaviour.
 type builtColumn struct {

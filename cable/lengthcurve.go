@@ -23,6 +23,7 @@ type LengthCurve struct {
 	ea     float64
 	c0     float64 // chord slope h/L
 	xs, qs []float64
+	d      float64 // ∫ Q² dx
 }
 
 // NewLengthCurve returns the curve of the rope of axial stiffness ea under
@@ -39,7 +40,7 @@ func NewLengthCurve(s Span, ea units.AxialStiffness, l Load) (LengthCurve, error
 	b := newBeam(s, l)
 	n := 2 + 2*len(l.Patches)
 	xs, qs := b.sections(make([]float64, 0, n), make([]float64, 0, n))
-	return LengthCurve{span: s, ea: float64(ea), c0: float64(s.Rise) / float64(s.Length), xs: xs, qs: qs}, nil
+	return LengthCurve{span: s, ea: float64(ea), c0: float64(s.Rise) / float64(s.Length), xs: xs, qs: qs, d: b.shearSquared()}, nil
 }
 
 // At returns L₀(H) and dL₀/dH (metres per newton, negative) for H > 0.
@@ -57,6 +58,28 @@ func (c LengthCurve) Supports(h units.Force) (ta, tb units.Force, aa, ab units.A
 	va, vb := c.qs[0]-hv, hv-c.qs[len(c.qs)-1]
 	return units.Force(math.Hypot(hh, va)), units.Force(math.Hypot(hh, vb)),
 		units.Angle(math.Atan2(va, hh)), units.Angle(math.Atan2(vb, hh))
+}
+
+// ShearIntegral returns D = ∫ Q² dx of the curve's load, Q the beam
+// shear of the load on the span: what the classical change-of-state cubic
+// knows of a load (see Estimate).
+func (c LengthCurve) ShearIntegral() float64 { return c.d }
+
+// Estimate returns the horizontal tension at which the rope hangs the
+// curve's load, estimated from a state of the same rope at the same
+// temperature that hangs a load of shear integral d1 (ShearIntegral) with
+// horizontal tension h1, by the classical change-of-state cubic
+//
+//	H₂²[H₂ − H₁ + κ D₁/H₁²] = κ D₂,  κ = EA (L/c)⁵/(2L)
+//
+// (see ChangeOfStateCubic): a start for an iteration, not a solution. It
+// returns h1 where the cubic gives no positive finite root.
+func (c LengthCurve) Estimate(d1 float64, h1 units.Force) units.Force {
+	h := cubicEstimate(c.span, c.ea, 0, d1, c.d, float64(h1), 0)
+	if !(h > 0) || !finite(h) {
+		return h1
+	}
+	return units.Force(h)
 }
 
 // CheckStrain returns an error wrapping ErrInvalid when the horizontal
