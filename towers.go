@@ -175,6 +175,7 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 		}
 		res := svc.Tower[side]
 		opt := m.eccentricity(side, d)
+		opt.Terse = m.terse // a sweep scores results, it does not read them
 		w := svc.ColumnWind[side]
 		var above units.Force
 		if d == tower.Across && w != 0 {
@@ -255,7 +256,9 @@ func (m *model) member(side Side, des, perm CaseState) (tower.ColumnResults, err
 			Length: length, Along: along, AlongSpring: spring, Across: tower.FreeTop}
 		return sc.Check(a)
 	}
-	return m.rcColumn(side, length, along, spring).Check(a)
+	rc := m.rcColumn(side, length, along, spring)
+	rc.Terse = m.terse // a sweep scores results, it does not read them
+	return rc.Check(a)
 }
 
 // rcColumn returns the concrete column member of one bank, its effective

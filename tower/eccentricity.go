@@ -110,6 +110,10 @@ type Eccentricity struct {
 	Section units.Length
 	// Limit is the allowed eccentricity; nil means the kern.
 	Limit *EccentricityLimit
+	// Terse leaves the basis, values and notes out of the result, for a
+	// search that only scores results: its demand, capacity, ratio and
+	// status are the same.
+	Terse bool
 }
 
 // EccentricityCheck checks where the resultant crosses the checked section
@@ -217,16 +221,19 @@ func EccentricityCheck(r Resultant, c Column, opt *Eccentricity) (check.Result, 
 		e, form = es, "statics form: e = ΣM/ΣV at the checked section with the weight of the column above it; "+
 			"the rope-line form practice checks, e = h·tan δ from the rope forces alone (larger), is given beside it"
 	}
-	where := "the column base section"
-	if yc > 0 {
-		where = fmt.Sprintf("the checked section %v above the column base", yc)
-	}
 	title := "Resultant eccentricity at column base"
 	if yc > 0 {
 		title = "Resultant eccentricity at checked section"
 	}
-	res := check.Compare("tower.eccentricity", title, units.KindLength, math.Abs(e), float64(allowed)).
-		WithBasis(form + ", at " + where + "; limit: " + rule + "; no factor of safety (common practice)")
+	res := check.Compare("tower.eccentricity", title, units.KindLength, math.Abs(e), float64(allowed))
+	if o.Terse {
+		return res, nil
+	}
+	where := "the column base section"
+	if yc > 0 {
+		where = fmt.Sprintf("the checked section %v above the column base", yc)
+	}
+	res = res.WithBasis(form + ", at " + where + "; limit: " + rule + "; no factor of safety (common practice)")
 	vals := []check.Value{
 		check.Of("ΣV", "vertical force of the rope forces (down)", units.Force(v)),
 		check.Of(hname, hmeaning, units.Force(h)),

@@ -3,6 +3,7 @@ package tower_test
 import (
 	"errors"
 	"math"
+	"reflect"
 	"strings"
 	"testing"
 
@@ -308,6 +309,43 @@ func TestEccentricityBothKernRhombus(t *testing.T) {
 	for _, bad := range [][4]float64{{math.NaN(), 0.1, 0, 0.1}, {0, 0, 0, 0.1}, {0, 0.1, math.Inf(1), 0.1}, {0, 0.1, 0, -1}} {
 		if _, err := tower.EccentricityBoth(units.Length(bad[0]), units.Length(bad[1]), units.Length(bad[2]), units.Length(bad[3])); !errors.Is(err, tower.ErrInvalid) {
 			t.Errorf("%v: %v", bad, err)
+		}
+	}
+}
+
+// TestEccentricityTerseSameNumbers checks that a terse check leaves out
+// only the text and values: every form, direction, checked section, limit
+// and a column with facing give the same result but for Basis, Values and
+// Notes, which a terse result does not carry.
+func TestEccentricityTerseSameNumbers(t *testing.T) {
+	col := tower.Column{Depth: 0.9, Width: 1.0, Height: 3.5, Facing: 0.15}
+	r, err := tower.Combine([]tower.LevelForce{{Height: 3.2, Vertical: kN(150), Horizontal: kN(4), Lateral: kN(2), Offset: 0.03}}, col.Weight())
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, form := range []tower.EccentricityForm{tower.RopeLine, tower.Statics} {
+		for _, dir := range []tower.Direction{tower.Along, tower.Across} {
+			for _, lim := range []*tower.EccentricityLimit{nil, {Fraction: 1}, {Fraction: 0.25, Offset: 0.05}} {
+				for _, yc := range []units.Length{0, 0.5} {
+					opt := tower.Eccentricity{Form: form, Direction: dir, Section: yc, Limit: lim}
+					full, err := tower.EccentricityCheck(r, col, &opt)
+					if err != nil {
+						t.Fatal(err)
+					}
+					opt.Terse = true
+					terse, err := tower.EccentricityCheck(r, col, &opt)
+					if err != nil {
+						t.Fatal(err)
+					}
+					if terse.Basis != "" || terse.Values != nil || terse.Notes != nil {
+						t.Errorf("%+v: terse result carries text or values", opt)
+					}
+					full.Basis, full.Values, full.Notes = "", nil, nil
+					if !reflect.DeepEqual(terse, full) {
+						t.Errorf("%+v: terse %+v, full %+v", opt, terse, full)
+					}
+				}
+			}
 		}
 	}
 }

@@ -171,6 +171,11 @@ type RCColumn struct {
 	// Table 3.1: Ecm = 22 (fcm/10)^0.3 GPa, fcm = fck + 8 MPa.
 	Ecm units.Pressure
 
+	// Terse leaves the basis, values and notes out of the results, for a
+	// search that only scores them: their demands, capacities, ratios and
+	// statuses are the same.
+	Terse bool
+
 	lengths [2]lengthFactor // along, across: see WithLengths
 }
 
@@ -209,8 +214,32 @@ func (c RCColumn) direction(k int) direction {
 	if k == 1 {
 		d = direction{name: "across the bridge", sec: c.Section.Turned(), restraint: c.Across, spring: c.AcrossSpring}
 	}
-	d.ecm, d.length, d.k, d.lengths = ecm, float64(c.Length), baseFlexibility(c.BaseFlexibility), c.lengths[k]
+	d.ecm, d.length, d.k, d.lengths, d.terse = ecm, float64(c.Length), baseFlexibility(c.BaseFlexibility), c.lengths[k], c.Terse
 	return d
+}
+
+// more returns vals with v appended, or nil on a terse column.
+func (d *direction) more(vals []check.Value, v ...check.Value) []check.Value {
+	if d.terse {
+		return nil
+	}
+	if vals == nil {
+		vals = make([]check.Value, 0, 32) // room for every value of a direction
+	}
+	return append(vals, v...)
+}
+
+// dress returns r with its basis, values and note (if any), or r alone on
+// a terse column.
+func (d *direction) dress(r check.Result, basis string, vals []check.Value, note func() string) check.Result {
+	if d.terse {
+		return r
+	}
+	r = r.WithBasis(basis).WithValues(vals...)
+	if note != nil {
+		r = r.WithNote(note())
+	}
+	return r
 }
 
 func (c RCColumn) validate() error {
@@ -293,6 +322,7 @@ type direction struct {
 	phiInf      float64
 	ecm, length float64
 	lengths     lengthFactor // worked out beforehand, if at all
+	terse       bool         // no basis, values or notes
 }
 
 // columnDirection is the outcome of one direction.
@@ -411,6 +441,9 @@ func (c RCColumn) Check(a ColumnActions) (ColumnResults, error) {
 		bi = gov
 		bi.ID, bi.Title, bi.Values, bi.Notes = "tower.column_biaxial", "Column section, biaxial bending", nil, nil
 	}
+	if c.Terse {
+		return ColumnResults{Along: out[0].result, Across: out[1].result, Both: bi}, nil
+	}
 	bi = bi.WithBasis("EN 1992-1-1:2004 5.8.9(4) eq. 5.39, exponent a by N_Ed/N_Rd; design moments with imperfection, minimum eccentricity and second-order effects in each direction").
 		WithValues(
 			check.Of("N_Ed", "design axial force", a.N),
@@ -484,7 +517,7 @@ func (d *direction) check() (columnDirection, error) {
 		lamLim = 20 * aa * bb * cc / math.Sqrt(n)
 	}
 	comp, tens := md.limits()
-	vals := []check.Value{
+	vals := d.more(nil,
 		check.Of("N_Ed", "design axial force (compression +)", units.Force(d.nEd)),
 		check.Of("M_0", "first-order design moment from the applied forces", units.Moment(d.m)),
 		check.Of("l0", "effective length, "+d.restraint.String(), units.Length(l0)),
@@ -502,23 +535,25 @@ func (d *direction) check() (columnDirection, error) {
 		check.Of("e_0", "minimum eccentricity max(h/30, 20 mm) (6.1(4))", units.Length(e0)),
 		check.Of("M_0Ed", "first-order design moment with imperfection, at least N_Ed e_0", units.Moment(m0Ed)),
 		check.Of("N_Rd", "axial resistance of the section in compression", units.Force(comp)),
-	}
+	)
 	if d.restraint == SpringTop {
-		vals = append(vals,
+		vals = d.more(vals,
 			check.Of("K_top", "lateral stiffness holding the top (a force per metre of sway)", units.LoadPerLength(d.spring)),
 			check.Of("EI_max/l³", "the column's stiffness scale from its largest nominal stiffness EI_max (k2 0.20, no creep, 5.8.7.2)", units.LoadPerLength(eiMax/(l*l*l))),
 			check.Of("s_top", "relative stiffness of the top spring K l³/EI_max", units.Ratio(sTop)))
 	}
 	if n > 0 { // in tension there is no slenderness limit
-		vals = append(vals, check.Of("λ_lim", "slenderness limit 20·A·B·C/√n (5.8.3.1)", units.Ratio(lamLim)))
+		vals = d.more(vals, check.Of("λ_lim", "slenderness limit 20·A·B·C/√n (5.8.3.1)", units.Ratio(lamLim)))
 	}
-	basis := "EN 1992-1-1:2004, " + d.name + ": slenderness 5.8.3.1 (C 0.7), imperfection 5.2, minimum eccentricity 6.1(4), " +
-		"second-order moments by the nominal-stiffness method 5.8.7 (c0 8), section 3.1.7(3)/6.1 stress block; " + lengthBasis(d.restraint, d.k)
+	var basis string
+	if !d.terse {
+		basis = "EN 1992-1-1:2004, " + d.name + ": slenderness 5.8.3.1 (C 0.7), imperfection 5.2, minimum eccentricity 6.1(4), " +
+			"second-order moments by the nominal-stiffness method 5.8.7 (c0 8), section 3.1.7(3)/6.1 stress block; " + lengthBasis(d.restraint, d.k)
+	}
 	var out columnDirection
 	if d.nEd > comp || d.nEd < tens {
-		r := check.Compare(id, title, units.KindForce, math.Abs(d.nEd), math.Abs(pick(d.nEd > 0, comp, tens))).
-			WithBasis(basis).WithValues(vals...).WithNote("the axial force alone exceeds the section's axial resistance")
-		out.result = r
+		out.result = d.dress(check.Compare(id, title, units.KindForce, math.Abs(d.nEd), math.Abs(pick(d.nEd > 0, comp, tens))),
+			basis, vals, func() string { return "the axial force alone exceeds the section's axial resistance" })
 		return out, nil
 	}
 	plain := md.as < 0.002*ac
@@ -533,7 +568,7 @@ func (d *direction) check() (columnDirection, error) {
 		ei2 := kc*ecd*ic + md.es*is
 		nb := math.Pi * math.Pi * ei2 / (l0 * l0)
 		beta := math.Pi * math.Pi / 8
-		vals = append(vals,
+		vals = d.more(vals,
 			check.Of("k1", "factor √(f_ck/20) (5.23)", units.Ratio(k1)),
 			check.Of("k2", "factor n λ/170 ≤ 0.20 (5.24)", units.Ratio(k2)),
 			check.Of("K_c", "factor for cracking and creep k1 k2/(1 + φ_ef) (5.22)", units.Ratio(kc)),
@@ -541,31 +576,32 @@ func (d *direction) check() (columnDirection, error) {
 			check.Of("N_B", "buckling load π² EI / l0², EI = K_c E_cd I_c + E_s I_s (5.21)", units.Force(nb)),
 		)
 		if d.nEd >= nb {
-			out.result = check.Compare(id, title, units.KindForce, d.nEd, nb).WithBasis(basis).WithValues(vals...).
-				WithNote(fmt.Sprintf("the column buckles %s: N_Ed %v reaches the buckling load N_B %v of the nominal-stiffness method",
-					d.name, units.Force(d.nEd), units.Force(nb)))
+			out.result = d.dress(check.Compare(id, title, units.KindForce, d.nEd, nb), basis, vals, func() string {
+				return fmt.Sprintf("the column buckles %s: N_Ed %v reaches the buckling load N_B %v of the nominal-stiffness method",
+					d.name, units.Force(d.nEd), units.Force(nb))
+			})
 			out.unstable = true
 			return out, nil
 		}
 		mEd = m0Ed * (1 + beta/(nb/d.nEd-1))
-		vals = append(vals, check.Of("M_2", "second-order moment M_Ed − M_0Ed", units.Moment(mEd-m0Ed)))
+		vals = d.more(vals, check.Of("M_2", "second-order moment M_Ed − M_0Ed", units.Moment(mEd-m0Ed)))
 	}
 	mRd, found := md.momentAt(d.nEd)
 	if !found {
 		return out, fmt.Errorf("tower: axial force %v not reached on the interaction curve: %w", units.Force(d.nEd), ErrUnsupported)
 	}
-	vals = append(vals,
+	vals = d.more(vals,
 		check.Of("M_Ed", "design moment with second-order effects", units.Moment(mEd)),
 		check.Of("M_Rd", "moment resistance at N_Ed", units.Moment(mRd)))
-	r := check.Compare(id, title, units.KindMoment, mEd, mRd).WithBasis(basis).WithValues(vals...)
-	switch {
-	case d.nEd <= 0:
-		r = r.WithNote("no compression: the section alone is checked, with no second-order effects")
-	case second:
-		r = r.WithNote(fmt.Sprintf("slender %s (λ %.0f > λ_lim %.0f): second-order moment added", d.name, lam, lamLim))
-	default:
-		r = r.WithNote(fmt.Sprintf("not slender %s (λ %.0f ≤ λ_lim %.0f): second-order effects may be ignored (5.8.2(6))", d.name, lam, lamLim))
-	}
+	r := d.dress(check.Compare(id, title, units.KindMoment, mEd, mRd), basis, vals, func() string {
+		switch {
+		case d.nEd <= 0:
+			return "no compression: the section alone is checked, with no second-order effects"
+		case second:
+			return fmt.Sprintf("slender %s (λ %.0f > λ_lim %.0f): second-order moment added", d.name, lam, lamLim)
+		}
+		return fmt.Sprintf("not slender %s (λ %.0f ≤ λ_lim %.0f): second-order effects may be ignored (5.8.2(6))", d.name, lam, lamLim)
+	})
 	out.result, out.mEd, out.mRd = r, mEd, mRd
 	return out, nil
 }
@@ -584,18 +620,22 @@ func (d *direction) plainCheck(md rcModel, l0, ei, e0 float64, vals []check.Valu
 	etot := eFirst + ei
 	phi := math.Min(1.14*(1-2*etot/h)-0.02*l0/h, 1-2*etot/h)
 	nrd := math.Max(0, b*h*fcdpl*phi)
-	vals = append(vals,
+	vals = d.more(vals,
 		check.Of("f_cd,pl", "design strength of plain concrete α_cc,pl f_ck/γ_c (12.3.1)", units.Pressure(fcdpl)),
 		check.Of("e_tot", "total eccentricity e_0 + e_i (12.6.5.2)", units.Length(etot)),
 		check.Of("Φ", "factor for eccentricity and slenderness (12.11)", units.Ratio(phi)),
 		check.Of("N_Rd,pl", "resistance of the plain column (12.10)", units.Force(nrd)))
-	basis := "EN 1992-1-1:2004 12.6.5.2 simplified method for plain concrete columns, " + d.name +
-		" (ρ < 0.002: the nominal-stiffness method of 5.8.7 does not apply), from memory; " + lengthBasis(d.restraint, d.k)
-	r := check.Compare(id, title, units.KindForce, d.nEd, nrd).WithBasis(basis).WithValues(vals...)
+	var basis string
+	if !d.terse {
+		basis = "EN 1992-1-1:2004 12.6.5.2 simplified method for plain concrete columns, " + d.name +
+			" (ρ < 0.002: the nominal-stiffness method of 5.8.7 does not apply), from memory; " + lengthBasis(d.restraint, d.k)
+	}
+	r := d.dress(check.Compare(id, title, units.KindForce, d.nEd, nrd), basis, vals, nil)
 	var out columnDirection
 	if l0/h > 25 {
-		r = check.Compare(id, title, units.KindRatio, l0/h, 25).WithBasis(basis).WithValues(vals...).
-			WithNote("a plain concrete column this slender (l0/h above 25, 12.6.5.1) is not allowed")
+		r = d.dress(check.Compare(id, title, units.KindRatio, l0/h, 25), basis, vals, func() string {
+			return "a plain concrete column this slender (l0/h above 25, 12.6.5.1) is not allowed"
+		})
 		out.unstable = true
 	}
 	out.result = r

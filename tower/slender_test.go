@@ -423,3 +423,51 @@ func TestWithLengthsSameResults(t *testing.T) {
 		t.Errorf("zero length: %v", err)
 	}
 }
+
+// TestRCColumnTerseSameNumbers checks that a terse column leaves out only
+// the text and values: in every branch of the check (stocky, slender,
+// buckling, axial force beyond the section, tension, plain concrete short
+// and too slender) each result equals the full one but for Basis, Values
+// and Notes, which it does not carry.
+func TestRCColumnTerseSameNumbers(t *testing.T) {
+	plain := slenderColumn(tower.FreeTop)
+	plain.Section.Bars = nil
+	plainLong := plain
+	plainLong.Length = 12
+	held := slenderColumn(tower.HeldTop)
+	held.Across, held.AcrossSpring = tower.SpringTop, 1e4
+	stocky := slenderColumn(tower.HeldTop)
+	stocky.Length = 2
+	plainShort := plain
+	plainShort.Length = 2
+	strip := func(r check.Result) check.Result {
+		r.Basis, r.Values, r.Notes = "", nil, nil
+		return r
+	}
+	for _, c := range []tower.RCColumn{slenderColumn(tower.FreeTop), held, stocky, plain, plainShort, plainLong} {
+		for _, a := range []tower.ColumnActions{
+			{N: kN(120), Along: kNm(30), Across: kNm(4)},
+			{N: kN(568), Along: kNm(10)},
+			{N: kN(4000), Along: kNm(10)},
+			{N: -kN(40), Along: -kNm(10)},
+			{N: kN(60), Along: kNm(2), Across: kNm(1)},
+		} {
+			full, errFull := c.Check(a)
+			terse := c
+			terse.Terse = true
+			got, errTerse := terse.Check(a)
+			if (errFull == nil) != (errTerse == nil) {
+				t.Fatalf("%v: errors %v and %v", a, errFull, errTerse)
+			}
+			for _, r := range []check.Result{got.Along, got.Across, got.Both} {
+				if r.Basis != "" || r.Values != nil || r.Notes != nil {
+					t.Errorf("%v: terse result %s carries text or values", a, r.ID)
+				}
+			}
+			want := tower.ColumnResults{Along: strip(full.Along), Across: strip(full.Across), Both: strip(full.Both)}
+			if !reflect.DeepEqual(got, want) {
+				t.Errorf("%v: terse\n%+v\nfull\n%+v", a, got, want)
+			}
+		}
+	}
+}
