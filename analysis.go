@@ -262,22 +262,27 @@ func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, er
 			design = append(design, des)
 		}
 	}
+	// Each case's checks on a copy of the model of its own, all at once
+	// beside the families: small pieces of work that fill the cores.
+	results := make([]collected, len(service))
+	errs := make([]error, len(service))
+	var wg sync.WaitGroup
+	for k := range service {
+		c := m.clone()
+		wg.Go(func() { errs[k] = c.caseChecks(&results[k], perm, service[k], design[k], ground) })
+	}
+	wg.Wait()
 	for k := range service {
 		if k == 1 || len(service) == 1 {
 			for _, r := range uplift {
 				out.add(r)
 			}
 		}
-		if err := m.ropeChecks(out, service[k], design[k], true); err != nil {
-			return nil, nil, err
+		if errs[k] != nil {
+			return nil, nil, errs[k]
 		}
-		if err := m.structureChecks(out, perm, service[k], design[k]); err != nil {
-			return nil, nil, err
-		}
-		if ground {
-			if err := m.groundChecks(out, perm, service[k]); err != nil {
-				return nil, nil, err
-			}
+		for _, r := range results[k] {
+			out.add(r)
 		}
 	}
 	found, _, err := families.collect(out)
@@ -367,6 +372,22 @@ func (f *familySearch) collect(out sink) (governing [][2]CaseState, searchers []
 		searchers = append(searchers, r.searcher)
 	}
 	return governing, searchers, nil
+}
+
+// caseChecks adds the checks of one case, characteristic state svc and
+// design state des, to out: ropes, towers, clearance and gradient, and
+// with ground the footings and anchors; perm is the permanent case.
+func (m *model) caseChecks(out sink, perm, svc, des CaseState, ground bool) error {
+	if err := m.ropeChecks(out, svc, des, true); err != nil {
+		return err
+	}
+	if err := m.structureChecks(out, perm, svc, des); err != nil {
+		return err
+	}
+	if ground {
+		return m.groundChecks(out, perm, svc)
+	}
+	return nil
 }
 
 // collected keeps the results it is given, in order.
