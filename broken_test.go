@@ -69,3 +69,51 @@ func TestBrokenRopeByHand(t *testing.T) {
 		t.Errorf("H broken %v, intact %v; per rope broken %v, intact %v", hb, hi, tb/3, ti/4)
 	}
 }
+
+// TestBrokenRopeOfTwoWithSharing checks the accidental case of a group of
+// two ropes whose description gives the sharing factor (1.1): with one
+// rope broken a single rope is left, which carries the whole group alone,
+// so no sharing factor applies to it (k_s = 1, a single rope cannot carry
+// more than all of the tension). The bridge is testdata/level.json with two
+// of its four 26 mm ropes; by hand as in TestBrokenRopeByHand, with half
+// the stiffness and half the ropes' weight:
+//
+//	per rope left = T_i/2 + 2 (T_b/1 − T_i/2)
+func TestBrokenRopeOfTwoWithSharing(t *testing.T) {
+	b := loadTestBridge(t, "level.json")
+	b.Ropes = append([]RopeGroup(nil), b.Ropes...)
+	ks := 1.1
+	b.Ropes[0].Count, b.Ropes[0].Sharing = 2, &ks
+	a, err := Check(b, &Options{SkipComfort: true})
+	if err != nil {
+		t.Fatalf("a group of two ropes with its sharing factor given cannot be checked: %v", err)
+	}
+	const g, l, f = 9.80665, 50.0, 2.5
+	ropeWeight := 2 * 0.409 * 26 * 26 / 100 * g
+	n := f / l
+	w0 := 1000 + ropeWeight*(1+8*n*n/3-32*math.Pow(n, 4)/5+256*math.Pow(n, 6)/7)
+	h0 := w0 * l * l / (8 * f)
+	ea := levelEA / 2
+	ref := levelLengthEA(h0, w0, ea)
+	w := w0 + 0.4*3.5e3*1.0
+	solve := func(ea float64) float64 {
+		lo, hi := h0/10, 100*h0
+		for range 200 {
+			mid := (lo + hi) / 2
+			if levelLengthEA(mid, w, ea) > ref {
+				lo = mid
+			} else {
+				hi = mid
+			}
+		}
+		return (lo + hi) / 2
+	}
+	hb, hi := solve(ea/2), solve(ea)
+	tb, ti := math.Hypot(hb, w*l/2), math.Hypot(hi, w*l/2)
+	perRope := ti/2 + 2*(tb-ti/2)
+	r := find(t, a.Report, "cable.tension", "walkway ropes", brokenCaseName("walkway ropes"))
+	near(t, "the rope left", r.Demand, perRope, 1e-7)
+	if v, ok := r.Value("k_s"); !ok || v.Value != 1 {
+		t.Errorf("sharing factor of the one rope left %v, want 1", v.Value)
+	}
+}
