@@ -371,9 +371,10 @@ func TestLoadScaling(t *testing.T) {
 		}
 	}
 	// permanent at three temperatures, wind at three, wind with crowd,
-	// wind lift, sun on the span, the flood, a walkway rope broken
-	if len(names) != 11 {
-		t.Errorf("demo bridge has %d cases %q, want 11 (wind given, and the flood)", len(names), names)
+	// wind leading with the crowd accompanying, wind lift, sun on the
+	// span, the flood, a walkway rope broken
+	if len(names) != 12 {
+		t.Errorf("demo bridge has %d cases %q, want 12 (wind given, and the flood)", len(names), names)
 	}
 }
 

@@ -40,9 +40,15 @@ func WindPressure(v units.Velocity) units.Pressure {
 // Defaults of the loads, each with its source.
 const (
 	// defaultWindWithCrowd is the factor on wind accompanying the crowd:
-	// 0.6, ψ0 for wind in EN 1990 Table A1.1 (buildings), kept on the safe
-	// side of the 0.3 of the footbridge table A2.2 (both from memory).
+	// 0.6, ψ0 for wind in EN 1990 Table A1.1 (buildings, from memory), kept
+	// on the safe side of the 0.3 of the footbridge table A2.2 (read in the
+	// final PT draft of prAnnex A2, 2003).
 	defaultWindWithCrowd = 0.6
+	// defaultCrowdWithWind is ψ0 on the crowd accompanying the wind: 0.40
+	// for the pedestrian group gr1, EN 1990 Annex A2 Table A2.2 (read in
+	// the final PT draft of prAnnex A2, 2003; the published table from
+	// memory).
+	defaultCrowdWithWind = 0.4
 	// defaultRopeDrag is the force coefficient of a stranded rope, circular
 	// section in subcritical flow (from memory; EN 1991-1-4 cl. 7.9 gives
 	// cylinder values of this order).
