@@ -15,7 +15,8 @@ import (
 //     H_b solves levelLength(H_b, w, ¾EA) = L_ref by bisection;
 //   - the load is the permanent load (the broken rope's weight left on the
 //     walkway) and ψ1 = 0.4 of the EN 1991-2 crowd (EN 1990 Table A2.2,
-//     from memory), 0.4 · 3.5 kPa · 1.0 m;
+//     read in the final draft of prAnnex A2, 2003), 0.4 · 3.5 kPa · 1.0 m,
+//     walkway and crowd per metre of walkway times S/l per horizontal metre;
 //   - intact under the same load, H_i solves levelLength(H_i, w, EA) = L_ref;
 //   - each rope left carries T_i/4 + 2 (T_b/3 − T_i/4), T = √(H² + (w l/2)²):
 //     its intact share plus twice the static change (a suddenly applied
@@ -30,10 +31,11 @@ func TestBrokenRopeByHand(t *testing.T) {
 	const g, l, f = 9.80665, 50.0, 2.5
 	ropeWeight := 4 * 0.409 * 26 * 26 / 100 * g
 	n := f / l
-	w0 := 1000 + ropeWeight*(1+8*n*n/3-32*math.Pow(n, 4)/5+256*math.Pow(n, 6)/7)
+	ratio := 1 + 8*n*n/3 - 32*math.Pow(n, 4)/5 + 256*math.Pow(n, 6)/7 // S/l, Hicks ch. 10
+	w0 := (1000 + ropeWeight) * ratio
 	h0 := w0 * l * l / (8 * f)
 	ref := levelLengthEA(h0, w0, levelEA)
-	w := w0 + 0.4*3.5e3*1.0
+	w := w0 + 0.4*3.5e3*1.0*ratio
 	solve := func(ea float64) float64 {
 		lo, hi := h0/10, 100*h0
 		for range 200 {
@@ -91,11 +93,12 @@ func TestBrokenRopeOfTwoWithSharing(t *testing.T) {
 	const g, l, f = 9.80665, 50.0, 2.5
 	ropeWeight := 2 * 0.409 * 26 * 26 / 100 * g
 	n := f / l
-	w0 := 1000 + ropeWeight*(1+8*n*n/3-32*math.Pow(n, 4)/5+256*math.Pow(n, 6)/7)
+	ratio := 1 + 8*n*n/3 - 32*math.Pow(n, 4)/5 + 256*math.Pow(n, 6)/7 // S/l, Hicks ch. 10
+	w0 := (1000 + ropeWeight) * ratio
 	h0 := w0 * l * l / (8 * f)
 	ea := levelEA / 2
 	ref := levelLengthEA(h0, w0, ea)
-	w := w0 + 0.4*3.5e3*1.0
+	w := w0 + 0.4*3.5e3*1.0*ratio
 	solve := func(ea float64) float64 {
 		lo, hi := h0/10, 100*h0
 		for range 200 {
