@@ -94,6 +94,18 @@ func (g bankGround) waterLevel(lc LoadCase) (level units.Length, ok, flood bool)
 	return 0, false, false
 }
 
+// flooded reports whether in case lc the design flood stands above the
+// ground at elevation ground.
+func (g bankGround) flooded(lc LoadCase, ground units.Length) bool {
+	level, ok, flood := g.waterLevel(lc)
+	return ok && flood && level > ground
+}
+
+// scourText is the basis of a block's sliding when the design flood
+// stands over its ground.
+const scourText = "the design flood stands over the block's ground: the passive resistance in front of it is not counted, " +
+	"the flow may scour that soil (EN 1997-1 6.5.3(7); cautious)"
+
 // waterText says in words which water level case lc uses at the bank.
 func (g bankGround) waterText(lc LoadCase) string {
 	level, ok, flood := g.waterLevel(lc)
@@ -208,27 +220,21 @@ func (m *model) columnBuoyancy(s Side, lc LoadCase) units.Force {
 	return units.Force(float64(foundation.WaterUnitWeight) * float64(t.Depth) * float64(t.Width) * h)
 }
 
-// footingAcross checks a tower footing across the bridge under the wind
-// pushing the swung ropes sideways: the footing turned, its width along the
-// lateral force. The whole lateral action is variable.
+// footingAcross checks a tower footing turned, its width along the
+// lateral force: overturning about the edges along the bridge, and bearing
+// and sliding under the same load as footing (both directions at once).
 func (m *model) footingAcross(s Side, spec FootingSpec, perm tower.Resultant, svc CaseState) ([]check.Result, error) {
 	g := m.ground[s]
 	f := g.pad()
 	f.Along, f.Across = spec.Width, spec.Length // turned: along the lateral force
 	f.Water = g.waterAt(svc.Case, g.footingGround)
-	lateral := svc.Lateral[s]
-	moment := svc.LateralMoment[s] + units.MomentOf(lateral, spec.Thickness)
-	load := foundation.FootingLoad{
-		Vertical:           svc.Tower[s].Vertical - m.columnBuoyancy(s, svc.Case),
-		Horizontal:         lateral,
-		Moment:             moment,
-		Split:              true,
-		VariableVertical:   svc.Tower[s].Vertical - perm.Vertical,
-		VariableHorizontal: lateral,
-		VariableMoment:     moment,
-	}
+	ld := m.footingLoad(s, spec, perm, svc)
+	ld.Horizontal, ld.HorizontalAcross = ld.HorizontalAcross, ld.Horizontal
+	ld.Moment, ld.MomentAcross = ld.MomentAcross, ld.Moment
+	ld.VariableHorizontal, ld.VariableHorizontalAcross = ld.VariableHorizontalAcross, ld.VariableHorizontal
+	ld.VariableMoment, ld.VariableMomentAcross = ld.VariableMomentAcross, ld.VariableMoment
 	var err error
-	m.scratch, err = f.AppendCheck(m.scratch[:0], load, g.soil, g.method, m.foundationBasis())
+	m.scratch, err = f.AppendCheck(m.scratch[:0], ld, g.soil, g.method, m.foundationBasis())
 	m.waterBasis(m.scratch, s, svc.Case, f.Water)
 	return m.scratch, err
 }
@@ -257,34 +263,49 @@ func share(x, p float64) float64 {
 	return math.Max(0, math.Min(1, (math.Abs(x)-math.Abs(p))/math.Abs(x)))
 }
 
-// footing checks a tower footing under the column-base resultant of case
-// svc, brought down to the underside of the footing; perm is the
-// permanent case's resultant, for the variable share of the partial basis.
-// In a case with water above the footing the column's submerged part is
-// buoyed (a permanent reduction of the vertical load).
-func (m *model) footing(s Side, spec FootingSpec, perm tower.Resultant, svc CaseState) ([]check.Result, error) {
-	g := m.ground[s]
-	f := g.pad()
-	f.Water = g.waterAt(svc.Case, g.footingGround)
+// footingLoad returns the tower load of case svc on a bank's footing,
+// brought down to its underside: along the bridge the column-base
+// resultant (its moment with the horizontal force's lever arm through the
+// footing and the vertical force's about the footing's centre), across it
+// the lateral force of wind on the swung ropes and the column with its
+// moment. In a case with water above the footing the column's submerged
+// part is buoyed (a permanent reduction of the vertical load). The
+// variable parts, for the partial basis, are what the case adds to the
+// permanent case (perm), component by component and signed, so that a
+// permanent part the variable one opposes is factored as favourable; the
+// lateral action is wholly variable.
+func (m *model) footingLoad(s Side, spec FootingSpec, perm tower.Resultant, svc CaseState) foundation.FootingLoad {
 	r := svc.Tower[s]
 	moment := func(r tower.Resultant) units.Moment {
 		return r.BaseMoment + units.MomentOf(r.Horizontal, spec.Thickness) + units.MomentOf(r.Vertical, spec.ColumnOffset)
 	}
 	lift := m.columnBuoyancy(s, svc.Case)
-	// Variable parts: what the case adds to the permanent case, component
-	// by component and signed, so that a permanent part the variable one
-	// opposes is factored as favourable on the partial basis.
-	load := foundation.FootingLoad{
-		Vertical:           r.Vertical - lift,
-		Horizontal:         r.Horizontal,
-		Moment:             moment(r) - units.MomentOf(lift, spec.ColumnOffset),
-		Split:              true,
-		VariableVertical:   r.Vertical - perm.Vertical,
-		VariableHorizontal: r.Horizontal - perm.Horizontal,
-		VariableMoment:     moment(r) - moment(perm),
+	lateral := svc.Lateral[s]
+	across := svc.LateralMoment[s] + units.MomentOf(lateral, spec.Thickness)
+	return foundation.FootingLoad{
+		Vertical:                 r.Vertical - lift,
+		Horizontal:               r.Horizontal,
+		Moment:                   moment(r) - units.MomentOf(lift, spec.ColumnOffset),
+		HorizontalAcross:         lateral,
+		MomentAcross:             across,
+		Split:                    true,
+		VariableVertical:         r.Vertical - perm.Vertical,
+		VariableHorizontal:       r.Horizontal - perm.Horizontal,
+		VariableMoment:           moment(r) - moment(perm),
+		VariableHorizontalAcross: lateral,
+		VariableMomentAcross:     across,
 	}
+}
+
+// footing checks a tower footing under the load of case svc
+// (footingLoad), along the bridge and, for bearing and sliding, across it
+// at once; perm is the permanent case's resultant.
+func (m *model) footing(s Side, spec FootingSpec, perm tower.Resultant, svc CaseState) ([]check.Result, error) {
+	g := m.ground[s]
+	f := g.pad()
+	f.Water = g.waterAt(svc.Case, g.footingGround)
 	var err error
-	m.scratch, err = f.AppendCheck(m.scratch[:0], load, g.soil, g.method, m.foundationBasis())
+	m.scratch, err = f.AppendCheck(m.scratch[:0], m.footingLoad(s, spec, perm, svc), g.soil, g.method, m.foundationBasis())
 	m.waterBasis(m.scratch, s, svc.Case, f.Water)
 	return m.scratch, err
 }
@@ -357,10 +378,29 @@ func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Re
 	default:
 		blk := g.block(spec)
 		blk.Water = water
+		scoured := blk.PassiveMobilisation > 0 && g.flooded(svc.Case, g.anchorGround)
+		if scoured {
+			blk.PassiveMobilisation = 0
+		}
 		m.scratch, err = blk.AppendCheck(m.scratch[:0], pulls, g.soil, g.method, basis)
+		if err == nil && scoured && !basis.Terse {
+			for i := range m.scratch {
+				if m.scratch[i].ID == "anchor.sliding" {
+					m.scratch[i] = m.scratch[i].WithBasis(m.scratch[i].Basis + "; " + scourText)
+				}
+			}
+		}
 	}
 	if err != nil {
 		return nil, err
+	}
+	if spec.Type == "deadman" && g.flooded(svc.Case, g.anchorGround) && !basis.Terse {
+		for i := range m.scratch {
+			if m.scratch[i].ID == "anchor.deadman.pullout" {
+				m.scratch[i] = m.scratch[i].WithNote("the design flood stands over the deadman's ground: its resistance is the soil in front of it, " +
+					"which scour must not remove (EN 1997-1 6.5.3(7)); protect the ground or place the deadman above the flood")
+			}
+		}
 	}
 	m.waterBasis(m.scratch, s, svc.Case, water)
 	m.scratch, err = m.attachment(m.scratch, s, spec, perm, svc, pull, permanent)
@@ -419,7 +459,9 @@ func (m *model) attachment(dst []check.Result, s Side, spec AnchorSpec, perm, sv
 		for j, r := range rs {
 			if i == 0 || r.Ratio > worst[j].Ratio {
 				if !basis.Terse {
-					r = r.WithNote(fmt.Sprintf("%s: %d ropes of %v, the worst group", grp.Name, grp.Count, grp.rope.Diameter))
+					r = r.WithValues(check.Of("n_r", "number of ropes in the worst group", units.Ratio(grp.Count)),
+						check.Of("d_r", "diameter of those ropes", grp.rope.Diameter)).
+						WithNote(fmt.Sprintf("%s: %d ropes of %v, the worst group", grp.Name, grp.Count, grp.rope.Diameter))
 				}
 				worst[j] = r
 			}

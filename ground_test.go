@@ -85,6 +85,38 @@ func TestSiteSoil(t *testing.T) {
 	}
 }
 
+// TestGroundwaterAboveFlood: a bank's groundwater above the river's design
+// flood is a real condition (water draining from the hillside), not a slip:
+// it is accepted, and every case takes it, the flood case too, where it is
+// the higher water. Refusing it would invite a lower, unconservative level.
+func TestGroundwaterAboveFlood(t *testing.T) {
+	data := mutate(t, func(m map[string]any) {
+		obj(m, "banks", "left")["soil"] = map[string]any{"preset": "dense sand", "groundwater_elevation": "110 m"}
+	})
+	b, err := Parse(data)
+	if err != nil {
+		t.Fatalf("groundwater above the flood refused: %v", err)
+	}
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	n := 0
+	for _, r := range a.Report.Results {
+		if !strings.HasPrefix(r.Element, "left") || !(strings.HasPrefix(r.ID, "anchor.") || strings.HasPrefix(r.ID, "footing.")) ||
+			r.ID == "anchor.attachment" || strings.HasPrefix(r.ID, "anchor.rod") || r.ID == "anchor.loop" {
+			continue
+		}
+		n++
+		if !strings.Contains(r.Basis, "water level used: groundwater at 110.0 m") {
+			t.Fatalf("%s %s in %q: basis %q", r.ID, r.Element, r.Case, r.Basis)
+		}
+	}
+	if n == 0 {
+		t.Fatal("no ground results on the left bank")
+	}
+}
+
 // TestBadGround: every soil and anchor combination the analysis cannot
 // take is refused at validation with its field path, never by a panic, a
 // NaN or an error during the analysis.
@@ -108,8 +140,6 @@ func TestBadGround(t *testing.T) {
 			"banks.right.soil.saturated_unit_weight", "outside the plausible range"},
 		{"γ' and γsat both", soil("right", map[string]any{"preset": "dense sand", "saturated_unit_weight": "20 kN/m3", "submerged_unit_weight": "10 kN/m3"}),
 			"banks.right.soil.saturated_unit_weight", "not both"},
-		{"water above the flood", soil("left", map[string]any{"preset": "dense sand", "groundwater_elevation": "105 m"}),
-			"banks.left.soil.groundwater_elevation", "above the design flood"},
 		{"preset typo", soil("right", map[string]any{"preset": "sofft clay"}), "banks.right.soil.preset", `did you mean "soft clay"`},
 		{"friction zero for undrained", soil("left", map[string]any{"preset": "soft clay", "friction": "0 deg", "cohesion": "20 kPa"}),
 			"banks.left.soil.friction", "undrained_strength"},
@@ -251,11 +281,12 @@ func TestSoftClayBridge(t *testing.T) {
 	}
 	// The left footing's undrained capacity by hand from EN 1997-1 D.3:
 	// qult = (π + 2) c_u s_c i_c + q, s_c = 1 + 0.2 B'/L',
-	// i_c = ½(1 + √(1 − H/(A'c_u))), q = γ·1.0 m (the water lies deep);
-	// the allowable basis divides by 3. B', L' and H are the result's own.
+	// i_c = ½(1 + √(1 − H/(A'c_u))), H the resultant of the forces along
+	// and across the bridge, q = γ·1.0 m (the water lies deep); the
+	// allowable basis divides by 3. B', L', H and H_y are the result's own.
 	r := governingOf(t, a, "footing.bearing", "left footing")
 	val := func(s string) float64 { v, _ := r.Value(s); return v.Value }
-	bp, lp, h := val("B'"), val("L'"), val("H")
+	bp, lp, h := val("B'"), val("L'"), math.Hypot(val("H"), val("H_y"))
 	qult := (math.Pi+2)*18e3*(1+0.2*bp/lp)*0.5*(1+math.Sqrt(1-h/(bp*lp*18e3))) + 17e3*1.0
 	near(t, "undrained footing capacity by hand", r.Capacity, qult/3, 1e-9)
 
@@ -280,9 +311,12 @@ func TestSoftClayBridge(t *testing.T) {
 // bank's anchor block stands 0.4 m below the design flood (102.0 m), its
 // base at 98.6 m under groundwater at 99.0 m. The flood case governs the
 // block, whose basis names the design flood; its uplift by hand: the
-// 7 × 6.5 × 3 m block is wholly under water, so it loses γw/γc =
+// 9 × 8 × 3 m block is wholly under water, so it loses γw/γc =
 // 9.81/24 = 40.9 % of its weight; in the other cases 0.4 m of it lies in
-// the groundwater: U = 9.81·7·6.5·0.4 = 178.5 kN.
+// the groundwater: U = 9.81·9·8·0.4 = 282.5 kN. With the flood over its
+// ground the passive resistance in front of it is not counted (the flow
+// may scour that soil, EN 1997-1 6.5.3(7)); in the other cases half of it
+// is, as the description asks.
 func TestRiverBankBridge(t *testing.T) {
 	a, err := Check(loadTestdata(t, "river_bank.json"), nil)
 	if err != nil {
@@ -304,7 +338,18 @@ func TestRiverBankBridge(t *testing.T) {
 	near(t, "flooded block's lost weight", u.Value/w.Value, 9.81/24, 1e-12)
 	perm := find(t, a.Report, "anchor.uplift", "right anchor", "permanent")
 	u, _ = perm.Value("U")
-	near(t, "uplift in the groundwater", u.Value, 9.81e3*7*6.5*0.4, 1e-9)
+	near(t, "uplift in the groundwater", u.Value, 9.81e3*9*8*0.4, 1e-9)
+	flooded := find(t, a.Report, "anchor.sliding", "right anchor", "flood with crowd")
+	if _, ok := flooded.Value("P_p"); ok || !strings.Contains(flooded.Basis, "passive resistance in front of it is not counted") {
+		t.Errorf("flooded block counts passive resistance: basis %q", flooded.Basis)
+	}
+	// By hand: N tan δ alone, δ = ⅔·38° (gravel preset, cast block default).
+	n, _ := flooded.Value("N")
+	near(t, "flooded sliding resistance", flooded.Capacity, n.Value*math.Tan(2.0/3*38*math.Pi/180), 1e-12)
+	dry := find(t, a.Report, "anchor.sliding", "right anchor", "wind with crowd")
+	if mu, ok := dry.Value("μ"); !ok || mu.Value != 0.5 {
+		t.Errorf("out of the flood the block counts no passive resistance: %v", dry.Values)
+	}
 	if !strings.Contains(perm.Basis, "groundwater at 99.00 m") {
 		t.Errorf("permanent basis %q does not name the groundwater", perm.Basis)
 	}
@@ -385,5 +430,75 @@ func TestDemoOnSoftClay(t *testing.T) {
 	slide := governingOf(t, a, "anchor.sliding", "left anchor")
 	if uu, _ := slide.Value("U_un"); slide.Status != check.Fail || !(uu.Value > 1) {
 		t.Errorf("anchor sliding on soft clay: %v, U_un %v", slide.Status, uu.Value)
+	}
+}
+
+// TestFootingBothDirections: in a wind case a tower footing carries the
+// rope forces along the bridge and the wind across it at once, and its
+// bearing and sliding are checked under both (EN 1997-1:2004 D.1:
+// A' = B'L' from both eccentricities; the resultant horizontal force).
+// By hand from the case's own column-base forces: e_y = (M_lat + H_lat·t)/N,
+// the sliding force √(H² + H_lat²).
+func TestFootingBothDirections(t *testing.T) {
+	a, err := Check(Demo(), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var svc CaseState
+	for _, s := range a.Service {
+		if s.Case.Name == "wind with crowd" {
+			svc = s
+		}
+	}
+	if svc.Lateral[Left] == 0 {
+		t.Fatal("no lateral force on the left tower in the wind case")
+	}
+	spec := a.Bridge.Banks.Left.Tower.Footing
+	bear := find(t, a.Report, "footing.bearing", "left footing", "wind with crowd")
+	val := func(r check.Result, s string) float64 { v, _ := r.Value(s); return v.Value }
+	n := val(bear, "N")
+	near(t, "e_y", val(bear, "e_y"), float64(svc.LateralMoment[Left]+units.MomentOf(svc.Lateral[Left], spec.Thickness))/n, 1e-12)
+	near(t, "H_y", val(bear, "H_y"), float64(svc.Lateral[Left]), 1e-12)
+	near(t, "A'", val(bear, "A'"), (float64(spec.Length)-2*math.Abs(val(bear, "e")))*(float64(spec.Width)-2*math.Abs(val(bear, "e_y"))), 1e-12)
+	slide := find(t, a.Report, "footing.sliding", "left footing", "wind with crowd")
+	near(t, "sliding force", slide.Demand, math.Hypot(float64(svc.Tower[Left].Horizontal), float64(svc.Lateral[Left])), 1e-12)
+	// The turned footing's bearing is the same check.
+	across := find(t, a.Report, "footing.bearing", "left footing, across", "wind with crowd")
+	near(t, "turned", across.Ratio, bear.Ratio, 1e-12)
+}
+
+// TestAttachmentValues: the rope termination's result names the group it
+// was checked on among its values (the soft-clay bridge's walkway ropes,
+// four of 28 mm, carry the most per rope).
+func TestAttachmentValues(t *testing.T) {
+	a, err := Check(loadTestdata(t, "soft_clay.json"), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, id := range []string{"anchor.attachment", "anchor.loop"} {
+		r := governingOf(t, a, id, "left anchor")
+		n, _ := r.Value("n_r")
+		d, _ := r.Value("d_r")
+		if n.Value != 4 || math.Abs(d.Value-0.028) > 1e-12 {
+			t.Errorf("%s: n_r %v, d_r %v", id, n.Value, d.Value)
+		}
+	}
+}
+
+// TestFloodedDeadman: where the design flood stands over a deadman's
+// ground, its pull-out result says that the soil in front of it must be
+// kept from scour (EN 1997-1 6.5.3(7)); in the dry cases it does not.
+func TestFloodedDeadman(t *testing.T) {
+	b := loadTestdata(t, "river_bank.json")
+	b.Banks.Right.Anchor = AnchorSpec{Type: "deadman", Length: 0.8, Width: 8, Height: 1.5, Depth: 2.5}
+	a, err := Check(b, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	flooded := find(t, a.Report, "anchor.deadman.pullout", "right anchor", "flood with crowd")
+	dry := find(t, a.Report, "anchor.deadman.pullout", "right anchor", "wind with crowd")
+	has := func(r check.Result) bool { return strings.Contains(strings.Join(r.Notes, " "), "scour") }
+	if !has(flooded) || has(dry) {
+		t.Errorf("scour note: flooded %v, dry %v", flooded.Notes, dry.Notes)
 	}
 }

@@ -1,8 +1,10 @@
 package sagspan
 
 import (
+	"errors"
 	"fmt"
 	"math"
+	"strings"
 
 	"github.com/sagspan/sagspan/cable"
 	"github.com/sagspan/sagspan/tower"
@@ -91,6 +93,26 @@ func elevationPull(t units.Force, a, swing units.Angle) (h, v, lateral float64) 
 	return h, inPlane * math.Cos(float64(swing)), inPlane * math.Sin(float64(swing))
 }
 
+// saddleErr is a saddle's refusal of the rope over it (a wrap angle no
+// rope over a saddle has, a sliding saddle lifted off), traced to the bank.
+type saddleErr struct {
+	side Side
+	err  error
+}
+
+func (e saddleErr) Error() string { return e.side.String() + " saddle: " + e.err.Error() }
+func (e saddleErr) Unwrap() error { return e.err }
+
+// advice says what in the description to change.
+func (e saddleErr) advice() string {
+	if strings.Contains(e.err.Error(), "wrap angle") {
+		f := "banks." + e.side.String()
+		return "; the span rope rises from the saddle more steeply than the backstay falls, so it does not bear on the saddle: " +
+			"lower the anchor (" + f + ".backstay.drop) or change the saddle levels (site.rise)"
+	}
+	return ""
+}
+
 // maxFeedIterations bounds the iteration on the rope rendered over the
 // saddles; the secant steps settle it in a few.
 const maxFeedIterations = 60
@@ -120,6 +142,10 @@ func (m *model) analyseFrom(lc LoadCase, warm *CaseState) (CaseState, error) {
 		}
 		swing := in.swing
 		gs, err := m.groupState(i, in)
+		var se saddleErr
+		if errors.As(err, &se) {
+			return CaseState{}, m.bankErr(se.side, "tower.saddle", lc.Name, fmt.Errorf("%s: %w%s", g.Name, se.err, se.advice()))
+		}
 		if err != nil {
 			return CaseState{}, m.groupErr(i, lc, err)
 		}
@@ -241,7 +267,7 @@ func (m *model) solveGroup(i int, in solveInput) (GroupState, error) {
 			bal, err := m.saddle(side, g, 0).Balance(tower.RopePull{Tension: gs.Tension[side], Angle: gs.Angle[side], Swing: swing},
 				bs.angle, held)
 			if err != nil {
-				return 0, fmt.Errorf("%s saddle: %w", side, err)
+				return 0, saddleErr{side: side, err: err}
 			}
 			tback := float64(bal.Backstay)
 			h, _, _ := elevationPull(gs.Tension[side], gs.Angle[side], swing)

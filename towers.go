@@ -1,6 +1,7 @@
 package sagspan
 
 import (
+	"math"
 	"strconv"
 	"strings"
 
@@ -88,15 +89,47 @@ func (m *model) variants() []variant {
 }
 
 // restraint returns how the column top of one bank is held along the
-// bridge in the variant analysed: a fixed saddle with the rope clamped is
-// braced by the span and backstay; a free groove, a groove with friction
-// (once the rope renders it no longer braces the top: conservative), a
-// sliding or a roller saddle leaves the top free (cantilever).
-func (m *model) restraint(s Side) tower.Restraint {
-	if saddleKind(m.bank(s).Tower.Saddle) == tower.Fixed && m.grooves[s] == tower.ClampedGroove {
-		return tower.HeldTop
+// bridge in the variant analysed, and the lateral stiffness (N/m) holding
+// it: a fixed saddle with the rope clamped is held by the stretch of the
+// backstays (a spring: see topSpring); a free groove, a groove with
+// friction (once the rope renders it no longer braces the top:
+// conservative), a sliding or a roller saddle leaves the top free
+// (cantilever).
+//
+// Only a groove the description calls clamped braces the top: where the
+// groove is not given, the rope may grip by friction, with moments between
+// the free and clamped bounds and, once it renders, no bracing; the clamped
+// bound is then checked with a free top too, so that the two bounds bound
+// every groove (conservative).
+func (m *model) restraint(s Side) (tower.Restraint, float64) {
+	g, known := grooveOf(m.bank(s).Tower.Saddle)
+	if saddleKind(m.bank(s).Tower.Saddle) == tower.Fixed && known && g == tower.ClampedGroove {
+		return tower.SpringTop, m.topSpring(s)
 	}
-	return tower.FreeTop
+	return tower.FreeTop, 0
+}
+
+// topSpring returns the lateral stiffness along the bridge with which the
+// clamped ropes hold the top of one bank's column: each group's backstay,
+// of axial stiffness EA over its chord c at angle β, resists a sway δ of
+// its saddle at height y with EA cos²β/c; referred to the column top
+// (length l) by the fourth power of y/l, the square of a sway shape
+// (y/l)² that lies below the column's own, so that a lower saddle counts
+// for less than it does (conservative). The span side, which slackens as
+// the top leans toward it, and the rope tension's own stiffness are not
+// counted (conservative).
+//
+//	K = Σ EA cos²β / c · (y/l)⁴
+func (m *model) topSpring(s Side) float64 {
+	l := float64(m.column(s).Height)
+	var k float64
+	for i, g := range m.groups {
+		bs := m.backstays[i][s]
+		c := math.Cos(float64(bs.angle))
+		y := float64(m.saddle(s, g, 0).Height) / l
+		k += float64(g.elastic.EA) * c * c / float64(bs.chord) * y * y * y * y
+	}
+	return k
 }
 
 // eccentricity returns the eccentricity settings of one bank's tower in
@@ -134,21 +167,36 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 		basis = m.saddleBasis(side)
 	}
 	_, legs := m.steel(side)
+	var ecc [2]check.Result // along, across
 	for _, d := range []tower.Direction{tower.Along, tower.Across} {
 		element := towerElement[side]
 		if d == tower.Across {
 			element = towerAcrossElement[side]
 		}
-		r, err := tower.EccentricityCheck(svc.Tower[side], col, m.eccentricity(side, d))
+		res := svc.Tower[side]
+		opt := m.eccentricity(side, d)
+		w := svc.ColumnWind[side]
+		var above units.Force
+		if d == tower.Across && w != 0 {
+			// The wind on the column face loads the column above the
+			// checked section only, uniformly: the part above y_c at
+			// (H + y_c)/2 takes the place of the whole at H/2.
+			hc, yc := float64(col.Height), float64(opt.Section)
+			above = units.Force(float64(w) * (hc - yc) / hc)
+			res.Lateral += above - w
+			res.LateralMoment += units.Moment(float64(above)*(hc+yc)/2 - float64(w)*hc/2)
+		}
+		r, err := tower.EccentricityCheck(res, col, opt)
 		if err != nil {
 			return m.bankErr(side, "tower.eccentricity", name, err)
 		}
 		if d == tower.Along && !m.terse && !m.fbasis.Terse { // a sweep or a design search scores results, it does not read them
 			r = r.WithValues(m.saddleValues(side, svc)...)
 		}
-		if w := svc.ColumnWind[side]; d == tower.Across && w != 0 {
-			r = r.WithValues(check.Of("F_w", "wind on the column face, at mid-height", w)).
-				WithNote("wind on the column face is added to the lateral rope forces (conservative: the rope-line form counts no column weight against it)")
+		if d == tower.Across && w != 0 {
+			r = r.WithValues(check.Of("F_w", "wind on the column face, at mid-height", w),
+				check.Of("F_w,c", "wind on the column face above the checked section, at its mid-height", above)).
+				WithNote("wind on the column face above the checked section is added to the lateral rope forces (conservative: the rope-line form counts no column weight against it)")
 		}
 		if legs > 0 {
 			// A steel column carries the bending in its members; the
@@ -157,10 +205,23 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 			rec.Basis, rec.Values, rec.Notes = r.Basis, r.Values, r.Notes
 			r = rec.WithNote("a steel column resists this eccentricity by bending (see tower.column_section): the resultant is reported, not limited")
 		}
+		ecc[d] = r
 		if !m.terse {
 			r = r.WithBasis(r.Basis + basis)
 		}
 		out.add(r.For(element, name))
+	}
+	if lim := m.eccentricity(side, tower.Along).Limit; legs == 0 && (lim == nil || lim.Fraction < 1) {
+		// The kern is a rhombus: the two directions at once.
+		r, err := tower.EccentricityBoth(units.Length(ecc[0].Demand), units.Length(ecc[0].Capacity),
+			units.Length(ecc[1].Demand), units.Length(ecc[1].Capacity))
+		if err != nil {
+			return m.bankErr(side, "tower.eccentricity", name, err)
+		}
+		if !m.terse {
+			r = r.WithBasis(r.Basis + "; " + strings.SplitN(ecc[0].Basis, ";", 2)[0] + basis)
+		}
+		out.add(r.For(towerElement[side], name))
 	}
 	res, err := m.member(side, des, perm)
 	if err != nil {
@@ -187,13 +248,14 @@ func (m *model) member(side Side, des, perm CaseState) (tower.ColumnResults, err
 	a := tower.ColumnActions{N: r.Vertical, Along: r.BaseMoment, Across: des.LateralMoment[side],
 		NQP: p.Vertical, AlongQP: p.BaseMoment, AcrossQP: perm.LateralMoment[side]}
 	length := m.column(side).Height
+	along, spring := m.restraint(side)
 	if tube, legs := m.steel(side); legs > 0 {
 		spec := m.bank(side).Tower.Section
 		sc := tower.SteelColumn{Tube: tube, Legs: legs, Spacing: spec.Spacing, Panel: spec.Panel,
-			Length: length, Along: m.restraint(side), Across: tower.FreeTop}
+			Length: length, Along: along, AlongSpring: spring, Across: tower.FreeTop}
 		return sc.Check(a)
 	}
-	rc := tower.RCColumn{Section: m.section(side), Length: length, Along: m.restraint(side), Across: tower.FreeTop,
+	rc := tower.RCColumn{Section: m.section(side), Length: length, Along: along, AlongSpring: spring, Across: tower.FreeTop,
 		Creep: m.bank(side).Tower.Section.Creep}
 	return rc.Check(a)
 }

@@ -284,18 +284,34 @@ func (b Bridge) validateTower(v *validator, f string, t TowerSpec) {
 	if v.err == nil && e.Section >= t.Height {
 		v.fail(path{f, ".tower.eccentricity.section"}, "checked section at %s is at or above the saddle at %s: it must lie below where the ropes act", e.Section, t.Height)
 	}
+	// The limit Fraction × d/2 + Offset must stay positive along the bridge
+	// (effective depth) and across it (effective width).
+	limitLeft := func(fraction float64) {
+		v.finite(path{f, ".tower.eccentricity.offset"}, float64(e.Offset))
+		for _, dir := range []struct {
+			name string
+			d    units.Length
+		}{{"along the bridge", t.Depth - 2*t.Facing}, {"across the bridge", t.Width - 2*t.Facing}} {
+			if v.err == nil && fraction*float64(dir.d)/2+float64(e.Offset) <= 0 {
+				v.fail(path{f, ".tower.eccentricity.offset"}, "%s leaves no allowed eccentricity %s (%.3g × %s/2 + offset ≤ 0)", e.Offset, dir.name, fraction, dir.d)
+			}
+		}
+	}
+	if e.Rule != "fraction" && e.Fraction != 0 && v.err == nil {
+		v.fail(path{f, ".tower.eccentricity.fraction"}, "is given but the rule is %q, not \"fraction\"", e.Rule)
+	}
 	switch e.Rule {
 	case "", "kern":
-	case "section":
-		v.finite(path{f, ".tower.eccentricity.offset"}, float64(e.Offset))
-		if v.err == nil && float64(e.Offset) <= -float64(t.Depth-2*t.Facing)/2 {
-			v.fail(path{f, ".tower.eccentricity.offset"}, "%s leaves no allowed eccentricity", e.Offset)
+		if e.Offset != 0 && v.err == nil {
+			v.fail(path{f, ".tower.eccentricity.offset"}, "is given but the rule is the kern, which takes no offset (rule \"section\" or \"fraction\" does)")
 		}
+	case "section":
+		limitLeft(1)
 	case "fraction":
 		if !(e.Fraction > 0 && e.Fraction <= 1) {
 			v.fail(path{f, ".tower.eccentricity.fraction"}, "must lie in (0, 1], got %v", e.Fraction)
 		}
-		v.finite(path{f, ".tower.eccentricity.offset"}, float64(e.Offset))
+		limitLeft(e.Fraction)
 	default:
 		v.fail(path{f, ".tower.eccentricity.rule"}, "unknown rule %q; want kern, section or fraction", e.Rule)
 	}
@@ -341,6 +357,9 @@ func (b Bridge) validateTower(v *validator, f string, t TowerSpec) {
 	}
 	if sec.Bars < 0 || sec.Bars%2 != 0 {
 		v.fail(path{f, ".tower.section.bars"}, "must be an even number (half on each face), got %d", sec.Bars)
+	}
+	if v.err == nil && sec.Bars > 0 && sec.Bars < 4 {
+		v.fail(path{f, ".tower.section.bars"}, "must be zero (plain concrete) or at least 4, a bar in each corner (EN 1992-1-1 9.5.2(4)), got %d", sec.Bars)
 	}
 	if sec.Bars > 0 {
 		v.positive(path{f, ".tower.section.steel"}, float64(sec.Steel), units.KindPressure)

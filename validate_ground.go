@@ -162,11 +162,11 @@ func (b Bridge) validateGround(v *validator, side Side) {
 		return
 	}
 	if gw := k.Soil.Groundwater; gw != nil {
+		// A bank's groundwater may stand above the river's design flood
+		// (water draining from the hillside to the river): it is accepted,
+		// and in the flood case the higher of the two is used. Refusing it
+		// would invite a lower, unconservative groundwater level.
 		v.finite(at(f+".soil.groundwater_elevation"), float64(*gw))
-		if fl := b.Site.Flood; v.err == nil && !fl.None && *gw > fl.Z {
-			v.fail(at(f+".soil.groundwater_elevation"), "%s is above the design flood %s (site.flood_elevation): the flood is the highest water the checks take; "+
-				"raise the flood or lower the groundwater", *gw, b.Site.Flood.Z)
-		}
 	}
 	a := k.Anchor
 	switch {

@@ -209,8 +209,9 @@ func (a AnchorBlock) earth(s Soil, st strength) (pp, pa EarthForce) {
 // submerged concrete volume) at xU and N = W + Ws − U − Fz:
 //
 //	sliding:     driving Fx (+ Pa, active on the back face, when passive is counted)
-//	             resisting R_b + μ Pp, R_b = N tan δ drained, A'c_u undrained (≤ 0.4 N where
-//	             water or air reach the base; EN 1997-1 6.5.3), cohesion ignored drained
+//	             resisting R_b + μ Pp, R_b = N tan δ drained, A'c_u undrained, at most 0.4 N
+//	             (EN 1997-1 6.5.3(12): the pull opens a gap behind the block, so water or air
+//	             can always reach its base), cohesion ignored drained
 //	overturning: about the front toe (x = Length, z = 0)
 //	             driving Σ (Fx·Z + Fz·(Length − X)) + U·(Length − xU)
 //	             resisting (W + Ws)·(Length − xW)    (earth pressures ignored)
@@ -290,7 +291,7 @@ func (a AnchorBlock) AppendCheck(dst []check.Result, pulls []AnchorPull, s Soil,
 		if bear, err = a.bearingIn(conds, pulls, s, m, ld, []actionSet{set}, def(bs.Bearing, 3)); err != nil {
 			return nil, err
 		}
-		return append(dst, slide, over, lift, bear), nil
+		return append(dst, a.watered(bs, slide), a.watered(bs, over), a.watered(bs, lift), a.watered(bs, bear)), nil
 	}
 	equ := bs.equSet()
 	over = a.overturning(pulls, ld, equ, 1)
@@ -305,7 +306,16 @@ func (a AnchorBlock) AppendCheck(dst []check.Result, pulls []AnchorPull, s Soil,
 	if bear, err = a.bearingIn(conds, pulls, s, m, ld, geo, 1); err != nil {
 		return nil, err
 	}
-	return append(dst, slide, over, lift, bear), nil
+	return append(dst, a.watered(bs, slide), a.watered(bs, over), a.watered(bs, lift), a.watered(bs, bear)), nil
+}
+
+// watered returns r with the water's depth among its values, when there
+// is water and the basis is not terse.
+func (a AnchorBlock) watered(bs Basis, r check.Result) check.Result {
+	if bs.Terse || !a.Water.Present {
+		return r
+	}
+	return r.WithValues(a.Water.values()...)
 }
 
 // slidingIn returns the worst sliding result over the conditions and
@@ -378,14 +388,15 @@ func (a AnchorBlock) base(pulls []AnchorPull, ld blockLoads, set actionSet, favo
 	return baseLoad{n: n, h: h, e: e}
 }
 
-// waterAtBase reports whether water stands at or above the block's base.
-func (a AnchorBlock) waterAtBase() bool { return a.Water.depth() <= float64(a.Depth) }
-
 func (a AnchorBlock) sliding(pulls []AnchorPull, s Soil, cond Condition, ld blockLoads, set actionSet, fs float64) check.Result {
 	st := s.strengthIn(cond, set)
 	// Pulls unfavourable, the block's weight favourable, uplift unfavourable.
 	bl := a.base(pulls, ld, set, false, set.gGfav, set.gG)
-	bsh := shearResistance(bl.n, bl.e, float64(a.Length), float64(a.Width), st, a.waterAtBase())
+	// The pull draws the block away from the soil behind it: the gap at
+	// the back face reaches the base, so water or air can always reach the
+	// interface, and EN 1997-1 6.5.3(12) caps the undrained resistance at
+	// 0.4 N whatever the water level (cautious).
+	bsh := shearResistance(bl.n, bl.e, 0, float64(a.Length), float64(a.Width), st, true)
 	res := bsh.r / set.gRh
 	drive := 0.0
 	for _, p := range pulls {
@@ -403,6 +414,10 @@ func (a AnchorBlock) sliding(pulls []AnchorPull, s Soil, cond Condition, ld bloc
 		WithBasis(basisOf(set, "base shear and mobilised passive resistance", fs))
 	if set.terse {
 		return r
+	}
+	if st.cond == Undrained {
+		r = r.WithBasis(r.Basis + "; undrained base shear at most 0.4 N (EN 1997-1 6.5.3(12)), the pull opening a gap behind the block " +
+			"through which water or air reach its base (cautious)")
 	}
 	vs, note := shearValues(st, bl.n, bsh)
 	vs = append(vs, check.Of("e", "eccentricity of the base resultant", units.Length(bl.e)))

@@ -25,29 +25,30 @@ type baseShear struct {
 
 // shearResistance returns the shear resistance of a base of sides along
 // (the load's direction) × across under effective normal force n at
-// eccentricity e along the load, in strength st:
+// eccentricities e along and ey across, in strength st:
 //
 //	drained:   R = N tan δ
-//	undrained: R = A' c_u,  A' = (along − 2|e|)·across,  R ≤ 0.4 N where water
-//	           or air can reach the interface: water at or above the base, or
-//	           a gap under the base (|e| > along/6)
+//	undrained: R = A' c_u,  A' = (along − 2|e|)·(across − 2|ey|),  R ≤ 0.4 N where
+//	           water or air can reach the interface: water at or above the
+//	           base, or a gap under the base (outside the kern,
+//	           |e|/along + |ey|/across > 1/6)
 //
 // (EN 1997-1:2004 6.5.3(8), (11) and (12), from memory). No contact (N ≤ 0)
 // gives no resistance.
-func shearResistance(n, e, along, across float64, st strength, waterAtBase bool) baseShear {
+func shearResistance(n, e, ey, along, across float64, st strength, waterAtBase bool) baseShear {
 	if n <= 0 {
 		return baseShear{}
 	}
 	if st.cond == Drained {
 		return baseShear{r: n * st.tanD}
 	}
-	eff := along - 2*math.Abs(e)
-	if eff <= 0 {
+	eff, effY := along-2*math.Abs(e), across-2*math.Abs(ey)
+	if eff <= 0 || effY <= 0 {
 		return baseShear{}
 	}
-	out := baseShear{area: eff * across}
+	out := baseShear{area: eff * effY}
 	out.r = out.area * st.c
-	if (waterAtBase || math.Abs(e) > along/6) && out.r > undrainedSlidingCap*n {
+	if (waterAtBase || math.Abs(e)/along+math.Abs(ey)/across > 1.0/6) && out.r > undrainedSlidingCap*n {
 		out.r, out.capped = undrainedSlidingCap*n, true
 	}
 	return out
@@ -65,7 +66,8 @@ func shearValues(st strength, n float64, bs baseShear) ([]check.Value, string) {
 	}
 	note := fmt.Sprintf("undrained: c_u %v over the effective base A' = %v", units.Pressure(st.c), units.Area(bs.area))
 	if bs.capped {
-		note += "; capped at 0.4 N because water or air can reach the base (EN 1997-1 6.5.3(12))"
+		note += "; capped at 0.4 N because water or air can reach the base (EN 1997-1 6.5.3(12)): for an anchor block always, " +
+			"the pull opening a gap behind it; for a footing where water stands at or above its base or the resultant leaves the kern"
 	}
 	return []check.Value{
 		check.Of("N", "effective normal force on the base", units.Force(n)),
@@ -165,15 +167,52 @@ func bearingBasis(set actionSet, s Soil, m Method, fs float64) string {
 }
 
 // baseLoad is the resultant on a rectangular base: effective normal force
-// n, horizontal force h along the side along, eccentricity e from the
-// centre along it.
+// n, horizontal force h along the side along and hy along the side
+// across, eccentricities e along and ey across from the centre. biaxial
+// marks a base whose load may have both components (a footing): its values
+// then give both, and the contact pressure of both eccentricities.
 type baseLoad struct {
-	n, h, e float64
+	n, h, e, hy, ey float64
+	biaxial         bool
+}
+
+// outside reports whether the resultant reaches the edge of a base of
+// sides a (along) and w (across).
+func (ld baseLoad) outside(a, w float64) bool {
+	return math.Abs(ld.e) >= a/2 || math.Abs(ld.ey) >= w/2
+}
+
+// contact returns the peak contact pressure of a rigid base of sides
+// along and across under ld.
+func (ld baseLoad) contact(along, across units.Length) (units.Pressure, error) {
+	if !ld.biaxial {
+		qmax, _, _, err := ContactPressure(units.Force(ld.n), units.Length(ld.e), along, across)
+		return qmax, err
+	}
+	c, err := BiaxialContactPressure(units.Force(ld.n), units.Length(ld.e), units.Length(ld.ey), along, across)
+	return c.Max, err
 }
 
 // baseValues returns the resultant's values: N, H, e, and the contact
-// pressures of a rigid base.
+// pressures of a rigid base; for a biaxial base also H_y and e_y, and the
+// area in compression A_c in place of the contact length.
 func baseValues(ld baseLoad, along, across float64) []check.Value {
+	if ld.biaxial {
+		vs := []check.Value{
+			check.Of("N", "effective normal force on the base", units.Force(ld.n)),
+			check.Of("H", "horizontal force on the base along its side Along", units.Force(ld.h)),
+			check.Of("H_y", "horizontal force on the base along its side Across", units.Force(ld.hy)),
+			check.Of("e", "eccentricity of the resultant from the base centre along Along", units.Length(ld.e)),
+			check.Of("e_y", "eccentricity of the resultant from the base centre along Across", units.Length(ld.ey)),
+		}
+		if c, err := BiaxialContactPressure(units.Force(ld.n), units.Length(ld.e), units.Length(ld.ey), units.Length(along), units.Length(across)); err == nil {
+			vs = append(vs,
+				check.Of("q_max", "peak contact pressure of a rigid base", c.Max),
+				check.Of("q_min", "least contact pressure of a rigid base", c.Min),
+				check.Of("A_c", "area of the base in compression", c.Area))
+		}
+		return vs
+	}
 	vs := []check.Value{
 		check.Of("N", "effective normal force on the base", units.Force(ld.n)),
 		check.Of("H", "horizontal force on the base", units.Force(ld.h)),
@@ -201,23 +240,29 @@ func soilBearing(id, title string, along, across, depth units.Length, water Wate
 	area := a * w
 	outside := func() check.Result {
 		r := check.Compare(id, title, units.KindPressure, ld.n/area, 0).WithBasis(basis)
-		r = set.values(r, baseValues(ld, a, w)...)
-		return set.note(r, fmt.Sprintf("resultant outside the base: eccentricity %v, half base %v", units.Length(ld.e), along/2))
+		if set.terse {
+			return r
+		}
+		return r.WithValues(baseValues(ld, a, w)...).WithNote("resultant outside the base")
 	}
-	if math.Abs(ld.e) >= a/2 {
+	if ld.outside(a, w) {
 		return outside(), nil
 	}
 	if set.allowable && s.Allowable > 0 {
-		qmax, _, _, err := ContactPressure(units.Force(ld.n), units.Length(ld.e), along, across)
+		qmax, err := ld.contact(along, across)
 		if err != nil {
 			return check.Result{}, err
 		}
 		r := check.Compare(id, title, units.KindPressure, float64(qmax), float64(s.Allowable)).WithBasis(basis)
-		return set.values(r, append(baseValues(ld, a, w), check.Of("q_a", "allowable bearing pressure given by the site report", s.Allowable))...), nil
+		if set.terse {
+			return r, nil
+		}
+		return r.WithValues(append(baseValues(ld, a, w), check.Of("q_a", "allowable bearing pressure given by the site report", s.Allowable))...), nil
 	}
 	sd := s.withStrength(s.strengthIn(cond, set))
 	br, err := BearingCapacity(BearingInput{AlongLoad: along, AcrossLoad: across, Depth: depth, Vertical: units.Force(ld.n),
-		Horizontal: units.Force(ld.h), EccAlong: units.Length(ld.e), Water: water}, sd, m, cond)
+		Horizontal: units.Force(ld.h), HorizontalAcross: units.Force(ld.hy), EccAlong: units.Length(ld.e), EccAcross: units.Length(ld.ey),
+		Water: water}, sd, m, cond)
 	if errors.Is(err, ErrOutsideBase) {
 		return outside(), nil
 	}
@@ -261,15 +306,20 @@ func rockBaseBearing(id, title string, along, across units.Length, ld baseLoad, 
 		basis = "rock: peak contact pressure under characteristic actions against the allowable pressure, " + rb.Method +
 			"; soil bearing-capacity factors are not used on rock"
 	}
-	if math.Abs(ld.e) >= a/2 {
+	if ld.outside(a, w) {
 		r := check.Compare(id, title, units.KindPressure, ld.n/(a*w), 0).WithBasis(basis)
-		r = set.values(r, baseValues(ld, a, w)...)
-		return set.note(r, "resultant outside the base"), nil
+		if set.terse {
+			return r, nil
+		}
+		return r.WithValues(baseValues(ld, a, w)...).WithNote("resultant outside the base"), nil
 	}
-	qmax, _, _, err := ContactPressure(units.Force(ld.n), units.Length(ld.e), along, across)
+	qmax, err := ld.contact(along, across)
 	if err != nil {
 		return check.Result{}, err
 	}
 	r := check.Compare(id, title, units.KindPressure, float64(qmax), float64(rb.Allowable)).WithBasis(basis)
-	return set.values(r, append(baseValues(ld, a, w), rb.Values()...)...), nil
+	if set.terse {
+		return r, nil
+	}
+	return r.WithValues(append(baseValues(ld, a, w), rb.Values()...)...), nil
 }

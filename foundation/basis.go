@@ -34,7 +34,8 @@ type Basis struct {
 	Tendon      float64 // 0 → 2.0 on a rock-anchor bar's yield force (from memory, BS 8081 permanent anchors)
 	Bond        float64 // 0 → 3.0 on ultimate grout bond (from memory, BS 8081 permanent anchors)
 	Cone        float64 // 0 → 2.0 on the weight of a rock-anchor's uplift cone
-	Steel       float64 // 0 → 1.67 on the yield resistance of steel in the ground (AISC 360-16 ASD Ω, from memory)
+	Steel       float64 // 0 → 1.67 on the yield resistance of steel in the ground (AISC 360-16 D2(a) ASD Ω_t for yielding)
+	Rupture     float64 // 0 → 2.00 on the ultimate (rupture) resistance of a thread in the ground (AISC 360-16 D2(b) and J3.6 ASD Ω)
 	Rope        float64 // 0 → 3.0 on a rope's breaking force at its termination or loop (common practice)
 
 	// Partial factors (EN 1997-1:2004 Annex A; zero → recommended value):
@@ -84,7 +85,8 @@ func resolveBasis(b *Basis) (Basis, error) {
 		v    float64
 	}{
 		{"Sliding", r.Sliding}, {"Overturning", r.Overturning}, {"Uplift", r.Uplift}, {"Bearing", r.Bearing},
-		{"Pullout", r.Pullout}, {"Tendon", r.Tendon}, {"Bond", r.Bond}, {"Cone", r.Cone}, {"Steel", r.Steel}, {"Rope", r.Rope},
+		{"Pullout", r.Pullout}, {"Tendon", r.Tendon}, {"Bond", r.Bond}, {"Cone", r.Cone}, {"Steel", r.Steel}, {"Rupture", r.Rupture},
+		{"Rope", r.Rope},
 	} {
 		if !(f.v == 0 || f.v >= 1) || math.IsInf(f.v, 0) {
 			return Basis{}, invalid("Basis."+f.name, "must be zero (default) or a finite factor of at least 1")

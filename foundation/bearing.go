@@ -58,8 +58,10 @@ type BearingInput struct {
 	Depth units.Length
 	// Vertical is the effective vertical load on the base (including the
 	// footing's own weight, less the water's uplift); it must be
-	// positive. Horizontal acts along AlongLoad; its sign does not matter.
-	Vertical, Horizontal units.Force
+	// positive. Horizontal acts along AlongLoad and HorizontalAcross along
+	// AcrossLoad; their signs do not matter, their resultant H enters the
+	// inclination factors.
+	Vertical, Horizontal, HorizontalAcross units.Force
 	// EccAlong and EccAcross are the eccentricities of the vertical load
 	// from the base centre along AlongLoad and AcrossLoad.
 	EccAlong, EccAcross units.Length
@@ -88,6 +90,9 @@ type Bearing struct {
 	// M is the exponent of the inclination factors (Vesić and EN 1997-1
 	// Annex D); zero for the methods that have none.
 	M float64
+	// Theta is the angle θ between the horizontal load and the longer
+	// effective side L' (90° when it acts along B'), which sets M.
+	Theta units.Angle
 	// BEff ≤ LEff are the effective sides B' and L' (Meyerhof's effective
 	// area); LoadAlongShort is true when the horizontal load acts along B'.
 	BEff, LEff     units.Length
@@ -113,7 +118,7 @@ func (b Bearing) Resistance() units.Force { return units.Force(float64(b.Qult) *
 // Values returns every number of the bearing equation as named check
 // values, in the order of the equation.
 func (b Bearing) Values() []check.Value {
-	return b.appendValues(make([]check.Value, 0, 23))
+	return b.appendValues(make([]check.Value, 0, 24))
 }
 
 func (b Bearing) appendValues(dst []check.Value) []check.Value {
@@ -136,6 +141,7 @@ func (b Bearing) appendValues(dst []check.Value) []check.Value {
 		check.Of("i_c", "load-inclination factor, cohesion term", units.Ratio(b.Ic)),
 		check.Of("i_q", "load-inclination factor, overburden term", units.Ratio(b.Iq)),
 		check.Of("i_γ", "load-inclination factor, self-weight term", units.Ratio(b.Igamma)),
+		check.Of("θ", "angle between the horizontal load and the longer effective side L'", b.Theta),
 		check.Of("m", "exponent of the inclination factors; zero when the method has none", units.Ratio(b.M)),
 		check.Of("q_c", "cohesion term of the bearing equation", b.TermC),
 		check.Of("q_q", "overburden term of the bearing equation", b.TermQ),
@@ -163,7 +169,8 @@ func (in BearingInput) validate() error {
 	for _, f := range []struct {
 		name string
 		v    float64
-	}{{"BearingInput.Horizontal", float64(in.Horizontal)}, {"BearingInput.EccAlong", float64(in.EccAlong)}, {"BearingInput.EccAcross", float64(in.EccAcross)}} {
+	}{{"BearingInput.Horizontal", float64(in.Horizontal)}, {"BearingInput.HorizontalAcross", float64(in.HorizontalAcross)},
+		{"BearingInput.EccAlong", float64(in.EccAlong)}, {"BearingInput.EccAcross", float64(in.EccAcross)}} {
 		if err := finite(f.name, f.v); err != nil {
 			return err
 		}
@@ -283,7 +290,9 @@ func BearingFactors(phi units.Angle, m Method) (nc, nq, ngamma float64, err erro
 //	Annex D:   sq = 1 + (B'/L') sinφ; sγ = 1 − 0.3B'/L'; sc = (sq Nq − 1)/(Nq − 1); d = 1
 //	           iq, iγ, ic as Vesić (D.4)
 //	           undrained (D.3): sc = 1 + 0.2B'/L'; ic = ½(1 + √(1 − H/(A'c_u)))
-//	m = (2 + B'/L')/(1 + B'/L') for H along B', (2 + L'/B')/(1 + L'/B') along L' (D.4)
+//	m = m_B = (2 + B'/L')/(1 + B'/L') for H along B', m_L = (2 + L'/B')/(1 + L'/B') along L',
+//	    m_θ = m_L cos²θ + m_B sin²θ for H at θ to L' (D.4; Vesić 1975 the same), outside the bracket
+//	H = √(Horizontal² + HorizontalAcross²), A' = B'L' with both eccentricities
 //
 // Groundwater (Das, Principles of Foundation Engineering, §3.6, from
 // memory): with the water Dw below ground (Dw ≤ 0: at or above it),
@@ -366,12 +375,23 @@ func BearingCapacity(in BearingInput, s Soil, m Method, cond Condition) (Bearing
 	if st.k > 1 {
 		st.k = math.Atan(st.k)
 	}
-	st.v, st.h, st.area = float64(in.Vertical), math.Abs(float64(in.Horizontal)), bEff*lEff
-	if r.LoadAlongShort {
-		st.m = (2 + st.ratio) / (1 + st.ratio)
-	} else {
-		st.m = (2 + 1/st.ratio) / (1 + 1/st.ratio)
+	st.v, st.h, st.area = float64(in.Vertical), math.Hypot(float64(in.Horizontal), float64(in.HorizontalAcross)), bEff*lEff
+	// The load's components along B' and L', and the angle θ to L'.
+	hB, hL := math.Abs(float64(in.Horizontal)), math.Abs(float64(in.HorizontalAcross))
+	if !r.LoadAlongShort {
+		hB, hL = hL, hB
 	}
+	theta := math.Atan2(hB, hL)
+	if st.h == 0 { // no load: the direction of AlongLoad, as a reader expects
+		theta = math.Pi / 2
+		if !r.LoadAlongShort {
+			theta = 0
+		}
+	}
+	mB, mL := (2+st.ratio)/(1+st.ratio), (2+1/st.ratio)/(1+1/st.ratio)
+	c2 := math.Cos(theta) * math.Cos(theta)
+	st.m = mL*c2 + mB*(1-c2)
+	r.Theta = units.Angle(theta)
 
 	f := methodFactors[m](st)
 	r.Sc, r.Sq, r.Sgamma = f.sc, f.sq, f.sg

@@ -227,7 +227,7 @@ func TestBearingValuesRoundTrip(t *testing.T) {
 	want := map[string]float64{
 		"φ": phi, "c": 4e3, "q": q, "γ_b": gEff, "B'": bEff, "L'": lEff,
 		"N_c": nc, "N_q": nq, "N_γ": ng, "s_c": sc, "s_q": sq, "s_γ": sg, "d_c": 1, "d_q": 1, "d_γ": 1,
-		"i_c": ic, "i_q": iq, "i_γ": ig, "m": mExp,
+		"i_c": ic, "i_q": iq, "i_γ": ig, "θ": math.Pi / 2, "m": mExp,
 		"q_c": 4e3 * nc * sc * ic, "q_q": q * nq * sq * iq, "q_γ": 0.5 * gEff * bEff * ng * sg * ig,
 	}
 	want["q_ult"] = want["q_c"] + want["q_q"] + want["q_γ"]
@@ -403,4 +403,49 @@ func TestBearingHorizontalExhausts(t *testing.T) {
 			}
 		}
 	}
+}
+
+// TestBearingLoadAtAnAngle: a horizontal load with components along both
+// sides of the base enters the inclination factors as its resultant H, with
+// the exponent of EN 1997-1:2004 D.4 for a load at θ to L' [R: the D.4
+// formulas as in the package doc, m_θ = m_L cos²θ + m_B sin²θ]:
+//
+//	base 2 × 3 m, e 0.2 m along the 2 m side and 0.3 m along the 3 m side:
+//	B' = 1.6, L' = 2.4, m_B = (2 + 2/3)/(1 + 2/3) = 1.6, m_L = (2 + 1.5)/(1 + 1.5) = 1.4;
+//	H 60 kN along B' and 80 kN along L': H = 100 kN, cos²θ = 0.64,
+//	m_θ = 1.4·0.64 + 1.6·0.36 = 1.472; V 800 kN, c' 0, φ' 30°:
+//	i_q = (1 − 100/800)^1.472, i_γ = (1 − 100/800)^2.472
+//
+// Along one side only, m is m_B or m_L as before.
+func TestBearingLoadAtAnAngle(t *testing.T) {
+	m := units.Metre
+	s := foundation.Soil{UnitWeight: 18 * kNm3, Friction: deg(30)}
+	in := foundation.BearingInput{AlongLoad: 2 * m, AcrossLoad: 3 * m, Depth: 1 * m, Vertical: 800 * units.Kilonewton,
+		Horizontal: 60 * units.Kilonewton, HorizontalAcross: -80 * units.Kilonewton, EccAlong: 0.2 * m, EccAcross: 0.3 * m}
+	b, err := foundation.BearingCapacity(in, s, foundation.EC7, foundation.Drained)
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "B'", float64(b.BEff), 1.6, 1e-12)
+	near(t, "L'", float64(b.LEff), 2.4, 1e-12)
+	near(t, "cos²θ", math.Pow(math.Cos(float64(b.Theta)), 2), 0.64, 1e-12)
+	near(t, "m_θ", b.M, 1.472, 1e-12)
+	near(t, "i_q", b.Iq, math.Pow(0.875, 1.472), 1e-12)
+	near(t, "i_γ", b.Igamma, math.Pow(0.875, 2.472), 1e-12)
+	// Vesić takes the same exponent (Vesić 1975).
+	bv, _ := foundation.BearingCapacity(in, s, foundation.Vesic, foundation.Drained)
+	near(t, "Vesić m_θ", bv.M, 1.472, 1e-12)
+	// Along B' alone: m_B; along L' alone: m_L.
+	in.HorizontalAcross = 0
+	b, _ = foundation.BearingCapacity(in, s, foundation.EC7, foundation.Drained)
+	near(t, "m_B", b.M, 1.6, 1e-12)
+	in.Horizontal, in.HorizontalAcross = 0, 100*units.Kilonewton
+	b, _ = foundation.BearingCapacity(in, s, foundation.EC7, foundation.Drained)
+	near(t, "m_L", b.M, 1.4, 1e-12)
+	near(t, "i_q along L'", b.Iq, math.Pow(0.875, 1.4), 1e-12)
+	// The undrained inclination takes the resultant too (D.3).
+	s.Undrained = 40 * units.Kilopascal
+	in.Horizontal, in.HorizontalAcross = 60*units.Kilonewton, 80*units.Kilonewton
+	b, _ = foundation.BearingCapacity(in, s, foundation.EC7, foundation.Undrained)
+	near(t, "undrained i_c", b.Ic, 0.5*(1+math.Sqrt(1-100e3/(1.6*2.4*40e3))), 1e-12)
 }

@@ -80,3 +80,69 @@ func TestContactPressureRejects(t *testing.T) {
 		t.Errorf("b 0: %v", err)
 	}
 }
+
+// TestBiaxialContactPressure checks the pressure under a rigid 3 × 2 m
+// base carrying 600 kN eccentric about both axes against three forms found
+// outside the solver:
+//
+//   - inside the kern, the classical q = N/A (1 ± 6ex/b ± 6ey/l) (Das §3.11,
+//     from memory): ex 0.2, ey 0.1 → 100·(1 ± 0.4 ± 0.3) = 170 / 30 kPa;
+//   - one axis only, ContactPressure's trapezoid or triangle;
+//   - the corner triangle [D]: with ex ≥ b/4 and ey ≥ l/4 the compressed
+//     area is the triangle of legs s = 4(b/2 − ex), t = 4(l/2 − ey) under a
+//     pyramid of volume qmax·s·t/6 whose centroid lies s/4, t/4 from the
+//     corner: ex 1.0, ey 0.6 → s 2.0, t 1.6, qmax 6·600/(2·1.6) = 1125 kPa.
+func TestBiaxialContactPressure(t *testing.T) {
+	n, b, l := units.Force(600e3), units.Length(3), units.Length(2)
+	got, err := foundation.BiaxialContactPressure(n, 0.2, -0.1, b, l)
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "kern qmax", float64(got.Max), 170e3, 1e-12)
+	near(t, "kern qmin", float64(got.Min), 30e3, 1e-12)
+	near(t, "kern area", float64(got.Area), 6, 1e-12)
+	for _, e := range []float64{0.3, 0.7, 1.2} {
+		qmax, qmin, c, _ := foundation.ContactPressure(n, units.Length(e), b, l)
+		got, err := foundation.BiaxialContactPressure(n, units.Length(e), 0, b, l)
+		if err != nil {
+			t.Fatal(err)
+		}
+		near(t, "one axis qmax", float64(got.Max), float64(qmax), 1e-12)
+		near(t, "one axis qmin", float64(got.Min), float64(qmin), 1e-12)
+		near(t, "one axis area", float64(got.Area), float64(c)*2, 1e-12)
+		got, _ = foundation.BiaxialContactPressure(n, 0, units.Length(e), l, b) // turned: e along the 3 m side
+		near(t, "turned qmax", float64(got.Max), float64(qmax), 1e-12)
+	}
+	for _, c := range []struct{ ex, ey float64 }{{1.0, 0.6}, {0.75, 0.5}, {1.3, 0.9}, {-1.0, 0.6}} {
+		got, err := foundation.BiaxialContactPressure(n, units.Length(c.ex), units.Length(c.ey), b, l)
+		if err != nil {
+			t.Fatalf("%+v: %v", c, err)
+		}
+		s, u := 4*(1.5-math.Abs(c.ex)), 4*(1-math.Abs(c.ey))
+		near(t, "corner qmax", float64(got.Max), 6*600e3/(s*u), 1e-9)
+		near(t, "corner area", float64(got.Area), s*u/2, 1e-9)
+		if got.Min != 0 {
+			t.Errorf("%+v: qmin %v, want 0", c, got.Min)
+		}
+	}
+	// Between the kern and the corner triangle the peak grows steadily
+	// with the eccentricity and always exceeds the full-contact formula's.
+	prev := 0.0
+	for _, ex := range []float64{0.3, 0.4, 0.5, 0.6, 0.7, 0.8} {
+		got, err := foundation.BiaxialContactPressure(n, units.Length(ex), 0.25, b, l)
+		if err != nil {
+			t.Fatal(err)
+		}
+		linear := 100e3 * (1 + 6*ex/3 + 6*0.25/2)
+		if !(float64(got.Max) >= linear*(1-1e-12) && float64(got.Max) > prev) {
+			t.Errorf("ex %v: qmax %v (linear %v, previous %v)", ex, got.Max, linear, prev)
+		}
+		prev = float64(got.Max)
+	}
+	if _, err := foundation.BiaxialContactPressure(n, 1.5, 0.1, b, l); !errors.Is(err, foundation.ErrOutsideBase) {
+		t.Errorf("ex = b/2: %v", err)
+	}
+	if _, err := foundation.BiaxialContactPressure(n, 0.1, units.Length(math.NaN()), b, l); !errors.Is(err, foundation.ErrInvalid) {
+		t.Errorf("NaN ey: %v", err)
+	}
+}

@@ -91,25 +91,54 @@ func (d Deadman) Resistance(s Soil, cond Condition) (units.Force, string, error)
 		return 0, "", invalid("Soil.Friction", "must be positive for the drained condition")
 	}
 	st := s.strengthIn(cond, Basis{}.allowableSet())
-	t, how := d.resistance(s, st)
-	return units.Force(t), how, nil
+	r := d.resistance(s, st)
+	return units.Force(r.t), r.how, nil
+}
+
+// deadmanResistance is the ultimate resistance of a deadman and the
+// numbers behind it, for the form that governs.
+type deadmanResistance struct {
+	t      float64 // ultimate horizontal resistance
+	how    string
+	kp, ka float64 // earth-pressure coefficients
+	top    float64 // depth of the top of the loaded face (0 near the surface)
+	bottom float64 // depth of its bottom
+	pp, pa float64 // passive and active forces on that face over the deadman's length
+	end    float64 // Teng's end-effect term (zero when not counted)
+}
+
+// values returns the numbers of the resistance as check values.
+func (r deadmanResistance) values() []check.Value {
+	return []check.Value{
+		check.Of("T_u", "ultimate horizontal resistance of the soil", units.Force(r.t)),
+		check.Of("K_p", "passive earth-pressure coefficient (Rankine; 1 undrained)", units.Ratio(r.kp)),
+		check.Of("K_a", "active earth-pressure coefficient (Rankine; 1 undrained)", units.Ratio(r.ka)),
+		check.Of("z_t", "depth of the top of the face the pressures act on", units.Length(r.top)),
+		check.Of("z_b", "depth of the bottom of that face", units.Length(r.bottom)),
+		check.Of("P_p", "passive force on that face over the deadman's length", units.Force(r.pp)),
+		check.Of("P_a", "active force on that face over the deadman's length", units.Force(r.pa)),
+		check.Of("T_e", "Teng's end-effect term; zero when not counted", units.Force(r.end)),
+	}
 }
 
 // resistance is Resistance for strength st (after partial factors).
-func (d Deadman) resistance(s Soil, st strength) (float64, string) {
+func (d Deadman) resistance(s Soil, st strength) deadmanResistance {
 	if d.Height >= d.Depth/2 {
-		how := "Teng's continuous anchor near the surface (from memory)"
-		if d.EndEffects && st.cond == Drained {
-			how += ", with end effects"
+		r := d.teng(s, st, float64(d.Depth))
+		r.how = "Teng's continuous anchor near the surface (from memory)"
+		if r.end > 0 {
+			r.how += ", with end effects"
 		}
-		return d.teng(s, st, float64(d.Depth)), how
+		return r
 	}
 	face := d.passiveLessActive(s, st, float64(d.Depth-d.Height), float64(d.Depth))
 	shallow := d.teng(s, st, 2*float64(d.Height))
-	if face >= shallow {
-		return face, "deep deadman: passive less active on the face only (cautious)"
+	if face.t >= shallow.t {
+		face.how = "deep deadman: passive less active on the face only (cautious)"
+		return face
 	}
-	return shallow, "deep deadman: Teng's value at depth 2·Height (cautious)"
+	shallow.how = "deep deadman: Teng's value at depth 2·Height (cautious)"
+	return shallow
 }
 
 // coefficients returns Kp and Ka in strength st: Rankine's for level
@@ -122,26 +151,30 @@ func (st strength) coefficients() (kp, ka float64) {
 }
 
 // passiveLessActive returns Length (Pp − Pa) between depths top and bottom.
-func (d Deadman) passiveLessActive(s Soil, st strength, top, bottom float64) float64 {
+func (d Deadman) passiveLessActive(s Soil, st strength, top, bottom float64) deadmanResistance {
 	kp, ka := st.coefficients()
 	g, gs, dw := float64(s.UnitWeight), float64(s.SubmergedWeight()), d.Water.depth()
 	pp := layeredEarth(kp, st.c, 1, top, bottom, g, gs, dw)
 	pa := layeredEarth(ka, st.c, -1, top, bottom, g, gs, dw)
-	return float64(d.Length) * float64(pp.Force-pa.Force)
+	l := float64(d.Length)
+	r := deadmanResistance{kp: kp, ka: ka, top: top, bottom: bottom, pp: l * float64(pp.Force), pa: l * float64(pa.Force)}
+	r.t = r.pp - r.pa
+	return r
 }
 
 // teng returns Teng's near-surface resistance for a face reaching depth h.
-func (d Deadman) teng(s Soil, st strength, h float64) float64 {
-	t := d.passiveLessActive(s, st, 0, h)
+func (d Deadman) teng(s Soil, st strength, h float64) deadmanResistance {
+	r := d.passiveLessActive(s, st, 0, h)
 	if !d.EndEffects || st.cond == Undrained {
-		return t
+		return r
 	}
-	kp, ka := st.coefficients()
 	g := float64(s.UnitWeight)
 	if d.Water.depth() < h {
 		g = float64(s.SubmergedWeight()) // cautious: the whole wedge at its submerged weight
 	}
-	return t + TengK0*g*(math.Sqrt(kp)+math.Sqrt(ka))*h*h*h*math.Tan(st.phi)/3
+	r.end = TengK0 * g * (math.Sqrt(r.kp) + math.Sqrt(r.ka)) * h * h * h * math.Tan(st.phi) / 3
+	r.t += r.end
+	return r
 }
 
 // weight returns the effective weight resisting uplift: the deadman
@@ -202,16 +235,18 @@ func (d Deadman) Check(pulls []AnchorPull, s Soil, b *Basis) ([]check.Result, er
 
 	pullout := func(set actionSet, cond Condition, fs float64) check.Result {
 		st := s.strengthIn(cond, set)
-		t, how := d.resistance(s, st)
+		res := d.resistance(s, st)
 		var fx float64
 		for _, p := range pulls {
 			x, _ := p.components()
 			fx += set.factor(x > 0, p.Variable) * x
 		}
 		r := check.Stability("anchor.deadman.pullout", "Deadman pull-out through the soil", units.KindForce,
-			fx, t/set.gRe, fs).WithBasis(basisOf(set, "the ultimate passive minus active resistance", fs))
-		r = set.values(r, check.Of("T_u", "ultimate horizontal resistance of the soil", units.Force(t)))
-		return set.note(r, fmt.Sprintf("ultimate resistance %v: %s; %v", units.Force(t), how, d.Water))
+			fx, res.t/set.gRe, fs).WithBasis(basisOf(set, "the ultimate passive minus active resistance", fs))
+		if set.terse {
+			return r
+		}
+		return r.WithValues(append(res.values(), d.Water.values()...)...).WithNote(res.how + "; " + d.Water.String())
 	}
 	uplift := func(set actionSet, fs float64) check.Result {
 		var dst, stb float64
@@ -226,7 +261,8 @@ func (d Deadman) Check(pulls []AnchorPull, s Soil, b *Basis) ([]check.Result, er
 		stb += set.gGfav * weight
 		r := check.Stability("anchor.deadman.uplift", "Deadman uplift", units.KindForce, dst, stb, fs).
 			WithBasis(basisOf(set, "the effective weight of the deadman and the soil above it", fs))
-		r = set.values(r, check.Of("W", "effective weight of the deadman and the soil prism above it", units.Force(weight)))
+		r = set.values(r, append([]check.Value{check.Of("W", "effective weight of the deadman and the soil prism above it", units.Force(weight))},
+			d.Water.values()...)...)
 		return set.note(r, "vertical soil prism above the deadman; shear on its sides ignored")
 	}
 	var per [2]conditioned
@@ -265,6 +301,9 @@ func (d Deadman) beam(pulls []AnchorPull, bs Basis, fs float64) []check.Result {
 	} else {
 		label = fsBasis("the plastic resistance of the steel section (EN 1993-1-1:2005 6.2.5 and 6.2.6)", fs)
 	}
+	// W_pl f_y holds for class 1 and 2 sections only (EN 1993-1-1 6.2.5(2)).
+	label += "; the section taken as class 1 or 2 (plastic): for a class 3 section give its elastic modulus as the plastic one; " +
+		"the surrounding soil restrains it against lateral-torsional buckling"
 	var fx, fz float64
 	for _, p := range pulls {
 		x, z := p.components()
@@ -279,7 +318,8 @@ func (d Deadman) beam(pulls []AnchorPull, bs Basis, fs float64) []check.Result {
 		note := "the deadman is not described as a steel section: design the beam for this moment and shear (EN 1992-1-1 for concrete); " + beamNote
 		return []check.Result{
 			check.Record("anchor.deadman.bending", "Deadman beam bending moment", units.KindMoment, mEd).
-				WithBasis("common practice: " + beamNote).WithValues(check.Of("T", "resultant pull on the beam", units.Force(t))).WithNote(note),
+				WithBasis("common practice: "+beamNote).WithValues(check.Of("T", "resultant pull on the beam", units.Force(t)),
+				check.Of("L", "length of the beam across the pull", d.Length)).WithNote(note),
 			check.Record("anchor.deadman.shear", "Deadman beam shear force", units.KindForce, vEd).
 				WithBasis("common practice: " + beamNote).WithValues(check.Of("T", "resultant pull on the beam", units.Force(t))).WithNote(note),
 		}
@@ -291,6 +331,7 @@ func (d Deadman) beam(pulls []AnchorPull, bs Basis, fs float64) []check.Result {
 		mRd, vRd = mRd/fs, vRd/fs
 	}
 	vals := []check.Value{check.Of("T", "resultant pull on the beam", units.Force(t)),
+		check.Of("L", "length of the beam across the pull", d.Length),
 		check.Of("f_y", "yield strength of the section", sec.Yield)}
 	return []check.Result{
 		check.Compare("anchor.deadman.bending", "Deadman beam bending", units.KindMoment, mEd, mRd).WithBasis(label).

@@ -126,3 +126,41 @@ func TestDeadmanRejects(t *testing.T) {
 		t.Errorf("negative pull: %v", err)
 	}
 }
+
+// TestDeadmanValuesRoundTrip: every number behind a deadman's pull-out is
+// among its values, and agrees with Teng's near-surface form by hand
+// (as TestDeadmanHand, kN, m, φ 30°, γ 18, water 1 m down, γ' 8.19):
+//
+//	K_p = 3, K_a = 1/3 (Rankine, level ground)
+//	σ'v: 18 kPa at 1 m, 18 + 8.19·0.5 = 22.095 kPa at 1.5 m
+//	∫σ'v dz = ½·18·1 + (18 + 22.095)/2·0.5 = 19.02375 kN/m
+//	P_p = 3·3·19.02375 = 171.214 kN, P_a = 3·(1/3)·19.02375 = 19.024 kN
+//	T_e = ⅓·0.4·8.19·(√3 + √⅓)·1.5³·tan 30° (γ' for the wedge below the water, cautious)
+//	T_u = P_p − P_a + T_e
+func TestDeadmanValuesRoundTrip(t *testing.T) {
+	d := testDeadman()
+	d.EndEffects = true
+	d.Water = foundation.WaterAt(1)
+	rs, err := d.Check([]foundation.AnchorPull{{Force: 60 * units.Kilonewton, Angle: deg(20)}}, sand30(), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	integral := 0.5*18*1 + (18+22.095)/2*0.5
+	pp, pa := 3*3*integral, 3*integral/3
+	te := 0.4 * 8.19 * (math.Sqrt(3) + math.Sqrt(1.0/3)) * 1.5 * 1.5 * 1.5 * math.Tan(math.Pi/6) / 3
+	want := map[string]float64{"T_u": (pp - pa + te) * 1e3, "K_p": 3, "K_a": 1.0 / 3, "z_t": 0, "z_b": 1.5,
+		"P_p": pp * 1e3, "P_a": pa * 1e3, "T_e": te * 1e3, "d_w": 1}
+	po := byID(t, rs, "anchor.deadman.pullout")
+	if len(po.Values) != len(want) {
+		t.Errorf("%d values, want %d", len(po.Values), len(want))
+	}
+	for _, v := range po.Values {
+		w, ok := want[v.Symbol]
+		if !ok {
+			t.Errorf("unexpected value %s", v.Symbol)
+			continue
+		}
+		near(t, v.Symbol, v.Value, w, 1e-9)
+	}
+	near(t, "capacity", po.Capacity, (pp-pa+te)*1e3, 1e-9)
+}

@@ -106,11 +106,11 @@ func ExampleDeadman_Check() {
 
 func ExampleRockAnchor_Check() {
 	// Three 32 mm bars (fy 500 MPa) 0.8 m apart in 90 mm holes, 4 m bonded
-	// below 2 m free length in sound rock (allowable pressure 2 MPa from
+	// below 3 m free length in sound rock (allowable pressure 2 MPa from
 	// the site report), 250 × 250 × 25 mm head plates, holding a 300 kN
 	// backstay at 35°.
 	ra := foundation.RockAnchor{Count: 3, Spacing: 0.8, BarDiameter: 32 * units.Millimetre, YieldStrength: 500 * units.Megapascal,
-		HoleDiameter: 90 * units.Millimetre, BondLength: 4, FreeLength: 2,
+		HoleDiameter: 90 * units.Millimetre, BondLength: 4, FreeLength: 3,
 		Plate: foundation.HeadPlate{Side: 0.25, Thickness: 0.025, Yield: 275 * units.Megapascal}}
 	rock, _ := foundation.LookupSoil("sound rock")
 	rock.Allowable = 2 * units.Megapascal
@@ -130,11 +130,11 @@ func ExampleRockAnchor_Check() {
 	// anchor.rock.thread     provided  2.82 required 2.00 ratio 0.708 pass
 	// anchor.rock.groutbar   provided  8.04 required 3.00 ratio 0.373 pass
 	// anchor.rock.groutrock  provided 11.31 required 3.00 ratio 0.265 pass
-	// anchor.rock.cone       provided  3.99 required 2.00 ratio 0.501 pass
+	// anchor.rock.cone       provided  2.37 required 2.00 ratio 0.844 pass
 	// anchor.rock.plate      58.15 MPa of 164.7 MPa ratio 0.353 pass
 	// anchor.rock.platebearing 1.781 MPa of 2.000 MPa ratio 0.891 pass
-	// Vol = 27.47 m³ (volume of the bars' combined cone)
-	// W_c = 686.6 kN (effective weight of the combined cone)
+	// Vol = 49.56 m³ (volume of the bars' combined cone)
+	// W_c = 1239 kN (effective weight of the combined cone)
 }
 
 func ExampleFooting_Check() {

@@ -41,6 +41,15 @@ type FootingLoad struct {
 	// Moment turns toward +x (presses the +x edge); it includes the
 	// horizontal load's lever arm down to the underside.
 	Moment units.Moment
+	// HorizontalAcross and MomentAcross are the load's components across
+	// (along the side Across, y): the horizontal force and the moment that
+	// presses the +y edge, with its lever arm down to the underside. Zero
+	// for a load along x only. Bearing and sliding take both directions at
+	// once (both eccentricities, the resultant horizontal force);
+	// overturning is checked about the edges across x (check the footing
+	// turned for the edges across y).
+	HorizontalAcross units.Force
+	MomentAcross     units.Moment
 	// VariableShare is the fraction of each component due to variable
 	// actions (0 to 1), used only by the partial-factor basis.
 	VariableShare float64
@@ -50,19 +59,23 @@ type FootingLoad struct {
 	// component being permanent. Each part is then factored by the side it
 	// acts on, so a permanent part opposing the variable one counts as
 	// favourable (EN 1990 6.4.3.2, from memory). Partial-factor basis only.
-	Split              bool
-	VariableVertical   units.Force
-	VariableHorizontal units.Force
-	VariableMoment     units.Moment
+	Split                    bool
+	VariableVertical         units.Force
+	VariableHorizontal       units.Force
+	VariableMoment           units.Moment
+	VariableHorizontalAcross units.Force
+	VariableMomentAcross     units.Moment
 }
 
 // variable returns the variable parts of the vertical, horizontal and
-// moment components.
-func (ld FootingLoad) variable() (v, h, m float64) {
+// moment components, along x and across.
+func (ld FootingLoad) variable() (v, h, m, hy, my float64) {
 	if ld.Split {
-		return float64(ld.VariableVertical), float64(ld.VariableHorizontal), float64(ld.VariableMoment)
+		return float64(ld.VariableVertical), float64(ld.VariableHorizontal), float64(ld.VariableMoment),
+			float64(ld.VariableHorizontalAcross), float64(ld.VariableMomentAcross)
 	}
-	return ld.VariableShare * float64(ld.Vertical), ld.VariableShare * float64(ld.Horizontal), ld.VariableShare * float64(ld.Moment)
+	k := ld.VariableShare
+	return k * float64(ld.Vertical), k * float64(ld.Horizontal), k * float64(ld.Moment), k * float64(ld.HorizontalAcross), k * float64(ld.MomentAcross)
 }
 
 // design returns the design effect, in direction d (+1 or −1), of a
@@ -81,7 +94,7 @@ func (s actionSet) design(x, q, d float64) float64 {
 // factor on every component of the permanent part (one source, EN 1990
 // 6.4.3.1(4) note, from memory) and one on every component of the
 // variable part (present or absent as a whole).
-type loadState struct{ v, h, m float64 }
+type loadState struct{ v, h, m, hy, my float64 }
 
 // states returns the design load states to try: on the allowable basis the
 // load as given; on a partial-factor set, the permanent part unfavourable
@@ -92,15 +105,16 @@ type loadState struct{ v, h, m float64 }
 func (s actionSet) states(ld FootingLoad) ([4]loadState, int) {
 	var out [4]loadState
 	if s.allowable {
-		out[0] = loadState{float64(ld.Vertical), float64(ld.Horizontal), float64(ld.Moment)}
+		out[0] = loadState{float64(ld.Vertical), float64(ld.Horizontal), float64(ld.Moment), float64(ld.HorizontalAcross), float64(ld.MomentAcross)}
 		return out, 1
 	}
-	qv, qh, qm := ld.variable()
+	qv, qh, qm, qhy, qmy := ld.variable()
 	pv, ph, pm := float64(ld.Vertical)-qv, float64(ld.Horizontal)-qh, float64(ld.Moment)-qm
+	phy, pmy := float64(ld.HorizontalAcross)-qhy, float64(ld.MomentAcross)-qmy
 	n := 0
 	for _, gp := range [2]float64{s.gG, s.gGfav} {
 		for _, gq := range [2]float64{s.gQ, 0} {
-			out[n] = loadState{gp*pv + gq*qv, gp*ph + gq*qh, gp*pm + gq*qm}
+			out[n] = loadState{gp*pv + gq*qv, gp*ph + gq*qh, gp*pm + gq*qm, gp*phy + gq*qhy, gp*pmy + gq*qmy}
 			n++
 		}
 	}
@@ -138,7 +152,10 @@ func (ld FootingLoad) validate() error {
 	for _, x := range []struct {
 		name string
 		v    float64
-	}{{"FootingLoad.VariableVertical", float64(ld.VariableVertical)}, {"FootingLoad.VariableHorizontal", float64(ld.VariableHorizontal)}, {"FootingLoad.VariableMoment", float64(ld.VariableMoment)}} {
+	}{{"FootingLoad.HorizontalAcross", float64(ld.HorizontalAcross)}, {"FootingLoad.MomentAcross", float64(ld.MomentAcross)},
+		{"FootingLoad.VariableVertical", float64(ld.VariableVertical)}, {"FootingLoad.VariableHorizontal", float64(ld.VariableHorizontal)},
+		{"FootingLoad.VariableMoment", float64(ld.VariableMoment)}, {"FootingLoad.VariableHorizontalAcross", float64(ld.VariableHorizontalAcross)},
+		{"FootingLoad.VariableMomentAcross", float64(ld.VariableMomentAcross)}} {
 		if math.IsNaN(x.v) || math.IsInf(x.v, 0) {
 			return finite(x.name, x.v)
 		}
@@ -153,11 +170,12 @@ func (ld FootingLoad) validate() error {
 // With W the pad's and soil cover's weight, U the water's uplift and
 // N = V + W − U:
 //
-//	bearing:     e = M/N along Along; N/A' on B' = Along − 2|e| against qult (method m),
-//	             or, on the allowable basis, the peak contact pressure against
-//	             Soil.Allowable when given; on rock the peak contact pressure under
-//	             characteristic actions against RockPressure
-//	sliding:     driving |H|, resisting N tan δ drained (cohesion and passive ignored),
+//	bearing:     e = M/N along Along and e_y = M_y/N across; N/A' on A' = (Along − 2|e|)(Across − 2|e_y|)
+//	             against qult (method m) under the resultant horizontal force √(H² + H_y²),
+//	             or, on the allowable basis, the peak contact pressure of both eccentricities
+//	             (BiaxialContactPressure) against Soil.Allowable when given; on rock that
+//	             peak under characteristic actions against RockPressure
+//	sliding:     driving √(H² + H_y²), resisting N tan δ drained (cohesion and passive ignored),
 //	             A'c_u undrained (≤ 0.4 N where water or air reach the base; EN 1997-1 6.5.3)
 //	overturning: about the base edge the moment turns toward:
 //	             driving |M| + U·Along/2 (+ |V|·Along/2 when V pulls up), resisting (W + V⁺)·Along/2
@@ -261,7 +279,11 @@ func (f Footing) AppendCheck(dst []check.Result, load FootingLoad, s Soil, m Met
 	if !s.IsRock {
 		bear = governing(sets[0], bearPer[:len(conds)])
 	}
-	return append(dst, bear, governing(sets[0], slidePer[:len(conds)]), over), nil
+	slide := governing(sets[0], slidePer[:len(conds)])
+	if !bs.Terse && f.Water.Present {
+		bear, slide, over = bear.WithValues(f.Water.values()...), slide.WithValues(f.Water.values()...), over.WithValues(f.Water.values()...)
+	}
+	return append(dst, bear, slide, over), nil
 }
 
 // waterAtBase reports whether water stands at or above the footing's base.
@@ -288,7 +310,7 @@ func (f Footing) bearing(load FootingLoad, s Soil, m Method, cond Condition, ld 
 				r = set.values(r, check.Of("N", "effective normal force on the base", units.Force(n)))
 				r = set.note(r, "net uplift: the footing lifts off its base")
 			} else {
-				bl := baseLoad{n: n, h: math.Abs(st.h), e: st.m / n}
+				bl := baseLoad{n: n, h: math.Abs(st.h), e: st.m / n, hy: math.Abs(st.hy), ey: st.my / n, biaxial: true}
 				var err error
 				if s.IsRock {
 					r, err = rockBaseBearing(id, title, f.Along, f.Across, bl, s, set)
@@ -313,19 +335,20 @@ func (f Footing) bearing(load FootingLoad, s Soil, m Method, cond Condition, ld 
 func (f Footing) sliding(load FootingLoad, s Soil, cond Condition, ld blockLoads, set actionSet, fs float64) check.Result {
 	str := s.strengthIn(cond, set)
 	var worst check.Result
-	var worstN, worstE float64
+	var worstN, worstE, worstEy, worstH, worstHy float64
 	var worstShear baseShear
 	states, ns := set.states(load)
 	for i, st := range states[:ns] {
 		n := set.gGfav*ld.weight - set.gG*ld.buoyancy + st.v
-		e := 0.0
+		e, ey := 0.0, 0.0
 		if n > 0 {
-			e = st.m / n
+			e, ey = st.m/n, st.my/n
 		}
-		bsh := shearResistance(n, e, float64(f.Along), float64(f.Across), str, f.waterAtBase())
-		r := check.Stability("footing.sliding", "Footing sliding", units.KindForce, math.Abs(st.h), bsh.r/set.gRh, fs)
+		bsh := shearResistance(n, e, ey, float64(f.Along), float64(f.Across), str, f.waterAtBase())
+		r := check.Stability("footing.sliding", "Footing sliding", units.KindForce, math.Hypot(st.h, st.hy), bsh.r/set.gRh, fs)
 		if i == 0 || r.Ratio > worst.Ratio {
-			worst, worstN, worstE, worstShear = r, n, e, bsh
+			worst, worstN, worstE, worstEy, worstShear = r, n, e, ey, bsh
+			worstH, worstHy = math.Abs(st.h), math.Abs(st.hy)
 		}
 	}
 	worst = worst.WithBasis(basisOf(set, "base shear", fs))
@@ -333,7 +356,11 @@ func (f Footing) sliding(load FootingLoad, s Soil, cond Condition, ld blockLoads
 		return worst
 	}
 	vs, note := shearValues(str, worstN, worstShear)
-	vs = append(vs, check.Of("e", "eccentricity of the base resultant", units.Length(worstE)))
+	vs = append(vs,
+		check.Of("H", "horizontal force on the base along its side Along", units.Force(worstH)),
+		check.Of("H_y", "horizontal force on the base along its side Across", units.Force(worstHy)),
+		check.Of("e", "eccentricity of the base resultant along Along", units.Length(worstE)),
+		check.Of("e_y", "eccentricity of the base resultant along Across", units.Length(worstEy)))
 	if str.cond == Drained {
 		note += "; cohesion and passive resistance ignored"
 	} else {
@@ -353,7 +380,7 @@ func (f Footing) sliding(load FootingLoad, s Soil, cond Condition, ld blockLoads
 // the favourable and unfavourable parts counting as individual actions.
 func (f Footing) overturning(load FootingLoad, ld blockLoads, set actionSet, fs float64) check.Result {
 	half := float64(f.Along) / 2
-	qv, _, qm := load.variable()
+	qv, _, qm, _, _ := load.variable()
 	v, mx := float64(load.Vertical), float64(load.Moment)
 	mo := math.Max(set.design(mx, qm, 1), set.design(mx, qm, -1))
 	down := -set.design(v, qv, -1) // downward parts favourable, upward unfavourable
@@ -369,7 +396,12 @@ func (f Footing) overturning(load FootingLoad, ld blockLoads, set actionSet, fs 
 	}
 	r := check.Stability("footing.overturning", "Footing overturning about the base edge", units.KindMoment, dst, stb, fs).
 		WithBasis(basisOf(set, "the restoring moment about the base edge", fs))
-	return set.values(r,
+	if set.terse {
+		return r
+	}
+	return r.WithValues(
+		check.Of("V", "vertical load from the column, characteristic, downward positive", load.Vertical),
+		check.Of("M", "moment of the column's load about the base centre, characteristic", load.Moment),
 		check.Of("W", "weight of the pad and its soil cover", units.Force(ld.weight)),
 		check.Of("U", "uplift of the water on the pad", units.Force(ld.buoyancy)))
 }

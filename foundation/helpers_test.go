@@ -39,3 +39,13 @@ func byID(t *testing.T, rs []check.Result, id string) check.Result {
 	t.Fatalf("no result %s in %d results", id, len(rs))
 	return check.Result{}
 }
+
+// valueOf returns the named value of r, failing t when r has none.
+func valueOf(t *testing.T, r check.Result, symbol string) float64 {
+	t.Helper()
+	v, ok := r.Value(symbol)
+	if !ok {
+		t.Fatalf("%s has no value %s", r.ID, symbol)
+	}
+	return v.Value
+}

@@ -184,7 +184,8 @@ func (r RockAnchor) coneWeight(angle units.Angle, s Soil) (w, v float64) {
 //	anchor.rock.thread     T  against  min(A_s fy, k2 fu A_s)                  (EN 1993-1-8:2005 Table 3.4, k2 0.9)
 //	anchor.rock.groutbar   T  against  π d  Lb τ_grout-bar
 //	anchor.rock.groutrock  T  against  π D  Lb τ_grout-rock                     (τ = Soil.GroutBond)
-//	anchor.rock.cone       pull·sin α  against  W of the bars' cones (ConeWeight), rock shear ignored
+//	anchor.rock.cone       pull  against  W sin α, W of the bars' cones (ConeWeight) resolved along their axis,
+//	                       rock shear ignored
 //	anchor.rock.plate      p c²/2  against  fy t²/4 (per unit width), p = T/(a² − π D²/4), c = (a − d_n)/2
 //	anchor.rock.platebearing  p  against the rock's allowable pressure (RockPressure), when known
 //
@@ -192,7 +193,13 @@ func (r RockAnchor) coneWeight(angle units.Angle, s Soil) (w, v float64) {
 // the art, 1977, BS 8081:2015 and EN 1537:2013, from memory; the cone's
 // apex at the middle of the bond length, its axis along the bar, the cones
 // of a row of bars taken together as their union (common practice: the
-// group's combined cone), rock beyond the plane of the heads ignored. The
+// group's combined cone), rock beyond the plane of the heads ignored.
+// With the rock's shear strength ignored, a cone pulled out along its axis
+// is held only by the component of its weight along that axis, W sin α,
+// so the whole pull is checked against it; for a vertical bar this is the
+// usual pull against weight. Checking only the pull's vertical component
+// against the whole weight would pass a flat bar whatever its pull: the
+// cautious form is taken, and said in the result's basis. The
 // head plate is a cantilever from the nut's edge under a uniform bearing
 // pressure (common practice), its plastic resistance per unit width
 // EN 1993-1-1:2005 6.2.5.)
@@ -253,19 +260,33 @@ func (r RockAnchor) Check(pull units.Force, angle units.Angle, s Soil, b *Basis)
 	cone, vol := r.coneWeight(angle, s)
 	geo := r.cone(angle)
 	v := float64(pull) * sinA
+	along := cone * sinA // the cone's weight resolved along the bars' axis
 	coneVals := []check.Value{
+		check.Of("P", "whole pull along the bars", pull),
+		check.Of("α", "inclination of the bars below horizontal", angle),
 		check.Of("V", "upward component of the whole pull", units.Force(v)),
 		check.Of("Vol", "volume of the bars' combined cone", units.Volume(vol)),
 		check.Of("W_c", "effective weight of the combined cone", units.Force(cone)),
+		check.Of("W_a", "the cone's weight resolved along the bars' axis, W_c sin α", units.Force(along)),
 		check.Of("h", "depth of the cones' apex", units.Length(geo.length*sinA)),
 		check.Of("ψ", "cone half-angle", units.Angle(geo.psi)),
 		check.Of("n", "number of bars", units.Ratio(n)),
+		check.Of("s", "spacing of the bars across the pull; zero takes their cones as one", r.Spacing),
 	}
+	coneVals = append(coneVals, r.Water.values()...)
+	coneBasis := "the whole pull against the cone's weight resolved along the bars' axis, W sin α (cautious: with the rock's shear ignored, " +
+		"the pull's vertical component against the whole weight would pass a flat bar whatever its pull)"
 	coneNote := fmt.Sprintf("%d bar(s) at spacing %v sharing %v; cones along the bars' axis, apex %v deep at the middle of the bond length, "+
 		"their union counted, rock shear strength and rock beyond the heads' plane ignored; %v", int(n), r.Spacing, pull, units.Length(geo.length*sinA), r.Water)
-	barVals := []check.Value{check.Of("T", "force per bar", units.Force(t)), check.Of("A", "gross area of a bar", units.Area(gross))}
+	barVals := []check.Value{check.Of("T", "force per bar", units.Force(t)), check.Of("A", "gross area of a bar", units.Area(gross)),
+		check.Of("f_y", "yield strength of the bars", r.YieldStrength)}
 	threadVals := []check.Value{check.Of("T", "force per bar", units.Force(t)), check.Of("A_s", "tensile stress area of the thread", units.Area(as)),
+		check.Of("f_y", "yield strength of the bars", r.YieldStrength),
 		check.Of("f_u", "ultimate strength used; f_y when none is given", units.Pressure(fu))}
+	barBondVals := []check.Value{check.Of("τ_b", "ultimate grout-to-bar bond stress", units.Pressure(tauBar)),
+		check.Of("d", "bar diameter", r.BarDiameter), check.Of("L_b", "bond length", r.BondLength)}
+	rockBondVals := []check.Value{check.Of("τ_r", "ultimate grout-to-rock bond stress", s.GroutBond),
+		check.Of("D", "hole diameter", r.HoleDiameter), check.Of("L_b", "bond length", r.BondLength)}
 
 	// The head plate: bearing pressure p under it, cantilever moment per
 	// unit width from the nut's edge, and its plastic moment.
@@ -273,10 +294,10 @@ func (r RockAnchor) Check(pull units.Force, angle units.Angle, s Soil, b *Basis)
 	if r.Plate != (HeadPlate{}) {
 		plate = r.plateForces(t)
 	}
-	var rockQa float64
+	var rockQa RockBearing
 	if plate.ok {
 		if rb, err := RockPressure(s, r.Plate.Side); err == nil {
-			rockQa = float64(rb.Allowable)
+			rockQa = rb
 		}
 	}
 
@@ -289,12 +310,12 @@ func (r RockAnchor) Check(pull units.Force, angle units.Angle, s Soil, b *Basis)
 				WithBasis(fsBasis("the thread's resistance min(A_s f_y, 0.9 f_u A_s) (EN 1993-1-8:2005 Table 3.4 with γM2 = 1)", tendon)).WithValues(threadVals...),
 			check.Stability("anchor.rock.groutbar", "Rock anchor grout-to-bar bond", units.KindForce, t, gBar, bond).
 				WithBasis(fsBasis("ultimate grout-to-bar bond (BS 8081, from memory)", bond)).
-				WithValues(check.Of("τ_b", "ultimate grout-to-bar bond stress", units.Pressure(tauBar))),
+				WithValues(barBondVals...),
 			check.Stability("anchor.rock.groutrock", "Rock anchor grout-to-rock bond", units.KindForce, t, gRock, bond).
 				WithBasis(fsBasis("ultimate grout-to-rock bond (BS 8081, from memory)", bond)).
-				WithValues(check.Of("τ_r", "ultimate grout-to-rock bond stress", s.GroutBond)),
-			check.Stability("anchor.rock.cone", "Rock cone uplift", units.KindForce, v, cone, cf).
-				WithBasis(fsBasis("the weight of the rock cone", cf)).WithValues(coneVals...).WithNote(coneNote),
+				WithValues(rockBondVals...),
+			check.Stability("anchor.rock.cone", "Rock cone pull-out along the bars", units.KindForce, float64(pull), along, cf).
+				WithBasis(fsBasis(coneBasis, cf)).WithValues(coneVals...).WithNote(coneNote),
 		}
 		return append(out, r.plateResults(plate, plate, 1, sf, rockQa, fsBasis("the plate's plastic resistance (EN 1993-1-1:2005 6.2.5)", sf))...), nil
 	}
@@ -320,12 +341,12 @@ func (r RockAnchor) Check(pull units.Force, angle units.Angle, s Soil, b *Basis)
 			WithBasis(label + fmt.Sprintf("EN 1993-1-8:2005 Table 3.4, k2 0.9, γM2 %.2f; yield of A_s with γM0 %.2f", gM2, gM0)).WithValues(threadVals...),
 		check.Stability("anchor.rock.groutbar", "Rock anchor grout-to-bar bond", units.KindForce, td, gBar/gA, 1).
 			WithBasis(label + fmt.Sprintf("anchorage γa %.2f (EN 1997-1 Table A.12, from memory)", gA)).
-			WithValues(check.Of("τ_b", "ultimate grout-to-bar bond stress", units.Pressure(tauBar))).WithNote(bondNote),
+			WithValues(barBondVals...).WithNote(bondNote),
 		check.Stability("anchor.rock.groutrock", "Rock anchor grout-to-rock bond", units.KindForce, td, gRock/gA, 1).
 			WithBasis(label + fmt.Sprintf("anchorage γa %.2f (EN 1997-1 Table A.12, from memory)", gA)).
-			WithValues(check.Of("τ_r", "ultimate grout-to-rock bond stress", s.GroutBond)).WithNote(bondNote),
-		check.Stability("anchor.rock.cone", "Rock cone uplift", units.KindForce, equ.factorOf(true, sh)*v, equ.gGfav*cone, 1).
-			WithBasis(equ.label).WithValues(coneVals...).WithNote(coneNote),
+			WithValues(rockBondVals...).WithNote(bondNote),
+		check.Stability("anchor.rock.cone", "Rock cone pull-out along the bars", units.KindForce, equ.factorOf(true, sh)*float64(pull), equ.gGfav*along, 1).
+			WithBasis(equ.label + "; " + coneBasis).WithValues(coneVals...).WithNote(coneNote),
 	}
 	design := plate
 	if plate.ok {
@@ -355,9 +376,9 @@ func (r RockAnchor) plateForces(t float64) plateForces {
 // plateResults returns the head plate's bending result under design
 // forces pd (the plastic bending stress 4m/t² against f_y/(γM0·fs), so that
 // the ratio is m/m_Rd) and its bearing result under characteristic forces
-// pk against the rock's allowable pressure qa (zero: not known, the
-// pressure is recorded only).
-func (r RockAnchor) plateResults(pd, pk plateForces, gM0, fs, qa float64, basis string) []check.Result {
+// pk against the rock's allowable pressure rb (zero Allowable: not known,
+// the pressure is recorded only), with the numbers behind it.
+func (r RockAnchor) plateResults(pd, pk plateForces, gM0, fs float64, rb RockBearing, basis string) []check.Result {
 	if !pd.ok {
 		return nil
 	}
@@ -367,6 +388,8 @@ func (r RockAnchor) plateResults(pd, pk plateForces, gM0, fs, qa float64, basis 
 		check.Of("c", "cantilever from the nut's edge", units.Length(pd.c)),
 		check.Of("m", "moment per unit width at the nut's edge, p c²/2", units.Force(pd.m)),
 		check.Of("t_p", "plate thickness", r.Plate.Thickness),
+		check.Of("d_n", "diameter of the nut's bearing face", units.Length(r.nutDiameter())),
+		check.Of("f_y", "yield strength of the plate", r.Plate.Yield),
 	}
 	out := []check.Result{
 		check.Compare("anchor.rock.plate", "Rock anchor head plate bending", units.KindPressure, 4*pd.m/(tp*tp), float64(r.Plate.Yield)/gM0/fs).
@@ -374,9 +397,10 @@ func (r RockAnchor) plateResults(pd, pk plateForces, gM0, fs, qa float64, basis 
 			WithNote("plastic bending stress 4m/t² of a cantilever strip from the nut's edge under uniform bearing (common practice)"),
 	}
 	pv := check.Of("p", "bearing pressure under the plate, characteristic", units.Pressure(pk.p))
-	if qa > 0 {
+	if qa := float64(rb.Allowable); qa > 0 {
 		return append(out, check.Compare("anchor.rock.platebearing", "Rock anchor head plate bearing on rock", units.KindPressure, pk.p, qa).
-			WithBasis("the plate's bearing pressure under characteristic actions against the rock's allowable pressure (RockPressure)").WithValues(pv))
+			WithBasis("the plate's bearing pressure under characteristic actions against the rock's allowable pressure (RockPressure): "+rb.Method).
+			WithValues(append([]check.Value{pv}, rb.Values()...)...))
 	}
 	return append(out, check.Record("anchor.rock.platebearing", "Rock anchor head plate bearing pressure", units.KindPressure, pk.p).
 		WithValues(pv).WithNote("no allowable pressure of the rock is known: compare with the rock's or the grout pad's strength"))

@@ -6,6 +6,7 @@ import (
 	"math/rand/v2"
 	"testing"
 
+	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/foundation"
 	"github.com/sagspan/sagspan/units"
 )
@@ -34,15 +35,15 @@ func TestRockAnchorHand(t *testing.T) {
 	near(t, "thread", byID(t, rs, "anchor.rock.thread").Provided, 0.9*0.78*steel/100, 1e-9)
 	near(t, "grout-bar", byID(t, rs, "anchor.rock.groutbar").Provided, math.Pi*0.025*3*2000/100, 1e-9)
 	near(t, "grout-rock", byID(t, rs, "anchor.rock.groutrock").Provided, math.Pi*0.075*3*350/100, 1e-9)
-	// The cone: the bars at zero spacing share one cone; the whole pull's
-	// vertical component 100 kN against its weight.
+	// The cone: the bars at zero spacing share one cone; the whole pull
+	// 200 kN along the bars against its weight resolved along them, W sin 30°.
 	w, _, err := testRockAnchor().ConeWeight(deg(30), rock)
 	if err != nil {
 		t.Fatal(err)
 	}
 	cone := byID(t, rs, "anchor.rock.cone")
-	near(t, "cone", cone.Provided, float64(w)/100e3, 1e-12)
-	near(t, "cone demand", cone.Demand, 100e3, 1e-12)
+	near(t, "cone", cone.Provided, float64(w)*0.5/200e3, 1e-12)
+	near(t, "cone demand", cone.Demand, 200e3, 1e-12)
 	// Partial: set A1 γG 1.35 (all permanent), γS 1.15, γa 1.1, EQU cone.
 	rs, err = testRockAnchor().Check(200*units.Kilonewton, deg(30), rock, &foundation.Basis{PartialFactors: true})
 	if err != nil {
@@ -51,7 +52,49 @@ func TestRockAnchorHand(t *testing.T) {
 	near(t, "partial steel", byID(t, rs, "anchor.rock.steel").Provided, steel/1.15/135, 1e-9)
 	near(t, "partial thread", byID(t, rs, "anchor.rock.thread").Provided, 0.9*0.78*steel/1.25/135, 1e-9)
 	near(t, "partial grout-rock", byID(t, rs, "anchor.rock.groutrock").Provided, math.Pi*0.075*3*350/1.1/135, 1e-9)
-	near(t, "EQU cone", byID(t, rs, "anchor.rock.cone").Provided, 0.9*float64(w)/(1.1*100e3), 1e-9)
+	near(t, "EQU cone", byID(t, rs, "anchor.rock.cone").Provided, 0.9*float64(w)*0.5/(1.1*200e3), 1e-9)
+}
+
+// TestRockConeAlongAxis: a flat bar in rock, 15° below horizontal, 2 m
+// free and 4 m bonded (apex 4 m along the bar), pulled by 150 kN, on the
+// allowable basis (factor 2 on the cone's weight, common practice). With
+// the rock's shear ignored, what holds the cone against a pull along its
+// axis is its weight's component along that axis:
+//
+//	demand 150 kN;  capacity W sin 15° = 0.2588 W
+//
+// The cone (cut by the rock surface and the plane of the heads) weighs
+// W ≈ 349 kN (ConeWeight, checked by hand bounds in TestRockConeInclined),
+// so the axis form gives 90.2 kN: provided 0.60, a failure by hand. The
+// vertical component alone, 150 sin 15° = 38.8 kN, against the whole W
+// gave a provided factor 9.0 and passed. For a vertical bar the two forms
+// agree (sin 90° = 1).
+func TestRockConeAlongAxis(t *testing.T) {
+	rock := foundation.Soil{UnitWeight: 25 * kNm3, Friction: deg(45), IsRock: true, GroutBond: 1e6, Allowable: 2e6}
+	ra := foundation.RockAnchor{BarDiameter: 0.032, YieldStrength: 500e6, HoleDiameter: 0.09, BondLength: 4, FreeLength: 2}
+	w, _, err := ra.ConeWeight(deg(15), rock)
+	if err != nil {
+		t.Fatal(err)
+	}
+	rs, err := ra.Check(150*units.Kilonewton, deg(15), rock, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	cone := byID(t, rs, "anchor.rock.cone")
+	sin15 := math.Sin(15 * math.Pi / 180)
+	near(t, "demand", cone.Demand, 150e3, 1e-12)
+	near(t, "capacity", cone.Capacity, float64(w)*sin15, 1e-12)
+	near(t, "W_a", valueOf(t, cone, "W_a"), float64(w)*sin15, 1e-12)
+	if vertical := float64(w) / (150e3 * sin15); vertical < 2 {
+		t.Errorf("the vertical form should pass this bar (provided %.2f) for the test to show the difference", vertical)
+	}
+	if cone.Status != check.Fail {
+		t.Errorf("flat bar cone %v (provided %.3f), want FAIL", cone.Status, cone.Provided)
+	}
+	// A vertical bar: the pull against the whole weight.
+	w90, _, _ := ra.ConeWeight(deg(90), rock)
+	rs, _ = ra.Check(150*units.Kilonewton, deg(90), rock, nil)
+	near(t, "vertical", byID(t, rs, "anchor.rock.cone").Provided, float64(w90)/150e3, 1e-12)
 }
 
 // TestRockConeVertical: one vertical bar lifts a right circular cone, by
@@ -194,6 +237,18 @@ func TestRockAnchorPlate(t *testing.T) {
 	near(t, "plate capacity", plate.Capacity, 275e6/1.67, 1e-9)
 	pb := byID(t, rs, "anchor.rock.platebearing")
 	near(t, "plate bearing", pb.Ratio, p/3e6, 1e-9)
+	near(t, "q_a among the values", valueOf(t, pb, "q_a"), 3e6, 1e-12)
+	// By the K_sp method (q_u 40 MPa, joints 0.5 m apart, 1 mm open) for
+	// the 0.3 m plate: K_sp = (3 + 0.5/0.3)/(10 √(1 + 300·0.001/0.5)),
+	// CFEM 2006 §9.2 [M].
+	rock.Allowable, rock.RockStrength, rock.JointSpacing, rock.JointAperture = 0, 40e6, 0.5, 0.001
+	ra.Plate.Side = 0.3
+	rs, _ = ra.Check(150e3, deg(40), rock, nil)
+	pb = byID(t, rs, "anchor.rock.platebearing")
+	ksp := (3 + 0.5/0.3) / (10 * math.Sqrt(1+300*0.001/0.5))
+	near(t, "K_sp plate capacity", pb.Capacity, ksp*40e6, 1e-12)
+	near(t, "K_sp among the values", valueOf(t, pb, "K_sp"), ksp, 1e-12)
+	near(t, "plate width among the values", valueOf(t, pb, "B_r"), 0.3, 1e-12)
 }
 
 func TestRockAnchorConsistency(t *testing.T) {

@@ -28,8 +28,13 @@ type RockBearing struct {
 	// characteristic (unfactored) actions.
 	Allowable units.Pressure
 	// Ksp is the K_sp coefficient when the rock-mass method was used
-	// (zero when the site's allowable pressure was).
-	Ksp float64
+	// (zero when the site's allowable pressure was), and Strength,
+	// Spacing, Aperture and Width the q_u, joint spacing c, opening δ and
+	// base width B it came from.
+	Ksp               float64
+	Strength          units.Pressure
+	Spacing, Aperture units.Length
+	Width             units.Length
 	// Method names the source of Allowable.
 	Method string
 }
@@ -40,6 +45,10 @@ func (r RockBearing) Values() []check.Value {
 		return []check.Value{check.Of("q_a", "allowable bearing pressure on rock given by the site report", r.Allowable)}
 	}
 	return []check.Value{
+		check.Of("q_u", "uniaxial compressive strength of intact rock cores", r.Strength),
+		check.Of("c_j", "spacing of the rock's discontinuities", r.Spacing),
+		check.Of("δ_j", "opening of the rock's discontinuities", r.Aperture),
+		check.Of("B_r", "width of the base for the K_sp method", r.Width),
 		check.Of("K_sp", "rock-mass coefficient of the K_sp method", units.Ratio(r.Ksp)),
 		check.Of("q_a", "allowable bearing pressure on rock, K_sp q_u", r.Allowable),
 	}
@@ -94,6 +103,7 @@ func RockPressure(s Soil, b units.Length) (RockBearing, error) {
 	ksp := (3 + ratio) / (10 * math.Sqrt(1+300*d/c))
 	return RockBearing{
 		Allowable: units.Pressure(ksp) * s.RockStrength, Ksp: ksp,
+		Strength: s.RockStrength, Spacing: s.JointSpacing, Aperture: s.JointAperture, Width: b,
 		Method: fmt.Sprintf("K_sp method of the Canadian Foundation Engineering Manual (2006) §9.2 (from memory): "+
 			"q_a = K_sp q_u, K_sp %.3f from joint spacing %v, opening %v; includes a factor of safety of about 3", ksp, s.JointSpacing, s.JointAperture),
 	}, nil

@@ -12,8 +12,14 @@ import (
 const (
 	// defaultSteelFactor is the factor of safety on the yield resistance of
 	// steel on the allowable basis, 1.67 (the Ω of allowable strength design
-	// for yielding, AISC 360-16 D2 and F1, from memory).
+	// for yielding, AISC 360-16 D2(a) and F1).
 	defaultSteelFactor = 1.67
+	// defaultRuptureFactor is the factor of safety on the ultimate
+	// (rupture) resistance of a thread on the allowable basis, 2.00 (the Ω
+	// of allowable strength design for tensile rupture and for threaded
+	// parts in tension, AISC 360-16 D2(b) and J3.6): fracture gives no
+	// warning, so it takes a larger factor than yielding.
+	defaultRuptureFactor = 2.0
 	// defaultRopeFactor is the factor of safety on a rope's breaking force
 	// on the allowable basis, 3.0, as the rope checks use (common practice).
 	defaultRopeFactor = 3.0
@@ -116,8 +122,10 @@ func (r AnchorRod) validate() error {
 //	thread:  T           against  F_t = min(A_s f_y / γM0, k2 f_u A_s / γM2),  k2 0.9
 //	                                                                   (EN 1993-1-8:2005 Table 3.4)
 //
-// Allowable basis: characteristic pull, resistances (γM0 = γM2 = 1) divided
-// by the Steel factor (1.67). Partial basis: the pull factored by set A1
+// Allowable basis: characteristic pull; the yield resistances (γM0 = 1)
+// divided by the Steel factor (1.67, AISC 360-16 D2(a)) and the thread's
+// rupture resistance k2 f_u A_s (γM2 = 1) by the Rupture factor (2.00,
+// AISC 360-16 D2(b) and J3.6). Partial basis: the pull factored by set A1
 // (EN 1997-1 Annex A) by VariableShare, γM0 1.0 and γM2 1.25 (EN 1993-1-1
 // 6.1 and EN 1993-1-8 Table 2.1 recommended values, from memory).
 // Special cases: a zero pull passes; invalid input gives an error wrapping
@@ -145,22 +153,26 @@ func (r AnchorRod) Check(pull units.Force, b *Basis) ([]check.Result, error) {
 	if fu == 0 {
 		fu = fy
 	}
-	gM0, gM2, fs := 1.0, 1.0, def(bs.Steel, defaultSteelFactor)
-	basis := fsBasis("the steel's resistance (EN 1993-1-1:2005 6.2.3, EN 1993-1-8:2005 Table 3.4, with γM = 1)", fs)
+	gM0, gM2, fs, fr := 1.0, 1.0, def(bs.Steel, defaultSteelFactor), def(bs.Rupture, defaultRuptureFactor)
+	basis := fsBasis("the steel's yield resistance (EN 1993-1-1:2005 6.2.3 with γM0 = 1; AISC 360-16 D2(a))", fs)
+	threadBasis := fmt.Sprintf("allowable basis: global factors of safety %.2f on the thread's yield resistance A_s f_y and %.2f on its rupture "+
+		"resistance k2 f_u A_s (EN 1993-1-8:2005 Table 3.4 with γM2 = 1; AISC 360-16 D2 and J3.6)", fs, fr)
 	if bs.PartialFactors {
-		gM0, gM2, fs = def(bs.GammaM0, 1.0), def(bs.GammaM2, 1.25), 1
+		gM0, gM2, fs, fr = def(bs.GammaM0, 1.0), def(bs.GammaM2, 1.25), 1, 1
 		basis = fmt.Sprintf("EN 1993-1-1:2005 6.2.3 (γM0 %.2f) and EN 1993-1-8:2005 Table 3.4 (k2 0.9, γM2 %.2f), pull under set A1 (EN 1997-1 Annex A)", gM0, gM2)
+		threadBasis = basis
 	}
 	npl := gross * fy / gM0 / fs
-	ft := math.Min(as*fy/gM0, threadK2*fu*as/gM2) / fs
+	ft := math.Min(as*fy/gM0/fs, threadK2*fu*as/gM2/fr)
 	vals := []check.Value{
 		check.Of("T", "force per rod", units.Force(t)),
 		check.Of("n", "number of rods", units.Ratio(n)),
+		check.Of("f_y", "yield strength of the rods", r.Yield),
 	}
 	return []check.Result{
 		check.Compare("anchor.rod.tension", "Anchor rod tension", units.KindForce, t, npl).WithBasis(basis).
 			WithValues(append(vals, check.Of("A", "gross area of a rod", units.Area(gross)))...),
-		check.Compare("anchor.rod.thread", "Anchor rod thread tension", units.KindForce, t, ft).WithBasis(basis).
+		check.Compare("anchor.rod.thread", "Anchor rod thread tension", units.KindForce, t, ft).WithBasis(threadBasis).
 			WithValues(append(vals, check.Of("A_s", "tensile stress area of the thread", units.Area(as)),
 				check.Of("f_u", "ultimate strength used; f_y when none is given", units.Pressure(fu)))...),
 	}, nil

@@ -41,13 +41,46 @@ func TestAnchorRodHand(t *testing.T) {
 	// Default thread area 0.78 of the gross, f_u = f_y.
 	rod.ThreadArea, rod.Ultimate = 0, 0
 	rs, _ = rod.Check(300*units.Kilonewton, nil)
-	near(t, "default thread", byID(t, rs, "anchor.rod.thread").Capacity, 0.9*355e6*0.78*gross/1.67, 1e-12)
+	// f_u = f_y: the rupture term 0.9 f_u A_s with its own factor 2.00
+	// (AISC 360-16 D2(b)) governs over A_s f_y/1.67.
+	near(t, "default thread", byID(t, rs, "anchor.rod.thread").Capacity, 0.9*355e6*0.78*gross/2.0, 1e-12)
 	for _, bad := range []foundation.AnchorRod{{Diameter: 0, Yield: 355e6}, {Diameter: 0.03, Yield: 355e6, Ultimate: 300e6},
 		{Diameter: 0.03, Yield: 355e6, ThreadArea: 1e-3}, {Count: -1, Diameter: 0.03, Yield: 355e6}} {
 		if _, err := bad.Check(1e3, nil); !errors.Is(err, foundation.ErrInvalid) {
 			t.Errorf("%+v: %v", bad, err)
 		}
 	}
+}
+
+// TestAnchorRodThreadRupture: on the allowable basis a thread's fracture
+// takes the factor of safety of rupture, Ω = 2.00, and its yield that of
+// yielding, Ω = 1.67 (AISC 360-16 D2(a), D2(b) and J3.6 [R: the two Ω read
+// in a summary of D2; J3.6's Ω = 2.00 on 0.75 F_u A_b, from memory]). A
+// grade 8.8 M30 rod (f_y 640, f_u 800 MPa, A_s 561 mm², ISO 898-1 [M]):
+//
+//	yield   561·640/1.67      = 214.99 kN
+//	rupture 0.9·800·561/2.00  = 201.96 kN  → governs
+//
+// (with one factor 1.67 on both, as before, the rupture term gave
+// 241.87 kN and the yield term's 214.99 kN governed: 6 % more than the Ω of
+// rupture allows). AISC J3.6's own form
+// for the same rod, 0.75·800·706.86/2.00 = 212.06 kN, lies within 5 %.
+func TestAnchorRodThreadRupture(t *testing.T) {
+	rod := foundation.AnchorRod{Diameter: 30 * units.Millimetre, Yield: 640 * units.Megapascal,
+		Ultimate: 800 * units.Megapascal, ThreadArea: 561e-6}
+	rs, err := rod.Check(100*units.Kilonewton, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	thread := byID(t, rs, "anchor.rod.thread")
+	near(t, "thread capacity", thread.Capacity, 201.96e3, 1e-4)
+	aisc := 0.75 * 800e6 * math.Pi * 0.03 * 0.03 / 4 / 2.0
+	if r := thread.Capacity / aisc; r < 0.9 || r > 1.0 {
+		t.Errorf("thread capacity %.1f kN against AISC J3.6's %.1f kN: ratio %.3f", thread.Capacity/1e3, aisc/1e3, r)
+	}
+	// The factors can be set: Rupture 1.67 gives back the old value.
+	rs, _ = rod.Check(100*units.Kilonewton, &foundation.Basis{Rupture: 1.67})
+	near(t, "rupture 1.67", byID(t, rs, "anchor.rod.thread").Capacity, 214.99e3, 1e-4)
 }
 
 // TestBendEfficiency: the wire-rope industry's table of strength

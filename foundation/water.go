@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 
+	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/units"
 )
 
@@ -61,6 +62,15 @@ func (w Water) depth() float64 {
 		return math.Inf(1)
 	}
 	return float64(w.Depth)
+}
+
+// values returns the water's depth below the ground as a check value,
+// none when there is no water.
+func (w Water) values() []check.Value {
+	if !w.Present {
+		return nil
+	}
+	return []check.Value{check.Of("d_w", "depth of the water level below the ground at the foundation; negative above it", w.Depth)}
 }
 
 // String describes the water for a basis text.

@@ -92,14 +92,14 @@ func TestAnchorBlockValuesRoundTrip(t *testing.T) {
 	ic := iq - (1-iq)/(nc*math.Tan(phi))
 	q := sv2
 	want := map[string]map[string]float64{
-		"anchor.sliding":     {"N": n, "δ": 24 * math.Pi / 180, "R_b": n * math.Tan(24*math.Pi/180), "e": e, "μ": 0.5, "P_p": pp, "P_a": pa},
-		"anchor.overturning": {"W": w, "x_W": 1.5, "U": u, "x_U": 1.5},
-		"anchor.uplift":      {"F_z": fz, "W": w, "U": u},
+		"anchor.sliding":     {"N": n, "δ": 24 * math.Pi / 180, "R_b": n * math.Tan(24*math.Pi/180), "e": e, "μ": 0.5, "P_p": pp, "P_a": pa, "d_w": 0.75},
+		"anchor.overturning": {"W": w, "x_W": 1.5, "U": u, "x_U": 1.5, "d_w": 0.75},
+		"anchor.uplift":      {"F_z": fz, "W": w, "U": u, "d_w": 0.75},
 		"anchor.bearing": {"N": n, "H": fx, "e": e, "q_max": mean * (1 + 6*e/3), "q_min": mean * (1 - 6*e/3), "l_c": 3,
 			"A'": bp * lEff, "x_R": 1.5 + e, "φ": phi, "c": 0, "q": q, "γ_b": gs, "B'": bp, "L'": lEff,
 			"N_c": nc, "N_q": nq, "N_γ": ng, "s_c": sc, "s_q": sq, "s_γ": sg, "d_c": 1, "d_q": 1, "d_γ": 1,
-			"i_c": ic, "i_q": iq, "i_γ": ig, "m": mExp, "q_c": 0, "q_q": q * nq * sq * iq, "q_γ": 0.5 * gs * bp * ng * sg * ig,
-			"q_ult": q*nq*sq*iq + 0.5*gs*bp*ng*sg*ig},
+			"i_c": ic, "i_q": iq, "i_γ": ig, "θ": math.Pi / 2, "m": mExp, "q_c": 0, "q_q": q * nq * sq * iq, "q_γ": 0.5 * gs * bp * ng * sg * ig,
+			"q_ult": q*nq*sq*iq + 0.5*gs*bp*ng*sg*ig, "d_w": 0.75},
 	}
 	if e > 0.5 {
 		t.Fatalf("test geometry: e %v outside the kern", e)
@@ -124,9 +124,10 @@ func TestAnchorBlockValuesRoundTrip(t *testing.T) {
 }
 
 // TestAnchorBlockUndrained: a block on soft clay is checked drained and
-// undrained; undrained sliding resists by A'c_u (EN 1997-1:2004 6.5.3(12)
-// [M]) on the effective base, capped at 0.4 N where the back of the base
-// lifts (a gap lets water in).
+// undrained; undrained sliding resists by A'c_u (EN 1997-1:2004 6.5.3(11)
+// [M]) on the effective base, capped at 0.4 N (6.5.3(12) [M]) because the
+// pull opens a gap behind the block through which water or air reach its
+// base: always, whatever the water level.
 func TestAnchorBlockUndrained(t *testing.T) {
 	clay := foundation.Soil{UnitWeight: 17 * kNm3, Friction: deg(26), Undrained: 20 * units.Kilopascal}
 	blk := testBlock()
@@ -138,17 +139,22 @@ func TestAnchorBlockUndrained(t *testing.T) {
 	slide := byID(t, rs, "anchor.sliding")
 	// Hand calculation, kN and m: N = 270 − 33.8095 = 236.19; e as in
 	// TestAnchorBlockHand, (72.5046·1.2 − 33.8095)/236.19 = 0.22523 < 3/6,
-	// so no gap: A' = (3 − 2e)·2.5 = 6.3738 m², R = 20·A' = 127.48 kN
-	// against 72.5046: 1.7582. Drained: 236.19 tan(⅔·26°) = 72.39: 0.9984.
+	// A' = (3 − 2e)·2.5 = 6.3738 m², 20·A' = 127.48 kN, more than
+	// 0.4 N = 94.48 kN, which holds: utilisation 1.5·72.5046/94.48 = 1.1511
+	// (without the cap 0.8531, a pass). Drained: 236.19 tan(⅔·26°) =
+	// 72.39 kN, utilisation 1.5023, which governs.
 	fx, fz := 80*math.Cos(25*math.Pi/180), 80*math.Sin(25*math.Pi/180)
 	n := 270 - fz
 	e := (fx*1.2 - fz) / n
-	ru := 20 * (3 - 2*e) * 2.5
+	ru := math.Min(20*(3-2*e)*2.5, 0.4*n)
 	rd := n * math.Tan(2.0/3*26*math.Pi/180)
 	ud, _ := slide.Value("U_dr")
 	uu, _ := slide.Value("U_un")
 	near(t, "drained utilisation", ud.Value, 1.5*fx/rd, 1e-9)
 	near(t, "undrained utilisation", uu.Value, 1.5*fx/ru, 1e-9)
+	if uu.Value <= 1 {
+		t.Errorf("undrained utilisation %.4f passes: the cap was not applied", uu.Value)
+	}
 	if !strings.HasPrefix(slide.Basis, "drained (long-term) condition governs") || slide.Status != check.Fail {
 		t.Errorf("sliding %v, basis %q", slide.Status, slide.Basis)
 	}

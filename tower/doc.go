@@ -29,7 +29,8 @@
 // statics form, ΣM/ΣV with the column's own weight, is reported beside it
 // (and may be chosen). Both directions are checked: along the bridge with
 // the saddles' offsets and travel, across it with wind on the swung ropes
-// and on the column.
+// and on the column; EccentricityBoth checks the two at once against the
+// kern of the rectangle, a rhombus.
 //
 // # Columns
 //
@@ -37,8 +38,11 @@
 // imperfection, minimum eccentricity, second-order moments by the
 // nominal-stiffness method and biaxial bending; SteelColumn a tube or a
 // two-leg frame to EN 1993-1-1 (flexural buckling and the 6.3.3
-// interaction). The top restraint (Restraint) sets the effective length: a
-// roller or sliding saddle leaves the top free (a cantilever, l0 = 2 l).
+// interaction). The top restraint (Restraint) and the flexibility of the
+// base set the effective length (EffectiveLengthFactor): a roller or
+// sliding saddle leaves the top free (a cantilever, l0 = 2.20 l on the
+// default base flexibility 0.1, 2 l on a rigid one); a clamped rope holds
+// it by a spring.
 // RCSection and Tube are the section checks beneath them.
 //
 // # Sign convention
@@ -96,7 +100,9 @@
 //     concrete structures — Part 1-1: General rules and rules for buildings.
 //     Table 2.1N (γC, γS), 3.1.6 (f_cd, α_cc), Table 3.1 (E_cm), 3.1.7(3)
 //     (rectangular stress block), 5.2 (geometric imperfections), 5.8.3
-//     (slenderness criterion, effective length, Figure 5.7), 5.8.4 (creep),
+//     (slenderness criterion, effective length, Figure 5.7, eq. 5.15 and
+//     5.16 and the recommended minimum flexibility 0.1 of an end
+//     restraint, 5.8.3.2(3)), 5.8.4 (creep),
 //     5.8.6(3) (E_cd), 5.8.7 (nominal stiffness), 5.8.9 (biaxial bending),
 //     6.1 (strain limits, minimum eccentricity 6.1(4)), 12.3.1 and 12.6
 //     (plain concrete).
@@ -125,7 +131,8 @@
 //     of Euler and Eytelwein, T2 = T1 e^{μβ}).
 //   - Timoshenko & Gere — S. P. Timoshenko and J. M. Gere, Theory of
 //     Elastic Stability, 2nd ed., McGraw-Hill, 1961, ch. 2 (Euler load;
-//     the cantilever's effective length 2 l).
+//     the cantilever's effective length 2 l; columns on elastic supports,
+//     the fixed-base, pinned-top root tan u = u, u = 4.4934).
 //   - Das — B. M. Das, Principles of Foundation Engineering, Cengage, the
 //     chapter on eccentrically loaded shallow foundations (middle-third
 //     rule, triangular contact pressure).

@@ -280,3 +280,34 @@ func TestEccentricityErrors(t *testing.T) {
 		}
 	}
 }
+
+// TestEccentricityBothKernRhombus: the resultant inside both one-direction
+// kerns can still leave the kern of the rectangle, a rhombus. On a
+// 0.9 × 1.5 m section under N at e_d = 0.1 m (kern 0.15 m) and e_b = 0.15 m
+// (kern 0.25 m) each check passes (0.667, 0.6) but the corner stress by
+// σ = N/A − N e_d/(b d²/6) − N e_b/(d b²/6) (elementary bending theory,
+// common practice) is tensile: u = 1.267 fails. The utilisation is 1
+// exactly where the corner stress is zero.
+func TestEccentricityBothKernRhombus(t *testing.T) {
+	const d, b, n = 0.9, 1.5, 400e3
+	corner := func(ed, eb float64) float64 { return n/(b*d) - n*ed/(b*d*d/6) - n*eb/(d*b*b/6) }
+	r, err := tower.EccentricityBoth(0.1, d/6, -0.15, b/6)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.Status != check.Fail || !near(r.Demand, 0.1/0.15+0.15/0.25, 1e-12) || !(corner(0.1, 0.15) < 0) {
+		t.Errorf("inside both kerns, outside the rhombus: %v (corner stress %g)", r, corner(0.1, 0.15))
+	}
+	// On the rhombus' edge the corner stress vanishes and u = 1.
+	ed := 0.06
+	eb := (1 - ed/(d/6)) * b / 6
+	r, _ = tower.EccentricityBoth(units.Length(ed), d/6, units.Length(eb), b/6)
+	if !near(r.Demand, 1, 1e-12) || math.Abs(corner(ed, eb)) > 1e-9*n {
+		t.Errorf("on the edge: u %g, corner stress %g", r.Demand, corner(ed, eb))
+	}
+	for _, bad := range [][4]float64{{math.NaN(), 0.1, 0, 0.1}, {0, 0, 0, 0.1}, {0, 0.1, math.Inf(1), 0.1}, {0, 0.1, 0, -1}} {
+		if _, err := tower.EccentricityBoth(units.Length(bad[0]), units.Length(bad[1]), units.Length(bad[2]), units.Length(bad[3])); !errors.Is(err, tower.ErrInvalid) {
+			t.Errorf("%v: %v", bad, err)
+		}
+	}
+}

@@ -291,8 +291,8 @@ type Balance struct {
 // rope was set over the saddle.
 //
 // Special cases: a wrap angle that is impossible for a groove with friction,
-// a sliding saddle with a vertical force that lifts it, and invalid input
-// give errors.
+// a sliding or roller saddle that the ropes lift off (before it moves, or
+// in the place it moves to; ErrLiftOff), and invalid input give errors.
 func (s Saddle) Balance(span RopePull, backstay units.Angle, held units.Force) (Balance, error) {
 	if err := s.validate(); err != nil {
 		return Balance{}, err
@@ -338,6 +338,12 @@ func (s Saddle) Balance(span RopePull, backstay units.Angle, held units.Force) (
 			lo, hi = ts/k, ts*k
 		}
 	}
+	if lo > hi {
+		// A sliding saddle whose span rope pulls upward: no backstay
+		// tension both holds it on its plate and keeps it pressed down.
+		return Balance{}, fmt.Errorf("tower: no backstay tension holds the sliding saddle (bounds %v > %v): the ropes lift it off its plate: %w",
+			units.Force(lo), units.Force(hi), ErrLiftOff)
+	}
 	b := Balance{Backstay: held, Lower: units.Force(lo), Upper: units.Force(hi)}
 	switch t := float64(held); {
 	case t < lo:
@@ -346,6 +352,10 @@ func (s Saddle) Balance(span RopePull, backstay units.Angle, held units.Force) (
 		b.Backstay, b.Motion, b.Direction = units.Force(lo), motion, 1
 	case t > hi:
 		b.Backstay, b.Motion, b.Direction = units.Force(hi), motion, -1
+	}
+	if s.Kind != Fixed && !(v+float64(b.Backstay)*sb > 0) {
+		return Balance{}, fmt.Errorf("tower: once the %s saddle has moved the ropes pull it upward (backstay %v): they lift it off: %w",
+			s.Kind, b.Backstay, ErrLiftOff)
 	}
 	return b, nil
 }

@@ -285,3 +285,26 @@ func TestSaddleBalance(t *testing.T) {
 		}
 	}
 }
+
+func FuzzSaddleBalance(f *testing.F) {
+	f.Add(uint8(0), uint8(1), 0.1, 0.05, 300e3, 0.2, 0.0, 0.4, 290e3)
+	f.Add(uint8(1), uint8(0), 0.0, 0.3, 100e3, -0.3, 0.2, 0.1, 50e3)
+	f.Add(uint8(0), uint8(1), 0.2, 0.0, 300e3, -0.35, 0.0, 0.01, 290e3)
+	f.Fuzz(func(t *testing.T, kind, groove uint8, mu, plate, ts, as, swing, ab, held float64) {
+		s := tower.Saddle{Kind: tower.SaddleKind(kind % 4), Groove: tower.Groove(groove % 4), GrooveFriction: mu, Friction: plate}
+		span := tower.RopePull{Tension: units.Force(ts), Angle: units.Angle(as), Swing: units.Angle(swing)}
+		b, err := s.Balance(span, units.Angle(ab), units.Force(held))
+		if err != nil {
+			if !errors.Is(err, tower.ErrInvalid) && !errors.Is(err, tower.ErrLiftOff) {
+				t.Fatalf("unexpected error %v", err)
+			}
+			return
+		}
+		if math.IsNaN(float64(b.Backstay)) || math.IsInf(float64(b.Backstay), 0) || b.Backstay < 0 && held >= 0 && s.Kind == tower.Fixed {
+			t.Fatalf("backstay tension %v from %+v", b.Backstay, b)
+		}
+		if b.Lower > b.Upper {
+			t.Fatalf("bounds %v > %v", b.Lower, b.Upper)
+		}
+	})
+}

@@ -9,38 +9,83 @@ import (
 )
 
 // Restraint is how a tower column's top is held in one direction, which
-// sets its effective (buckling) length l0 from its length l.
+// with the flexibility of its base sets its effective (buckling) length l0
+// (see EffectiveLengthFactor).
 type Restraint int
 
 // The restraints.
 const (
 	// FreeTop: nothing holds the top against sway; the column is a
-	// cantilever fixed at its base, l0 = 2 l (EN 1992-1-1:2004 5.8.3.2,
-	// Figure 5.7 b; any structural text). A roller or sliding saddle gives
-	// no top restraint along the bridge, and no saddle holds the top across
-	// it.
+	// cantilever on its base, l0 = 2 l on a rigid base (EN 1992-1-1:2004
+	// 5.8.3.2, Figure 5.7 b), 2.20 l on the default base flexibility. A
+	// roller or sliding saddle gives no top restraint along the bridge, and
+	// no saddle holds the top across it.
 	FreeTop Restraint = iota
-	// HeldTop: the top is held against sway but free to rotate, the base
-	// fixed, l0 = 0.7 l (Figure 5.7 c): a fixed saddle with the rope
-	// clamped on it, the span and backstay bracing the top along the
-	// bridge.
+	// HeldTop: the top is held rigidly against sway but free to rotate,
+	// l0 = 0.70 l on a rigid base (Figure 5.7 c), 0.76 l on the default
+	// base flexibility: a top braced by a structure much stiffer than the
+	// column.
 	HeldTop
+	// SpringTop: the top is held against sway by a spring of the stiffness
+	// the column is given (RCColumn.AlongSpring, SteelColumn.AlongSpring),
+	// free to rotate: a fixed saddle with the rope clamped, held by the
+	// stretch of its backstays. l0 lies between the HeldTop and FreeTop
+	// values.
+	SpringTop
 )
 
-// Factor returns l0/l: 2 for FreeTop, 0.7 for HeldTop.
+// Factor returns l0/l on a base of DefaultBaseFlexibility: 2.20 for
+// FreeTop, 0.76 for HeldTop, and for SpringTop, whose spring it does not
+// know, the FreeTop value.
 func (r Restraint) Factor() float64 {
+	s := 0.0
 	if r == HeldTop {
-		return 0.7
+		s = math.Inf(1)
 	}
-	return 2
+	f, _ := EffectiveLengthFactor(DefaultBaseFlexibility, s)
+	return f
 }
 
-// String names the restraint with its effective length.
+// String names the restraint.
 func (r Restraint) String() string {
-	if r == HeldTop {
-		return "top held against sway, l0 = 0.7 l"
+	switch r {
+	case HeldTop:
+		return "top held rigidly against sway"
+	case SpringTop:
+		return "top held against sway by the ropes' stretch (a spring)"
 	}
-	return "top free (cantilever), l0 = 2 l"
+	return "top free (cantilever)"
+}
+
+// valid reports whether r is one of the restraints.
+func (r Restraint) valid() bool { return r == FreeTop || r == HeldTop || r == SpringTop }
+
+// effectiveLength returns l0 for a column of length l and stiffness ei
+// restrained at its top by r (with lateral stiffness spring, N/m, for
+// SpringTop) on a base of flexibility k, and the relative top stiffness
+// s = K l³/EI used.
+func effectiveLength(r Restraint, l, k, spring, ei float64) (l0, s float64, err error) {
+	switch r {
+	case HeldTop:
+		s = math.Inf(1)
+	case SpringTop:
+		s = spring * l * l * l / ei
+	}
+	f, err := EffectiveLengthFactor(k, s)
+	return f * l, s, err
+}
+
+// lengthBasis describes the effective length in words for a result's basis.
+func lengthBasis(r Restraint, k float64) string {
+	b := fmt.Sprintf("%s, base flexibility k %.3g (EN 1992-1-1:2004 5.8.3.2(3)", r, k)
+	if k == DefaultBaseFlexibility {
+		b += ", the recommended minimum: a footing is never rigid"
+	}
+	b += "), l0 from the column on elastic end restraints (Timoshenko & Gere ch. 2)"
+	if r == SpringTop {
+		b += "; the ropes' spring counts the backstays' stretch only, with the column's largest nominal stiffness (conservative)"
+	}
+	return b
 }
 
 // ColumnActions are the design actions on a tower column at its base
@@ -91,6 +136,13 @@ type RCColumn struct {
 	Length units.Length
 	// Along and Across are the restraints of the top in each direction.
 	Along, Across Restraint
+	// AlongSpring and AcrossSpring are the lateral stiffnesses, in N/m, of
+	// what holds the top in that direction when its restraint is SpringTop.
+	AlongSpring, AcrossSpring float64
+	// BaseFlexibility is the relative flexibility k = (θ/M)(EI/l) of the
+	// base's rotational restraint (EN 1992-1-1:2004 5.8.3.2(3)); zero means
+	// DefaultBaseFlexibility.
+	BaseFlexibility float64
 	// Creep is the creep coefficient φ(∞, t0); zero means DefaultCreep.
 	// The effective creep ratio is φ_ef = φ(∞, t0) · M_0Eqp / M_0Ed (5.19).
 	Creep float64
@@ -109,13 +161,8 @@ func (c RCColumn) validate() error {
 	if err := positive("RCColumn.Length", c.Length); err != nil {
 		return err
 	}
-	for _, r := range []struct {
-		n string
-		r Restraint
-	}{{"RCColumn.Along", c.Along}, {"RCColumn.Across", c.Across}} {
-		if r.r != FreeTop && r.r != HeldTop {
-			return invalid(r.n, int(r.r), "is not FreeTop or HeldTop")
-		}
+	if err := validRestraints("RCColumn", c.Along, c.Across, c.AlongSpring, c.AcrossSpring, c.BaseFlexibility); err != nil {
+		return err
 	}
 	if err := nonNegative("RCColumn.Creep", units.Ratio(c.Creep)); err != nil {
 		return err
@@ -124,6 +171,38 @@ func (c RCColumn) validate() error {
 		return invalid("RCColumn.Creep", c.Creep, "is beyond any creep coefficient of EN 1992-1-1 Figure 3.1")
 	}
 	return nonNegative("RCColumn.Ecm", c.Ecm)
+}
+
+// validRestraints checks the restraints, springs and base flexibility of a
+// column.
+func validRestraints(name string, along, across Restraint, alongSpring, acrossSpring, k float64) error {
+	for _, r := range []struct {
+		n string
+		r Restraint
+		k float64
+	}{{name + ".Along", along, alongSpring}, {name + ".Across", across, acrossSpring}} {
+		if !r.r.valid() {
+			return invalid(r.n, int(r.r), "is not FreeTop, HeldTop or SpringTop")
+		}
+		if err := nonNegative(r.n+"Spring", units.Ratio(r.k)); err != nil {
+			return err
+		}
+	}
+	if err := nonNegative(name+".BaseFlexibility", units.Ratio(k)); err != nil {
+		return err
+	}
+	if k > 100 {
+		return invalid(name+".BaseFlexibility", k, "is beyond any base that holds a column (at most 100)")
+	}
+	return nil
+}
+
+// baseFlexibility returns k, or DefaultBaseFlexibility when it is zero.
+func baseFlexibility(k float64) float64 {
+	if k == 0 {
+		return DefaultBaseFlexibility
+	}
+	return k
 }
 
 // ModulusEN1992 returns the secant modulus of elasticity of concrete of
@@ -146,6 +225,7 @@ type direction struct {
 	name        string // "along the bridge"
 	sec         RCSection
 	restraint   Restraint
+	spring, k   float64 // top spring (N/m) for SpringTop; base flexibility
 	m, mqp      float64 // first-order design and quasi-permanent moments
 	nEd, nQP    float64
 	phiInf      float64
@@ -167,7 +247,10 @@ type columnDirection struct {
 //	Both    tower.column_biaxial  both at once (5.8.9(4))
 //
 // In each direction, with h the section's dimension in that direction,
-// b the other, l0 = Restraint.Factor · l, i = h/√12:
+// b the other, l0 from the top's Restraint and the base flexibility k
+// (EffectiveLengthFactor; for SpringTop the spring's share is taken against
+// the largest nominal stiffness, k2 = 0.20 and φ_ef = 0, which gives the
+// longest l0), i = h/√12:
 //
 //	λ = l0 / i,   n = N_Ed/(A_c f_cd),   ω = A_s f_yd/(A_c f_cd)
 //	λ_lim = 20 A B C / √n,   A = 1/(1 + 0.2 φ_ef),  B = √(1 + 2ω),  C = 0.7     (5.8.3.1)
@@ -185,7 +268,8 @@ type columnDirection struct {
 // clause gives (conservative for the triangular moment of a force at the
 // top). N_Ed ≥ N_B fails: the column buckles. φ_ef = φ(∞,t0)·M_0Eqp/M_0Ed
 // (5.19) with the quasi-permanent moment built as M_0Ed from the
-// quasi-permanent actions. The imperfection is applied in both directions
+// quasi-permanent actions, and no cap: φ_ef exceeds φ(∞,t0) where the
+// permanent actions bend the column more than the design case does. The imperfection is applied in both directions
 // (5.8.9(2) allows the more unfavourable one only: conservative). The
 // section resistance M_Rd(N_Ed) is RCSection.MomentCapacity's, and N_Ed
 // beyond the section's axial resistance fails on force.
@@ -227,13 +311,14 @@ func (c RCColumn) Check(a ColumnActions) (ColumnResults, error) {
 		nqp, alongQP, acrossQP = a.N, a.Along, a.Across
 	}
 	dirs := [2]direction{
-		{name: "along the bridge", sec: c.Section, restraint: c.Along, m: float64(a.Along), mqp: float64(alongQP)},
-		{name: "across the bridge", sec: c.Section.Turned(), restraint: c.Across, m: float64(a.Across), mqp: float64(acrossQP)},
+		{name: "along the bridge", sec: c.Section, restraint: c.Along, spring: c.AlongSpring, m: float64(a.Along), mqp: float64(alongQP)},
+		{name: "across the bridge", sec: c.Section.Turned(), restraint: c.Across, spring: c.AcrossSpring, m: float64(a.Across), mqp: float64(acrossQP)},
 	}
 	var out [2]columnDirection
 	for k := range dirs {
 		d := &dirs[k]
 		d.nEd, d.nQP, d.phiInf, d.ecm, d.length = float64(a.N), float64(nqp), phiInf, ecm, float64(c.Length)
+		d.k = baseFlexibility(c.BaseFlexibility)
 		r, err := d.check()
 		if err != nil {
 			return ColumnResults{}, err
@@ -291,7 +376,20 @@ func (d *direction) check() (columnDirection, error) {
 	sec := d.sec
 	md := sec.model(d.m < 0)
 	h, b, l := md.h, md.b, d.length
-	l0 := d.restraint.Factor() * l
+	// The top spring counts against the largest nominal stiffness the
+	// column can have (k2 = 0.20, no creep, 5.8.7.2): the longest l0.
+	ecd := d.ecm / 1.2
+	ic := b * h * h * h / 12
+	var is float64
+	for _, l := range md.layers() {
+		is += l.area * (l.depth - h/2) * (l.depth - h/2)
+	}
+	k1 := math.Sqrt(float64(sec.Fc) / 1e6 / 20)
+	eiMax := k1*0.20*ecd*ic + md.es*is
+	l0, sTop, err := effectiveLength(d.restraint, l, d.k, d.spring, eiMax)
+	if err != nil {
+		return columnDirection{}, err
+	}
 	i := h / math.Sqrt(12)
 	lam := l0 / i
 	fcd := md.sigma // η fcd (η = 1 up to C50/60)
@@ -310,8 +408,10 @@ func (d *direction) check() (columnDirection, error) {
 	}
 	m0Ed, m0qp := m0(d.nEd, d.m), m0(d.nQP, d.mqp)
 	phiEf := d.phiInf
-	if m0Ed > 0 {
-		phiEf = d.phiInf * math.Min(1, m0qp/m0Ed)
+	if m0Ed > 0 && d.nEd > 0 {
+		// Eq. 5.19, no cap: a permanent moment larger than the design one
+		// locks in more creep than φ(∞,t0) times the design moment.
+		phiEf = math.Min(d.phiInf*m0qp/m0Ed, math.MaxFloat64)
 	}
 	aa := 1 / (1 + 0.2*phiEf)
 	bb := math.Sqrt(1 + 2*omega)
@@ -325,19 +425,32 @@ func (d *direction) check() (columnDirection, error) {
 		check.Of("N_Ed", "design axial force (compression +)", units.Force(d.nEd)),
 		check.Of("M_0", "first-order design moment from the applied forces", units.Moment(d.m)),
 		check.Of("l0", "effective length, "+d.restraint.String(), units.Length(l0)),
+		check.Of("k_base", "relative flexibility of the base restraint (5.8.3.2(3))", units.Ratio(d.k)),
 		check.Of("λ", "slenderness l0/i", units.Ratio(lam)),
 		check.Of("n", "relative axial force N_Ed/(A_c f_cd)", units.Ratio(n)),
-		check.Of("φ_ef", "effective creep ratio", units.Ratio(phiEf)),
+		check.Of("ω", "mechanical reinforcement ratio A_s f_yd/(A_c f_cd)", units.Ratio(omega)),
+		check.Of("M_0Eqp", "first-order quasi-permanent moment with imperfection, for creep", units.Moment(m0qp)),
+		check.Of("φ_ef", "effective creep ratio φ(∞,t0) M_0Eqp/M_0Ed (5.19)", units.Ratio(phiEf)),
+		check.Of("A_λ", "factor 1/(1 + 0.2 φ_ef) of the slenderness limit", units.Ratio(aa)),
+		check.Of("B_λ", "factor √(1 + 2ω) of the slenderness limit", units.Ratio(bb)),
+		check.Of("C_λ", "factor of the slenderness limit, 0.7 (unbraced, or moments from transverse load)", units.Ratio(cc)),
+		check.Of("θ_i", "inclination of the geometric imperfection θ0 α_h (5.2(5)), θ0 1/200", units.Ratio(thetaI)),
 		check.Of("e_i", "eccentricity of the geometric imperfection θ_i l0/2 (5.2)", units.Length(ei)),
 		check.Of("e_0", "minimum eccentricity max(h/30, 20 mm) (6.1(4))", units.Length(e0)),
 		check.Of("M_0Ed", "first-order design moment with imperfection, at least N_Ed e_0", units.Moment(m0Ed)),
 		check.Of("N_Rd", "axial resistance of the section in compression", units.Force(comp)),
 	}
+	if d.restraint == SpringTop {
+		vals = append(vals,
+			check.Of("K_top", "lateral stiffness holding the top (a force per metre of sway)", units.LoadPerLength(d.spring)),
+			check.Of("EI_max/l³", "the column's stiffness scale from its largest nominal stiffness EI_max (k2 0.20, no creep, 5.8.7.2)", units.LoadPerLength(eiMax/(l*l*l))),
+			check.Of("s_top", "relative stiffness of the top spring K l³/EI_max", units.Ratio(sTop)))
+	}
 	if n > 0 { // in tension there is no slenderness limit
 		vals = append(vals, check.Of("λ_lim", "slenderness limit 20·A·B·C/√n (5.8.3.1)", units.Ratio(lamLim)))
 	}
 	basis := "EN 1992-1-1:2004, " + d.name + ": slenderness 5.8.3.1 (C 0.7), imperfection 5.2, minimum eccentricity 6.1(4), " +
-		"second-order moments by the nominal-stiffness method 5.8.7 (c0 8), section 3.1.7(3)/6.1 stress block; " + d.restraint.String()
+		"second-order moments by the nominal-stiffness method 5.8.7 (c0 8), section 3.1.7(3)/6.1 stress block; " + lengthBasis(d.restraint, d.k)
 	var out columnDirection
 	if d.nEd > comp || d.nEd < tens {
 		r := check.Compare(id, title, units.KindForce, math.Abs(d.nEd), math.Abs(pick(d.nEd > 0, comp, tens))).
@@ -352,15 +465,8 @@ func (d *direction) check() (columnDirection, error) {
 	case plain && d.nEd > 0:
 		return d.plainCheck(md, l0, ei, e0, vals)
 	case second:
-		k1 := math.Sqrt(float64(sec.Fc) / 1e6 / 20)
 		k2 := math.Min(0.20, n*lam/170)
 		kc := k1 * k2 / (1 + phiEf)
-		ecd := d.ecm / 1.2
-		ic := b * h * h * h / 12
-		var is float64
-		for _, l := range md.layers() {
-			is += l.area * (l.depth - h/2) * (l.depth - h/2)
-		}
 		ei2 := kc*ecd*ic + md.es*is
 		nb := math.Pi * math.Pi * ei2 / (l0 * l0)
 		beta := math.Pi * math.Pi / 8
@@ -416,11 +522,12 @@ func (d *direction) plainCheck(md rcModel, l0, ei, e0 float64, vals []check.Valu
 	phi := math.Min(1.14*(1-2*etot/h)-0.02*l0/h, 1-2*etot/h)
 	nrd := math.Max(0, b*h*fcdpl*phi)
 	vals = append(vals,
+		check.Of("f_cd,pl", "design strength of plain concrete α_cc,pl f_ck/γ_c (12.3.1)", units.Pressure(fcdpl)),
 		check.Of("e_tot", "total eccentricity e_0 + e_i (12.6.5.2)", units.Length(etot)),
 		check.Of("Φ", "factor for eccentricity and slenderness (12.11)", units.Ratio(phi)),
 		check.Of("N_Rd,pl", "resistance of the plain column (12.10)", units.Force(nrd)))
 	basis := "EN 1992-1-1:2004 12.6.5.2 simplified method for plain concrete columns, " + d.name +
-		" (ρ < 0.002: the nominal-stiffness method of 5.8.7 does not apply), from memory; " + d.restraint.String()
+		" (ρ < 0.002: the nominal-stiffness method of 5.8.7 does not apply), from memory; " + lengthBasis(d.restraint, d.k)
 	r := check.Compare(id, title, units.KindForce, d.nEd, nrd).WithBasis(basis).WithValues(vals...)
 	var out columnDirection
 	if l0/h > 25 {

@@ -359,6 +359,7 @@ func (t Tube) Check(n units.Force, m units.Moment, effLength units.Length) (chec
 			check.Of("φcPn", "design compressive strength", units.Force(c.pc)),
 			check.Of("φtPn", "design tensile strength", units.Force(c.pt)),
 			check.Of("φbMn", "design flexural strength", units.Moment(c.mc)),
+			check.Of("compact", "1 compact, 2 noncompact (Table B4.1)", units.Ratio(c.class)),
 		}
 	} else {
 		lin := math.Abs(nn)/c.pt + mm/c.mc
@@ -385,6 +386,7 @@ func (t Tube) Check(n units.Force, m units.Moment, effLength units.Length) (chec
 			check.Of("N_Rd", "cross-section axial resistance A f_y/γM0", units.Force(c.pt)),
 			check.Of("M_Rd", "cross-section moment resistance W f_y/γM0", units.Moment(c.mc)),
 			check.Of("k_yy", "interaction factor (Annex B)", units.Ratio(k)),
+			check.Of("class", "section class (Table 5.2)", units.Ratio(c.class)),
 		}
 	}
 	return check.Compare("tower.column_section", "Column section, axial force and bending", units.KindRatio, u, 1).
