@@ -283,6 +283,7 @@ const (
 	caseWindCold      = "wind, coldest rope"
 	caseWindHot       = "wind, hottest rope"
 	caseWindCrowd     = "wind with crowd"
+	caseWindLeading   = "wind leading, crowd accompanying"
 	caseLift          = "wind lifting the walkway"
 	caseSun           = "sun on the span, shade on the backstays"
 	caseFlood         = "flood with crowd"
@@ -307,6 +308,7 @@ type defaultCase struct {
 //	permanent, coldest/hottest rope   G                     coldest / hottest
 //	wind; wind, coldest/hottest rope  G + W                 reference / coldest / hottest
 //	wind with crowd                   G + Q + ψ0 W          reference, crowd on the whole span
+//	wind leading, crowd accompanying  G + W + ψ0 Q          reference, crowd ψ0 0.4 on the whole span
 //	wind lifting the walkway          G (favourable) + W    reference, with the upward force on the walkway
 //	sun on the span, ...              G + Q                 span hottest, backstays cooler by loads.sun_difference
 //	                                                        (not below the coldest)
@@ -336,6 +338,9 @@ func (b Bridge) Cases() []LoadCase {
 		{LoadCase{Name: caseWindCold, Wind: 1, Temperature: c.Coldest}, wind && c.Coldest != c.Reference},
 		{LoadCase{Name: caseWindHot, Wind: 1, Temperature: c.Hottest}, wind && c.Hottest != c.Reference},
 		{LoadCase{Name: caseWindCrowd, Crowd: whole, CrowdFactor: 1, Wind: psi, Temperature: c.Reference}, wind},
+		// EN 1990 6.4.3.2: each variable action leads in turn; with the
+		// wind leading the crowd accompanies it at its ψ0.
+		{LoadCase{Name: caseWindLeading, Crowd: whole, CrowdFactor: defaultCrowdWithWind, Wind: 1, Temperature: c.Reference}, wind},
 		{LoadCase{Name: caseLift, Wind: 1, Lift: true, Temperature: c.Reference}, wind},
 		{LoadCase{Name: caseSun, Crowd: whole, CrowdFactor: 1, Temperature: c.Hottest,
 			BackstayTemperature: shade}, shade < c.Hottest},
@@ -464,7 +469,7 @@ func (b Bridge) omitted(name string) bool {
 // defaultNames lists the names loads.omit accepts.
 func (b Bridge) defaultNames() []string {
 	names := []string{casePermanentCold, casePermanentHot, caseWind, caseWindCold, caseWindHot,
-		caseWindCrowd, caseLift, caseSun, caseFlood, familyCrowd, familyDeck}
+		caseWindCrowd, caseWindLeading, caseLift, caseSun, caseFlood, familyCrowd, familyDeck}
 	for _, g := range b.Ropes {
 		if g.Role == RoleWalkway {
 			names = append(names, brokenCaseName(g.Name))

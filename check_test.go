@@ -79,10 +79,13 @@ func cubicRoot(t *testing.T, a, c float64) float64 {
 // Length ratio of a level parabola, n = f/l = 2.5/50 = 0.05 (Hicks, Civil
 // Engineering Formulas, ch. 10): S/l = 1 + 8n²/3 − 32n⁴/5 + 256n⁶/7.
 //
-// Permanent load w0 = 1000 + 108.455·S/l N/m; general cable theorem:
+// Permanent load w0 = (1000 + 108.455)·S/l N/m (the walkway's 1 kN per
+// metre of walkway and the ropes' weight per metre of rope, both per
+// horizontal metre); general cable theorem:
 // H = w0 l²/(8f); support tension √(H² + (w0 l/2)²); slope atan(4f/l).
 //
-// Crowd, EN 1991-2 cl. 5.3.2.1: q = 2 + 120/(50+30) = 3.5 kPa on 1.0 m.
+// Crowd, EN 1991-2 cl. 5.3.2.1: q = 2 + 120/(50+30) = 3.5 kPa on 1.0 m of
+// walkway surface, 3.5·S/l kN per horizontal metre.
 // Crowd over the full span, same temperature: the classical change-of-state
 // cubic H₂²[H₂ − H₁ + EA W₁²/(24H₁²)] = EA W₂²/24, W = w l (Irvine, Cable
 // Structures, ch. 3, [M]),
@@ -116,7 +119,7 @@ func TestLevelSpanByHand(t *testing.T) {
 	ropeWeight := 4 * 0.409 * 26 * 26 / 100 * g
 	n := f / l
 	ratio := 1 + 8*n*n/3 - 32*math.Pow(n, 4)/5 + 256*math.Pow(n, 6)/7
-	w0 := dead + ropeWeight*ratio
+	w0 := (dead + ropeWeight) * ratio
 	h0 := w0 * l * l / (8 * f)
 	t0 := math.Hypot(h0, w0*l/2)
 	alpha := math.Atan(4 * f / l)
@@ -149,7 +152,7 @@ func TestLevelSpanByHand(t *testing.T) {
 	//   its series), T_b = √(H² + (w l/2)²),
 	//   c = √(10² + 3²) m the backstay chord,
 	// solved for L(H₂; w₀+q) = L(H₁; w₀) by bisection.
-	crowd := 3.5e3 * 1.0
+	crowd := 3.5e3 * 1.0 * ratio
 	near(t, "EN 1991-2 crowd pressure", float64(CrowdPressure(50)), 3.5e3, 1e-12)
 	ea := levelEA
 	h2 := levelSolve(h0, w0, w0+crowd)
@@ -258,7 +261,7 @@ func TestPartialBasisByHand(t *testing.T) {
 	const g, l, f = 9.80665, 50.0, 2.5
 	ropeWeight := 4 * 0.409 * 26 * 26 / 100 * g
 	n := f / l
-	w0 := 1000 + ropeWeight*(1+8*n*n/3-32*math.Pow(n, 4)/5+256*math.Pow(n, 6)/7)
+	w0 := (1000 + ropeWeight) * (1 + 8*n*n/3 - 32*math.Pow(n, 4)/5 + 256*math.Pow(n, 6)/7)
 	h0 := w0 * l * l / (8 * f)
 	h := levelSolve(h0, w0, 1.35*w0)
 	want := math.Hypot(h, 1.35*w0*l/2)
@@ -371,9 +374,10 @@ func TestLoadScaling(t *testing.T) {
 		}
 	}
 	// permanent at three temperatures, wind at three, wind with crowd,
-	// wind lift, sun on the span, the flood, a walkway rope broken
-	if len(names) != 11 {
-		t.Errorf("demo bridge has %d cases %q, want 11 (wind given, and the flood)", len(names), names)
+	// wind leading with the crowd accompanying, wind lift, sun on the
+	// span, the flood, a walkway rope broken
+	if len(names) != 12 {
+		t.Errorf("demo bridge has %d cases %q, want 12 (wind given, and the flood)", len(names), names)
 	}
 }
 

@@ -128,7 +128,7 @@ func (m *model) vibrationModel(perm CaseState, backstays bool) vibration.Model {
 	half := b.Walkway.Width / 2
 	vm := vibration.Model{
 		Span: b.Site.Span, Rise: b.Site.Rise,
-		Walkway: vibration.Walkway{Mass: units.MassPerLength(float64(m.dead) / units.StandardGravity), Width: b.Walkway.Width},
+		Walkway: vibration.Walkway{Mass: m.walkwayMass(), Width: b.Walkway.Width},
 	}
 	for i, g := range m.groups {
 		gs := perm.Groups[i]

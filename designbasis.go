@@ -280,11 +280,12 @@ func (a *Analysis) derivedLoads() BasisGroup {
 					fmt.Sprintf("n m g S/l = %d × %s × %.5g m/s² × %.4f", grp.Count, grp.rope.Mass, units.StandardGravity, ratio),
 					"rope mass as used; S/l of the design parabola (Hicks, Civil Engineering Formulas, ch. 10)"),
 			)
-			w0 := grp.self + units.LoadPerLength(grp.share)*dead
+			arc := designArc(float64(span), float64(b.Site.Rise), float64(grp.Sag), 0, float64(span))
+			w0 := grp.self + units.LoadPerLength(grp.share*arc)*dead
 			h0 := units.Force(float64(w0) * float64(span) * float64(span) / (8 * float64(grp.Sag)))
 			g.Entries = append(g.Entries, entry(grp.Name+": horizontal tension under permanent load at the reference temperature", float64(h0), units.KindForce,
-				fmt.Sprintf("H = w l²/(8 f) = (%s + %.3g × %s) × (%s)²/(8 × %s)", grp.self, grp.share, dead, span, grp.Sag),
-				"parabolic rope statics (Hicks, Civil Engineering Formulas, ch. 10)"))
+				fmt.Sprintf("H = w l²/(8 f) = (%s + %.3g × %s × %.4f) × (%s)²/(8 × %s)", grp.self, grp.share, dead, arc, span, grp.Sag),
+				"parabolic rope statics (Hicks, Civil Engineering Formulas, ch. 10); the walkway's weight per metre of walkway times S/l of the design parabola"))
 		}
 	}
 	for _, l := range []struct {

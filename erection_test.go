@@ -1,6 +1,9 @@
 package sagspan
 
 import (
+	"strings"
+
+	"github.com/sagspan/sagspan/tower"
 	"math"
 	"path/filepath"
 	"testing"
@@ -126,4 +129,72 @@ func TestConstructionalStretchByHand(t *testing.T) {
 		}
 	}
 	near(t, "sag of the new bare rope for 0.25 % stretch", stretch(eps), w*l*l/(8*(lo+hi)/2), 1e-6)
+}
+
+// TestErectionWithClampedGrooves follows the crew on a bridge whose fixed
+// saddles clamp the ropes, with very different backstays (testdata/level.json
+// with grooves "clamped", backstays 4 m × 2 m and 30 m × 8 m). The chain's
+// reference state has the rope's tension continuous over each saddle, so the
+// ropes were free to render while the walkway was hung and were clamped
+// after; the crew sets the bare rope free to render. Following the table's
+// instructions as the crew would, with the rope model of free grooves:
+//
+//  1. the rope whose bare sag, free to render, is the row's sag (bisection
+//     on its length, every unstretched length scaled alike);
+//  2. the walkway hung on it, still free to render, after its
+//     constructional stretch, at the reference temperature;
+//
+// the midspan sag must be the design sag within 5 mm, and the instructions
+// must tell the crew to clamp only after the walkway is hung.
+func TestErectionWithClampedGrooves(t *testing.T) {
+	b := loadTestBridge(t, "level.json")
+	b.Banks.Left.Tower.Saddle.Groove = "clamped"
+	b.Banks.Right.Tower.Saddle.Groove = "clamped"
+	b.Banks.Left.Backstay = Backstay{Horizontal: 4 * units.Metre, Drop: 2 * units.Metre}
+	b.Banks.Right.Backstay = Backstay{Horizontal: 30 * units.Metre, Drop: 8 * units.Metre}
+	b.Climate.Coldest, b.Climate.Hottest = b.Climate.Reference-20, b.Climate.Reference+20
+	a, err := Check(b, &Options{SkipComfort: true, ErectionStep: 20})
+	if err != nil {
+		t.Fatal(err)
+	}
+	crew, err := newModel(b)
+	if err != nil {
+		t.Fatal(err)
+	}
+	crew.grooves = [2]tower.Groove{tower.FreeGroove, tower.FreeGroove}
+	g := crew.groups[0]
+	et := a.Erection[0]
+	if !strings.Contains(et.Hold, "clamp") || !strings.Contains(et.Hold, "after the walkway") {
+		t.Errorf("the instructions do not say when to clamp the ropes: %q", et.Hold)
+	}
+	for _, row := range et.Rows {
+		bare := crew.bareInput(0, row.Temperature)
+		sagAt := func(scale float64) float64 {
+			in := bare
+			in.scale = scale
+			gs, err := crew.solveGroup(0, in)
+			if err != nil {
+				t.Fatal(err)
+			}
+			return float64(gs.Sag)
+		}
+		lo, hi := 0.95, 1.05
+		for range 60 {
+			mid := (lo + hi) / 2
+			if sagAt(mid) < float64(row.Sag) {
+				lo = mid
+			} else {
+				hi = mid
+			}
+		}
+		scale := (lo + hi) / 2 * (1 + g.constructionalStretch())
+		hung := solveInput{load: cable.Load{Uniform: g.self + units.LoadPerLength(g.share)*crew.dead}, intact: 1, scale: scale}
+		gs, err := crew.solveGroup(0, hung)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if d := math.Abs(float64(gs.Sag - g.Sag)); d > 0.005 {
+			t.Errorf("set to %s at %s: hangs at %s, design sag %s (%.1f mm off)", row.Sag, row.Temperature, gs.Sag, g.Sag, 1000*d)
+		}
+	}
 }

@@ -24,7 +24,7 @@ func ExampleCheck() {
 	}
 	// Output:
 	// overall: flag
-	// cable.tension (walkway ropes): 147.7 kN of 193.6 kN under "crowd 0.90 L at midspan, coldest rope"
+	// cable.tension (walkway ropes): 148.4 kN of 193.6 kN under "crowd 0.91 L at midspan, coldest rope"
 	// cable.tension (handrail ropes): 5.223 kN of 75.61 kN under "wind, coldest rope"
 	// bridge.clearance (walkway): 1.500 m of 4.042 m under "crowd 0.46 L at midspan, hottest rope"
 }
@@ -71,7 +71,7 @@ func ExampleSearch() {
 	}
 	// Output:
 	// 8 candidates, 2 feasible
-	// best: sag 1/20, 6 ropes, anchor 4.500 m long, cost 45958, utilisation 0.976
+	// best: sag 1/20, 6 ropes, anchor 4.500 m long, cost 45958, utilisation 0.970
 }
 
 // ExampleAnalysis_WriteText is the README's "Using it from Go": read a

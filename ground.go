@@ -3,6 +3,7 @@ package sagspan
 import (
 	"fmt"
 	"math"
+	"strings"
 
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/foundation"
@@ -320,11 +321,25 @@ func (m *model) waterBasis(rs []check.Result, s Side, lc LoadCase, w foundation.
 	level, ok, _ := m.ground[s].waterLevel(lc)
 	text := m.ground[s].waterText(lc)
 	for i := range rs {
-		rs[i] = rs[i].WithBasis(rs[i].Basis + "; water level used: " + text)
+		rs[i] = rs[i].WithBasis(rs[i].Basis + "; water level used: " + text + levelGround(rs[i].ID))
 		if ok {
 			rs[i] = rs[i].WithValues(check.Of("z_w", "elevation of the water level used", level))
 		}
 	}
+}
+
+// levelGround returns the caution a bearing or sliding result carries about
+// the ground around the base: the checks take it level, and on a bank that
+// falls away in front of the base (a river bank, a gorge edge) bearing and
+// passive resistance are less than computed. The bridge's ground line is
+// used for the drawing only.
+func levelGround(id string) string {
+	switch {
+	case strings.HasSuffix(id, ".bearing"), strings.HasSuffix(id, ".sliding"):
+		return "; the ground around the base is taken level: where the bank falls away in front of it, " +
+			"bearing and passive resistance are less than computed (reduce them by hand, e.g. with ground-inclination factors)"
+	}
+	return ""
 }
 
 // foundationBasis returns the verification basis of the anchor and

@@ -40,9 +40,15 @@ func WindPressure(v units.Velocity) units.Pressure {
 // Defaults of the loads, each with its source.
 const (
 	// defaultWindWithCrowd is the factor on wind accompanying the crowd:
-	// 0.6, ψ0 for wind in EN 1990 Table A1.1 (buildings), kept on the safe
-	// side of the 0.3 of the footbridge table A2.2 (both from memory).
+	// 0.6, ψ0 for wind in EN 1990 Table A1.1 (buildings, from memory), kept
+	// on the safe side of the 0.3 of the footbridge table A2.2 (read in the
+	// final PT draft of prAnnex A2, 2003).
 	defaultWindWithCrowd = 0.6
+	// defaultCrowdWithWind is ψ0 on the crowd accompanying the wind: 0.40
+	// for the pedestrian group gr1, EN 1990 Annex A2 Table A2.2 (read in
+	// the final PT draft of prAnnex A2, 2003; the published table from
+	// memory).
+	defaultCrowdWithWind = 0.4
 	// defaultRopeDrag is the force coefficient of a stranded rope, circular
 	// section in subcritical flow (from memory; EN 1991-1-4 cl. 7.9 gives
 	// cylinder values of this order).
@@ -142,4 +148,60 @@ func (b Bridge) breakDynamic() float64 { return orDefault(b.Loads.BreakDynamic, 
 // 8.3.3, from memory).
 func (b Bridge) lift() units.LoadPerLength {
 	return units.LoadPerLength(orDefault(b.Loads.WalkwayLift, defaultLift) * float64(b.wind()) * float64(b.Walkway.Width))
+}
+
+// designArc returns the mean of ds/dx, the length of walkway per
+// horizontal metre, over [a, b] of the design parabola of a span of length
+// l, rise h and midspan sag f below the chord:
+//
+//	z'(x) = h/l − 4f(l − 2x)/l²,  ∫ √(1 + z'²) dx = [F(z')]/(8f/l²),
+//	F(p) = (p √(1 + p²) + asinh p)/2
+//
+// (the arc length of a parabola, standard calculus; over the whole span it
+// is the parabola's length S/l, Hicks, Civil Engineering Formulas, ch. 10).
+// A stretch shorter than 1e-6 l takes the slope at its middle.
+func designArc(l, h, f, a, b float64) float64 {
+	k := 8 * f / (l * l)
+	slope := func(x float64) float64 { return h/l - 4*f/l + k*x }
+	if b-a < 1e-6*l || !(k > 0) {
+		return math.Hypot(1, slope((a+b)/2))
+	}
+	F := func(p float64) float64 { return (p*math.Hypot(1, p) + math.Asinh(p)) / 2 }
+	return (F(slope(b)) - F(slope(a))) / (k * (b - a))
+}
+
+// walkwayArc returns the length of walkway per horizontal metre over the
+// stretch s, on the design parabola of group g: the walkway's dead load is
+// given per metre of walkway and the crowd per square metre of its
+// surface, and a walkway that follows the sagging ropes is longer than its
+// plan by this factor (the ropes' own weight takes the whole span's S/l,
+// see groups).
+func (m *model) walkwayArc(g group, s Stretch) float64 {
+	l := m.b.Site.Span
+	s = clip(s, l)
+	return designArc(float64(l), float64(m.b.Site.Rise), float64(g.Sag), float64(s.From), float64(s.To))
+}
+
+// permanent returns group g's permanent load per horizontal metre at its
+// design sag: its ropes' weight and its share of the walkway's, each per
+// horizontal metre.
+func (m *model) permanent(g group) units.LoadPerLength {
+	return g.self + units.LoadPerLength(g.share*m.walkwayArc(g, Stretch{0, m.b.Site.Span}))*m.dead
+}
+
+// walkwayMass returns the walkway's mass per horizontal metre at the
+// design sag: its dead load per metre of walkway times the walkway groups'
+// S/l, weighted by their shares.
+func (m *model) walkwayMass() units.MassPerLength {
+	arc, shares := 0.0, 0.0
+	for _, g := range m.groups {
+		arc += g.share * m.walkwayArc(g, Stretch{0, m.b.Site.Span})
+		shares += g.share
+	}
+	if shares > 0 {
+		arc /= shares
+	} else {
+		arc = 1
+	}
+	return units.MassPerLength(arc * float64(m.dead) / units.StandardGravity)
 }

@@ -93,7 +93,7 @@ func newModel(b Bridge) (*model, error) {
 	}
 	l := float64(b.Site.Span)
 	for i, g := range gs {
-		w0 := g.self + units.LoadPerLength(g.share)*m.dead
+		w0 := m.permanent(g)
 		h0 := units.Force(float64(w0) * l * l / (8 * float64(g.Sag))) // H = w l²/(8 f)
 		ref := cable.State{Load: cable.Load{Uniform: w0}, H: h0, Temperature: b.Climate.Reference}
 		m.ref = append(m.ref, ref)
@@ -151,12 +151,14 @@ func (m *model) bank(s Side) Bank {
 // load returns the in-plane load of group g under case lc and the swing of
 // the rope plane:
 //
-//	vertical  γG (w_rope + s g_walkway) [+ γQ ψ s q(a) b on the crowd's stretch]
+//	vertical  γG (w_rope + s g_walkway λ) [+ γQ ψ s q(a) b λ on the crowd's stretch]
 //	lateral   γW ψW q_p (Σ c_f d + s c_f,walkway h_walkway)
 //	lift      γW ψW s c_f,z q_p b          (upward, when the case lifts the walkway)
 //
 // with s the group's share of the walkway, q(a) the crowd pressure of the
-// loaded length a, b the walkway width. The rope plane swings to carry the
+// loaded length a, b the walkway width, λ the walkway's length per
+// horizontal metre over the stretch loaded (walkwayArc; the rope weight
+// w_rope already holds its S/l). The rope plane swings to carry the
 // vector sum of the uniform vertical load and the wind, so the uniform
 // in-plane load is √(vertical² + lateral²). A crowd stretch that is not the
 // whole span stays a vertical patch in the swung plane: it is taken whole
@@ -167,20 +169,23 @@ func (m *model) load(g group, lc LoadCase) (cable.Load, units.Angle) {
 	l := m.b.Site.Span
 	gG := units.LoadPerLength(lc.GammaG)
 	load := cable.Load{Uniform: gG * g.self}
+	// The walkway's dead load is per metre of walkway, the crowd per
+	// square metre of its surface: per horizontal metre both grow by the
+	// walkway's length over the stretch they cover (walkwayArc).
 	walkway := gG * units.LoadPerLength(g.share) * m.dead
 	if lc.Situation == Construction {
 		if deck := clip(lc.Deck, l); !deck.Empty() && walkway > 0 {
-			load.Patches = append(load.Patches, cable.Patch{From: deck.From, To: deck.To, Load: walkway})
+			load.Patches = append(load.Patches, cable.Patch{From: deck.From, To: deck.To, Load: walkway * units.LoadPerLength(m.walkwayArc(g, deck))})
 		}
 	} else {
-		load.Uniform += walkway
+		load.Uniform += walkway * units.LoadPerLength(m.walkwayArc(g, Stretch{0, l}))
 	}
 	if crowd := clip(lc.Crowd, l); lc.GammaQ*lc.CrowdFactor*g.share > 0 && !crowd.Empty() {
 		q := lc.CrowdPressure
 		if q == 0 {
 			q = m.b.crowd(crowd.Length())
 		}
-		w := units.LoadPerLength(lc.GammaQ * lc.CrowdFactor * g.share * float64(q) * float64(m.b.Walkway.Width))
+		w := units.LoadPerLength(lc.GammaQ * lc.CrowdFactor * g.share * float64(q) * float64(m.b.Walkway.Width) * m.walkwayArc(g, crowd))
 		if crowd.Length() >= l {
 			load.Uniform += w
 		} else {

@@ -56,6 +56,7 @@ func (m *model) ropeChecks(out sink, svc, des CaseState, all bool) error {
 		}
 		t := st.Groups[i].MaxTension
 		n := g.Count
+		ks := g.sharing()
 		var note string
 		var values []check.Value
 		if lc.Broken > 0 && lc.BrokenGroup == g.Name && n > lc.Broken {
@@ -77,8 +78,15 @@ func (m *model) ropeChecks(out sink, svc, des CaseState, all bool) error {
 			t = units.Force(math.Max(per, after) * float64(left))
 			n = left
 			note = fmt.Sprintf("%d of %d ropes left; each carries its intact share plus %.3g times the static change the break causes (a suddenly applied load on an undamped elastic system); the broken rope's weight stays on the walkway", left, g.Count, k)
+			// The sharing factor given for the whole group applies to the
+			// ropes left, but no rope can carry more than all of them: a
+			// single rope left carries the group alone (k_s = 1).
+			if ks > float64(left) {
+				ks = float64(left)
+				note += fmt.Sprintf("; the sharing factor given, %.3g, exceeds the %d ropes left and is taken as %d", g.sharing(), left, left)
+			}
 		}
-		r, err := cable.Group{Rope: g.rope, Count: n, Sharing: g.sharing()}.TensionCheck(t, basis)
+		r, err := cable.Group{Rope: g.rope, Count: n, Sharing: ks}.TensionCheck(t, basis)
 		if err != nil {
 			return fmt.Errorf("sagspan: %s, case %q: %w", g.Name, lc.Name, err)
 		}

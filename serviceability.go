@@ -83,8 +83,11 @@ func (g group) constructionalStretch() float64 {
 }
 
 // erection builds each group's erection-sag table from the chain's own rope
-// model: the bare rope (its own weight) over the saddles as the chain
-// models them, span and backstays one rope fastened at the anchors, new
+// model: the bare rope (its own weight) over the saddles as the chain's
+// reference state has it (free to render over fixed saddles, whatever
+// their groove does in service, since the reference state has the tension
+// continuous there; clamped on sliding and roller saddles, which move),
+// span and backstays one rope fastened at the anchors, new
 // rope shorter by its constructional stretch, at every temperature of the
 // site's range. Hanging the walkway on a rope set to a row's sag at the
 // row's temperature, the rope stretched by its constructional stretch,
@@ -98,6 +101,18 @@ func (m *model) erection(a *Analysis, opts *Options) error {
 	var temps []units.Temperature
 	for t := float64(c.Coldest); t <= float64(c.Hottest)+1e-9; t += step {
 		temps = append(temps, units.Temperature(t))
+	}
+	// The chain's reference state has each rope's tension continuous over
+	// its saddle: on a fixed saddle the rope renders freely while it is
+	// set and while the walkway is hung, whatever holds it in service
+	// (clamped, gripping), and is clamped after. Sliding and roller
+	// saddles carry the rope clamped on them as in service.
+	service := m.grooves
+	defer func() { m.grooves = service }()
+	for side := Left; side <= Right; side++ {
+		if saddleKind(m.bank(side).Tower.Saddle) == tower.Fixed {
+			m.grooves[side] = tower.FreeGroove
+		}
 	}
 	for i, g := range m.groups {
 		table := ErectionTable{Group: g.Name, ConstructionalStretch: g.constructionalStretch(), Hold: m.erectionHold(g)}
@@ -129,24 +144,37 @@ func (m *model) bareInput(i int, t units.Temperature) solveInput {
 }
 
 // erectionHold says what the crew holds fixed while setting a group to its
-// erection sag.
+// erection sag, saddle by saddle, as the table's rope model has it.
 func (m *model) erectionHold(g group) string {
 	var saddles []string
+	clampAfter := false
 	for side := Left; side <= Right; side++ {
-		switch saddleKind(m.bank(side).Tower.Saddle) {
+		spec := m.bank(side).Tower.Saddle
+		switch saddleKind(spec) {
 		case tower.Sliding:
-			saddles = append(saddles, "the "+side.String()+" saddle free on its plate (it stays or slides as in service)")
+			saddles = append(saddles, "clamped on the "+side.String()+" saddle at their mark (where it sits on them in the finished bridge), the saddle free on its plate (it stays or slides as in service)")
 		case tower.Roller:
-			saddles = append(saddles, "the "+side.String()+" saddle free on its rollers")
+			saddles = append(saddles, "clamped on the "+side.String()+" saddle at their mark (where it sits on them in the finished bridge), the saddle free on its rollers")
 		default:
-			saddles = append(saddles, "the "+side.String()+" saddle bolted down")
+			held := ""
+			if grooveHolds(spec) {
+				held = ", its groove's clamps or grip released"
+				clampAfter = true
+			}
+			saddles = append(saddles, "free to render over the "+side.String()+" saddle"+held+", the saddle bolted down")
 		}
 	}
-	s := fmt.Sprintf("Measure the sag at midspan below the chord between the saddle grooves, the ropes bare and free to render over both saddles, "+
-		"fastened at both anchors at their design positions, %s and %s; the sag then fixes the length of rope between the anchors.",
-		saddles[0], saddles[1])
+	s := fmt.Sprintf("Measure the sag at midspan below the chord between the saddle grooves, the ropes bare, fastened at both anchors at their design positions, "+
+		"%s and %s; the sag then fixes the length of rope in the span.", saddles[0], saddles[1])
+	if clampAfter {
+		s += " Leave the ropes free to render over the fixed saddles while the walkway is hung, and clamp them only after the walkway is complete: the design sag is that of ropes whose tension is continuous over the saddles under the walkway's weight."
+	}
 	if e := g.constructionalStretch(); e > 0 {
 		s += fmt.Sprintf(" The sags are for new rope that will stretch %.2f %% more as its strands bed in under the walkway: it hangs higher now and settles to the design sag; for pre-stretched rope give a constructional stretch of 0.", 100*e)
 	}
 	return s
 }
+
+// grooveHolds reports whether a fixed saddle's groove holds the rope in
+// service (clamped or gripping), or may (not known).
+func grooveHolds(s SaddleSpec) bool { return s.Groove != "free" }

@@ -262,7 +262,9 @@ func TestStockyColumn(t *testing.T) {
 		}
 	}
 	// Biaxial: N_Rd = A_c f_cd + A_s f_yd; a linear in N_Ed/N_Rd between
-	// 0.1 (1.0), 0.7 (1.5) and 1.0 (2.0).
+	// 0.1 (1.0), 0.7 (1.5) and 1.0 (2.0) (EN 1992-1-1:2004 5.8.9(4), the
+	// table under eq. 5.39 [R, as quoted in published renderings of the
+	// clause]).
 	nrd := 0.24*30e6/1.5 + 6*float64(bar)*500e6/1.15
 	r := n / nrd
 	a := 1 + (r-0.1)/0.6*0.5
