@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"sort"
+	"strings"
 
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/units"
@@ -818,8 +819,16 @@ func (m *model) governingChecks(o *only, perm, svc, des CaseState, ground bool) 
 		}
 	}
 	for side := Left; side <= Right; side++ {
-		if o.wantsElement(towerElement[side], towerAcrossElement[side]) {
-			if err := m.towerChecks(o, side, svc, des, perm); err != nil {
+		tower := func(k checkKey) bool { return k.element == towerElement[side] || k.element == towerAcrossElement[side] }
+		resultant := o.wants(func(k checkKey) bool { return tower(k) && strings.HasPrefix(k.id, "tower.eccentricity") })
+		member := o.wants(func(k checkKey) bool { return tower(k) && strings.HasPrefix(k.id, "tower.column_") })
+		if o.wants(func(k checkKey) bool {
+			return tower(k) && !strings.HasPrefix(k.id, "tower.eccentricity") && !strings.HasPrefix(k.id, "tower.column_")
+		}) {
+			resultant, member = true, true // a check of neither part: both, to be sure
+		}
+		if resultant || member {
+			if err := m.towerParts(o, side, svc, des, perm, resultant, member); err != nil {
 				return err
 			}
 		}

@@ -160,6 +160,13 @@ func (m *model) saddleBasis(s Side) string {
 // svc), and the column member (on the design state des, with the
 // permanent case perm for creep).
 func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error {
+	return m.towerParts(out, side, svc, des, perm, true, true)
+}
+
+// towerParts is towerChecks with the resultant's checks (along, across,
+// both at once) only when resultant holds, and the column member's only
+// when member does.
+func (m *model) towerParts(out sink, side Side, svc, des, perm CaseState, resultant, member bool) error {
 	name := svc.Case.Name
 	col := m.column(side)
 	var basis string
@@ -169,6 +176,9 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 	_, legs := m.steel(side)
 	var ecc [2]check.Result // along, across
 	for _, d := range []tower.Direction{tower.Along, tower.Across} {
+		if !resultant {
+			break
+		}
 		element := towerElement[side]
 		if d == tower.Across {
 			element = towerAcrossElement[side]
@@ -212,7 +222,7 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 		}
 		out.add(r.For(element, name))
 	}
-	if lim := m.eccentricity(side, tower.Along).Limit; legs == 0 && (lim == nil || lim.Fraction < 1) {
+	if lim := m.eccentricity(side, tower.Along).Limit; resultant && legs == 0 && (lim == nil || lim.Fraction < 1) {
 		// The kern is a rhombus: the two directions at once.
 		r, err := tower.EccentricityBoth(units.Length(ecc[0].Demand), units.Length(ecc[0].Capacity),
 			units.Length(ecc[1].Demand), units.Length(ecc[1].Capacity))
@@ -223,6 +233,9 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 			r = r.WithBasis(r.Basis + "; " + strings.SplitN(ecc[0].Basis, ";", 2)[0] + basis)
 		}
 		out.add(r.For(towerElement[side], name))
+	}
+	if !member {
+		return nil
 	}
 	res, err := m.member(side, des, perm)
 	if err != nil {
