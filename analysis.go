@@ -2,6 +2,7 @@ package sagspan
 
 import (
 	"fmt"
+	"slices"
 	"sync"
 
 	"github.com/sagspan/sagspan/cable"
@@ -269,9 +270,17 @@ func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, er
 	var wg sync.WaitGroup
 	for k := range service {
 		c := m.clone()
+		results[k] = make(collected, 0, 64) // about 40 results a case
 		wg.Go(func() { errs[k] = c.caseChecks(&results[k], perm, service[k], design[k], ground) })
 	}
 	wg.Wait()
+	if c, ok := out.(*collected); ok {
+		n := len(uplift)
+		for _, r := range results {
+			n += len(r)
+		}
+		*c = slices.Grow(*c, n)
+	}
 	for k := range service {
 		if k == 1 || len(service) == 1 {
 			for _, r := range uplift {
@@ -361,6 +370,13 @@ func (f *familySearch) wait() { f.wg.Wait() }
 // searchers.
 func (f *familySearch) collect(out sink) (governing [][2]CaseState, searchers []*searcher, err error) {
 	f.wait()
+	if c, ok := out.(*collected); ok {
+		n := 0
+		for _, r := range f.res {
+			n += len(r.results)
+		}
+		*c = slices.Grow(*c, n)
+	}
 	for _, r := range f.res {
 		if r.err != nil {
 			return nil, nil, r.err

@@ -134,7 +134,8 @@ func (m *model) analyse(lc LoadCase) (CaseState, error) {
 // state as the start of each group's iteration (warm, nil for none).
 func (m *model) analyseFrom(lc LoadCase, warm *CaseState) (CaseState, error) {
 	cs := CaseState{Case: lc, Groups: make([]GroupState, len(m.groups))}
-	var levels [2][]tower.LevelForce
+	var buf [2][8]tower.LevelForce // room for the saddles of eight groups and the column's wind
+	levels := [2][]tower.LevelForce{buf[0][:0], buf[1][:0]}
 	for i, g := range m.groups {
 		in := m.solveInput(g, lc)
 		if warm != nil {
@@ -142,11 +143,11 @@ func (m *model) analyseFrom(lc LoadCase, warm *CaseState) (CaseState, error) {
 		}
 		swing := in.swing
 		gs, err := m.groupState(i, in)
-		var se saddleErr
-		if errors.As(err, &se) {
-			return CaseState{}, m.bankErr(se.side, "tower.saddle", lc.Name, fmt.Errorf("%s: %w%s", g.Name, se.err, se.advice()))
-		}
 		if err != nil {
+			var se saddleErr
+			if errors.As(err, &se) {
+				return CaseState{}, m.bankErr(se.side, "tower.saddle", lc.Name, fmt.Errorf("%s: %w%s", g.Name, se.err, se.advice()))
+			}
 			return CaseState{}, m.groupErr(i, lc, err)
 		}
 		for side := Left; side <= Right; side++ {
