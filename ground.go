@@ -85,7 +85,7 @@ func (b Bridge) groundOf(s Side, soil foundation.Soil) bankGround {
 // is one, and whether it is the design flood: the groundwater, or in the
 // flood case the design flood where it is higher (the bank taken as
 // saturated up to the flood's level, cautious).
-func (g bankGround) waterLevel(lc LoadCase) (level units.Length, ok, flood bool) {
+func (g *bankGround) waterLevel(lc LoadCase) (level units.Length, ok, flood bool) {
 	switch {
 	case lc.Flood && !g.flood.None && (g.groundwater == nil || g.flood.Z > *g.groundwater):
 		return g.flood.Z, true, true
@@ -97,7 +97,7 @@ func (g bankGround) waterLevel(lc LoadCase) (level units.Length, ok, flood bool)
 
 // flooded reports whether in case lc the design flood stands above the
 // ground at elevation ground.
-func (g bankGround) flooded(lc LoadCase, ground units.Length) bool {
+func (g *bankGround) flooded(lc LoadCase, ground units.Length) bool {
 	level, ok, flood := g.waterLevel(lc)
 	return ok && flood && level > ground
 }
@@ -108,7 +108,7 @@ const scourText = "the design flood stands over the block's ground: the passive 
 	"the flow may scour that soil (EN 1997-1 6.5.3(7); cautious)"
 
 // waterText says in words which water level case lc uses at the bank.
-func (g bankGround) waterText(lc LoadCase) string {
+func (g *bankGround) waterText(lc LoadCase) string {
 	level, ok, flood := g.waterLevel(lc)
 	switch {
 	case flood:
@@ -121,7 +121,7 @@ func (g bankGround) waterText(lc LoadCase) string {
 
 // waterAt returns the water at a foundation whose ground lies at
 // elevation ground, in case lc.
-func (g bankGround) waterAt(lc LoadCase, ground units.Length) foundation.Water {
+func (g *bankGround) waterAt(lc LoadCase, ground units.Length) foundation.Water {
 	level, ok, _ := g.waterLevel(lc)
 	if !ok {
 		return foundation.Water{}
@@ -132,19 +132,19 @@ func (g bankGround) waterAt(lc LoadCase, ground units.Length) foundation.Water {
 // pad returns the tower footing spec of the bank for package foundation,
 // dry: along the bridge, the column's footprint free of soil cover. The
 // spec is the bank's own, or a size a design search tries.
-func (g bankGround) pad(spec FootingSpec) foundation.Footing {
+func (g *bankGround) pad(spec FootingSpec) foundation.Footing {
 	t := g.bank.Tower
 	return foundation.Footing{Along: spec.Length, Across: spec.Width, Thickness: spec.Thickness, Depth: spec.Depth,
 		UnitWeight: t.UnitWeight, Footprint: units.Area(float64(t.Depth) * float64(t.Width))}
 }
 
 // block, deadman and rock return the bank's anchor for package foundation.
-func (g bankGround) block(a AnchorSpec) foundation.AnchorBlock {
+func (g *bankGround) block(a AnchorSpec) foundation.AnchorBlock {
 	return foundation.AnchorBlock{Length: a.Length, Width: a.Width, Height: a.Height, Depth: a.Depth,
 		UnitWeight: a.UnitWeight, PassiveMobilisation: a.Passive}
 }
 
-func (g bankGround) deadman(a AnchorSpec) foundation.Deadman {
+func (g *bankGround) deadman(a AnchorSpec) foundation.Deadman {
 	d := foundation.Deadman{Length: a.Width, Height: a.Height, Thickness: a.Length, Depth: a.Depth, UnitWeight: a.UnitWeight}
 	if a.Beam != nil {
 		d.Section = foundation.SteelSection{Yield: a.Beam.Steel, PlasticModulus: a.Beam.PlasticModulus, ShearArea: a.Beam.ShearArea}
@@ -152,7 +152,7 @@ func (g bankGround) deadman(a AnchorSpec) foundation.Deadman {
 	return d
 }
 
-func (g bankGround) rock(a AnchorSpec) foundation.RockAnchor {
+func (g *bankGround) rock(a AnchorSpec) foundation.RockAnchor {
 	ra := foundation.RockAnchor{
 		Count: a.Bars, Spacing: a.BarSpacing, BarDiameter: a.BarDiameter, YieldStrength: a.BarStrength, UltimateStrength: a.BarUltimate,
 		HoleDiameter: a.HoleDiameter, BondLength: a.BondLength, FreeLength: a.FreeLength,
@@ -164,7 +164,7 @@ func (g bankGround) rock(a AnchorSpec) foundation.RockAnchor {
 }
 
 // anchorDryRun runs the bank's anchor checks with no load, for validation.
-func (g bankGround) anchorDryRun() ([]check.Result, error) {
+func (g *bankGround) anchorDryRun() ([]check.Result, error) {
 	a := g.bank.Anchor
 	switch a.Type {
 	case "rock":
@@ -212,7 +212,7 @@ func (m *model) footingChecks(out sink, side Side, spec FootingSpec, perm CaseSt
 // columnBuoyancy returns the uplift of the water on the submerged part of
 // a bank's tower column in case lc (the gross section, γw 9.81 kN/m³).
 func (m *model) columnBuoyancy(s Side, lc LoadCase) units.Force {
-	g := m.ground[s]
+	g := &m.ground[s]
 	level, ok, _ := g.waterLevel(lc)
 	if !ok {
 		return 0
@@ -226,7 +226,7 @@ func (m *model) columnBuoyancy(s Side, lc LoadCase) units.Force {
 // lateral force: overturning about the edges along the bridge, and bearing
 // and sliding under the same load as footing (both directions at once).
 func (m *model) footingAcross(s Side, spec FootingSpec, perm tower.Resultant, svc CaseState) ([]check.Result, error) {
-	g := m.ground[s]
+	g := &m.ground[s]
 	f := g.pad(spec)
 	f.Along, f.Across = spec.Width, spec.Length // turned: along the lateral force
 	f.Water = g.waterAt(svc.Case, g.footingGround)
@@ -303,7 +303,7 @@ func (m *model) footingLoad(s Side, spec FootingSpec, perm tower.Resultant, svc 
 // (footingLoad), along the bridge and, for bearing and sliding, across it
 // at once; perm is the permanent case's resultant.
 func (m *model) footing(s Side, spec FootingSpec, perm tower.Resultant, svc CaseState) ([]check.Result, error) {
-	g := m.ground[s]
+	g := &m.ground[s]
 	f := g.pad(spec)
 	f.Water = g.waterAt(svc.Case, g.footingGround)
 	var err error
@@ -352,7 +352,7 @@ func (m *model) foundationBasis() *foundation.Basis { return &m.fbasis }
 // ropes' attachment.
 func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Result, error) {
 	basis := m.foundationBasis()
-	g := m.ground[s]
+	g := &m.ground[s]
 	water := g.waterAt(svc.Case, g.anchorGround)
 	x, z := spec.AttachX, spec.AttachZ
 	if x == 0 {

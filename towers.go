@@ -169,8 +169,9 @@ func (m *model) towerChecks(out sink, side Side, svc, des, perm CaseState) error
 func (m *model) towerParts(out sink, side Side, svc, des, perm CaseState, resultant, member bool) error {
 	name := svc.Case.Name
 	col := m.column(side)
+	terse := m.scoring()
 	var basis string
-	if !m.terse {
+	if !terse {
 		basis = m.saddleBasis(side)
 	}
 	_, legs := m.steel(side)
@@ -185,7 +186,7 @@ func (m *model) towerParts(out sink, side Side, svc, des, perm CaseState, result
 		}
 		res := svc.Tower[side]
 		opt := m.eccentricity(side, d)
-		opt.Terse = m.terse // a sweep scores results, it does not read them
+		opt.Terse = terse
 		w := svc.ColumnWind[side]
 		var above units.Force
 		if d == tower.Across && w != 0 {
@@ -201,7 +202,7 @@ func (m *model) towerParts(out sink, side Side, svc, des, perm CaseState, result
 		if err != nil {
 			return m.bankErr(side, "tower.eccentricity", name, err)
 		}
-		if d == tower.Along && !m.terse && !m.fbasis.Terse { // a sweep or a design search scores results, it does not read them
+		if d == tower.Along && !terse {
 			r = r.WithValues(m.saddleValues(side, svc)...)
 		}
 		if d == tower.Across && w != 0 {
@@ -217,7 +218,7 @@ func (m *model) towerParts(out sink, side Side, svc, des, perm CaseState, result
 			r = rec.WithNote("a steel column resists this eccentricity by bending (see tower.column_section): the resultant is reported, not limited")
 		}
 		ecc[d] = r
-		if !m.terse {
+		if !terse {
 			r = r.WithBasis(r.Basis + basis)
 		}
 		out.add(r.For(element, name))
@@ -229,7 +230,7 @@ func (m *model) towerParts(out sink, side Side, svc, des, perm CaseState, result
 		if err != nil {
 			return m.bankErr(side, "tower.eccentricity", name, err)
 		}
-		if !m.terse {
+		if !terse {
 			r = r.WithBasis(r.Basis + "; " + strings.SplitN(ecc[0].Basis, ";", 2)[0] + basis)
 		}
 		out.add(r.For(towerElement[side], name))
@@ -245,13 +246,19 @@ func (m *model) towerParts(out sink, side Side, svc, des, perm CaseState, result
 		r       check.Result
 		element string
 	}{{res.Along, towerElement[side]}, {res.Across, towerAcrossElement[side]}, {res.Both, towerElement[side]}} {
-		if !m.terse {
+		if !terse {
 			x.r = x.r.WithBasis(x.r.Basis + basis)
 		}
 		out.add(x.r.For(x.element, name))
 	}
 	return nil
 }
+
+// scoring reports whether the checks only score their results, reading
+// nothing but ratios and statuses: in the loaded-length sweep (terse) and
+// in a design search (its foundation basis terse), whose results carry no
+// text then.
+func (m *model) scoring() bool { return m.terse || m.fbasis.Terse }
 
 // member checks one bank's column member under the design state des:
 // axial force and first-order moments at the base from the ropes (and
@@ -270,7 +277,7 @@ func (m *model) member(side Side, des, perm CaseState) (tower.ColumnResults, err
 		return sc.Check(a)
 	}
 	rc := m.rcColumn(side, length, along, spring)
-	rc.Terse = m.terse // a sweep scores results, it does not read them
+	rc.Terse = m.scoring()
 	return rc.Check(a)
 }
 
