@@ -141,11 +141,12 @@ func (m *model) reference(g group, ref cable.State) error {
 	return nil
 }
 
-func (m *model) bank(s Side) Bank {
+// bank returns the description of one bank (not a copy: read only).
+func (m *model) bank(s Side) *Bank {
 	if s == Left {
-		return m.b.Banks.Left
+		return &m.b.Banks.Left
 	}
-	return m.b.Banks.Right
+	return &m.b.Banks.Right
 }
 
 // load returns the in-plane load of group g under case lc and the swing of
@@ -220,7 +221,7 @@ func clip(s Stretch, l units.Length) Stretch {
 // a steel tube or frame is given by its legs: breadth to the wind the legs'
 // sizes side by side, weight the steel's.
 func (m *model) column(s Side) tower.Column {
-	t := m.bank(s).Tower
+	t := &m.bank(s).Tower
 	c := tower.Column{Depth: t.Depth, Width: t.Width, Height: t.Height + m.topOffset(), Facing: t.Facing,
 		UnitWeight: t.UnitWeight, Drag: t.Drag}
 	if steel, legs := m.steel(s); legs > 0 {
@@ -248,7 +249,7 @@ func (m *model) topOffset() units.Length {
 // bending along the bridge (H along, B across), checked to EN 1992-1-1 on
 // design actions.
 func (m *model) section(s Side) tower.RCSection {
-	t := m.bank(s).Tower
+	t := &m.bank(s).Tower
 	spec := t.Section
 	sec := tower.RCSection{
 		B: t.Width - 2*t.Facing, H: t.Depth - 2*t.Facing,

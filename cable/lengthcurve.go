@@ -36,10 +36,10 @@ func NewLengthCurve(s Span, ea units.AxialStiffness, l Load) (LengthCurve, error
 	if err := positive("EA", float64(ea)); err != nil {
 		return LengthCurve{}, err
 	}
-	l.Patches = append([]Patch(nil), l.Patches...)
-	b := newBeam(s, l)
+	b := newBeam(s, l) // read here only: the curve keeps no patch
 	n := 2 + 2*len(l.Patches)
-	xs, qs := b.sections(make([]float64, 0, n), make([]float64, 0, n))
+	buf := make([]float64, 2*n)
+	xs, qs := b.sections(buf[:0:n], buf[n:n:2*n])
 	return LengthCurve{span: s, ea: float64(ea), c0: float64(s.Rise) / float64(s.Length), xs: xs, qs: qs, d: b.shearSquared()}, nil
 }
 
