@@ -218,6 +218,7 @@ type refinement struct {
 // refine adds points to ps around each key's local maxima until none moves
 // (see the search's outline at the top of this file).
 func (rf refinement) refine(ps *pointSet) error {
+	var maxima []int
 	for round := range maxRefineRounds {
 		var props []proposal
 		for k := range rf.keys() {
@@ -245,7 +246,8 @@ func (rf refinement) refine(ps *pointSet) error {
 			// needs no closer look.
 			for _, p := range rf.placements {
 				pts := ps.placed(p)
-				for _, bi := range localMaxima(pts, k, rf.val) {
+				maxima = localMaxima(maxima[:0], pts, k, rf.val)
+				for _, bi := range maxima {
 					if r, _, ok := propose(pts, k, rf.val, bi, scale, best, gain); ok {
 						props = append(props, proposal{place: p, r: r, check: !driver})
 					}
@@ -606,10 +608,9 @@ type proposal struct {
 	check bool
 }
 
-// localMaxima returns the indices of the points of pts where key k is at
-// a local maximum (the first of a plateau).
-func localMaxima(pts []*sweepPoint, k int, val func(*sweepPoint, int) float64) []int {
-	var out []int
+// localMaxima appends to out the indices of the points of pts where key k
+// is at a local maximum (the first of a plateau).
+func localMaxima(out []int, pts []*sweepPoint, k int, val func(*sweepPoint, int) float64) []int {
 	for i, pt := range pts {
 		v := val(pt, k)
 		if math.IsNaN(v) {
