@@ -2,8 +2,10 @@ package sagspan
 
 import (
 	"fmt"
+	"runtime"
 	"slices"
 	"sync"
+	"sync/atomic"
 
 	"github.com/sagspan/sagspan/cable"
 	"github.com/sagspan/sagspan/check"
@@ -239,58 +241,79 @@ func (m *model) run(a *Analysis, opts *Options) error {
 // searchFamilies); their results follow the cases' in out, family by
 // family, whatever finishes first.
 func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, err error) {
-	// The uplift checks of the cases with wind lifting the walkway follow
-	// the permanent case's checks in the report.
-	var uplift collected
 	cases := m.b.Cases()
-	perm, permDes, ok, err := m.caseStates(&uplift, cases[0])
-	if err != nil {
-		return nil, nil, err
+	// One task a case: its states (the permanent case's first, which the
+	// families start from), then its checks, each on a copy of the model
+	// of its own.
+	type caseTask struct {
+		uplift             collected // the check of a case with wind lifting the walkway
+		svc, des           CaseState
+		ok                 bool // false where the wind lifts the walkway: no states
+		stateErr, checkErr error
+		results            collected
 	}
-	if !ok {
+	tasks := make([]caseTask, len(cases))
+	t0 := &tasks[0]
+	if t0.svc, t0.des, t0.ok, t0.stateErr = m.caseStates(&t0.uplift, cases[0]); t0.stateErr != nil {
+		return nil, nil, t0.stateErr
+	}
+	if !t0.ok {
 		return nil, nil, fmt.Errorf("sagspan: the permanent case has no state")
 	}
-	families := m.families(perm, ground).start()
-	defer families.wait()
-	service, design = []CaseState{perm}, []CaseState{permDes}
-	for _, lc := range cases[1:] {
-		svc, des, ok, err := m.caseStates(&uplift, lc)
-		if err != nil {
-			return nil, nil, err
+	perm := t0.svc
+	families := m.families(perm, ground)
+	// The largest pieces first (the families' searches), then the cases:
+	// the cores fill as they free.
+	jobs := families.jobs()
+	for k := range cases {
+		c, t := m.clone(), &tasks[k]
+		jobs = append(jobs, func() {
+			if k > 0 {
+				if t.svc, t.des, t.ok, t.stateErr = c.caseStates(&t.uplift, cases[k]); t.stateErr != nil || !t.ok {
+					return
+				}
+			}
+			t.results = make(collected, 0, 64) // about 40 results a case
+			t.checkErr = c.caseChecks(&t.results, perm, t.svc, t.des, ground)
+		})
+	}
+	runAll(jobs)
+	// Errors and results in the order of a sequential check: the cases'
+	// states, their checks, then the families.
+	var uplift collected
+	for k := range tasks {
+		if tasks[k].stateErr != nil {
+			return nil, nil, tasks[k].stateErr
 		}
-		if ok {
-			service = append(service, svc)
-			design = append(design, des)
+		uplift = append(uplift, tasks[k].uplift...)
+	}
+	var done []*caseTask
+	for k := range tasks {
+		if tasks[k].ok {
+			done = append(done, &tasks[k])
+			service = append(service, tasks[k].svc)
+			design = append(design, tasks[k].des)
 		}
 	}
-	// Each case's checks on a copy of the model of its own, all at once
-	// beside the families: small pieces of work that fill the cores.
-	results := make([]collected, len(service))
-	errs := make([]error, len(service))
-	var wg sync.WaitGroup
-	for k := range service {
-		c := m.clone()
-		results[k] = make(collected, 0, 64) // about 40 results a case
-		wg.Go(func() { errs[k] = c.caseChecks(&results[k], perm, service[k], design[k], ground) })
-	}
-	wg.Wait()
 	if c, ok := out.(*collected); ok {
 		n := len(uplift)
-		for _, r := range results {
-			n += len(r)
+		for _, t := range done {
+			n += len(t.results)
 		}
 		*c = slices.Grow(*c, n)
 	}
-	for k := range service {
-		if k == 1 || len(service) == 1 {
+	// The uplift checks of the cases with wind lifting the walkway follow
+	// the permanent case's checks in the report.
+	for k, t := range done {
+		if k == 1 || len(done) == 1 {
 			for _, r := range uplift {
 				out.add(r)
 			}
 		}
-		if errs[k] != nil {
-			return nil, nil, errs[k]
+		if t.checkErr != nil {
+			return nil, nil, t.checkErr
 		}
-		for _, r := range results[k] {
+		for _, r := range t.results {
 			out.add(r)
 		}
 	}
@@ -305,6 +328,27 @@ func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, er
 	return service, design, nil
 }
 
+// runAll runs the jobs on up to GOMAXPROCS goroutines, this one among
+// them, each taking the next job in order, and returns when all are done.
+func runAll(jobs []func()) {
+	var next atomic.Int64
+	work := func() {
+		for {
+			i := next.Add(1) - 1
+			if i >= int64(len(jobs)) {
+				return
+			}
+			jobs[i]()
+		}
+	}
+	var wg sync.WaitGroup
+	for range min(runtime.GOMAXPROCS(0), len(jobs)) - 1 {
+		wg.Go(work)
+	}
+	work()
+	wg.Wait()
+}
+
 // familySearch is the loaded-length searches of every family (see
 // searchLength), each on its own copy of the model, taken when the
 // permanent case is solved and before any other case, so that the whole-
@@ -312,7 +356,6 @@ func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, er
 // start from and find the same numbers, whether the families run at once
 // or one after the other.
 type familySearch struct {
-	wg     sync.WaitGroup
 	perm   CaseState
 	ground bool
 	fams   []LoadedLength
@@ -329,7 +372,7 @@ type familyResult struct {
 
 // families takes the copies of the model for the search of every family
 // from the permanent case perm, with the footing and anchor checks when
-// ground; run or start them, then collect.
+// ground; run them (run, or runAll on jobs), then collect.
 func (m *model) families(perm CaseState, ground bool) *familySearch {
 	fams := m.b.LoadedLengths()
 	f := &familySearch{perm: perm, ground: ground, fams: fams, res: make([]familyResult, len(fams))}
@@ -340,36 +383,31 @@ func (m *model) families(perm CaseState, ground bool) *familySearch {
 	return f
 }
 
-// start runs the searches in goroutines of their own; run runs them one
-// after the other.
-func (f *familySearch) start() *familySearch { return f.launch(true) }
-
-func (f *familySearch) run() *familySearch { return f.launch(false) }
-
-func (f *familySearch) launch(parallel bool) *familySearch {
+// jobs returns the searches, one job a family, for runAll; run runs them
+// one after the other.
+func (f *familySearch) jobs() []func() {
+	var out []func()
 	for i, fam := range f.fams {
 		c := f.models[i]
-		search := func() {
+		out = append(out, func() {
 			r := &f.res[i]
 			r.searcher, r.governing, r.err = c.searchLength(&r.results, f.perm, fam, f.ground)
-		}
-		if parallel {
-			f.wg.Go(search)
-		} else {
-			search()
-		}
+		})
+	}
+	return out
+}
+
+func (f *familySearch) run() *familySearch {
+	for _, job := range f.jobs() {
+		job()
 	}
 	return f
 }
 
-// wait waits for every family's search to end.
-func (f *familySearch) wait() { f.wg.Wait() }
-
-// collect waits for the searches and adds their results to out, family by
+// collect adds the results of the searches, run, to out, family by
 // family; it returns the states of the governing stretches and the
 // searchers.
 func (f *familySearch) collect(out sink) (governing [][2]CaseState, searchers []*searcher, err error) {
-	f.wait()
 	if c, ok := out.(*collected); ok {
 		n := 0
 		for _, r := range f.res {
