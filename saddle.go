@@ -241,8 +241,9 @@ func (m *model) solveInput(g group, lc LoadCase) solveInput {
 // each saddle balances with the span's pull at H (tower.Saddle.Balance).
 // F falls as H grows (the span needs less rope, the backstays give up
 // more), so Newton's method in H, with the span's derivative exact and the
-// backstays' by a difference, safeguarded by bisection inside the bracket
-// its iterates build, finds the one root; it starts from the input's start
+// backstays' by a difference (taken again only where a saddle's regime
+// changes), safeguarded by bisection inside the bracket its iterates
+// build, finds the one root; it starts from the input's start
 // (a nearby state's H) or from the span alone hanging l0
 // (cable.StateForLength). With ropes broken, the ropes left keep their
 // unstretched lengths and the group's stiffness is theirs.
@@ -299,6 +300,13 @@ func (m *model) solveGroup(i int, in solveInput) (GroupState, error) {
 	}
 	lo, hi := 0.0, math.Inf(1)
 	converged := false
+	// The backstays' slope dgiven/dH, by a difference, and the saddles'
+	// regime it was taken in: within a regime it changes little from one
+	// iteration to the next and is kept; a saddle that starts to move, or
+	// stops, takes it anew.
+	var backSlope float64
+	var backRegime [2]tower.Balance
+	haveSlope := false
 	for range maxFeedIterations {
 		span, dspan := curve.At(units.Force(h))
 		bal, err := balance(h)
@@ -319,14 +327,17 @@ func (m *model) solveGroup(i int, in solveInput) (GroupState, error) {
 			hi = h
 		}
 		// The backstays' part of the slope by a forward difference: the
-		// balance is piecewise smooth in H and costs little.
-		dh := h * 1e-7
-		bal2, err := balance(h + dh)
-		if err != nil {
-			return GroupState{}, err
+		// balance is piecewise smooth in H.
+		if regime := [2]tower.Balance{{Motion: bal[0].Motion, Direction: bal[0].Direction},
+			{Motion: bal[1].Motion, Direction: bal[1].Direction}}; !haveSlope || regime != backRegime {
+			dh := h * 1e-7
+			bal2, err := balance(h + dh)
+			if err != nil {
+				return GroupState{}, err
+			}
+			backSlope, backRegime, haveSlope = (given(bal2)-given(bal))/dh, regime, true
 		}
-		slope := dspan - (given(bal2)-given(bal))/dh
-		next := h - f/slope
+		next := h - f/(dspan-backSlope)
 		if !(next > lo && next < hi) {
 			switch {
 			case math.IsInf(hi, 1):
@@ -337,9 +348,10 @@ func (m *model) solveGroup(i int, in solveInput) (GroupState, error) {
 				next = lo + (hi-lo)/2
 			}
 		}
-		// Newton converges quadratically, the backstays' difference
-		// slope adding a linear factor of about 1e-6: after a step below
-		// 1e-9 of H what is left is below 1e-14 of H.
+		// Newton converges quadratically, the backstays' slope (a
+		// difference, kept within a regime) adding a linear factor below
+		// 1e-4: after a step below 1e-9 of H what is left is below 1e-13
+		// of H.
 		if math.Abs(next-h) <= 1e-9*next || hi-lo <= 1e-13*next {
 			h, converged = next, true
 			break
