@@ -31,6 +31,10 @@ func TestWalkwayLoadPerHorizontalMetre(t *testing.T) {
 	b := loadTestBridge(t, "level.json")
 	b.Site.Rise = 20
 	b.Climate.Coldest, b.Climate.Hottest = b.Climate.Reference, b.Climate.Reference
+	// The new bare ropes of the construction stage rise from the low
+	// saddle more steeply than its backstay falls, lifting that column:
+	// the chain refuses such a stage, and it is not what this test checks.
+	b.Loads.Omit = []string{familyDeck}
 	const l, h, f, g = 50.0, 20.0, 2.5, 9.80665
 	slope := func(x float64) float64 { return h/l - 4*f*(l-2*x)/(l*l) }
 	arc := func(a, c float64) float64 {
