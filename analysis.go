@@ -1,6 +1,7 @@
 package sagspan
 
 import (
+	"fmt"
 	"sync"
 
 	"github.com/sagspan/sagspan/cable"
@@ -85,9 +86,6 @@ type GroupState struct {
 	// Saddle is the force on each tower column from this group's saddle.
 	Saddle [2]tower.LevelForce
 	shape  cable.Loaded
-	// feed is the rope rendered into the span from the backstays, a start
-	// for nearby states.
-	feed float64
 }
 
 // CaseState is the state of the whole bridge under one load case.
@@ -166,22 +164,57 @@ type sink interface{ add(check.Result) }
 
 func (m *model) run(a *Analysis, opts *Options) error {
 	// Each variant of groove behaviour (one, unless the description leaves
-	// a fixed saddle's groove open) is analysed and checked in full; the
-	// report keeps each check's worst variant. The states kept are the
+	// a fixed saddle's groove open) is analysed and checked in full, each
+	// on its own copy of the model and, where there are several, at once;
+	// the report keeps each check's worst variant. The states kept are the
 	// first variant's (free grooves where not given).
-	var all merged
-	for k, v := range m.variants() {
-		m.grooves = v.grooves
-		service, design, err := m.checkAll(labelSink{&all, v.label}, true)
-		if err != nil {
-			return err
-		}
+	vs := m.variants()
+	type variantResult struct {
+		results         collected
+		service, design []CaseState
+		err             error
+	}
+	res := make([]variantResult, len(vs))
+	var wg sync.WaitGroup
+	var first *model
+	for k, v := range vs {
+		c := m.clone()
+		c.grooves = v.grooves
 		if k == 0 {
-			a.Service, a.Design = service, design
+			first = c
+		}
+		check := func() {
+			r := &res[k]
+			r.service, r.design, r.err = c.checkAll(&r.results, true)
+		}
+		if len(vs) == 1 {
+			check()
+		} else {
+			wg.Go(check)
 		}
 	}
-	m.grooves = m.variants()[0].grooves
-	a.Report.Add(all.results...)
+	wg.Wait()
+	for _, r := range res {
+		if r.err != nil {
+			return r.err
+		}
+	}
+	a.Service, a.Design = res[0].service, res[0].design
+	// The model goes on with the first variant's states (its copy is done
+	// with them), as the erection table may meet them again.
+	m.grooves, m.states = vs[0].grooves, first.states
+	if len(vs) == 1 {
+		// One variant: every result is its own (see merged).
+		a.Report.Add(res[0].results...)
+	} else {
+		var all merged
+		for k, r := range res {
+			for _, x := range r.results {
+				all.add(x, vs[k].label)
+			}
+		}
+		a.Report.Add(all.results...)
+	}
 	var grooves collected
 	if err := m.grooveChecks(&grooves); err != nil {
 		return err
@@ -197,12 +230,26 @@ func (m *model) run(a *Analysis, opts *Options) error {
 // variant of groove behaviour set, and adds their checks to out (the
 // footing and anchor checks with ground). It returns the states of the
 // cases and of the governing stretches, characteristic and design; the
-// first is the permanent case.
+// first is the permanent case. The families' searches start once the
+// permanent case is known and run beside the other cases (see
+// searchFamilies); their results follow the cases' in out, family by
+// family, whatever finishes first.
 func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, err error) {
 	// The uplift checks of the cases with wind lifting the walkway follow
 	// the permanent case's checks in the report.
 	var uplift collected
-	for _, lc := range m.b.Cases() {
+	cases := m.b.Cases()
+	perm, permDes, ok, err := m.caseStates(&uplift, cases[0])
+	if err != nil {
+		return nil, nil, err
+	}
+	if !ok {
+		return nil, nil, fmt.Errorf("sagspan: the permanent case has no state")
+	}
+	families := m.startFamilies(perm, ground)
+	defer families.wait()
+	service, design = []CaseState{perm}, []CaseState{permDes}
+	for _, lc := range cases[1:] {
 		svc, des, ok, err := m.caseStates(&uplift, lc)
 		if err != nil {
 			return nil, nil, err
@@ -212,7 +259,6 @@ func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, er
 			design = append(design, des)
 		}
 	}
-	perm := service[0]
 	for k := range service {
 		if k == 1 || len(service) == 1 {
 			for _, r := range uplift {
@@ -231,7 +277,7 @@ func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, er
 			}
 		}
 	}
-	found, _, err := m.searchFamilies(out, perm, ground, true)
+	found, _, err := families.collect(out)
 	if err != nil {
 		return nil, nil, err
 	}
@@ -249,29 +295,66 @@ func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, er
 // governing stretches and the searchers, whose points a design search
 // checks its sizes on.
 func (m *model) searchFamilies(out sink, perm CaseState, ground, parallel bool) (governing [][2]CaseState, searchers []*searcher, err error) {
-	fams := m.b.LoadedLengths()
-	type result struct {
-		results   collected
-		searcher  *searcher
-		governing [][2]CaseState
-		err       error
+	var f *familySearch
+	if parallel {
+		f = m.startFamilies(perm, ground)
+	} else {
+		f = m.runFamilies(perm, ground)
 	}
-	res := make([]result, len(fams))
-	var wg sync.WaitGroup
+	return f.collect(out)
+}
+
+// familySearch is the loaded-length searches of every family, each on its
+// own copy of the model, running or done.
+type familySearch struct {
+	wg  sync.WaitGroup
+	res []familyResult
+}
+
+type familyResult struct {
+	results   collected
+	searcher  *searcher
+	governing [][2]CaseState
+	err       error
+}
+
+// startFamilies starts the search of every family in a goroutine of its
+// own; runFamilies runs them one after the other.
+func (m *model) startFamilies(perm CaseState, ground bool) *familySearch {
+	return m.families(perm, ground, true)
+}
+
+func (m *model) runFamilies(perm CaseState, ground bool) *familySearch {
+	return m.families(perm, ground, false)
+}
+
+func (m *model) families(perm CaseState, ground, parallel bool) *familySearch {
+	fams := m.b.LoadedLengths()
+	f := &familySearch{res: make([]familyResult, len(fams))}
 	for i, fam := range fams {
 		c := m.clone()
 		search := func() {
-			r := &res[i]
+			r := &f.res[i]
 			r.searcher, r.governing, r.err = c.searchLength(&r.results, perm, fam, ground)
 		}
 		if parallel {
-			wg.Go(search)
+			f.wg.Go(search)
 		} else {
 			search()
 		}
 	}
-	wg.Wait()
-	for _, r := range res {
+	return f
+}
+
+// wait waits for every family's search to end.
+func (f *familySearch) wait() { f.wg.Wait() }
+
+// collect waits for the searches and adds their results to out, family by
+// family; it returns the states of the governing stretches and the
+// searchers.
+func (f *familySearch) collect(out sink) (governing [][2]CaseState, searchers []*searcher, err error) {
+	f.wait()
+	for _, r := range f.res {
 		if r.err != nil {
 			return nil, nil, r.err
 		}

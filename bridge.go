@@ -501,8 +501,10 @@ type SoilSpec struct {
 	// this ground; left out, 2/3.
 	Interface *float64 `json:"interface,omitempty"`
 	// Allowable is an allowable bearing pressure from the site
-	// investigation: on rock the bearing limit; on soil it replaces the
-	// bearing-capacity equation on the allowable basis.
+	// investigation: on rock the bearing limit; on soil, on the allowable
+	// basis, the peak contact pressure is checked against it beside the
+	// bearing-capacity equation (which carries the load's inclination) and
+	// the worse governs.
 	Allowable *units.Pressure `json:"allowable_bearing,omitempty"`
 	// RockStrength is the uniaxial compressive strength of intact rock
 	// cores, for the K_sp method when no allowable_bearing is given.

@@ -464,7 +464,7 @@ func TestRopeRenderedOverSaddles(t *testing.T) {
 			got += float64(bs.chord) / (1 + float64(gs.Backstay[side])/eaNow)
 			want += bs.unstretched * thermalBackstay
 		}
-		near(t, lc.Name+": rope conserved", got, want, 1e-9)
+		near(t, lc.Name+": rope conserved", got, want, 1e-11)
 		h, _, _ := elevationPull(gs.Tension[Right], gs.Angle[Right], gs.Swing)
 		near(t, lc.Name+": roller balance", float64(gs.Backstay[Right])*math.Cos(float64(gs.BackstayAngle[Right])), h, 1e-12)
 		if lf := gs.Saddle[Left]; gs.SaddleMoved[Left] {

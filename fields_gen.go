@@ -151,7 +151,7 @@ var fieldDocs = map[string]string{
 	"Site.LeftSaddle":                 "LeftSaddle is the elevation of the left walkway-rope saddle.",
 	"Site.Rise":                       "Rise is the height of the right saddle above the left one; negative when the right saddle is lower.",
 	"Site.Span":                       "Span is the horizontal distance between the walkway-rope saddles.",
-	"SoilSpec.Allowable":              "Allowable is an allowable bearing pressure from the site investigation: on rock the bearing limit; on soil it replaces the bearing-capacity equation on the allowable basis.",
+	"SoilSpec.Allowable":              "Allowable is an allowable bearing pressure from the site investigation: on rock the bearing limit; on soil, on the allowable basis, the peak contact pressure is checked against it beside the bearing-capacity equation (which carries the load's inclination) and the worse governs.",
 	"SoilSpec.BearingMethod":          "BearingMethod is the bearing-capacity method of this bank's footing and anchor block: \"EN 1997-1 Annex D\" (default) or \"Vesic\".",
 	"SoilSpec.Cohesion":               "Cohesion is the drained (effective) cohesion c'.",
 	"SoilSpec.Friction":               "Friction is the drained (effective) angle of shearing resistance φ'.",

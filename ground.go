@@ -3,6 +3,7 @@ package sagspan
 import (
 	"fmt"
 	"math"
+	"strings"
 
 	"github.com/sagspan/sagspan/check"
 	"github.com/sagspan/sagspan/foundation"
@@ -128,10 +129,11 @@ func (g bankGround) waterAt(lc LoadCase, ground units.Length) foundation.Water {
 	return foundation.WaterAt(ground - level)
 }
 
-// pad returns the bank's tower footing for package foundation, dry: along
-// the bridge, the column's footprint free of soil cover.
-func (g bankGround) pad() foundation.Footing {
-	t, spec := g.bank.Tower, g.bank.Tower.Footing
+// pad returns the tower footing spec of the bank for package foundation,
+// dry: along the bridge, the column's footprint free of soil cover. The
+// spec is the bank's own, or a size a design search tries.
+func (g bankGround) pad(spec FootingSpec) foundation.Footing {
+	t := g.bank.Tower
 	return foundation.Footing{Along: spec.Length, Across: spec.Width, Thickness: spec.Thickness, Depth: spec.Depth,
 		UnitWeight: t.UnitWeight, Footprint: units.Area(float64(t.Depth) * float64(t.Width))}
 }
@@ -225,7 +227,7 @@ func (m *model) columnBuoyancy(s Side, lc LoadCase) units.Force {
 // and sliding under the same load as footing (both directions at once).
 func (m *model) footingAcross(s Side, spec FootingSpec, perm tower.Resultant, svc CaseState) ([]check.Result, error) {
 	g := m.ground[s]
-	f := g.pad()
+	f := g.pad(spec)
 	f.Along, f.Across = spec.Width, spec.Length // turned: along the lateral force
 	f.Water = g.waterAt(svc.Case, g.footingGround)
 	ld := m.footingLoad(s, spec, perm, svc)
@@ -302,7 +304,7 @@ func (m *model) footingLoad(s Side, spec FootingSpec, perm tower.Resultant, svc 
 // at once; perm is the permanent case's resultant.
 func (m *model) footing(s Side, spec FootingSpec, perm tower.Resultant, svc CaseState) ([]check.Result, error) {
 	g := m.ground[s]
-	f := g.pad()
+	f := g.pad(spec)
 	f.Water = g.waterAt(svc.Case, g.footingGround)
 	var err error
 	m.scratch, err = f.AppendCheck(m.scratch[:0], m.footingLoad(s, spec, perm, svc), g.soil, g.method, m.foundationBasis())
@@ -319,11 +321,25 @@ func (m *model) waterBasis(rs []check.Result, s Side, lc LoadCase, w foundation.
 	level, ok, _ := m.ground[s].waterLevel(lc)
 	text := m.ground[s].waterText(lc)
 	for i := range rs {
-		rs[i] = rs[i].WithBasis(rs[i].Basis + "; water level used: " + text)
+		rs[i] = rs[i].WithBasis(rs[i].Basis + "; water level used: " + text + levelGround(rs[i].ID))
 		if ok {
 			rs[i] = rs[i].WithValues(check.Of("z_w", "elevation of the water level used", level))
 		}
 	}
+}
+
+// levelGround returns the caution a bearing or sliding result carries about
+// the ground around the base: the checks take it level, and on a bank that
+// falls away in front of the base (a river bank, a gorge edge) bearing and
+// passive resistance are less than computed. The bridge's ground line is
+// used for the drawing only.
+func levelGround(id string) string {
+	switch {
+	case strings.HasSuffix(id, ".bearing"), strings.HasSuffix(id, ".sliding"):
+		return "; the ground around the base is taken level: where the bank falls away in front of it, " +
+			"bearing and passive resistance are less than computed (reduce them by hand, e.g. with ground-inclination factors)"
+	}
+	return ""
 }
 
 // foundationBasis returns the verification basis of the anchor and

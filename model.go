@@ -42,7 +42,10 @@ type model struct {
 	// variant's grooves): a group that carries no crowd hangs alike under
 	// every crowd, and a case's service and design states often share
 	// groups.
-	states map[stateKey]GroupState
+	states *stateCache
+	// columns holds each bank's concrete column member as built for the
+	// variant last analysed (see rcColumn).
+	columns [2]builtColumn
 }
 
 func newModel(b Bridge) (*model, error) {

@@ -114,7 +114,7 @@ func (e saddleErr) advice() string {
 }
 
 // maxFeedIterations bounds the iteration on the rope rendered over the
-// saddles; the secant steps settle it in a few.
+// saddles; Newton's steps settle it in a few.
 const maxFeedIterations = 60
 
 // analyse returns the state of the bridge under case lc.
@@ -142,7 +142,7 @@ func (m *model) analyseFrom(lc LoadCase, warm *CaseState) (CaseState, error) {
 	for i, g := range m.groups {
 		in := m.solveInput(g, lc)
 		if warm != nil {
-			in.feed = warm.Groups[i].feed
+			in.start = warm.Groups[i].H
 		}
 		swing := in.swing
 		gs, err := m.groupState(i, in)
@@ -206,8 +206,9 @@ type solveInput struct {
 	// scale multiplies every unstretched length of the group: 1 but for new
 	// rope before its constructional stretch (the erection table).
 	scale float64
-	// feed starts the iteration on the rope rendered over the saddles.
-	feed float64
+	// start, when positive, starts the iteration on the group's horizontal
+	// tension (a nearby state's).
+	start units.Force
 }
 
 // solveInput returns the input of group g's state under case lc.
@@ -234,11 +235,23 @@ func (m *model) solveInput(g group, lc LoadCase) solveInput {
 // solveGroup returns the state of rope group i under the input's load,
 // swing, temperatures and ropes.
 //
-// The rope rendered into the span, feed, solves r(feed) = g(feed) − feed = 0
-// where g is the rope the backstays give up once the span hangs with that
-// feed; secant steps from the input's feed, safeguarded by plain iteration.
-// With ropes broken, the ropes left keep their unstretched lengths and the
-// group's stiffness is theirs.
+// The rope is one from anchor to anchor: the span's unstretched length
+// grows by the rope the backstays give up as their tensions change (over a
+// free groove) or stay (clamped), so the group's horizontal tension H
+// solves
+//
+//	F(H) = L₀(H) − l0 − Σ [l0_b − c_b/(1 + T_b(H)/EA)] = 0
+//
+// with L₀(H) the unstretched length of the span hanging with H
+// (cable.LengthCurve), l0 the span's own, and T_b(H) the backstay tension
+// each saddle balances with the span's pull at H (tower.Saddle.Balance).
+// F falls as H grows (the span needs less rope, the backstays give up
+// more), so Newton's method in H, with the span's derivative exact and the
+// backstays' by a difference, safeguarded by bisection inside the bracket
+// its iterates build, finds the one root; it starts from the input's start
+// (a nearby state's H) or from the span alone hanging l0
+// (cable.StateForLength). With ropes broken, the ropes left keep their
+// unstretched lengths and the group's stiffness is theirs.
 func (m *model) solveGroup(i int, in solveInput) (GroupState, error) {
 	load, swing, dt := in.load, in.swing, in.dt
 	g := m.groups[i]
@@ -250,74 +263,126 @@ func (m *model) solveGroup(i int, in solveInput) (GroupState, error) {
 	thermal := (1 + float64(e.Alpha)*dt) * in.scale
 	thermalBackstay := (1 + float64(e.Alpha)*in.dtBackstay) * in.scale
 	l0 := m.spanUnstretched[i] * thermal
-	temp := m.ref[i].Temperature + units.Temperature(dt)
-	var gs GroupState
-	step := func(feed float64) (float64, error) {
-		st, err := cable.StateForLength(m.span, e.EA, load, units.Length(l0+feed), temp)
-		if err != nil {
-			return 0, err
-		}
-		shape, err := cable.NewLoaded(m.span, load, st.H)
-		if err != nil {
-			return 0, err
-		}
-		gs = GroupState{Group: g.Name, Load: load, Swing: swing, H: st.H, shape: shape}
-		ta, tb := shape.SupportTensions()
-		aa, ab := shape.SupportAngles()
-		gs.Tension = [2]units.Force{ta, tb}
-		gs.Angle = [2]units.Angle{aa, ab}
-		gs.Sag = shape.Sag(m.b.Site.Span / 2)
-		gs.LowX, gs.LowZ = shape.LowPoint()
-		gs.MaxTension = shape.MaxTension()
-		given := 0.0
-		for side := Left; side <= Right; side++ {
-			bs := m.backstays[i][side]
-			l0b := bs.unstretched * thermalBackstay
-			held := units.Force(bs.heldTension(e, l0b))
-			bal, err := m.saddle(side, g, 0).Balance(tower.RopePull{Tension: gs.Tension[side], Angle: gs.Angle[side], Swing: swing},
-				bs.angle, held)
-			if err != nil {
-				return 0, saddleErr{side: side, err: err}
-			}
-			tback := float64(bal.Backstay)
-			h, _, _ := elevationPull(gs.Tension[side], gs.Angle[side], swing)
-			gs.Held[side] = held
-			gs.Unbalance[side] = units.Force(h - float64(held)*math.Cos(float64(bs.angle)))
-			gs.Backstay[side], gs.BackstayAngle[side] = bal.Backstay, bs.angle
-			gs.SaddleMoved[side], gs.Travel[side] = bal.Motion == tower.Travelled, 0
-			if bal.Motion == tower.Travelled {
-				gs.Travel[side] = bs.travel(e, l0b, tback)
-			}
-			gs.MaxTension = max(gs.MaxTension, units.Force(tback))
-			given += l0b - bs.unstretchedFor(e, tback)
-		}
-		gs.feed = feed
-		return given, nil
-	}
-	tol := 1e-10 * float64(m.span.Length)
-	x0, x1 := in.feed, 0.0
-	g0, err := step(x0)
+	curve, err := cable.NewLengthCurve(m.span, e.EA, load)
 	if err != nil {
 		return GroupState{}, err
 	}
-	r0 := g0 - x0
-	x1 = g0
-	for range maxFeedIterations {
-		g1, err := step(x1)
+	var saddles [2]tower.Saddle
+	var l0b, held [2]float64
+	for side := Left; side <= Right; side++ {
+		saddles[side] = m.saddle(side, g, 0)
+		l0b[side] = m.backstays[i][side].unstretched * thermalBackstay
+		held[side] = m.backstays[i][side].heldTension(e, l0b[side])
+	}
+	// balance returns the backstay tensions at H.
+	balance := func(h float64) (bal [2]tower.Balance, err error) {
+		ta, tb, aa, ab := curve.Supports(units.Force(h))
+		ts, as := [2]units.Force{ta, tb}, [2]units.Angle{aa, ab}
+		for side := Left; side <= Right; side++ {
+			bal[side], err = saddles[side].Balance(tower.RopePull{Tension: ts[side], Angle: as[side], Swing: swing},
+				m.backstays[i][side].angle, units.Force(held[side]))
+			if err != nil {
+				return bal, saddleErr{side: side, err: err}
+			}
+		}
+		return bal, nil
+	}
+	// given returns the rope the backstays give up at backstay tensions bal.
+	given := func(bal [2]tower.Balance) float64 {
+		var out float64
+		for side := Left; side <= Right; side++ {
+			out += l0b[side] - m.backstays[i][side].unstretchedFor(e, float64(bal[side].Backstay))
+		}
+		return out
+	}
+	h := float64(in.start)
+	if !(h > 0) {
+		st, err := cable.StateForLength(m.span, e.EA, load, units.Length(l0), m.ref[i].Temperature+units.Temperature(dt))
 		if err != nil {
 			return GroupState{}, err
 		}
-		r1 := g1 - x1
-		if math.Abs(r1) <= tol {
-			return gs, nil
+		h = float64(st.H)
+	}
+	lo, hi := 0.0, math.Inf(1)
+	converged := false
+	for range maxFeedIterations {
+		span, dspan := curve.At(units.Force(h))
+		bal, err := balance(h)
+		if err != nil {
+			return GroupState{}, err
 		}
-		next := g1 // plain iteration
-		if d := r1 - r0; d != 0 {
-			if sec := x1 - r1*(x1-x0)/d; !math.IsNaN(sec) && !math.IsInf(sec, 0) {
-				next = sec
+		f := float64(span) - l0 - given(bal)
+		if f == 0 {
+			converged = true
+			break
+		}
+		if math.IsNaN(f) {
+			break
+		}
+		if f > 0 {
+			lo = h
+		} else {
+			hi = h
+		}
+		// The backstays' part of the slope by a forward difference: the
+		// balance is piecewise smooth in H and costs little.
+		dh := h * 1e-7
+		bal2, err := balance(h + dh)
+		if err != nil {
+			return GroupState{}, err
+		}
+		slope := dspan - (given(bal2)-given(bal))/dh
+		next := h - f/slope
+		if !(next > lo && next < hi) {
+			switch {
+			case math.IsInf(hi, 1):
+				next = 2 * h
+			case lo == 0:
+				next = h / 2
+			default:
+				next = lo + (hi-lo)/2
 			}
 		}
-		x0, r0, x1 = x1, r1, next
+		if math.Abs(next-h) <= 1e-13*next || hi-lo <= 1e-13*next {
+			h, converged = next, true
+			break
+		}
+		h = next
 	}
-	return GroupState{}, fmt.Errorf("rope rendered over the saddles does not settle after %d iterations", maxFeedIterations)
+	if !converged || !(h > 0) || math.IsInf(h, 0) {
+		return GroupState{}, fmt.Errorf("rope rendered over the saddles does not settle after %d iterations", maxFeedIterations)
+	}
+	if err := curve.CheckStrain(units.Force(h)); err != nil {
+		return GroupState{}, err
+	}
+	shape, err := cable.NewLoaded(m.span, load, units.Force(h))
+	if err != nil {
+		return GroupState{}, err
+	}
+	bal, err := balance(h)
+	if err != nil {
+		return GroupState{}, err
+	}
+	gs := GroupState{Group: g.Name, Load: load, Swing: swing, H: units.Force(h), shape: shape}
+	ta, tb := shape.SupportTensions()
+	aa, ab := shape.SupportAngles()
+	gs.Tension = [2]units.Force{ta, tb}
+	gs.Angle = [2]units.Angle{aa, ab}
+	gs.Sag = shape.Sag(m.b.Site.Span / 2)
+	gs.LowX, gs.LowZ = shape.LowPoint()
+	gs.MaxTension = shape.MaxTension()
+	for side := Left; side <= Right; side++ {
+		bs := m.backstays[i][side]
+		tback := float64(bal[side].Backstay)
+		hs, _, _ := elevationPull(gs.Tension[side], gs.Angle[side], swing)
+		gs.Held[side] = units.Force(held[side])
+		gs.Unbalance[side] = units.Force(hs - held[side]*math.Cos(float64(bs.angle)))
+		gs.Backstay[side], gs.BackstayAngle[side] = bal[side].Backstay, bs.angle
+		gs.SaddleMoved[side] = bal[side].Motion == tower.Travelled
+		if gs.SaddleMoved[side] {
+			gs.Travel[side] = bs.travel(e, l0b[side], tback)
+		}
+		gs.MaxTension = max(gs.MaxTension, units.Force(tback))
+	}
+	return gs, nil
 }

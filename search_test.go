@@ -3,6 +3,7 @@ package sagspan
 import (
 	"context"
 	"errors"
+	"fmt"
 	"math"
 	"runtime"
 	"strings"
@@ -307,5 +308,76 @@ func TestSearchRespectsGradient(t *testing.T) {
 		if d.SagRatio == deepest && (d.Feasible || d.Governing.ID != "walkway.gradient") {
 			t.Errorf("sag 1/%.0f: feasible %v, governed by %s", 1/d.SagRatio, d.Feasible, d.Governing.ID)
 		}
+	}
+}
+
+// TestSearchSizesAsChecked checks each part of a candidate on its own, so
+// that a part whose ratios are too low to govern a candidate is still held
+// to the full check: for each footing and anchor size, the highest ratio of
+// every footing and anchor check the search's stage finds equals the one
+// Check finds for the bridge built with that size, to 1e-12. (Utilisation
+// alone is governed by the columns and ropes on the demo, so a footing
+// checked at the wrong size would pass TestSearchAgreesWithBruteForce.)
+func TestSearchSizesAsChecked(t *testing.T) {
+	b := Demo()
+	m := units.Metre
+	footings := []FootingSize{{Length: 1.8 * m, Width: 2.4 * m, Thickness: 0.5 * m}, {Length: 3.2 * m, Width: 3.6 * m, Thickness: 0.9 * m}}
+	anchors := []BlockSize{{Length: 3 * m, Width: 3.5 * m, Height: 2 * m, Depth: 2.6 * m}, {Length: 5 * m, Width: 5.5 * m, Height: 2.8 * m, Depth: 3.2 * m}}
+	var sink scorer
+	model, stages, err := ropeStage(b, &sink)
+	if err != nil {
+		t.Fatal(err)
+	}
+	worst := func(results []check.Result, keep func(check.Result) bool) map[checkKey]float64 {
+		out := map[checkKey]float64{}
+		for _, r := range results {
+			if r.Status == check.Info || r.Status == check.Flag || !keep(r) {
+				continue
+			}
+			k := checkKey{r.ID, r.Element}
+			if x, ok := out[k]; !ok || r.Ratio > x {
+				out[k] = r.Ratio
+			}
+		}
+		return out
+	}
+	compare := func(what string, got, want map[checkKey]float64) {
+		t.Helper()
+		if len(got) == 0 || len(got) != len(want) {
+			t.Errorf("%s: search has %d checks, Check %d", what, len(got), len(want))
+		}
+		for k, w := range want {
+			if g, ok := got[k]; !ok || math.Abs(g-w) > 1e-12*math.Max(1, w) {
+				t.Errorf("%s: %s %s: search %.9g, Check %.9g", what, k.id, k.element, g, w)
+			}
+		}
+	}
+	isFooting := func(r check.Result) bool { return strings.Contains(r.Element, "footing") }
+	isAnchor := func(r check.Result) bool { return strings.Contains(r.Element, "anchor") }
+	for _, size := range footings {
+		var got collected
+		for _, st := range stages {
+			if err := st.footingChecks(model, &got, size, 0); err != nil {
+				t.Fatal(err)
+			}
+		}
+		a, err := Check(b.withSizes(BlockSize{}, size), &Options{SkipComfort: true})
+		if err != nil {
+			t.Fatal(err)
+		}
+		compare(fmt.Sprintf("footing %v", size), worst(got, isFooting), worst(a.Report.Results, isFooting))
+	}
+	for _, size := range anchors {
+		var got collected
+		for _, st := range stages {
+			if err := st.anchorChecks(model, &got, size); err != nil {
+				t.Fatal(err)
+			}
+		}
+		a, err := Check(b.withSizes(size, FootingSize{}), &Options{SkipComfort: true})
+		if err != nil {
+			t.Fatal(err)
+		}
+		compare(fmt.Sprintf("anchor %v", size), worst(got, isAnchor), worst(a.Report.Results, isAnchor))
 	}
 }

@@ -105,15 +105,15 @@ func (m *model) erection(a *Analysis, opts *Options) error {
 	defer m.erecting()()
 	for i, g := range m.groups {
 		table := ErectionTable{Group: g.Name, ConstructionalStretch: g.constructionalStretch(), Hold: m.erectionHold(g)}
-		feed := 0.0
+		var start units.Force
 		for _, t := range temps {
 			in := m.bareInput(i, t)
-			in.feed = feed
+			in.start = start
 			gs, err := m.groupState(i, in)
 			if err != nil {
 				return fieldErr("ropes", "erection table of %s at %s: %w; check its sag, rope and the climate's temperatures", g.Name, t, err)
 			}
-			feed = gs.feed
+			start = gs.H
 			table.Rows = append(table.Rows, cable.ErectionRow{Temperature: t, Sag: gs.Sag, H: gs.H})
 		}
 		a.Erection = append(a.Erection, table)

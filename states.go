@@ -31,12 +31,30 @@ func (in solveInput) key(i int, grooves [2]tower.Groove) (stateKey, bool) {
 	return k, true
 }
 
+// stateCache holds the group states solved so far: a layer of its own
+// over the layers of the model it was cloned from, which nobody writes
+// once cloned (see clone), so that copies of a model share them without
+// copying or locking.
+type stateCache struct {
+	states map[stateKey]GroupState
+	parent *stateCache
+}
+
+func (c *stateCache) get(k stateKey) (GroupState, bool) {
+	for l := c; l != nil; l = l.parent {
+		if gs, ok := l.states[k]; ok {
+			return gs, true
+		}
+	}
+	return GroupState{}, false
+}
+
 // groupState returns group i's state for the input, solved once per
 // distinct input.
 func (m *model) groupState(i int, in solveInput) (GroupState, error) {
 	k, ok := in.key(i, m.grooves)
 	if ok {
-		if gs, hit := m.states[k]; hit {
+		if gs, hit := m.states.get(k); hit {
 			return gs, nil
 		}
 	}
@@ -46,9 +64,12 @@ func (m *model) groupState(i int, in solveInput) (GroupState, error) {
 	}
 	if ok {
 		if m.states == nil {
-			m.states = make(map[stateKey]GroupState)
+			m.states = &stateCache{}
 		}
-		m.states[k] = gs
+		if m.states.states == nil {
+			m.states.states = make(map[stateKey]GroupState)
+		}
+		m.states.states[k] = gs
 	}
 	return gs, nil
 }
@@ -79,14 +100,20 @@ func (m *model) pair(lc LoadCase, warm *[2]CaseState) (svc, des CaseState, err e
 }
 
 // clone returns a copy of the model for another goroutine: the resolved
-// bridge shared, read only; the state cache copied and the scratch space
-// its own.
+// bridge shared, read only; the scratch space its own; the states solved so
+// far shared as a frozen layer under a layer of the copy's own, and the
+// model itself goes on in a new layer of its own. Clone is not safe for
+// concurrent use on one model.
 func (m *model) clone() *model {
 	c := *m
 	c.scratch, c.pulls = nil, nil
-	c.states = make(map[stateKey]GroupState, len(m.states))
-	for k, v := range m.states {
-		c.states[k] = v
+	frozen := m.states
+	if frozen != nil && len(frozen.states) == 0 {
+		frozen = frozen.parent // an empty layer needs no freezing
 	}
+	if frozen != nil {
+		m.states = &stateCache{parent: frozen}
+	}
+	c.states = &stateCache{parent: frozen}
 	return &c
 }

@@ -590,17 +590,8 @@ func (s *searcher) emit(out sink, ground bool) ([][2]CaseState, error) {
 		svc, des := g.pt.svc, g.pt.des
 		name := s.uniqueName(g.pt, names)
 		svc.Case.Name, des.Case.Name = name, name
-		f := &only{keys: g.keys, out: out}
-		if err := m.ropeChecks(f, svc, des, true); err != nil {
+		if err := m.governingChecks(&only{keys: g.keys, out: out}, s.perm, svc, des, ground); err != nil {
 			return nil, err
-		}
-		if err := m.structureChecks(f, s.perm, svc, des); err != nil {
-			return nil, err
-		}
-		if ground {
-			if err := m.groundChecks(f, s.perm, svc); err != nil {
-				return nil, err
-			}
 		}
 		found = append(found, [2]CaseState{svc, des})
 	}
@@ -816,10 +807,69 @@ func (s *searcher) uniqueName(pt *sweepPoint, used map[string]bool) string {
 	return name
 }
 
+// governingChecks adds the results the sink o names of one governing
+// stretch: the checks of checkAll in its order (ropes, towers, clearance,
+// gradient, and with ground the footings and anchors), each part run only
+// where o names one of its results.
+func (m *model) governingChecks(o *only, perm, svc, des CaseState, ground bool) error {
+	if o.wants(func(k checkKey) bool { return k.id == "cable.tension" }) {
+		if err := m.ropeChecks(o, svc, des, true); err != nil {
+			return err
+		}
+	}
+	for side := Left; side <= Right; side++ {
+		if o.wantsElement(towerElement[side], towerAcrossElement[side]) {
+			if err := m.towerChecks(o, side, svc, des, perm); err != nil {
+				return err
+			}
+		}
+	}
+	if svc.Case.Situation == Persistent {
+		if o.wants(func(k checkKey) bool { return k.id == "bridge.clearance" }) {
+			m.checkClearance(o, []CaseState{svc})
+		}
+		if o.wants(func(k checkKey) bool { return k.id == "walkway.gradient" }) {
+			m.checkGradient(o, svc)
+		}
+	}
+	if !ground {
+		return nil
+	}
+	for side := Left; side <= Right; side++ {
+		bank := m.bank(side)
+		if o.wantsElement(footingElement[side], footingAcrossElement[side]) {
+			if err := m.footingChecks(o, side, bank.Tower.Footing, perm, []CaseState{svc}); err != nil {
+				return err
+			}
+		}
+		if o.wantsElement(anchorElement[side], anchorElement[side]) {
+			if err := m.anchorChecks(o, side, bank.Anchor, perm, []CaseState{svc}); err != nil {
+				return err
+			}
+		}
+	}
+	return nil
+}
+
 // only passes on the results of the checks it names.
 type only struct {
 	keys map[checkKey]bool
 	out  sink
+}
+
+// wants reports whether o names a check for which match holds.
+func (o *only) wants(match func(checkKey) bool) bool {
+	for k := range o.keys {
+		if match(k) {
+			return true
+		}
+	}
+	return false
+}
+
+// wantsElement reports whether o names a check of either element.
+func (o *only) wantsElement(a, b string) bool {
+	return o.wants(func(k checkKey) bool { return k.element == a || k.element == b })
 }
 
 func (o *only) add(r check.Result) {

@@ -255,9 +255,32 @@ func (m *model) member(side Side, des, perm CaseState) (tower.ColumnResults, err
 			Length: length, Along: along, AlongSpring: spring, Across: tower.FreeTop}
 		return sc.Check(a)
 	}
+	return m.rcColumn(side, length, along, spring).Check(a)
+}
+
+// rcColumn returns the concrete column member of one bank, its effective
+// lengths worked out once per variant of groove behaviour (they depend on
+// the column and its restraints only); where they cannot be, the column
+// as it is, whose Check then says why.
+func (m *model) rcColumn(side Side, length units.Length, along tower.Restraint, spring float64) tower.RCColumn {
+	if c := &m.columns[side]; c.ok && c.grooves == m.grooves {
+		return c.rc
+	}
 	rc := tower.RCColumn{Section: m.section(side), Length: length, Along: along, AlongSpring: spring, Across: tower.FreeTop,
 		Creep: m.bank(side).Tower.Section.Creep}
-	return rc.Check(a)
+	if pre, err := rc.WithLengths(); err == nil {
+		rc = pre
+	}
+	m.columns[side] = builtColumn{grooves: m.grooves, rc: rc, ok: true}
+	return rc
+}
+
+// builtColumn is a bank's column member built for a variant of groove
+// behaviour.
+type builtColumn struct {
+	grooves [2]tower.Groove
+	rc      tower.RCColumn
+	ok      bool
 }
 
 // saddleValues returns, for each rope group on one bank, the forces its
@@ -333,11 +356,3 @@ func worseOf(a, b check.Result) bool {
 	}
 	return check.Worse(a, b)
 }
-
-// labelSink passes results to a merged report under a variant's label.
-type labelSink struct {
-	m     *merged
-	label string
-}
-
-func (s labelSink) add(r check.Result) { s.m.add(r, s.label) }

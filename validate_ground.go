@@ -182,7 +182,7 @@ func (b Bridge) validateGround(v *validator, side Side) {
 	}
 	// The foundation package's own refusals, by a dry run with no load.
 	bank := b.groundOf(side, soil)
-	if _, err := bank.pad().Check(foundation.FootingLoad{}, soil, bank.method, nil); err != nil {
+	if _, err := bank.pad(bank.bank.Tower.Footing).Check(foundation.FootingLoad{}, soil, bank.method, nil); err != nil {
 		v.fail(at(f+".tower.footing"), "%v", err)
 		return
 	}

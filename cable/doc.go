@@ -31,9 +31,9 @@
 //	ds = (1 + T/EA) dp,   so   L₀ = ∫ ds/(1 + T/EA)
 //
 // The elastic catenary integrates it along the rope (weight per
-// unstretched metre); ChangeOfState, StateForLength and UnstretchedLength
-// apply it exactly to the Loaded shapes (load per horizontal metre); a
-// straight backstay of chord c under tension T has L₀ = c/(1 + T/EA). On
+// unstretched metre); ChangeOfState, StateForLength, UnstretchedLength and
+// LengthCurve apply it exactly to the Loaded shapes (load per horizontal
+// metre); a straight backstay of chord c under tension T has L₀ = c/(1 + T/EA). On
 // one rope the three agree to rounding (TestOneConstitutiveLaw). A change
 // of state measures the thermal strain from the temperature of the state it
 // starts from: start every change from one reference state.

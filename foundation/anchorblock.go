@@ -219,9 +219,9 @@ func (a AnchorBlock) earth(s Soil, st strength) (pp, pa EarthForce) {
 //	bearing:     N on the base with eccentricity e = M/N from the base centre,
 //	             M = Σ (Fx·Z + Fz·(Length/2 − X)) + (W + Ws)(xW − Length/2) − U(xU − Length/2);
 //	             earth pressures ignored; N/A' against qult of method m on the effective
-//	             base B' = Length − 2|e| (soil; allowable basis with Soil.Allowable: the peak
-//	             contact pressure against it), or on rock the peak contact pressure under
-//	             characteristic actions against RockPressure
+//	             base B' = Length − 2|e| (soil; allowable basis with Soil.Allowable: besides,
+//	             the peak contact pressure against it, the worse governing), or on rock the
+//	             peak contact pressure under characteristic actions against RockPressure
 //
 // A fine soil (Soil.Undrained given) is checked in both the drained and
 // the undrained condition for sliding and bearing; the result is the worse,

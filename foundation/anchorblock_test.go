@@ -235,7 +235,8 @@ func TestAnchorBlockEdgeCases(t *testing.T) {
 	// Buoyancy 9.81·3·2.5·1.5 kN off 270 kN.
 	near(t, "buoyant uplift", byID(t, wt, "anchor.uplift").Provided,
 		byID(t, dry, "anchor.uplift").Provided*(270-9.81*11.25)/270, 1e-9)
-	// A site allowable pressure replaces the bearing-capacity equation.
+	// A site allowable pressure is checked beside the bearing-capacity
+	// equation; here it governs.
 	s := testSand()
 	s.Allowable = 150 * units.Kilopascal
 	rs, err = testBlock().Check([]foundation.AnchorPull{testPull()}, s, foundation.EC7, nil)
@@ -349,5 +350,50 @@ func TestAnchorBlockSteps(t *testing.T) {
 		if _, err := blk.Check(nil, testSand(), foundation.EC7, nil); !errors.Is(err, foundation.ErrInvalid) {
 			t.Errorf("bad step %d: %v", i, err)
 		}
+	}
+}
+
+// TestAnchorBlockAllowableAndEquation: a site's allowable pressure presumes
+// a vertical load; an anchor block's base carries a strongly inclined one,
+// so the bearing equation is checked besides and the worse governs. The
+// 3 × 2.5 × 1.5 m block (270 kN) in sand (γ 18 kN/m³, φ' 30°) with an
+// allowable pressure of 200 kPa, pulled by 200 kN at 10° at mid-length,
+// 0.5 m up. By hand, kN and m:
+//
+//	F_x = 196.96, F_z = 34.73, N = 235.27, e = 196.96·0.5/235.27 = 0.4186 m
+//	peak pressure 235.27/7.5·(1 + 6·0.4186/3) = 57.63 kPa → 0.288 of 200: passes
+//	EN 1997-1 D.4: B' = 3 − 2e = 2.163 (along the load), L' = 2.5, q = 27 kPa,
+//	m_B = (2 + B'/L')/(1 + B'/L'), i_q = (1 − H/N)^m, i_γ = (1 − H/N)^(m+1)
+//	N/A' against qult/3: fails
+//
+// With the allowable pressure alone (as before) the block passed.
+func TestAnchorBlockAllowableAndEquation(t *testing.T) {
+	s := foundation.Soil{UnitWeight: 18 * kNm3, Friction: deg(30), Allowable: 200 * units.Kilopascal}
+	pull := foundation.AnchorPull{Force: 200 * units.Kilonewton, Angle: deg(10), X: 1.5, Z: 0.5}
+	rs, err := testBlock().Check([]foundation.AnchorPull{pull}, s, foundation.EC7, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	fx, fz := 200*math.Cos(10*math.Pi/180), 200*math.Sin(10*math.Pi/180)
+	n := 270 - fz
+	e := fx * 0.5 / n
+	qmax := n / 7.5 * (1 + 6*e/3)
+	phi := math.Pi / 6
+	nq := math.Exp(math.Pi*math.Tan(phi)) * math.Pow(math.Tan(math.Pi/4+phi/2), 2)
+	ng := 2 * (nq - 1) * math.Tan(phi)
+	bp, lp := 3-2*e, 2.5
+	r := bp / lp
+	mB := (2 + r) / (1 + r)
+	iq, ig := math.Pow(1-fx/n, mB), math.Pow(1-fx/n, mB+1)
+	qult := 27*nq*(1+r*math.Sin(phi))*iq + 0.5*18*bp*ng*(1-0.3*r)*ig
+	uEq := n / (bp * lp) / (qult / 3)
+	b := byID(t, rs, "anchor.bearing")
+	near(t, "U_qa", valueOf(t, b, "U_qa"), qmax/200, 1e-9)
+	near(t, "U_qult", valueOf(t, b, "U_qult"), uEq, 1e-9)
+	if !(qmax/200 < 1 && uEq > 1) {
+		t.Fatalf("test geometry: allowable %.3f, equation %.3f", qmax/200, uEq)
+	}
+	if b.Status != check.Fail || !strings.HasPrefix(b.Basis, "drained (long-term) condition only") || !strings.Contains(b.Basis, "the bearing equation") {
+		t.Errorf("bearing %v (ratio %.3f), basis %q", b.Status, b.Ratio, b.Basis)
 	}
 }

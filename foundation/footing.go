@@ -172,9 +172,9 @@ func (ld FootingLoad) validate() error {
 //
 //	bearing:     e = M/N along Along and e_y = M_y/N across; N/A' on A' = (Along − 2|e|)(Across − 2|e_y|)
 //	             against qult (method m) under the resultant horizontal force √(H² + H_y²),
-//	             or, on the allowable basis, the peak contact pressure of both eccentricities
-//	             (BiaxialContactPressure) against Soil.Allowable when given; on rock that
-//	             peak under characteristic actions against RockPressure
+//	             and, on the allowable basis with Soil.Allowable, the peak contact pressure of
+//	             both eccentricities (BiaxialContactPressure) against it, the worse governing;
+//	             on rock that peak under characteristic actions against RockPressure
 //	sliding:     driving √(H² + H_y²), resisting N tan δ drained (cohesion and passive ignored),
 //	             A'c_u undrained (≤ 0.4 N where water or air reach the base; EN 1997-1 6.5.3)
 //	overturning: about the base edge the moment turns toward:

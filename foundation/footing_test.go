@@ -340,10 +340,15 @@ func TestFootingBiaxialHand(t *testing.T) {
 	slide := byID(t, rs, "footing.sliding")
 	near(t, "sliding driving", slide.Demand, 50e3, 1e-12)
 	near(t, "sliding resisting", slide.Capacity, 600e3*math.Tan(phi*2/3), 1e-12)
-	// The site's allowable pressure: the peak of both eccentricities.
+	// The site's allowable pressure: the peak of both eccentricities,
+	// 170/200; the bearing equation is checked besides and the worse
+	// governs.
 	s.Allowable = 200 * units.Kilopascal
 	rs, _ = f.Check(ld, s, foundation.EC7, nil)
-	near(t, "allowable route", byID(t, rs, "footing.bearing").Demand, 170e3, 1e-12)
+	withQa := byID(t, rs, "footing.bearing")
+	near(t, "allowable route", valueOf(t, withQa, "U_qa"), 0.85, 1e-12)
+	near(t, "equation beside it", valueOf(t, withQa, "U_qult"), bear.Ratio, 1e-12)
+	near(t, "the worse governs", withQa.Ratio, math.Max(0.85, bear.Ratio), 1e-12)
 	// One axis only gives less: the across components matter.
 	s.Allowable = 0
 	one := ld

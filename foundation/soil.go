@@ -52,8 +52,10 @@ type Soil struct {
 	Interface float64
 	// Allowable is an allowable bearing pressure from a site report; zero →
 	// none given. On rock it is the bearing limit on any basis; on soil the
-	// allowable basis compares the peak contact pressure with it instead of
-	// the bearing-capacity equation.
+	// allowable basis compares the peak contact pressure with it beside the
+	// bearing-capacity equation, the worse governing (a site's allowable
+	// pressure presumes a vertical load; an anchor's base carries an
+	// inclined one).
 	Allowable units.Pressure
 	// IsRock marks rock: rock anchors may be grouted in it, and its bearing
 	// is never computed from soil N-factors.

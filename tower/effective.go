@@ -51,13 +51,13 @@ func EffectiveLengthFactor(k, s float64) (float64, error) {
 	}
 	// f > 0 just above u = 0 (f ≈ u³(1 + s/3 + k s) for finite s); the least
 	// root lies below 4.4934, the root for a rigid base and a held top.
-	const steps, top = 4000, 4.5
+	const steps, top = 450, 4.5 // a step of 0.01: the roots lie about π apart
 	lo, flo := 1e-6, f(1e-6)
 	for i := 1; i <= steps; i++ {
 		hi := top * float64(i) / steps
 		fhi := f(hi)
 		if (flo > 0) != (fhi > 0) || fhi == 0 {
-			for range 100 {
+			for range 60 {
 				mid := (lo + hi) / 2
 				if fm := f(mid); (fm > 0) == (flo > 0) && fm != 0 {
 					lo, flo = mid, fm

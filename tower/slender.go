@@ -64,15 +64,36 @@ func (r Restraint) valid() bool { return r == FreeTop || r == HeldTop || r == Sp
 // restrained at its top by r (with lateral stiffness spring, N/m, for
 // SpringTop) on a base of flexibility k, and the relative top stiffness
 // s = K l³/EI used.
-func effectiveLength(r Restraint, l, k, spring, ei float64) (l0, s float64, err error) {
+func effectiveLength(r Restraint, l, k, spring, ei float64, known lengthFactor) (l0, s float64, err error) {
+	s = topStiffness(r, l, spring, ei)
+	f, err := known.factor(k, s)
+	return f * l, s, err
+}
+
+// topStiffness returns the relative stiffness s = K l³/EI of the top's
+// restraint r: 0 free, +Inf held.
+func topStiffness(r Restraint, l, spring, ei float64) float64 {
 	switch r {
 	case HeldTop:
-		s = math.Inf(1)
+		return math.Inf(1)
 	case SpringTop:
-		s = spring * l * l * l / ei
+		return spring * l * l * l / ei
 	}
-	f, err := EffectiveLengthFactor(k, s)
-	return f * l, s, err
+	return 0
+}
+
+// lengthFactor is EffectiveLengthFactor(k, s) worked out beforehand
+// (RCColumn.WithLengths), used when asked for the same k and s.
+type lengthFactor struct {
+	k, s, f float64
+	ok      bool
+}
+
+func (lf lengthFactor) factor(k, s float64) (float64, error) {
+	if lf.ok && lf.k == k && lf.s == s {
+		return lf.f, nil
+	}
+	return EffectiveLengthFactor(k, s)
 }
 
 // lengthBasis describes the effective length in words for a result's basis.
@@ -149,6 +170,47 @@ type RCColumn struct {
 	// Ecm is the secant modulus of the concrete; zero means EN 1992-1-1
 	// Table 3.1: Ecm = 22 (fcm/10)^0.3 GPa, fcm = fck + 8 MPa.
 	Ecm units.Pressure
+
+	lengths [2]lengthFactor // along, across: see WithLengths
+}
+
+// WithLengths returns c with the effective-length factor of each direction
+// (EffectiveLengthFactor), which depends on the section, length,
+// restraints and base only, worked out once, so that many checks of one
+// column under different actions (a search) do not solve for it each
+// time; Check gives the same results, bit for bit. Changing a field of the
+// column afterwards is safe: a factor is used only for the k and s it was
+// worked out for.
+func (c RCColumn) WithLengths() (RCColumn, error) {
+	if err := c.validate(); err != nil {
+		return c, err
+	}
+	for k := range c.lengths {
+		d := c.direction(k)
+		_, _, _, _, eiMax := d.stiffness(d.sec.model(false))
+		s := topStiffness(d.restraint, d.length, d.spring, eiMax)
+		f, err := EffectiveLengthFactor(d.k, s)
+		if err != nil {
+			return c, err
+		}
+		c.lengths[k] = lengthFactor{k: d.k, s: s, f: f, ok: true}
+	}
+	return c, nil
+}
+
+// direction returns direction k of the column (0 along the bridge, 1
+// across it), without its actions.
+func (c RCColumn) direction(k int) direction {
+	ecm := float64(c.Ecm)
+	if ecm == 0 {
+		ecm = float64(ModulusEN1992(c.Section.Fc))
+	}
+	d := direction{name: "along the bridge", sec: c.Section, restraint: c.Along, spring: c.AlongSpring}
+	if k == 1 {
+		d = direction{name: "across the bridge", sec: c.Section.Turned(), restraint: c.Across, spring: c.AcrossSpring}
+	}
+	d.ecm, d.length, d.k, d.lengths = ecm, float64(c.Length), baseFlexibility(c.BaseFlexibility), c.lengths[k]
+	return d
 }
 
 func (c RCColumn) validate() error {
@@ -230,6 +292,7 @@ type direction struct {
 	nEd, nQP    float64
 	phiInf      float64
 	ecm, length float64
+	lengths     lengthFactor // worked out beforehand, if at all
 }
 
 // columnDirection is the outcome of one direction.
@@ -301,24 +364,18 @@ func (c RCColumn) Check(a ColumnActions) (ColumnResults, error) {
 	if phiInf == 0 {
 		phiInf = DefaultCreep
 	}
-	ecm := float64(c.Ecm)
-	if ecm == 0 {
-		ecm = float64(ModulusEN1992(c.Section.Fc))
-	}
 	nqp := a.NQP
 	alongQP, acrossQP := a.AlongQP, a.AcrossQP
 	if nqp == 0 && alongQP == 0 && acrossQP == 0 {
 		nqp, alongQP, acrossQP = a.N, a.Along, a.Across
 	}
-	dirs := [2]direction{
-		{name: "along the bridge", sec: c.Section, restraint: c.Along, spring: c.AlongSpring, m: float64(a.Along), mqp: float64(alongQP)},
-		{name: "across the bridge", sec: c.Section.Turned(), restraint: c.Across, spring: c.AcrossSpring, m: float64(a.Across), mqp: float64(acrossQP)},
-	}
+	dirs := [2]direction{c.direction(0), c.direction(1)}
+	dirs[0].m, dirs[0].mqp = float64(a.Along), float64(alongQP)
+	dirs[1].m, dirs[1].mqp = float64(a.Across), float64(acrossQP)
 	var out [2]columnDirection
 	for k := range dirs {
 		d := &dirs[k]
-		d.nEd, d.nQP, d.phiInf, d.ecm, d.length = float64(a.N), float64(nqp), phiInf, ecm, float64(c.Length)
-		d.k = baseFlexibility(c.BaseFlexibility)
+		d.nEd, d.nQP, d.phiInf = float64(a.N), float64(nqp), phiInf
 		r, err := d.check()
 		if err != nil {
 			return ColumnResults{}, err
@@ -370,23 +427,29 @@ func (c RCColumn) Check(a ColumnActions) (ColumnResults, error) {
 	return ColumnResults{Along: out[0].result, Across: out[1].result, Both: bi}, nil
 }
 
+// stiffness returns the terms of the largest nominal stiffness the column
+// can have (k2 = 0.20, no creep, 5.8.7.2), against which the top spring
+// counts (the longest l0): E_cd, I_c, I_s, k1 and EI_max.
+func (d *direction) stiffness(md rcModel) (ecd, ic, is, k1, eiMax float64) {
+	h, b := md.h, md.b
+	ecd = d.ecm / 1.2
+	ic = b * h * h * h / 12
+	for _, l := range md.layers() {
+		is += l.area * (l.depth - h/2) * (l.depth - h/2)
+	}
+	k1 = math.Sqrt(float64(d.sec.Fc) / 1e6 / 20)
+	eiMax = k1*0.20*ecd*ic + md.es*is
+	return ecd, ic, is, k1, eiMax
+}
+
 // check checks one direction.
 func (d *direction) check() (columnDirection, error) {
 	const id, title = "tower.column_section", "Column section, axial force and bending"
 	sec := d.sec
 	md := sec.model(d.m < 0)
 	h, b, l := md.h, md.b, d.length
-	// The top spring counts against the largest nominal stiffness the
-	// column can have (k2 = 0.20, no creep, 5.8.7.2): the longest l0.
-	ecd := d.ecm / 1.2
-	ic := b * h * h * h / 12
-	var is float64
-	for _, l := range md.layers() {
-		is += l.area * (l.depth - h/2) * (l.depth - h/2)
-	}
-	k1 := math.Sqrt(float64(sec.Fc) / 1e6 / 20)
-	eiMax := k1*0.20*ecd*ic + md.es*is
-	l0, sTop, err := effectiveLength(d.restraint, l, d.k, d.spring, eiMax)
+	ecd, ic, is, k1, eiMax := d.stiffness(md)
+	l0, sTop, err := effectiveLength(d.restraint, l, d.k, d.spring, eiMax, d.lengths)
 	if err != nil {
 		return columnDirection{}, err
 	}

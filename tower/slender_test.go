@@ -3,6 +3,7 @@ package tower_test
 import (
 	"errors"
 	"math"
+	"reflect"
 	"strings"
 	"testing"
 
@@ -261,7 +262,9 @@ func TestStockyColumn(t *testing.T) {
 		}
 	}
 	// Biaxial: N_Rd = A_c f_cd + A_s f_yd; a linear in N_Ed/N_Rd between
-	// 0.1 (1.0), 0.7 (1.5) and 1.0 (2.0).
+	// 0.1 (1.0), 0.7 (1.5) and 1.0 (2.0) (EN 1992-1-1:2004 5.8.9(4), the
+	// table under eq. 5.39 [R, as quoted in published renderings of the
+	// clause]).
 	nrd := 0.24*30e6/1.5 + 6*float64(bar)*500e6/1.15
 	r := n / nrd
 	a := 1 + (r-0.1)/0.6*0.5
@@ -380,5 +383,45 @@ func TestCreepRatioNotCapped(t *testing.T) {
 	}
 	if got := value(t, res.Along, "φ_ef"); !near(got, want, 1e-9) {
 		t.Errorf("φ_ef %g, want %g (eq. 5.19, no cap)", got, want)
+	}
+}
+
+// TestWithLengthsSameResults checks that a column whose effective lengths
+// were worked out beforehand (WithLengths) gives every result of Check bit
+// for bit as the column that solves for them each time: every restraint,
+// a spring and no base flexibility given, moments of either sign and
+// tension, a plain section; and that WithLengths refuses what Check does.
+func TestWithLengthsSameResults(t *testing.T) {
+	plain := slenderColumn(tower.FreeTop)
+	plain.Section.Bars = nil
+	spring := slenderColumn(tower.SpringTop)
+	spring.AlongSpring, spring.BaseFlexibility = 4e5, 0
+	held := slenderColumn(tower.HeldTop)
+	held.Across, held.AcrossSpring = tower.SpringTop, 1e4
+	for _, c := range []tower.RCColumn{slenderColumn(tower.FreeTop), held, spring, plain} {
+		pre, err := c.WithLengths()
+		if err != nil {
+			t.Fatal(err)
+		}
+		for _, a := range []tower.ColumnActions{
+			{N: kN(120), Along: kNm(30), Across: kNm(4)},
+			{N: kN(300), Along: -kNm(45), Across: -kNm(9), NQP: kN(200), AlongQP: -kNm(20)},
+			{N: kN(900), Along: kNm(5)},
+			{N: -kN(40), Along: kNm(10)},
+		} {
+			want, errWant := c.Check(a)
+			got, errGot := pre.Check(a)
+			if (errWant == nil) != (errGot == nil) {
+				t.Fatalf("%v: errors %v and %v", a, errWant, errGot)
+			}
+			if !reflect.DeepEqual(got, want) {
+				t.Errorf("%+v, %v: WithLengths changes the results:\n%+v\n%+v", c.Along, a, got, want)
+			}
+		}
+	}
+	bad := slenderColumn(tower.FreeTop)
+	bad.Length = 0
+	if _, err := bad.WithLengths(); !errors.Is(err, tower.ErrInvalid) {
+		t.Errorf("zero length: %v", err)
 	}
 }

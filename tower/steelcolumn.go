@@ -128,7 +128,7 @@ func (c SteelColumn) Check(a ColumnActions) (ColumnResults, error) {
 	legs := float64(max(c.Legs, 1))
 	kb := baseFlexibility(c.BaseFlexibility)
 	ei := t.e() * t.SecondMoment() // each leg; a spring on the column is shared by its legs
-	l0y, sy, err := effectiveLength(c.Along, l, kb, c.AlongSpring/legs, ei)
+	l0y, sy, err := effectiveLength(c.Along, l, kb, c.AlongSpring/legs, ei, lengthFactor{})
 	if err != nil {
 		return ColumnResults{}, err
 	}
@@ -136,9 +136,9 @@ func (c SteelColumn) Check(a ColumnActions) (ColumnResults, error) {
 	if c.Legs == 2 {
 		// Across the bridge the frame bends as a whole: I_eff (6.4).
 		s := float64(c.Spacing)
-		l0z, sz, err = effectiveLength(c.Across, l, kb, c.AcrossSpring, t.e()*2*float64(t.Area())*(s/2)*(s/2))
+		l0z, sz, err = effectiveLength(c.Across, l, kb, c.AcrossSpring, t.e()*2*float64(t.Area())*(s/2)*(s/2), lengthFactor{})
 	} else {
-		l0z, sz, err = effectiveLength(c.Across, l, kb, c.AcrossSpring, ei)
+		l0z, sz, err = effectiveLength(c.Across, l, kb, c.AcrossSpring, ei, lengthFactor{})
 	}
 	if err != nil {
 		return ColumnResults{}, err
