@@ -24,6 +24,7 @@ type resistance struct {
 	factor float64 // the global factor, or γ_R
 	basis  string
 	notes  []string
+	values []check.Value // the basis's own terms
 }
 
 // DefaultGlobalFactor is the factor of safety on the minimum breaking force
@@ -107,13 +108,20 @@ func (g GlobalFactor) resistance(r Rope) (resistance, error) {
 // PartialFactor is the limit-state basis of EN 1993-1-11:2006 cl. 6.2
 // (from memory):
 //
-//	F_Rd = F_uk/(1.5 γ_R),  F_uk = k_e F_min
+//	F_Rd = min(F_uk/(1.5 γ_R), F_k/γ_R),  F_uk = k_e F_min
 //
-// The second criterion, F_k/γ_R on the 0.2 % proof force F_k, is not
-// applied: F_k is not published for stranded ropes and for them the
-// F_uk criterion governs. The tension checked must be the design value
-// F_Ed (factored loads). Zero fields take DefaultGammaR and DefaultKe.
-type PartialFactor struct{ GammaR, Ke float64 }
+// with F_k the characteristic 0.2 % proof force of the rope. F_k is rarely
+// published for stranded ropes; where it is not given (Proof zero) the
+// second criterion is not applied, which is unconservative only for a rope
+// whose proof force lies below 2/3 of k_e F_min: the result says so. The
+// tension checked must be the design value F_Ed (factored loads). Zero
+// GammaR and Ke take DefaultGammaR and DefaultKe.
+type PartialFactor struct {
+	GammaR, Ke float64
+	// Proof is the rope's 0.2 % proof force F_k as a fraction of its
+	// minimum breaking force; zero means not known (not applied).
+	Proof float64
+}
 
 func (p PartialFactor) resistance(r Rope) (resistance, error) {
 	g := p.GammaR
@@ -128,8 +136,22 @@ func (p PartialFactor) resistance(r Rope) (resistance, error) {
 	if !finite(g) || g <= 0 {
 		return resistance{}, invalidf("partial factor γ_R must be positive and finite, got %g", g)
 	}
-	return resistance{r: ke * float64(r.MBF) / (1.5 * g), ke: ke, factor: g, notes: notes,
-		basis: "EN 1993-1-11:2006 cl. 6.2, F_Rd = k_e F_min/(1.5 γ_R) (from memory)"}, nil
+	if !finite(p.Proof) || p.Proof < 0 || p.Proof > 1 {
+		return resistance{}, invalidf("proof force F_k must be a fraction of the minimum breaking force in [0, 1], got %g", p.Proof)
+	}
+	fuk := ke * float64(r.MBF)
+	res := resistance{r: fuk / (1.5 * g), ke: ke, factor: g, notes: notes,
+		values: []check.Value{check.Of("F_uk", "characteristic breaking force with the termination, k_e MBF", units.Force(fuk))}}
+	if p.Proof > 0 {
+		fk := p.Proof * float64(r.MBF)
+		res.r = math.Min(res.r, fk/g)
+		res.values = append(res.values, check.Of("F_k", "characteristic 0.2 % proof force", units.Force(fk)))
+		res.basis = "EN 1993-1-11:2006 cl. 6.2, F_Rd = min(k_e F_min/(1.5 γ_R), F_k/γ_R) (from memory)"
+	} else {
+		res.basis = "EN 1993-1-11:2006 cl. 6.2, F_Rd = k_e F_min/(1.5 γ_R) (from memory); the proof-force criterion F_k/γ_R is not applied, F_k not being given " +
+			"(it governs only for a rope whose 0.2 % proof force lies below 2/3 of k_e F_min)"
+	}
+	return res, nil
 }
 
 // DefaultSharing is the factor by which the most loaded of two or more
@@ -206,7 +228,7 @@ func (g Group) TensionCheck(t units.Force, basis TensionBasis) (check.Result, er
 			check.Of("γ", "factor of the basis (global factor, or γ_R)", units.Ratio(res.factor)),
 			check.Of("R", "design resistance of one rope", units.Force(res.r)),
 			check.Of("F_MBF", "factor on MBF the most loaded rope has, MBF/T_1", units.Ratio(fos)),
-		)
+		).WithValues(res.values...)
 	for _, note := range res.notes {
 		out = out.WithNote(note)
 	}

@@ -1,0 +1,41 @@
+package sagspan
+
+import (
+	"testing"
+
+	"github.com/sagspan/sagspan/check"
+)
+
+// TestGrooveFlagCarriesItsNumbers: a saddle whose groove diameter the
+// description leaves out gets a flag asking for it, with the least groove
+// the rope needs, (D/d)_min · d = 25 × 26 mm = 650 mm on testdata/level.json
+// (the least D/d of 25 for six-strand ropes, common practice, from
+// memory), and the numbers that make it among its values: d and (D/d)_min.
+// With the groove given (700 mm), the check compares it: ratio 650/700.
+func TestGrooveFlagCarriesItsNumbers(t *testing.T) {
+	b := loadTestBridge(t, "level.json")
+	a, err := Check(b, &Options{SkipComfort: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := find(t, a.Report, "cable.saddle_ratio", "left saddle, walkway ropes", grooveCase)
+	if r.Status != check.Flag {
+		t.Errorf("status %v, want a flag", r.Status)
+	}
+	near(t, "least groove", r.Demand, 25*0.026, 1e-12)
+	for sym, want := range map[string]float64{"d": 0.026, "(D/d)_min": 25, "D_min": 0.65} {
+		v, ok := r.Value(sym)
+		if !ok {
+			t.Errorf("value %s missing", sym)
+			continue
+		}
+		near(t, sym, v.Value, want, 1e-12)
+	}
+	b.Banks.Left.Tower.Saddle.GrooveDiameter = 0.7
+	a, err = Check(b, &Options{SkipComfort: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	r = find(t, a.Report, "cable.saddle_ratio", "left saddle, walkway ropes", grooveCase)
+	near(t, "D/d utilisation", r.Ratio, 0.65/0.7, 1e-12)
+}
