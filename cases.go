@@ -312,7 +312,8 @@ type defaultCase struct {
 //	wind lifting the walkway          G (favourable) + W    reference, with the upward force on the walkway
 //	sun on the span, ...              G + Q                 span hottest, backstays cooler by loads.sun_difference
 //	                                                        (not below the coldest)
-//	one rope broken: GROUP            G + ψ1 Q (accidental) reference, crowd on the whole span
+//	one rope broken: GROUP            G + ψ1 Q + ψ2 T       ψ2 0.5 of the way from the reference to the coldest,
+//	                                  (accidental)          crowd on the whole span
 //	flood with crowd                  G + Q                 reference, crowd on the whole span, water at the design flood
 //
 // On the partial-factor basis G, Q and W carry γG (1.0 where favourable),
@@ -361,7 +362,7 @@ func (b Bridge) Cases() []LoadCase {
 			continue
 		}
 		cases = append(cases, LoadCase{Name: name, Situation: Accidental, Crowd: whole,
-			CrowdFactor: b.crowdInAccident(), Temperature: c.Reference, Broken: 1, BrokenGroup: g.Name})
+			CrowdFactor: b.crowdInAccident(), Temperature: b.accidentTemperature(), Broken: 1, BrokenGroup: g.Name})
 	}
 	for _, spec := range b.Loads.Cases {
 		cases = append(cases, spec.loadCase(b))
