@@ -39,3 +39,26 @@ func TestGrooveFlagCarriesItsNumbers(t *testing.T) {
 	r = find(t, a.Report, "cable.saddle_ratio", "left saddle, walkway ropes", grooveCase)
 	near(t, "D/d utilisation", r.Ratio, 0.65/0.7, 1e-12)
 }
+
+// TestClearanceWithoutFloodCarriesItsNumbers: with no design flood the
+// clearance is a record of the lowest walkway underside, its elevation and
+// where it lies among the values (not only in a note): on
+// testdata/level.json under the permanent load, 100 − 2.5 − 0.3 = 97.2 m at
+// midspan (a level span sags lowest at its middle).
+func TestClearanceWithoutFloodCarriesItsNumbers(t *testing.T) {
+	b := loadTestBridge(t, "level.json")
+	b.Site.Flood = Level{None: true}
+	a, err := Check(b, &Options{SkipComfort: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := find(t, a.Report, "bridge.clearance", "walkway", casePermanent)
+	for sym, want := range map[string]float64{"z_w": 97.2, "x_w": 25} {
+		v, ok := r.Value(sym)
+		if !ok {
+			t.Errorf("value %s missing", sym)
+			continue
+		}
+		near(t, sym, v.Value, want, 1e-9)
+	}
+}

@@ -38,7 +38,11 @@ func (m *model) checkClearance(out sink, service []CaseState) {
 			out.add(check.Record("bridge.clearance", "Walkway underside above design flood", units.KindLength, float64(soffit)).
 				For("walkway", cs.Case.Name).
 				WithBasis("elevation of the lowest walkway underside, characteristic loads (common practice)").
-				WithNote(fmt.Sprintf("nothing to check: the description declares no design flood (site.flood_elevation \"none\"); lowest underside at x = %s", x)))
+				WithValues(
+					check.Of("z_w", "elevation of the lowest walkway underside", soffit),
+					check.Of("x_w", "where it lies, from the left saddle", x),
+				).
+				WithNote("nothing to check: the description declares no design flood (site.flood_elevation \"none\")"))
 			continue
 		}
 		clear := soffit - site.Flood.Z
