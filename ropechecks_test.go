@@ -62,3 +62,23 @@ func TestClearanceWithoutFloodCarriesItsNumbers(t *testing.T) {
 		near(t, sym, v.Value, want, 1e-9)
 	}
 }
+
+// TestTerminationDefaultIsGrips: with no termination given, the ropes are
+// checked with the efficiency of wire rope grips, k_e 0.80 (the least of
+// the usual terminations: EN 13411-5 grips, from memory), and "grips", the
+// name the anchor attachments use, is accepted for basis.termination as
+// well as "clips". testdata/level.json: four 26 mm ropes, MBF 0.356·26²·1770
+// N (rope makers' factor, package cable's References), factor 3.
+func TestTerminationDefaultIsGrips(t *testing.T) {
+	b := loadTestBridge(t, "level.json")
+	mbf := 0.356 * 26 * 26 * 1770
+	for _, term := range []string{"", "grips", "clips"} {
+		b.Basis.Termination = term
+		a, err := Check(b, &Options{SkipComfort: true})
+		if err != nil {
+			t.Fatalf("termination %q: %v", term, err)
+		}
+		r := find(t, a.Report, "cable.tension", "walkway ropes", casePermanent)
+		near(t, "rope capacity, termination "+term, r.Capacity, 0.8*mbf/3, 1e-9)
+	}
+}

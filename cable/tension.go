@@ -40,22 +40,24 @@ const (
 	// DefaultGammaR is the recommended partial factor γ_R on rope resistance.
 	DefaultGammaR = 0.90
 	// DefaultKe is the termination efficiency k_e assumed when none is
-	// given: 0.9, that of a swaged ferrule or good wedge socket (from
-	// memory; a poured socket reaches 1.0, wire rope clips less). Set Ke
-	// for the termination actually used.
-	DefaultKe = 0.90
+	// given: 0.80, that of wire rope grips (clips), the least efficient of
+	// the terminations TerminationEfficiency knows and a common one on
+	// rural footbridges (from memory): the cautious choice when the
+	// termination is not known. Set Ke for the termination actually used
+	// (a ferrule-secured eye 0.90, a socket 1.0).
+	DefaultKe = 0.80
 )
 
 // TerminationEfficiency returns the efficiency k_e of a rope termination
 // by name, and false for a name it does not know (from memory, the
 // EN 13411 family and rope makers' data; common practice):
 //
-//	"clips"    wire rope grips (U-bolt clips)           0.80
+//	"clips"    wire rope grips (U-bolt clips)           0.80  ("grips" too)
 //	"ferrule"  ferrule-secured (swaged) eye             0.90
 //	"socket"   swaged socket or poured (resin, spelter)  1.00
 func TerminationEfficiency(name string) (float64, bool) {
 	switch strings.ToLower(strings.TrimSpace(name)) {
-	case "clips":
+	case "clips", "grips":
 		return 0.80, true
 	case "ferrule":
 		return 0.90, true
@@ -66,14 +68,14 @@ func TerminationEfficiency(name string) (float64, bool) {
 }
 
 // Terminations lists the names TerminationEfficiency knows.
-func Terminations() []string { return []string{"clips", "ferrule", "socket"} }
+func Terminations() []string { return []string{"clips", "grips", "ferrule", "socket"} }
 
 // efficiency returns k_e, or DefaultKe with a note when it is zero.
 func efficiency(ke float64) (float64, []string, error) {
 	var notes []string
 	if ke == 0 {
 		ke = DefaultKe
-		notes = append(notes, "default termination efficiency k_e "+strconv.FormatFloat(ke, 'f', 2, 64)+": set it for the termination used")
+		notes = append(notes, "default termination efficiency k_e "+strconv.FormatFloat(ke, 'f', 2, 64)+", that of wire rope grips, the least of the usual terminations (cautious): set it for the termination used")
 	}
 	if !finite(ke) || ke <= 0 || ke > 1 {
 		return 0, nil, invalidf("termination efficiency k_e must be in (0, 1], got %g", ke)
