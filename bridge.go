@@ -595,7 +595,8 @@ type Basis struct {
 	// both bases; zero → that of Termination, else cable.DefaultKe.
 	RopeEfficiency float64 `json:"rope_efficiency,omitempty"`
 	// Termination names the rope terminations, for their efficiency:
-	// "clips", "ferrule" or "socket" (see cable.TerminationEfficiency).
+	// "clips" (or "grips", as the anchor attachments name them), "ferrule" or
+	// "socket" (see cable.TerminationEfficiency); absent means grips (0.80).
 	Termination string `json:"termination,omitempty"`
 	// MinGrooveRatio is the least saddle groove diameter to rope diameter
 	// ratio D/d; zero → cable.DefaultMinGrooveRatio.

@@ -120,3 +120,24 @@ func TestBrokenRopeOfTwoWithSharing(t *testing.T) {
 		t.Errorf("sharing factor of the one rope left %v, want 1", v.Value)
 	}
 }
+
+// TestBrokenRopeWithThermalAction: the accidental combination of EN 1990
+// eq. (6.11b) carries the accompanying actions at their quasi-permanent
+// values, ψ2 T with ψ2 = 0.5 for thermal actions on footbridges (EN 1990
+// Annex A2 Table A2.2, read in the final PT draft of prAnnex A2, 2003),
+// taken toward the cold that tightens the ropes: on the demo (reference
+// 15 °C, coldest −10 °C) the broken-rope case's ropes are at 15 − 0.5·25 =
+// 2.5 °C. It was at the reference temperature, without the thermal action.
+func TestBrokenRopeWithThermalAction(t *testing.T) {
+	b := Demo()
+	found := false
+	for _, lc := range b.Cases() {
+		if lc.Broken > 0 {
+			found = true
+			near(t, lc.Name+": rope temperature, °C", lc.Temperature.Celsius(), 2.5, 1e-12)
+		}
+	}
+	if !found {
+		t.Fatal("the demo has no broken-rope case")
+	}
+}

@@ -104,7 +104,7 @@ func (lc LoadCase) windy() bool { return lc.Wind > 0 }
 func (lc LoadCase) describe(b Bridge) string {
 	var parts []string
 	if lc.Situation == Construction {
-		parts = append(parts, "bare ropes, walkway placed "+lc.Deck.describe(b.Site.Span))
+		parts = append(parts, "new bare ropes as the erection table sets them (free to render over fixed saddles, before their constructional stretch: cautious), walkway placed "+lc.Deck.describe(b.Site.Span))
 	}
 	switch {
 	case lc.crowded() && lc.CrowdPressure > 0:
@@ -163,7 +163,7 @@ func (f LoadedLength) describe(b Bridge) string {
 	}
 	what := "crowd (EN 1991-2 5.3.2.1 pressure of each loaded length, or the description's own)"
 	if f.deck() {
-		what = fmt.Sprintf("walkway placed on the bare ropes with %s of crew and tools on it", f.Base.CrowdPressure)
+		what = fmt.Sprintf("walkway placed on the new bare ropes as the erection table sets them (free to render over fixed saddles, before their constructional stretch: cautious) with %s of crew and tools on it", f.Base.CrowdPressure)
 	}
 	return fmt.Sprintf("%s on every loaded length %s; ropes at %s; each check reports its worst stretch (%d lengths swept per placement, refined to %.2g of the span)",
 		what, strings.Join(where, ", "), f.Base.Temperature, sweepPoints, refineTol)
@@ -312,7 +312,8 @@ type defaultCase struct {
 //	wind lifting the walkway          G (favourable) + W    reference, with the upward force on the walkway
 //	sun on the span, ...              G + Q                 span hottest, backstays cooler by loads.sun_difference
 //	                                                        (not below the coldest)
-//	one rope broken: GROUP            G + ψ1 Q (accidental) reference, crowd on the whole span
+//	one rope broken: GROUP            G + ψ1 Q + ψ2 T       ψ2 0.5 of the way from the reference to the coldest,
+//	                                  (accidental)          crowd on the whole span
 //	flood with crowd                  G + Q                 reference, crowd on the whole span, water at the design flood
 //
 // On the partial-factor basis G, Q and W carry γG (1.0 where favourable),
@@ -361,7 +362,7 @@ func (b Bridge) Cases() []LoadCase {
 			continue
 		}
 		cases = append(cases, LoadCase{Name: name, Situation: Accidental, Crowd: whole,
-			CrowdFactor: b.crowdInAccident(), Temperature: c.Reference, Broken: 1, BrokenGroup: g.Name})
+			CrowdFactor: b.crowdInAccident(), Temperature: b.accidentTemperature(), Broken: 1, BrokenGroup: g.Name})
 	}
 	for _, spec := range b.Loads.Cases {
 		cases = append(cases, spec.loadCase(b))
@@ -377,7 +378,14 @@ func (b Bridge) Cases() []LoadCase {
 //
 //	crowd, coldest rope    G + Q on a stretch    coldest, from either end or centred
 //	crowd, hottest rope    G + Q on a stretch    hottest
-//	deck placed            bare ropes + walkway and crew on a stretch from one bank (construction)
+//	deck placed            bare ropes + walkway and crew on a stretch from one bank (construction), coldest
+//
+// The construction stage is the new rope as the erection table sets it
+// (free to render over fixed saddles, not yet stretched by its
+// constructional stretch) at the coldest rope temperature: the walkway may
+// be placed in any season, and a colder, shorter rope pulls harder on
+// everything the stage loads (cautious: on the test bridges the cold raised
+// every construction result and the heat lowered it).
 //
 // The crowd is combined with the extreme rope temperatures at full value:
 // conservative against EN 1990's ψ0 = 0.6 on thermal actions (Table A2.2,
@@ -407,10 +415,14 @@ func (b Bridge) LoadedLengths() []LoadedLength {
 		if b.Loads.DeckFrom == "right" {
 			p, bank = FromRight, "right"
 		}
-		out = append(out, LoadedLength{Name: familyDeck, Label: "from the " + bank + " bank (construction)",
+		label := "from the " + bank + " bank (construction)"
+		if c.Coldest != c.Reference {
+			label += ", coldest rope"
+		}
+		out = append(out, LoadedLength{Name: familyDeck, Label: label,
 			Placements: []Placement{p},
 			Base: b.factored(LoadCase{Situation: Construction, CrowdFactor: 1,
-				CrowdPressure: b.constructionLoad(), Temperature: c.Reference}, b.partial())})
+				CrowdPressure: b.constructionLoad(), Temperature: c.Coldest}, b.partial())})
 	}
 	return out
 }

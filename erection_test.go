@@ -198,3 +198,51 @@ func TestErectionWithClampedGrooves(t *testing.T) {
 		}
 	}
 }
+
+// TestConstructionStartsFromErection checks that the construction stage
+// stands on the ropes the erection table sets: new rope, not yet stretched
+// by its constructional stretch, free to render over fixed saddles whatever
+// their grooves do in service, at the coldest rope temperature (the
+// walkway may be placed in winter). On the bridge of
+// TestErectionWithClampedGrooves, with no walkway placed yet, every group
+// must hang as the erection table's row at the coldest temperature says
+// (the same H and sag; the table's own H is checked by hand in
+// TestConstructionalStretchByHand). Before, the stage hung the bedded-in
+// rope at the reference temperature over clamped grooves, 0.25 % of rope
+// longer than the crew sets.
+func TestConstructionStartsFromErection(t *testing.T) {
+	b := loadTestBridge(t, "level.json")
+	b.Banks.Left.Tower.Saddle.Groove = "clamped"
+	b.Banks.Right.Tower.Saddle.Groove = "clamped"
+	b.Banks.Left.Backstay = Backstay{Horizontal: 4 * units.Metre, Drop: 2 * units.Metre}
+	b.Banks.Right.Backstay = Backstay{Horizontal: 30 * units.Metre, Drop: 8 * units.Metre}
+	b.Climate.Coldest, b.Climate.Hottest = b.Climate.Reference-20, b.Climate.Reference+20
+	a, err := Check(b, &Options{SkipComfort: true, ErectionStep: 20})
+	if err != nil {
+		t.Fatal(err)
+	}
+	m, err := newModel(b)
+	if err != nil {
+		t.Fatal(err)
+	}
+	m.grooves = m.variants()[0].grooves
+	var deck *LoadedLength
+	for _, f := range b.LoadedLengths() {
+		if f.Name == familyDeck {
+			deck = &f
+		}
+	}
+	if deck == nil || deck.Base.Temperature != b.Climate.Coldest {
+		t.Fatalf("construction family %+v, want one at the coldest rope temperature", deck)
+	}
+	bare, _, err := m.pair(deck.at(FromLeft, 0, b.Site.Span), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	row := a.Erection[0].Rows[0]
+	if row.Temperature != b.Climate.Coldest {
+		t.Fatalf("first erection row at %s", row.Temperature)
+	}
+	near(t, "H of the bare ropes in the construction stage", float64(bare.Groups[0].H), float64(row.H), 1e-9)
+	near(t, "sag of the bare ropes in the construction stage", float64(bare.Groups[0].Sag), float64(row.Sag), 1e-9)
+}

@@ -57,7 +57,7 @@ var fieldDocs = map[string]string{
 	"Basis.RopeEfficiency":            "RopeEfficiency is the termination efficiency k_e of the ropes, on both bases; zero → that of Termination, else cable.DefaultKe.",
 	"Basis.RopeFactor":                "on the ropes' minimum breaking force; default 3 (cable.DefaultGlobalFactor)",
 	"Basis.SlidingFactor":             "against sliding of footings and anchors; default 1.5",
-	"Basis.Termination":               "Termination names the rope terminations, for their efficiency: \"clips\", \"ferrule\" or \"socket\" (see cable.TerminationEfficiency).",
+	"Basis.Termination":               "Termination names the rope terminations, for their efficiency: \"clips\" (or \"grips\", as the anchor attachments name them), \"ferrule\" or \"socket\" (see cable.TerminationEfficiency); absent means grips (0.80).",
 	"Basis.UpliftFactor":              "against uplift of anchor blocks; default 1.5",
 	"Bridge.Banks":                    "Banks is what stands on each bank.",
 	"Bridge.Basis":                    "Basis chooses how the checks are verified and their factors.",

@@ -129,6 +129,20 @@ const (
 	defaultBreakDynamic = 2.0
 )
 
+// thermalInAccident is ψ2 on the thermal action accompanying an accident:
+// 0.5 for footbridges, EN 1990 Annex A2 Table A2.2 (read in the final PT
+// draft of prAnnex A2, 2003), with eq. (6.11b).
+const thermalInAccident = 0.5
+
+// accidentTemperature returns the rope temperature of the accidental
+// cases: the quasi-permanent thermal action ψ2 T taken toward the coldest
+// rope temperature, which tightens the ropes (cautious for the rope checks
+// the case is for).
+func (b Bridge) accidentTemperature() units.Temperature {
+	c := b.Climate
+	return c.Reference + units.Temperature(thermalInAccident*float64(c.Coldest-c.Reference))
+}
+
 func (b Bridge) crowdInAccident() float64 {
 	return orDefault(b.Loads.CrowdInAccident, defaultCrowdInAccident)
 }

@@ -162,9 +162,11 @@ func (m *model) bank(s Side) *Bank {
 // w_rope already holds its S/l). The rope plane swings to carry the
 // vector sum of the uniform vertical load and the wind, so the uniform
 // in-plane load is √(vertical² + lateral²). A crowd stretch that is not the
-// whole span stays a vertical patch in the swung plane: it is taken whole
-// in the plane (more than its in-plane component, which is conservative for
-// tensions). In the construction stage the walkway's dead load lies only on
+// whole span stays a vertical patch in the swung plane: it is taken there as
+// 1/cos(swing) of itself, so that its vertical component is its whole
+// weight (more than its in-plane component, conservative for tensions; its
+// lateral component tan(swing) of it is fictitious, conservative across
+// the bridge). In the construction stage the walkway's dead load lies only on
 // the placed stretch.
 func (m *model) load(g group, lc LoadCase) (cable.Load, units.Angle) {
 	l := m.b.Site.Span
@@ -207,6 +209,16 @@ func (m *model) load(g group, lc LoadCase) (cable.Load, units.Angle) {
 		}
 		swing = units.Angle(math.Atan2(lateral, vertical))
 		load.Uniform = units.LoadPerLength(math.Hypot(vertical, lateral))
+		// A crowd on part of the span, a vertical load, in the swung
+		// plane: taken as 1/cos(swing) of itself there, so that its
+		// vertical component on the saddles is its whole weight (its
+		// lateral one, tan(swing) of it, is not there in truth:
+		// conservative across the bridge).
+		if c := math.Cos(float64(swing)); len(load.Patches) > 0 && c > 0 {
+			for k := range load.Patches {
+				load.Patches[k].Load /= units.LoadPerLength(c)
+			}
+		}
 	}
 	return load, swing
 }

@@ -33,6 +33,9 @@ func perturb(v any, r *rand.Rand) any {
 // with finite demands, capacities and ratios (an unbounded ratio or factor
 // of safety is +Inf by design, never NaN).
 func TestPerturbedDescriptions(t *testing.T) {
+	if testing.Short() {
+		t.Skip("checks 400 perturbed descriptions")
+	}
 	r := rand.New(rand.NewSource(7))
 	raw, err := json.Marshal(Demo()) // bare SI numbers, so they can be scaled
 	if err != nil {

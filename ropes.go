@@ -109,10 +109,16 @@ func (m *model) grooveChecks(out sink) error {
 		for _, g := range m.groups {
 			element := side.String() + " saddle, " + g.Name
 			if groove == 0 {
-				need := orDefault(m.b.Basis.MinGrooveRatio, cable.DefaultMinGrooveRatio) * float64(g.rope.Diameter)
+				least := orDefault(m.b.Basis.MinGrooveRatio, cable.DefaultMinGrooveRatio)
+				need := least * float64(g.rope.Diameter)
 				r := check.Record("cable.saddle_ratio", "Saddle groove diameter to rope diameter, D/d", units.KindLength, need).
 					For(element, grooveCase).
 					WithBasis("groove diameter against the least D/d for the rope's construction (common practice)").
+					WithValues(
+						check.Of("d", "rope diameter", g.rope.Diameter),
+						check.Of("(D/d)_min", "least ratio", units.Ratio(least)),
+						check.Of("D_min", "least groove diameter the rope needs, (D/d)_min d", units.Length(need)),
+					).
 					WithNote("the groove diameter is not given (banks." + side.String() + ".tower.saddle.groove_diameter): the demand shown is the least groove the rope needs")
 				r.Status = check.Flag
 				out.add(r)

@@ -133,6 +133,10 @@ func (m *model) analyse(lc LoadCase) (CaseState, error) {
 // analyseFrom is analyse with the rope fed over the saddles in a nearby
 // state as the start of each group's iteration (warm, nil for none).
 func (m *model) analyseFrom(lc LoadCase, warm *CaseState) (CaseState, error) {
+	if lc.Situation == Construction {
+		// New rope free to render over fixed saddles, as it is erected.
+		defer m.erecting()()
+	}
 	cs := CaseState{Case: lc, Groups: make([]GroupState, len(m.groups))}
 	var buf [2][8]tower.LevelForce // room for the saddles of eight groups and the column's wind
 	levels := [2][]tower.LevelForce{buf[0][:0], buf[1][:0]}
@@ -219,6 +223,12 @@ func (m *model) solveInput(g group, lc LoadCase) solveInput {
 	in.dtBackstay = in.dt
 	if lc.BackstayTemperature != 0 {
 		in.dtBackstay = float64(lc.BackstayTemperature - m.b.Climate.Reference)
+	}
+	if lc.Situation == Construction {
+		// The walkway is placed on new rope, set by the erection table: it
+		// has not yet taken its constructional stretch (cautious: it takes
+		// some as the walkway goes on).
+		in.scale = 1 / (1 + g.constructionalStretch())
 	}
 	if lc.Broken > 0 && lc.BrokenGroup == g.Name && g.Count > lc.Broken {
 		in.intact = float64(g.Count-lc.Broken) / float64(g.Count)

@@ -38,7 +38,11 @@ func (m *model) checkClearance(out sink, service []CaseState) {
 			out.add(check.Record("bridge.clearance", "Walkway underside above design flood", units.KindLength, float64(soffit)).
 				For("walkway", cs.Case.Name).
 				WithBasis("elevation of the lowest walkway underside, characteristic loads (common practice)").
-				WithNote(fmt.Sprintf("nothing to check: the description declares no design flood (site.flood_elevation \"none\"); lowest underside at x = %s", x)))
+				WithValues(
+					check.Of("z_w", "elevation of the lowest walkway underside", soffit),
+					check.Of("x_w", "where it lies, from the left saddle", x),
+				).
+				WithNote("nothing to check: the description declares no design flood (site.flood_elevation \"none\")"))
 			continue
 		}
 		clear := soffit - site.Flood.Z
@@ -102,18 +106,7 @@ func (m *model) erection(a *Analysis, opts *Options) error {
 	for t := float64(c.Coldest); t <= float64(c.Hottest)+1e-9; t += step {
 		temps = append(temps, units.Temperature(t))
 	}
-	// The chain's reference state has each rope's tension continuous over
-	// its saddle: on a fixed saddle the rope renders freely while it is
-	// set and while the walkway is hung, whatever holds it in service
-	// (clamped, gripping), and is clamped after. Sliding and roller
-	// saddles carry the rope clamped on them as in service.
-	service := m.grooves
-	defer func() { m.grooves = service }()
-	for side := Left; side <= Right; side++ {
-		if saddleKind(m.bank(side).Tower.Saddle) == tower.Fixed {
-			m.grooves[side] = tower.FreeGroove
-		}
-	}
+	defer m.erecting()()
 	for i, g := range m.groups {
 		table := ErectionTable{Group: g.Name, ConstructionalStretch: g.constructionalStretch(), Hold: m.erectionHold(g)}
 		var start units.Force
@@ -131,6 +124,22 @@ func (m *model) erection(a *Analysis, opts *Options) error {
 		a.Erection = append(a.Erection, table)
 	}
 	return nil
+}
+
+// erecting sets the grooves of the erection and the construction stage and
+// returns what restores the variant's. The chain's reference state has each
+// rope's tension continuous over its saddle: on a fixed saddle the rope
+// renders freely while it is set and while the walkway is hung, whatever
+// holds it in service (clamped, gripping), and is clamped after. Sliding
+// and roller saddles carry the rope clamped on them as in service.
+func (m *model) erecting() (restore func()) {
+	service := m.grooves
+	for side := Left; side <= Right; side++ {
+		if saddleKind(m.bank(side).Tower.Saddle) == tower.Fixed {
+			m.grooves[side] = tower.FreeGroove
+		}
+	}
+	return func() { m.grooves = service }
 }
 
 // bareInput returns the solve input of group i's new rope, bare, at rope

@@ -50,6 +50,9 @@ func TestClampedBoundIndependent(t *testing.T) {
 		if cs.Case.Broken > 0 {
 			continue // the ropes left hold their own strain: the group's backstay tension falls with their number
 		}
+		if cs.Case.Situation == Construction {
+			continue // the ropes render over the saddles until the walkway is hung (TestConstructionStartsFromErection)
+		}
 		for side := Left; side <= Right; side++ {
 			near(t, cs.Case.Name+": clamped backstay keeps its tension", float64(gs.Backstay[side]), float64(tRef), 1e-9)
 		}
@@ -150,11 +153,14 @@ func TestUnknownGrooveGoverns(t *testing.T) {
 			if !(res.Ratio >= w) {
 				t.Errorf("%v: ratio %g, below the worst of the bounds %g", k, res.Ratio, w)
 			}
-		} else if math.Abs(res.Ratio-w) > 1e-8*math.Abs(w) {
+		} else if math.Abs(res.Ratio-w) > 1e-7*math.Abs(w) {
 			// Searched crowd positions are found, and the rope states
 			// warm-started, case by case: the same state to the rope
-			// solver's tolerance (1e-10 of the span in rope fed), not to
-			// the last bit.
+			// solver's tolerance (1e-10 of the span in rope fed, which
+			// moves H by up to EA·1e-10, about 1e-7 of it here), not to
+			// the last bit. The construction stage hangs every variant
+			// alike (free over fixed saddles): its results differ by that
+			// noise alone.
 			t.Errorf("%v: ratio %g, worst of the bounds %g", k, res.Ratio, w)
 		}
 		if !strings.Contains(strings.Join(res.Notes, " "), "saddle behaviour not given") {
@@ -218,7 +224,10 @@ func TestRollerTravel(t *testing.T) {
 		mv += vi.Value * di.Value
 		v += vi.Value
 	}
-	near(t, "roller eccentricity from travel", r.Demand, mv/v, 1e-9)
+	// The demand is the eccentricity's size: the governing stage may put
+	// the saddle either side of its place (the construction stage's new
+	// ropes pull it back).
+	near(t, "roller eccentricity from travel", r.Demand, math.Abs(mv/v), 1e-9)
 	if r.Demand < 0.01 {
 		t.Errorf("roller travel %g m: too small to show", r.Demand)
 	}
@@ -240,7 +249,10 @@ func TestSlenderTowerInChain(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	r := governingOf(t, a, "tower.column_section", "left tower")
+	// The permanent case's result: the construction stage's new ropes load
+	// the column just below its buckling load, where the second-order
+	// moment, not buckling, fails it.
+	r := find(t, a.Report, "tower.column_section", "left tower", casePermanent)
 	if r.Status != check.Fail || r.Kind != units.KindForce || !strings.Contains(strings.Join(r.Notes, " "), "buckles") ||
 		!strings.Contains(r.Basis, "top free (cantilever), base flexibility k 0.1") {
 		t.Errorf("slender roller tower: %v %q %q", r, r.Notes, r.Basis)

@@ -71,7 +71,7 @@ const (
 )
 
 const upliftBasis = "static equilibrium of the walkway under the wind's upward force c_f,z q_p b (EN 1991-1-4 8.3.3, from memory): " +
-	"the permanent weight of the walkway and its ropes must hold it down with the EQU factors of EN 1990 Table A2.4(A) for bridges, " +
+	"the permanent weight of the walkway and its ropes (the walkway's per metre of walkway, its slope not counted: cautious) must hold it down with the EQU factors of EN 1990 Table A2.4(A) for bridges, " +
 	"γG,inf 0.95 and γQ 1.5 (from memory); where it does not, the walkway lifts and the ropes' states under the case are not analysed: " +
 	"hold the walkway down (storm ropes, a heavier deck) or give a smaller lift coefficient for an open deck (loads.walkway_lift)"
 

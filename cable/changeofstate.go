@@ -94,10 +94,7 @@ func unstretched(xs, qs []float64, c0, h, ea float64) (l0, dl0 float64) {
 			continue
 		}
 		p0, p1 := c0-qs[i-1]/h, c0-qs[i]/h
-		n := max(1, int(math.Ceil(math.Abs(p1-p0)/maxSlopeStep)))
-		for j := range n {
-			a0 := p0 + (p1-p0)*float64(j)/float64(n)
-			b0 := p0 + (p1-p0)*float64(j+1)/float64(n)
+		slopePieces(p0, p1, func(a0, b0 float64) {
 			mid, half := (a0+b0)/2, (b0-a0)/2
 			var sc, sd float64
 			for m, t := range glNodes {
@@ -107,12 +104,59 @@ func unstretched(xs, qs []float64, c0, h, ea float64) (l0, dl0 float64) {
 				sc += glWeights[m] * a * a / den
 				sd += glWeights[m] * (a*a/ea + k*(2+k*a)*p*(c0-p)/h) / (den * den)
 			}
-			// each sub-range covers dx/n of the span: ∫ f dx = (dx/n)·mean
-			c += k * sc / 2 * dx / float64(n)
-			dc += sd / 2 * dx / float64(n)
-		}
+			// the slope is linear in x on the piece, so the sub-range
+			// covers its share of dx: ∫ f dx = dx_j·mean
+			dxj := dx
+			if p1 != p0 {
+				dxj = dx * (b0 - a0) / math.Abs(p1-p0)
+			}
+			c += k * sc / 2 * dxj
+			dc += sd / 2 * dxj
+		})
 	}
 	return S - c, dS - dc
+}
+
+// slopePieces calls f on sub-ranges [a, b], a < b (or a single a = b),
+// that cover the slopes between p0 and p1, none wider than maxSlopeStep
+// times the larger of 1 and its distance from slope 0: the integrand's
+// branch points at p = ±i lie as far, relative to the sub-range's width, as
+// on a unit range at the origin, so each keeps that accuracy, and a rope
+// hanging nearly vertically (slopes of thousands, a huge sag or a tiny H)
+// takes a few dozen sub-ranges rather than one per unit of slope. A range
+// no wider than maxSlopeStep is one sub-range; a wider one is cut into
+// equal parts while they are few (as near the origin), else at 0 and
+// outward in growing steps.
+func slopePieces(p0, p1 float64, f func(a, b float64)) {
+	lo, hi := math.Min(p0, p1), math.Max(p0, p1)
+	w := hi - lo
+	if !(w > maxSlopeStep) {
+		f(lo, hi)
+		return
+	}
+	if n := math.Ceil(w / maxSlopeStep); n <= 64 && math.Max(-lo, hi) <= 64*maxSlopeStep {
+		for j := 0.0; j < n; j++ {
+			f(lo+w*j/n, lo+w*(j+1)/n)
+		}
+		return
+	}
+	// outward from u ≥ 0 to v, in steps of maxSlopeStep·max(1, distance)
+	out := func(u, v float64, f func(a, b float64)) {
+		for u < v {
+			next := math.Min(v, u+maxSlopeStep*math.Max(1, u))
+			f(u, next)
+			u = next
+		}
+	}
+	switch {
+	case lo >= 0:
+		out(lo, hi, f)
+	case hi <= 0:
+		out(-hi, -lo, func(a, b float64) { f(-b, -a) })
+	default:
+		out(0, -lo, func(a, b float64) { f(-b, -a) })
+		out(0, hi, f)
+	}
 }
 
 // UnstretchedLength returns the unstretched length of the rope of axial

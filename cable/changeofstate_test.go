@@ -1,6 +1,7 @@
 package cable_test
 
 import (
+	"fmt"
 	"math"
 	"testing"
 
@@ -205,4 +206,42 @@ func TestChangeOfStateInvalid(t *testing.T) {
 	wantInvalid(t, "cubic with patches", err)
 	_, err = cable.ElasticChangeOfState(sp, cable.ElasticRope{Unstretched: 101, EA: 1e7, Weight: 10}, 1e-5, t0, t0, 0)
 	wantInvalid(t, "elastic change to zero weight", err)
+}
+
+// TestUnstretchedNearlyVertical checks the unstretched length of ropes
+// that hang nearly vertically (a tiny H under their load: end slopes of 10³
+// to 10⁶), where the elastic part is integrated over the slope in steps
+// that grow with the slope, against gonum's Gauss–Legendre quadrature of
+// ∫ (T/H)/(1 + T/EA) dx over x, split where the slope passes through zero
+// (an independent route). The fuzz corpus holds the change of state that
+// took 20 s before the steps grew with the slope (one step per unit of
+// slope, 10⁸ of them).
+func TestUnstretchedNearlyVertical(t *testing.T) {
+	span := cable.Span{Length: 80, Rise: -63}
+	load := cable.Load{Uniform: 1200, Patches: []cable.Patch{{From: 0, To: 40, Load: 3968}}}
+	const ea = 3.68e7
+	for _, h := range []units.Force{100, 1, 0.01} {
+		got, err := cable.UnstretchedLength(span, units.AxialStiffness(ea), load, h)
+		if err != nil {
+			t.Fatal(err)
+		}
+		sh, err := cable.NewLoaded(span, load, h)
+		if err != nil {
+			t.Fatal(err)
+		}
+		// split at the patch's end and where the slope is zero (the low point)
+		xl, _ := sh.LowPoint()
+		cuts := []float64{0, 40, float64(xl), 80}
+		sortFloats(cuts)
+		var want float64
+		for i := 1; i < len(cuts); i++ {
+			if cuts[i] > cuts[i-1] {
+				want += integrate(func(x float64) float64 {
+					tt := float64(sh.Tension(units.Length(x)))
+					return tt / float64(h) / (1 + tt/ea)
+				}, cuts[i-1], cuts[i])
+			}
+		}
+		approx(t, fmt.Sprintf("unstretched length at H %v", h), float64(got), want, 1e-9)
+	}
 }

@@ -24,6 +24,7 @@ type resistance struct {
 	factor float64 // the global factor, or γ_R
 	basis  string
 	notes  []string
+	values []check.Value // the basis's own terms
 }
 
 // DefaultGlobalFactor is the factor of safety on the minimum breaking force
@@ -39,22 +40,24 @@ const (
 	// DefaultGammaR is the recommended partial factor γ_R on rope resistance.
 	DefaultGammaR = 0.90
 	// DefaultKe is the termination efficiency k_e assumed when none is
-	// given: 0.9, that of a swaged ferrule or good wedge socket (from
-	// memory; a poured socket reaches 1.0, wire rope clips less). Set Ke
-	// for the termination actually used.
-	DefaultKe = 0.90
+	// given: 0.80, that of wire rope grips (clips), the least efficient of
+	// the terminations TerminationEfficiency knows and a common one on
+	// rural footbridges (from memory): the cautious choice when the
+	// termination is not known. Set Ke for the termination actually used
+	// (a ferrule-secured eye 0.90, a socket 1.0).
+	DefaultKe = 0.80
 )
 
 // TerminationEfficiency returns the efficiency k_e of a rope termination
 // by name, and false for a name it does not know (from memory, the
 // EN 13411 family and rope makers' data; common practice):
 //
-//	"clips"    wire rope grips (U-bolt clips)           0.80
+//	"clips"    wire rope grips (U-bolt clips)           0.80  ("grips" too)
 //	"ferrule"  ferrule-secured (swaged) eye             0.90
 //	"socket"   swaged socket or poured (resin, spelter)  1.00
 func TerminationEfficiency(name string) (float64, bool) {
 	switch strings.ToLower(strings.TrimSpace(name)) {
-	case "clips":
+	case "clips", "grips":
 		return 0.80, true
 	case "ferrule":
 		return 0.90, true
@@ -65,14 +68,14 @@ func TerminationEfficiency(name string) (float64, bool) {
 }
 
 // Terminations lists the names TerminationEfficiency knows.
-func Terminations() []string { return []string{"clips", "ferrule", "socket"} }
+func Terminations() []string { return []string{"clips", "grips", "ferrule", "socket"} }
 
 // efficiency returns k_e, or DefaultKe with a note when it is zero.
 func efficiency(ke float64) (float64, []string, error) {
 	var notes []string
 	if ke == 0 {
 		ke = DefaultKe
-		notes = append(notes, "default termination efficiency k_e "+strconv.FormatFloat(ke, 'f', 2, 64)+": set it for the termination used")
+		notes = append(notes, "default termination efficiency k_e "+strconv.FormatFloat(ke, 'f', 2, 64)+", that of wire rope grips, the least of the usual terminations (cautious): set it for the termination used")
 	}
 	if !finite(ke) || ke <= 0 || ke > 1 {
 		return 0, nil, invalidf("termination efficiency k_e must be in (0, 1], got %g", ke)
@@ -107,13 +110,20 @@ func (g GlobalFactor) resistance(r Rope) (resistance, error) {
 // PartialFactor is the limit-state basis of EN 1993-1-11:2006 cl. 6.2
 // (from memory):
 //
-//	F_Rd = F_uk/(1.5 γ_R),  F_uk = k_e F_min
+//	F_Rd = min(F_uk/(1.5 γ_R), F_k/γ_R),  F_uk = k_e F_min
 //
-// The second criterion, F_k/γ_R on the 0.2 % proof force F_k, is not
-// applied: F_k is not published for stranded ropes and for them the
-// F_uk criterion governs. The tension checked must be the design value
-// F_Ed (factored loads). Zero fields take DefaultGammaR and DefaultKe.
-type PartialFactor struct{ GammaR, Ke float64 }
+// with F_k the characteristic 0.2 % proof force of the rope. F_k is rarely
+// published for stranded ropes; where it is not given (Proof zero) the
+// second criterion is not applied, which is unconservative only for a rope
+// whose proof force lies below 2/3 of k_e F_min: the result says so. The
+// tension checked must be the design value F_Ed (factored loads). Zero
+// GammaR and Ke take DefaultGammaR and DefaultKe.
+type PartialFactor struct {
+	GammaR, Ke float64
+	// Proof is the rope's 0.2 % proof force F_k as a fraction of its
+	// minimum breaking force; zero means not known (not applied).
+	Proof float64
+}
 
 func (p PartialFactor) resistance(r Rope) (resistance, error) {
 	g := p.GammaR
@@ -128,8 +138,22 @@ func (p PartialFactor) resistance(r Rope) (resistance, error) {
 	if !finite(g) || g <= 0 {
 		return resistance{}, invalidf("partial factor γ_R must be positive and finite, got %g", g)
 	}
-	return resistance{r: ke * float64(r.MBF) / (1.5 * g), ke: ke, factor: g, notes: notes,
-		basis: "EN 1993-1-11:2006 cl. 6.2, F_Rd = k_e F_min/(1.5 γ_R) (from memory)"}, nil
+	if !finite(p.Proof) || p.Proof < 0 || p.Proof > 1 {
+		return resistance{}, invalidf("proof force F_k must be a fraction of the minimum breaking force in [0, 1], got %g", p.Proof)
+	}
+	fuk := ke * float64(r.MBF)
+	res := resistance{r: fuk / (1.5 * g), ke: ke, factor: g, notes: notes,
+		values: []check.Value{check.Of("F_uk", "characteristic breaking force with the termination, k_e MBF", units.Force(fuk))}}
+	if p.Proof > 0 {
+		fk := p.Proof * float64(r.MBF)
+		res.r = math.Min(res.r, fk/g)
+		res.values = append(res.values, check.Of("F_k", "characteristic 0.2 % proof force", units.Force(fk)))
+		res.basis = "EN 1993-1-11:2006 cl. 6.2, F_Rd = min(k_e F_min/(1.5 γ_R), F_k/γ_R) (from memory)"
+	} else {
+		res.basis = "EN 1993-1-11:2006 cl. 6.2, F_Rd = k_e F_min/(1.5 γ_R) (from memory); the proof-force criterion F_k/γ_R is not applied, F_k not being given " +
+			"(it governs only for a rope whose 0.2 % proof force lies below 2/3 of k_e F_min)"
+	}
+	return res, nil
 }
 
 // DefaultSharing is the factor by which the most loaded of two or more
@@ -206,7 +230,7 @@ func (g Group) TensionCheck(t units.Force, basis TensionBasis) (check.Result, er
 			check.Of("γ", "factor of the basis (global factor, or γ_R)", units.Ratio(res.factor)),
 			check.Of("R", "design resistance of one rope", units.Force(res.r)),
 			check.Of("F_MBF", "factor on MBF the most loaded rope has, MBF/T_1", units.Ratio(fos)),
-		)
+		).WithValues(res.values...)
 	for _, note := range res.notes {
 		out = out.WithNote(note)
 	}

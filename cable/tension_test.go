@@ -22,12 +22,20 @@ func TestTensionCheck(t *testing.T) {
 		// EN 1993-1-11 cl. 6.2 [D], the same formula by hand: k_e 1, γ_R 0.9
 		// → 252.0/(1.5·0.9) = 186.7 kN
 		{"partial factor, k_e 1", cable.PartialFactor{GammaR: 0.9, Ke: 1}, 1, 186.7e3},
-		{"partial factor defaults", cable.PartialFactor{}, 2, 0.9 * mbf / (1.5 * 0.9)},
-		// Allowable basis: k_e MBF/γ, k_e 0.9 by default on this basis too.
-		{"global factor 2.5", cable.GlobalFactor{Factor: 2.5}, 4, 0.9 * mbf / 2.5},
+		// Default k_e 0.80, wire rope grips (EN 13411-5, from memory): the
+		// least of the usual terminations.
+		{"partial factor defaults", cable.PartialFactor{}, 2, 0.8 * mbf / (1.5 * 0.9)},
+		// The proof-force criterion F_k/γ_R (EN 1993-1-11 cl. 6.2, from
+		// memory): F_k 0.5 MBF → 0.5·252.0/0.9 = 140.0 kN governs the
+		// 0.8·252.0/1.35 = 149.3 kN of the breaking force [D, by hand];
+		// F_k 0.8 MBF leaves the breaking force governing.
+		{"partial factor, proof force governs", cable.PartialFactor{GammaR: 0.9, Proof: 0.5}, 1, 0.5 * mbf / 0.9},
+		{"partial factor, proof force given", cable.PartialFactor{GammaR: 0.9, Proof: 0.8}, 1, 0.8 * mbf / (1.5 * 0.9)},
+		// Allowable basis: k_e MBF/γ, k_e 0.8 by default on this basis too.
+		{"global factor 2.5", cable.GlobalFactor{Factor: 2.5}, 4, 0.8 * mbf / 2.5},
 		{"global factor 2.5, socket", cable.GlobalFactor{Factor: 2.5, Ke: 1}, 4, mbf / 2.5},
-		{"global default", cable.GlobalFactor{}, 3, 0.9 * mbf / cable.DefaultGlobalFactor},
-		{"nil basis", nil, 1, 0.9 * mbf / cable.DefaultGlobalFactor},
+		{"global default", cable.GlobalFactor{}, 3, 0.8 * mbf / cable.DefaultGlobalFactor},
+		{"nil basis", nil, 1, 0.8 * mbf / cable.DefaultGlobalFactor},
 	} {
 		res, err := cable.TensionCheck(150e3, r20, c.n, c.basis)
 		if err != nil {
@@ -51,6 +59,17 @@ func TestTensionCheck(t *testing.T) {
 			t.Errorf("%s: status %v, want %v", c.what, res.Status, want)
 		}
 	}
+	// The partial basis carries its terms among the values: F_uk always,
+	// F_k when given.
+	p, _ := cable.TensionCheck(150e3, r20, 1, cable.PartialFactor{GammaR: 0.9, Ke: 0.8, Proof: 0.5})
+	for sym, want := range map[string]float64{"F_uk": 0.8 * mbf, "F_k": 0.5 * mbf, "R": 0.5 * mbf / 0.9} {
+		v, ok := p.Value(sym)
+		if !ok {
+			t.Errorf("partial basis: value %s missing", sym)
+			continue
+		}
+		approx(t, "partial basis value "+sym, v.Value, want, 1e-12)
+	}
 	// ratio scales linearly with the load
 	a, _ := cable.TensionCheck(100e3, r20, 2, cable.GlobalFactor{Factor: 3})
 	b, _ := cable.TensionCheck(200e3, r20, 2, cable.GlobalFactor{Factor: 3})
@@ -73,6 +92,8 @@ func TestTensionCheck(t *testing.T) {
 		{"negative gamma", 1, 1, cable.PartialFactor{GammaR: -1}},
 		{"k_e above 1", 1, 1, cable.PartialFactor{Ke: 1.2}},
 		{"k_e above 1, allowable", 1, 1, cable.GlobalFactor{Ke: 1.2}},
+		{"proof force above MBF", 1, 1, cable.PartialFactor{Proof: 1.5}},
+		{"NaN proof force", 1, 1, cable.PartialFactor{Proof: math.NaN()}},
 	} {
 		_, err := cable.TensionCheck(c.t, r20, c.n, c.basis)
 		wantInvalid(t, c.what, err)

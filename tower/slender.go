@@ -552,8 +552,12 @@ func (d *direction) check() (columnDirection, error) {
 	}
 	var out columnDirection
 	if d.nEd > comp || d.nEd < tens {
-		out.result = d.dress(check.Compare(id, title, units.KindForce, math.Abs(d.nEd), math.Abs(pick(d.nEd > 0, comp, tens))),
+		r := d.dress(check.Compare(id, title, units.KindForce, math.Abs(d.nEd), math.Abs(pick(d.nEd > 0, comp, tens))),
 			basis, vals, func() string { return "the axial force alone exceeds the section's axial resistance" })
+		// No moment is left to the section: unbounded, as M_Rd → 0 gives
+		// just short of this force.
+		r.Ratio, r.Status = math.Inf(1), check.Fail
+		out.result = r
 		return out, nil
 	}
 	plain := md.as < 0.002*ac
@@ -576,10 +580,16 @@ func (d *direction) check() (columnDirection, error) {
 			check.Of("N_B", "buckling load π² EI / l0², EI = K_c E_cd I_c + E_s I_s (5.21)", units.Force(nb)),
 		)
 		if d.nEd >= nb {
-			out.result = d.dress(check.Compare(id, title, units.KindForce, d.nEd, nb), basis, vals, func() string {
+			// The second-order moment grows without bound as N_Ed nears N_B,
+			// so the utilisation is unbounded at and beyond it: the ratio is
+			// +Inf, never a finite N_Ed/N_B that would read as less used than
+			// a column just short of buckling.
+			r := d.dress(check.Compare(id, title, units.KindForce, d.nEd, nb), basis, vals, func() string {
 				return fmt.Sprintf("the column buckles %s: N_Ed %v reaches the buckling load N_B %v of the nominal-stiffness method",
 					d.name, units.Force(d.nEd), units.Force(nb))
 			})
+			r.Ratio, r.Status = math.Inf(1), check.Fail
+			out.result = r
 			out.unstable = true
 			return out, nil
 		}

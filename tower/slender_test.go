@@ -473,3 +473,33 @@ func TestRCColumnTerseSameNumbers(t *testing.T) {
 		}
 	}
 }
+
+// TestUtilisationGrowsThroughBuckling: on the slender cantilever, the
+// column check's ratio never falls as the axial force rises through the
+// buckling load N_B (it was N_Ed/N_B beyond it, 1.3 against 16 just short of
+// it), and at and beyond N_B it is unbounded.
+func TestUtilisationGrowsThroughBuckling(t *testing.T) {
+	col := slenderColumn(tower.FreeTop)
+	prev := 0.0
+	buckled := false
+	for n := 50.0; n <= 900; n += 10 {
+		res, err := col.Check(tower.ColumnActions{N: units.Force(n * 1e3), Along: kNm(12)})
+		if err != nil {
+			t.Fatal(err)
+		}
+		r := res.Along
+		if r.Ratio < prev {
+			t.Fatalf("N_Ed %v kN: ratio %v fell below %v", n, r.Ratio, prev)
+		}
+		prev = r.Ratio
+		if _, ok := r.Value("N_B"); ok && strings.Contains(strings.Join(r.Notes, " "), "buckles") {
+			buckled = true
+			if !math.IsInf(r.Ratio, 1) || r.Status != check.Fail {
+				t.Fatalf("N_Ed %v kN beyond N_B: ratio %v, %v; want +Inf, FAIL", n, r.Ratio, r.Status)
+			}
+		}
+	}
+	if !buckled {
+		t.Fatal("the sweep never reached the buckling load: the test does not reach its case")
+	}
+}
