@@ -311,27 +311,12 @@ func soilBearing(id, title string, along, across, depth units.Length, water Wate
 // allowableBearing checks the peak contact pressure of a rigid base on
 // soil against the site's allowable pressure (allowable basis).
 func allowableBearing(id, title string, along, across units.Length, ld baseLoad, s Soil, set actionSet) (check.Result, error) {
-	a, w := float64(along), float64(across)
 	basis := ""
 	if !set.terse {
 		basis = "allowable basis: peak contact pressure against the allowable bearing pressure given by the site report"
 	}
-	if ld.outside(a, w) {
-		r := check.Compare(id, title, units.KindPressure, ld.n/(a*w), 0).WithBasis(basis)
-		if set.terse {
-			return r, nil
-		}
-		return r.WithValues(baseValues(ld, a, w)...).WithNote("resultant outside the base"), nil
-	}
-	qmax, err := ld.contact(along, across)
-	if err != nil {
-		return check.Result{}, err
-	}
-	r := check.Compare(id, title, units.KindPressure, float64(qmax), float64(s.Allowable)).WithBasis(basis)
-	if set.terse {
-		return r, nil
-	}
-	return r.WithValues(append(baseValues(ld, a, w), check.Of("q_a", "allowable bearing pressure given by the site report", s.Allowable))...), nil
+	return peakAgainst(id, title, along, across, ld, s.Allowable, basis, set,
+		check.Of("q_a", "allowable bearing pressure given by the site report", s.Allowable))
 }
 
 // rockBaseBearing checks a rectangular base on rock: the peak contact
@@ -344,12 +329,20 @@ func rockBaseBearing(id, title string, along, across units.Length, ld baseLoad, 
 	if err != nil {
 		return check.Result{}, err
 	}
-	a, w := float64(along), float64(across)
 	basis := ""
 	if !set.terse {
 		basis = "rock: peak contact pressure under characteristic actions against the allowable pressure, " + rb.Method +
 			"; soil bearing-capacity factors are not used on rock"
 	}
+	return peakAgainst(id, title, along, across, ld, rb.Allowable, basis, set, rb.Values()...)
+}
+
+// peakAgainst checks the peak contact pressure of a rigid base of sides
+// along × across under ld against an allowable pressure; a resultant
+// outside the base fails against a capacity of zero. The base's values and
+// extra follow unless set is terse.
+func peakAgainst(id, title string, along, across units.Length, ld baseLoad, allowable units.Pressure, basis string, set actionSet, extra ...check.Value) (check.Result, error) {
+	a, w := float64(along), float64(across)
 	if ld.outside(a, w) {
 		r := check.Compare(id, title, units.KindPressure, ld.n/(a*w), 0).WithBasis(basis)
 		if set.terse {
@@ -361,9 +354,9 @@ func rockBaseBearing(id, title string, along, across units.Length, ld baseLoad, 
 	if err != nil {
 		return check.Result{}, err
 	}
-	r := check.Compare(id, title, units.KindPressure, float64(qmax), float64(rb.Allowable)).WithBasis(basis)
+	r := check.Compare(id, title, units.KindPressure, float64(qmax), float64(allowable)).WithBasis(basis)
 	if set.terse {
 		return r, nil
 	}
-	return r.WithValues(append(baseValues(ld, a, w), rb.Values()...)...), nil
+	return r.WithValues(append(baseValues(ld, a, w), extra...)...), nil
 }
