@@ -58,38 +58,14 @@ func (s SoilSpec) soil() (foundation.Soil, error) {
 		soil.Submerged = *s.Saturated - foundation.WaterUnitWeight
 		given = append(given, "saturated_unit_weight")
 	}
-	if s.Friction != nil {
-		soil.Friction = *s.Friction
-		given = append(given, "friction")
-	}
-	if s.Cohesion != nil {
-		soil.Cohesion = *s.Cohesion
-		given = append(given, "cohesion")
-	}
-	if s.Undrained != nil {
-		soil.Undrained = *s.Undrained
-		given = append(given, "undrained_strength")
-	}
-	if s.Interface != nil {
-		soil.Interface = *s.Interface
-		given = append(given, "interface")
-	}
-	if s.Allowable != nil {
-		soil.Allowable = *s.Allowable
-		given = append(given, "allowable_bearing")
-	}
-	if s.RockStrength != nil {
-		soil.RockStrength = *s.RockStrength
-		given = append(given, "rock_strength")
-	}
-	if s.JointSpacing != nil {
-		soil.JointSpacing = *s.JointSpacing
-		given = append(given, "joint_spacing")
-	}
-	if s.JointAperture != nil {
-		soil.JointAperture = *s.JointAperture
-		given = append(given, "joint_aperture")
-	}
+	override(&soil.Friction, s.Friction, "friction", &given)
+	override(&soil.Cohesion, s.Cohesion, "cohesion", &given)
+	override(&soil.Undrained, s.Undrained, "undrained_strength", &given)
+	override(&soil.Interface, s.Interface, "interface", &given)
+	override(&soil.Allowable, s.Allowable, "allowable_bearing", &given)
+	override(&soil.RockStrength, s.RockStrength, "rock_strength", &given)
+	override(&soil.JointSpacing, s.JointSpacing, "joint_spacing", &given)
+	override(&soil.JointAperture, s.JointAperture, "joint_aperture", &given)
 	if s.Preset != "" && len(given) > 0 {
 		soil.Source += "; overridden in the bridge description: " + strings.Join(given, ", ")
 	}
@@ -245,4 +221,13 @@ func (a AnchorSpec) groutBond(soil foundation.Soil) units.Pressure {
 		return *a.GroutBond
 	}
 	return soil.GroutBond
+}
+
+// override sets *dst to *src when the description gives the field (src not
+// nil, whatever its value: a given zero counts) and records its name.
+func override[T any](dst *T, src *T, name string, given *[]string) {
+	if src != nil {
+		*dst = *src
+		*given = append(*given, name)
+	}
 }
