@@ -272,13 +272,48 @@ func (v *view) line(pts plotter.XYs, c color.Color, width float64, dashed bool, 
 	return nil
 }
 
-// legendLine adds a legend entry for a line style.
+// legendLine adds a legend entry for a line style; a label too long for
+// the legend's width goes on as many lines as it needs, the style drawn
+// beside the first.
 func (v *view) legendLine(label string, c color.Color, width float64, dashed bool) {
 	l := &plotter.Line{LineStyle: draw.LineStyle{Color: c, Width: vg.Points(width)}}
 	if dashed {
 		l.Dashes = []vg.Length{vg.Points(6), vg.Points(3)}
 	}
-	v.legend.Add(label, l)
+	for i, part := range wrapWords(label, legendChars) {
+		if i == 0 {
+			v.legend.Add(part, l)
+		} else {
+			v.legend.Add("  "+part, noThumbnail{})
+		}
+	}
+}
+
+// legendChars is about as many characters of legend text as fit its width.
+const legendChars = 34
+
+// noThumbnail is a legend entry's empty thumbnail, for a continued label.
+type noThumbnail struct{}
+
+func (noThumbnail) Thumbnail(*draw.Canvas) {}
+
+// wrapWords splits s at spaces into lines of at most n characters (a word
+// longer than n stands on its own line).
+func wrapWords(s string, n int) []string {
+	var out []string
+	line := ""
+	for _, w := range strings.Fields(s) {
+		switch {
+		case line == "":
+			line = w
+		case len([]rune(line))+1+len([]rune(w)) <= n:
+			line += " " + w
+		default:
+			out = append(out, line)
+			line = w
+		}
+	}
+	return append(out, line)
 }
 
 // label adds text at a point, offset in points.
