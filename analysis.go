@@ -220,8 +220,14 @@ func (m *model) run(a *Analysis, opts *Options) error {
 	// with them), as the erection table may meet them again.
 	m.grooves, m.states = vs[0].grooves, first.states
 	if len(vs) == 1 {
-		// One variant: every result is its own (see merged).
-		a.Report.Add(res[0].results...)
+		// One variant: every result is its own (see merged), and the
+		// report takes the variant's list as it is (grown with room for the
+		// groove and comfort checks, see checkAll).
+		if a.Report.Results == nil {
+			a.Report.Results = res[0].results
+		} else {
+			a.Report.Add(res[0].results...)
+		}
 	} else {
 		var all merged
 		for k, r := range res {
@@ -316,9 +322,15 @@ func (m *model) checkAll(out sink, ground bool, early func(*model, CaseState) fu
 		}
 	}
 	if c, ok := out.(*collected); ok {
-		n := len(uplift)
+		// Room for everything at once: the cases', the families', and a
+		// few more (the whole-bridge check adds the groove and comfort
+		// checks to the list).
+		n := len(uplift) + reportRoom
 		for _, t := range done {
 			n += len(t.results)
+		}
+		for _, r := range families.res {
+			n += len(r.results)
 		}
 		*c = slices.Grow(*c, n)
 	}
@@ -347,6 +359,10 @@ func (m *model) checkAll(out sink, ground bool, early func(*model, CaseState) fu
 	}
 	return service, design, nil
 }
+
+// reportRoom is the room a variant's list of results keeps for the groove
+// and comfort checks that follow it in the report.
+const reportRoom = 32
 
 // runAll runs the jobs on up to GOMAXPROCS goroutines, this one among
 // them, each taking the next job in order, and returns when all are done.

@@ -46,6 +46,9 @@ type model struct {
 	// columns holds each bank's concrete column member as built for the
 	// variant last analysed (see rcColumn).
 	columns [2]builtColumn
+	// saddleTexts holds the symbols and meanings of each group's saddle
+	// values (see saddleValues).
+	saddleTexts [][10][2]string
 }
 
 func newModel(b Bridge) (*model, error) {
@@ -61,6 +64,7 @@ func newModel(b Bridge) (*model, error) {
 		dead: b.Walkway.dead(),
 		wind: b.wind(),
 	}
+	m.saddleTexts = saddleTexts(gs)
 	bs := b.Basis
 	m.fbasis = foundation.Basis{
 		PartialFactors: b.partial(),
