@@ -43,6 +43,9 @@ type model struct {
 	// every crowd, and a case's service and design states often share
 	// groups.
 	states *stateCache
+	// stretch is set while the states of a loaded-length search's stretch
+	// are solved (see groupState).
+	stretch bool
 	// columns holds each bank's concrete column member as built for the
 	// variant last analysed (see rcColumn).
 	columns [2]builtColumn
