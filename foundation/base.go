@@ -88,12 +88,7 @@ type conditioned struct {
 // in each condition among its values ("U_dr", "U_un"). A terse set gets the
 // worst result only.
 func governing(set actionSet, rs []conditioned) check.Result {
-	worst := 0
-	for i := range rs {
-		if rs[i].r.Ratio > rs[worst].r.Ratio {
-			worst = i
-		}
-	}
+	worst := worstCondition(rs)
 	g := rs[worst].r
 	if set.terse {
 		return g
@@ -125,6 +120,18 @@ func governing(set actionSet, rs []conditioned) check.Result {
 		prefix += "; " + g.Basis
 	}
 	return g.WithBasis(prefix).WithValues(vs...)
+}
+
+// worstCondition returns the index of the result of rs that governing
+// reports: the first of the highest ratio.
+func worstCondition(rs []conditioned) int {
+	worst := 0
+	for i := range rs {
+		if rs[i].r.Ratio > rs[worst].r.Ratio {
+			worst = i
+		}
+	}
+	return worst
 }
 
 // note returns r with the note appended, or r as it is on a terse basis.
