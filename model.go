@@ -12,7 +12,7 @@ import (
 
 // model is a bridge resolved for analysis.
 type model struct {
-	b      Bridge
+	b      *Bridge // read only, shared by the copies of the model
 	span   cable.Span
 	groups []group
 	ground [2]bankGround
@@ -63,7 +63,7 @@ func newModel(b Bridge) (*model, error) {
 		return nil, err
 	}
 	m := &model{
-		b: b, span: b.span(), groups: gs,
+		b: &b, span: b.span(), groups: gs,
 		dead: b.Walkway.dead(),
 		wind: b.wind(),
 	}
