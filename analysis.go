@@ -299,7 +299,7 @@ func (m *model) checkAll(out sink, ground bool, early func(*model, CaseState) fu
 					return
 				}
 			}
-			t.results = make(collected, 0, 64) // about 40 results a case
+			t.results = make(collected, 0, 40) // 28 to 36 results a case on the demo
 			t.checkErr = c.caseChecks(&t.results, perm, t.svc, t.des, ground)
 		})
 	}

@@ -171,6 +171,10 @@ type Group struct {
 	Rope    Rope
 	Count   int
 	Sharing float64
+	// Terse leaves the values, basis and notes out of TensionCheck's
+	// result, for a caller that reads its ratio and status only (a
+	// search); the numbers are the same.
+	Terse bool
 }
 
 // TensionCheck checks the group carrying tension t on the given basis
@@ -217,6 +221,9 @@ func (g Group) TensionCheck(t units.Force, basis TensionBasis) (check.Result, er
 	fos := math.Inf(1)
 	if one > 0 {
 		fos = float64(g.Rope.MBF) / one
+	}
+	if g.Terse {
+		return check.Compare("cable.tension", "Rope tension, most loaded rope", units.KindForce, one, res.r), nil
 	}
 	// The values in one slice on the stack, copied once into the result.
 	var buf [16]check.Value
