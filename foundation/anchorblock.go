@@ -349,6 +349,9 @@ func (a AnchorBlock) bearingIn(conds []Condition, pulls []AnchorPull, s Soil, m 
 		favourable, lightBlock bool
 	}
 	var worst [2]arrangement
+	// Nothing to choose from (one condition, set and arrangement): built
+	// in full at once.
+	single := (len(conds) == 1 || s.IsRock) && len(sets) == 1 && sets[0].allowable
 	for i, cond := range conds {
 		first := true
 		for _, set := range sets {
@@ -359,7 +362,7 @@ func (a AnchorBlock) bearingIn(conds []Condition, pulls []AnchorPull, s Soil, m 
 				arrangements = [][2]bool{{false, false}, {true, false}, {false, true}}
 			}
 			scoring := set
-			scoring.terse = true
+			scoring.terse = set.terse || !single
 			for _, c := range arrangements {
 				r, err := a.bearing(pulls, s, m, cond, ld, scoring, c[0], c[1], fs)
 				if err != nil {
@@ -375,7 +378,7 @@ func (a AnchorBlock) bearingIn(conds []Condition, pulls []AnchorPull, s Soil, m 
 	if s.IsRock {
 		n = 1
 	}
-	if !sets[0].terse {
+	if !sets[0].terse && !single {
 		w := worstCondition(per[:n])
 		r, err := a.bearing(pulls, s, m, per[w].cond, ld, worst[w].set, worst[w].favourable, worst[w].lightBlock, fs)
 		if err != nil {

@@ -260,6 +260,9 @@ func (f Footing) AppendCheck(dst []check.Result, load FootingLoad, s Soil, m Met
 	var bearPer, slidePer [2]conditioned
 	var bearSet [2]int
 	nb := 0
+	// Nothing to choose from: one condition and one set, built in full
+	// at once.
+	single := len(bearSets) == 1 && (len(conds) == 1 || s.IsRock)
 	for i, cond := range conds {
 		for j, set := range sets {
 			r := f.sliding(load, s, cond, ld, set, fsSlide)
@@ -273,7 +276,7 @@ func (f Footing) AppendCheck(dst []check.Result, load FootingLoad, s Soil, m Met
 		nb++
 		for j, set := range bearSets {
 			scoring := set
-			scoring.terse = true
+			scoring.terse = set.terse || !single
 			r, err := f.bearing(load, s, m, cond, ld, scoring, fsBear)
 			if err != nil {
 				return nil, err
@@ -283,7 +286,7 @@ func (f Footing) AppendCheck(dst []check.Result, load FootingLoad, s Soil, m Met
 			}
 		}
 	}
-	if !bs.Terse {
+	if !bs.Terse && !single {
 		w := worstCondition(bearPer[:nb])
 		r, err := f.bearing(load, s, m, bearPer[w].cond, ld, bearSets[bearSet[w]], fsBear)
 		if err != nil {
@@ -330,13 +333,16 @@ func (f Footing) bearing(load FootingLoad, s Soil, m Method, cond Condition, ld 
 	if set.gGfav != set.gG {
 		nw = 2
 	}
+	states, ns := set.states(load)
+	if ns*nw == 1 {
+		return one(states[0], weights[0], set) // nothing to choose from
+	}
 	scoring := set
 	scoring.terse = true
 	var worst check.Result
 	var worstState loadState
 	var worstWeight float64
 	first := true
-	states, ns := set.states(load)
 	for _, st := range states[:ns] {
 		for _, gw := range weights[:nw] {
 			r, err := one(st, gw, scoring)
