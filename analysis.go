@@ -183,15 +183,25 @@ func (m *model) run(a *Analysis, opts *Options) error {
 	res := make([]variantResult, len(vs))
 	var wg sync.WaitGroup
 	var first *model
+	// The comfort stage needs the first variant's permanent state only: it
+	// runs beside that variant's cases and searches, on a copy of the
+	// model of its own, into an analysis of its own whose findings follow
+	// the groove checks in the report.
+	var comfort Analysis
+	var comfortErr error
 	for k, v := range vs {
 		c := m.clone()
 		c.grooves = v.grooves
+		var early func(*model, CaseState) func()
 		if k == 0 {
 			first = c
+			early = func(cm *model, perm CaseState) func() {
+				return func() { comfortErr = cm.comfort(&comfort, perm, opts) }
+			}
 		}
 		check := func() {
 			r := &res[k]
-			r.service, r.design, r.err = c.checkAll(&r.results, true)
+			r.service, r.design, r.err = c.checkAll(&r.results, true, early)
 		}
 		if len(vs) == 1 {
 			check()
@@ -210,8 +220,14 @@ func (m *model) run(a *Analysis, opts *Options) error {
 	// with them), as the erection table may meet them again.
 	m.grooves, m.states = vs[0].grooves, first.states
 	if len(vs) == 1 {
-		// One variant: every result is its own (see merged).
-		a.Report.Add(res[0].results...)
+		// One variant: every result is its own (see merged), and the
+		// report takes the variant's list as it is (grown with room for the
+		// groove and comfort checks, see checkAll).
+		if a.Report.Results == nil {
+			a.Report.Results = res[0].results
+		} else {
+			a.Report.Add(res[0].results...)
+		}
 	} else {
 		var all merged
 		for k, r := range res {
@@ -226,9 +242,11 @@ func (m *model) run(a *Analysis, opts *Options) error {
 		return err
 	}
 	a.Report.Add(grooves...)
-	if err := m.comfort(a, a.Service[0], opts); err != nil {
-		return err
+	if comfortErr != nil {
+		return comfortErr
 	}
+	a.Modes, a.Comfort = comfort.Modes, comfort.Comfort
+	a.Report.Add(comfort.Report.Results...)
 	return m.erection(a, opts)
 }
 
@@ -240,7 +258,11 @@ func (m *model) run(a *Analysis, opts *Options) error {
 // permanent case is known and run beside the other cases (see
 // searchFamilies); their results follow the cases' in out, family by
 // family, whatever finishes first.
-func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, err error) {
+//
+// early, when not nil, gives a job that needs the permanent case only (the
+// comfort stage), to run on the copy of the model it is given beside the
+// searches and the cases.
+func (m *model) checkAll(out sink, ground bool, early func(*model, CaseState) func()) (service, design []CaseState, err error) {
 	cases := m.b.Cases()
 	// One task a case: its states (the permanent case's first, which the
 	// families start from), then its checks, each on a copy of the model
@@ -264,7 +286,11 @@ func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, er
 	families := m.families(perm, ground)
 	// The largest pieces first (the families' searches), then the cases:
 	// the cores fill as they free.
-	jobs := families.jobs()
+	var jobs []func()
+	if early != nil {
+		jobs = append(jobs, early(m.clone(), perm))
+	}
+	jobs = append(jobs, families.jobs()...)
 	for k := range cases {
 		c, t := m.clone(), &tasks[k]
 		jobs = append(jobs, func() {
@@ -273,7 +299,7 @@ func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, er
 					return
 				}
 			}
-			t.results = make(collected, 0, 64) // about 40 results a case
+			t.results = make(collected, 0, 40) // 28 to 36 results a case on the demo
 			t.checkErr = c.caseChecks(&t.results, perm, t.svc, t.des, ground)
 		})
 	}
@@ -296,9 +322,15 @@ func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, er
 		}
 	}
 	if c, ok := out.(*collected); ok {
-		n := len(uplift)
+		// Room for everything at once: the cases', the families', and a
+		// few more (the whole-bridge check adds the groove and comfort
+		// checks to the list).
+		n := len(uplift) + reportRoom
 		for _, t := range done {
 			n += len(t.results)
+		}
+		for _, r := range families.res {
+			n += len(r.results)
 		}
 		*c = slices.Grow(*c, n)
 	}
@@ -327,6 +359,10 @@ func (m *model) checkAll(out sink, ground bool) (service, design []CaseState, er
 	}
 	return service, design, nil
 }
+
+// reportRoom is the room a variant's list of results keeps for the groove
+// and comfort checks that follow it in the report.
+const reportRoom = 32
 
 // runAll runs the jobs on up to GOMAXPROCS goroutines, this one among
 // them, each taking the next job in order, and returns when all are done.

@@ -12,7 +12,7 @@ import (
 
 // model is a bridge resolved for analysis.
 type model struct {
-	b      Bridge
+	b      *Bridge // read only, shared by the copies of the model
 	span   cable.Span
 	groups []group
 	ground [2]bankGround
@@ -43,9 +43,15 @@ type model struct {
 	// every crowd, and a case's service and design states often share
 	// groups.
 	states *stateCache
+	// stretch is set while the states of a loaded-length search's stretch
+	// are solved (see groupState).
+	stretch bool
 	// columns holds each bank's concrete column member as built for the
 	// variant last analysed (see rcColumn).
 	columns [2]builtColumn
+	// saddleTexts holds the symbols and meanings of each group's saddle
+	// values (see saddleValues).
+	saddleTexts [][10][2]string
 }
 
 func newModel(b Bridge) (*model, error) {
@@ -57,10 +63,11 @@ func newModel(b Bridge) (*model, error) {
 		return nil, err
 	}
 	m := &model{
-		b: b, span: b.span(), groups: gs,
+		b: &b, span: b.span(), groups: gs,
 		dead: b.Walkway.dead(),
 		wind: b.wind(),
 	}
+	m.saddleTexts = saddleTexts(gs)
 	bs := b.Basis
 	m.fbasis = foundation.Basis{
 		PartialFactors: b.partial(),

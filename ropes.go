@@ -86,7 +86,7 @@ func (m *model) ropeChecks(out sink, svc, des CaseState, all bool) error {
 				note += fmt.Sprintf("; the sharing factor given, %.3g, exceeds the %d ropes left and is taken as %d", g.sharing(), left, left)
 			}
 		}
-		r, err := cable.Group{Rope: g.rope, Count: n, Sharing: ks}.TensionCheck(t, basis)
+		r, err := cable.Group{Rope: g.rope, Count: n, Sharing: ks, Terse: m.scoring()}.TensionCheck(t, basis)
 		if err != nil {
 			return fmt.Errorf("sagspan: %s, case %q: %w", g.Name, lc.Name, err)
 		}

@@ -53,6 +53,10 @@ func (c *stateCache) get(k stateKey) (GroupState, bool) {
 // distinct input.
 func (m *model) groupState(i int, in solveInput) (GroupState, error) {
 	k, ok := in.key(i, m.grooves)
+	// A stretch of a loaded-length search is solved once (the search
+	// never tries a stretch twice): a group its crowd stands on is neither
+	// looked for nor kept.
+	ok = ok && !(m.stretch && len(in.load.Patches) > 0)
 	if ok {
 		if gs, hit := m.states.get(k); hit {
 			return gs, nil

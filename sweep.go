@@ -295,7 +295,9 @@ func (s *searcher) state(m *model, p Placement, r float64, warm *sweepPoint) (*s
 	if warm != nil {
 		w = &[2]CaseState{warm.svc, warm.des}
 	}
+	m.stretch = true
 	svc, des, err := m.pair(lc, w)
+	m.stretch = false
 	if err != nil {
 		return nil, err
 	}

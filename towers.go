@@ -322,33 +322,65 @@ type builtColumn struct {
 // group's number (1 for the first group of the description).
 func (m *model) saddleValues(side Side, cs CaseState) []check.Value {
 	var vals []check.Value
+	kind := saddleKind(m.bank(side).Tower.Saddle)
 	for i, gs := range cs.Groups {
-		k := strconv.Itoa(i + 1)
+		t := m.saddleText(i)
 		lf := gs.Saddle[side]
-		of := " at the " + gs.Group + " saddle"
+		if vals == nil {
+			vals = make([]check.Value, 0, len(cs.Groups)*len(t))
+		}
 		vals = append(vals,
-			check.Of("T_s,"+k, "span-side rope tension"+of, gs.Tension[side]),
-			check.Of("T_b,"+k, "backstay tension"+of, gs.Backstay[side]),
-			check.Of("θ_"+k, "wrap angle of the rope"+of, lf.Wrap),
-			check.Of("V_"+k, "vertical force on the column"+of, lf.Vertical),
-			check.Of("H_u0,"+k, "unbalanced horizontal force of the ropes had nothing moved (before friction or rendering)"+of, gs.Unbalance[side]),
-			check.Of("H_u,"+k, "unbalanced horizontal force of the ropes as they settle"+of, lf.Unbalance),
-			check.Of("H_"+k, "horizontal force reaching the column"+of, lf.Horizontal),
+			check.Of(t[0][0], t[0][1], gs.Tension[side]),
+			check.Of(t[1][0], t[1][1], gs.Backstay[side]),
+			check.Of(t[2][0], t[2][1], lf.Wrap),
+			check.Of(t[3][0], t[3][1], lf.Vertical),
+			check.Of(t[4][0], t[4][1], gs.Unbalance[side]),
+			check.Of(t[5][0], t[5][1], lf.Unbalance),
+			check.Of(t[6][0], t[6][1], lf.Horizontal),
 		)
-		switch saddleKind(m.bank(side).Tower.Saddle) {
+		switch kind {
 		case tower.Sliding:
-			vals = append(vals, check.Of("μN_"+k, "friction limit of the sliding saddle"+of, lf.Limit))
+			vals = append(vals, check.Of(t[7][0], t[7][1], lf.Limit))
 			fallthrough
 		case tower.Roller:
-			vals = append(vals, check.Of("Δ_"+k, "travel of the saddle from its reference place, toward the span"+of, lf.Offset))
+			vals = append(vals, check.Of(t[8][0], t[8][1], lf.Offset))
 		}
 		if s := m.saddle(side, m.groups[i], 0); s.Kind == tower.Fixed && s.Groove == tower.FrictionGroove && lf.Wrap > 0 {
 			if k2, err := tower.CapstanBound(s.GrooveFriction, lf.Wrap); err == nil {
-				vals = append(vals, check.Of("e^μθ_"+k, "largest tension ratio the groove holds (rope-friction law)"+of, units.Ratio(k2)))
+				vals = append(vals, check.Of(t[9][0], t[9][1], units.Ratio(k2)))
 			}
 		}
 	}
 	return vals
+}
+
+// saddleText returns the symbols and meanings of group i's saddle values
+// (see saddleValues), built once per model.
+func (m *model) saddleText(i int) *[10][2]string {
+	return &m.saddleTexts[i]
+}
+
+// saddleTexts builds the symbols and meanings of every group's saddle
+// values.
+func saddleTexts(gs []group) [][10][2]string {
+	out := make([][10][2]string, len(gs))
+	for i, g := range gs {
+		k := strconv.Itoa(i + 1)
+		of := " at the " + g.Name + " saddle"
+		out[i] = [10][2]string{
+			{"T_s," + k, "span-side rope tension" + of},
+			{"T_b," + k, "backstay tension" + of},
+			{"θ_" + k, "wrap angle of the rope" + of},
+			{"V_" + k, "vertical force on the column" + of},
+			{"H_u0," + k, "unbalanced horizontal force of the ropes had nothing moved (before friction or rendering)" + of},
+			{"H_u," + k, "unbalanced horizontal force of the ropes as they settle" + of},
+			{"H_" + k, "horizontal force reaching the column" + of},
+			{"μN_" + k, "friction limit of the sliding saddle" + of},
+			{"Δ_" + k, "travel of the saddle from its reference place, toward the span" + of},
+			{"e^μθ_" + k, "largest tension ratio the groove holds (rope-friction law)" + of},
+		}
+	}
+	return out
 }
 
 // merged gathers the results of the variants of groove behaviour into one

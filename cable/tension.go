@@ -171,6 +171,10 @@ type Group struct {
 	Rope    Rope
 	Count   int
 	Sharing float64
+	// Terse leaves the values, basis and notes out of TensionCheck's
+	// result, for a caller that reads its ratio and status only (a
+	// search); the numbers are the same.
+	Terse bool
 }
 
 // TensionCheck checks the group carrying tension t on the given basis
@@ -218,19 +222,24 @@ func (g Group) TensionCheck(t units.Force, basis TensionBasis) (check.Result, er
 	if one > 0 {
 		fos = float64(g.Rope.MBF) / one
 	}
+	if g.Terse {
+		return check.Compare("cable.tension", "Rope tension, most loaded rope", units.KindForce, one, res.r), nil
+	}
+	// The values in one slice on the stack, copied once into the result.
+	var buf [16]check.Value
+	vals := append(buf[:0],
+		check.Of("T", "tension of the group", t),
+		check.Of("n", "ropes in the group", units.Ratio(g.Count)),
+		check.Of("k_s", "sharing factor of the most loaded rope", units.Ratio(ks)),
+		check.Of("T_1", "tension of the most loaded rope, k_s T/n", units.Force(one)),
+		check.Of("MBF", "minimum breaking force of one rope", g.Rope.MBF),
+		check.Of("k_e", "termination efficiency", units.Ratio(res.ke)),
+		check.Of("γ", "factor of the basis (global factor, or γ_R)", units.Ratio(res.factor)),
+		check.Of("R", "design resistance of one rope", units.Force(res.r)),
+		check.Of("F_MBF", "factor on MBF the most loaded rope has, MBF/T_1", units.Ratio(fos)))
 	out := check.Compare("cable.tension", "Rope tension, most loaded rope", units.KindForce, one, res.r).
 		WithBasis(res.basis).
-		WithValues(
-			check.Of("T", "tension of the group", t),
-			check.Of("n", "ropes in the group", units.Ratio(g.Count)),
-			check.Of("k_s", "sharing factor of the most loaded rope", units.Ratio(ks)),
-			check.Of("T_1", "tension of the most loaded rope, k_s T/n", units.Force(one)),
-			check.Of("MBF", "minimum breaking force of one rope", g.Rope.MBF),
-			check.Of("k_e", "termination efficiency", units.Ratio(res.ke)),
-			check.Of("γ", "factor of the basis (global factor, or γ_R)", units.Ratio(res.factor)),
-			check.Of("R", "design resistance of one rope", units.Force(res.r)),
-			check.Of("F_MBF", "factor on MBF the most loaded rope has, MBF/T_1", units.Ratio(fos)),
-		).WithValues(res.values...)
+		WithValues(append(vals, res.values...)...)
 	for _, note := range res.notes {
 		out = out.WithNote(note)
 	}

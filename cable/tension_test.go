@@ -41,6 +41,15 @@ func TestTensionCheck(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
+		// Terse: the same numbers, no text or values.
+		terse, err := cable.Group{Rope: r20, Count: c.n, Sharing: 1, Terse: true}.TensionCheck(150e3, c.basis)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if terse.ID != res.ID || terse.Demand != res.Demand || terse.Capacity != res.Capacity || terse.Ratio != res.Ratio ||
+			terse.Status != res.Status || terse.Basis != "" || len(terse.Values)+len(terse.Notes) != 0 {
+			t.Errorf("%s: terse %+v against full %+v", c.what, terse, res)
+		}
 		tol := 1e-12
 		if c.what == "partial factor, k_e 1" {
 			tol = 3e-4 // given to 4 figures

@@ -299,3 +299,58 @@ func TestGoverningRecordIsTheLargest(t *testing.T) {
 	require.Len(t, gov, 1)
 	assert.Equal(t, "crowd", gov[0].Case)
 }
+
+// TestValuesFilter checks WithValues, whose search for a repeated symbol is
+// skipped where a filter says the symbol is new, against its definition
+// (each value in turn replaces the first of its symbol, or is appended) on
+// symbols that share the filter's bits: same length and first letter.
+func TestValuesFilter(t *testing.T) {
+	syms := []string{"q", "q_c", "q_q", "q_γ", "q_max", "q_min", "N", "N_c", "N_q", "e", "e_y", "H", "H_y", "z_w", "", "A'", "A_c"}
+	plain := func(have, add []Value) []Value {
+		out := append(make([]Value, 0, len(have)+len(add)), have...)
+		for _, v := range add {
+			i := 0
+			for i < len(out) && out[i].Symbol != v.Symbol {
+				i++
+			}
+			if i < len(out) {
+				out[i] = v
+			} else {
+				out = append(out, v)
+			}
+		}
+		return out
+	}
+	seq := 0
+	next := func(k int) Value {
+		seq++
+		return Of(syms[(k*7+seq)%len(syms)], "", units.Ratio(seq))
+	}
+	r := Record("x", "x", units.KindRatio, 0)
+	for round := range 40 {
+		var add []Value
+		for k := range round % 9 {
+			add = append(add, next(k+round))
+		}
+		want := plain(r.Values, add)
+		r = r.WithValues(add...)
+		require.Equal(t, want, r.Values, "round %d", round)
+	}
+}
+
+func BenchmarkWithValues(b *testing.B) {
+	var vs []Value
+	for _, s := range []string{"N", "H", "e", "q_max", "q_min", "l_c", "A'", "φ", "c", "q", "γ_b", "B'", "L'", "N_c", "N_q", "N_γ",
+		"s_c", "s_q", "s_γ", "d_c", "d_q", "d_γ", "i_c", "i_q", "i_γ", "θ", "m", "q_c", "q_q", "q_γ", "q_ult"} {
+		vs = append(vs, Of(s, "meaning", units.Ratio(1)))
+	}
+	r := Compare("id", "title", units.KindPressure, 1, 2)
+	b.ReportAllocs()
+	for b.Loop() {
+		x := r.WithValues(vs...)
+		x = x.WithValues(Of("U_dr", "drained", units.Ratio(0.5)), Of("U_un", "undrained", units.Ratio(0.4)))
+		sinkResult = x.WithValues(Of("z_w", "water", units.Length(1)))
+	}
+}
+
+var sinkResult Result

@@ -62,20 +62,41 @@ func (v Value) MarshalJSON() ([]byte, error) {
 func (r Result) WithValues(values ...Value) Result {
 	out := make([]Value, len(r.Values), len(r.Values)+len(values))
 	copy(out, r.Values)
+	// seen has a bit set for every symbol out holds (by length and first
+	// byte): a value whose bit is clear has a symbol out does not hold, and
+	// is appended without a search.
+	var seen uint64
+	for i := range out {
+		seen |= symbolBit(out[i].Symbol)
+	}
 	for _, v := range values {
+		bit := symbolBit(v.Symbol)
 		replaced := false
-		for i := range out {
-			if out[i].Symbol == v.Symbol {
-				out[i], replaced = v, true
-				break
+		if seen&bit != 0 {
+			for i := range out {
+				if out[i].Symbol == v.Symbol {
+					out[i], replaced = v, true
+					break
+				}
 			}
 		}
 		if !replaced {
 			out = append(out, v)
+			seen |= bit
 		}
 	}
 	r.Values = out
 	return r
+}
+
+// symbolBit returns the bit of WithValues' filter for a symbol: equal
+// symbols have the same bit.
+func symbolBit(s string) uint64 {
+	h := uint(len(s))
+	if len(s) > 0 {
+		h = h*31 + uint(s[0])
+	}
+	return 1 << (h % 64)
 }
 
 // Value returns the value r carries under symbol, and false when it carries

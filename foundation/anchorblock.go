@@ -340,7 +340,18 @@ func (a AnchorBlock) bearingIn(conds []Condition, pulls []AnchorPull, s Soil, m 
 	if s.IsRock {
 		conds = drainedOnly[:1]
 	}
+	// Each condition's worst set and arrangement is found on the ratios
+	// alone (the terse set's numbers are the full set's); only the result
+	// that governs is built in full (governing reads the others' ratios).
 	var per [2]conditioned
+	type arrangement struct {
+		set                    actionSet
+		favourable, lightBlock bool
+	}
+	var worst [2]arrangement
+	// Nothing to choose from (one condition, set and arrangement): built
+	// in full at once.
+	single := (len(conds) == 1 || s.IsRock) && len(sets) == 1 && sets[0].allowable
 	for i, cond := range conds {
 		first := true
 		for _, set := range sets {
@@ -350,21 +361,35 @@ func (a AnchorBlock) bearingIn(conds []Condition, pulls []AnchorPull, s Soil, m 
 				// inclination and eccentricity.
 				arrangements = [][2]bool{{false, false}, {true, false}, {false, true}}
 			}
+			scoring := set
+			scoring.terse = set.terse || !single
 			for _, c := range arrangements {
-				r, err := a.bearing(pulls, s, m, cond, ld, set, c[0], c[1], fs)
+				r, err := a.bearing(pulls, s, m, cond, ld, scoring, c[0], c[1], fs)
 				if err != nil {
 					return check.Result{}, err
 				}
 				if first || r.Ratio > per[i].r.Ratio {
-					per[i], first = conditioned{cond, r}, false
+					per[i], worst[i], first = conditioned{cond, r}, arrangement{set, c[0], c[1]}, false
 				}
 			}
 		}
 	}
+	n := len(conds)
+	if s.IsRock {
+		n = 1
+	}
+	if !sets[0].terse && !single {
+		w := worstCondition(per[:n])
+		r, err := a.bearing(pulls, s, m, per[w].cond, ld, worst[w].set, worst[w].favourable, worst[w].lightBlock, fs)
+		if err != nil {
+			return check.Result{}, err
+		}
+		per[w].r = r
+	}
 	if s.IsRock {
 		return per[0].r, nil
 	}
-	return governing(sets[0], per[:len(conds)]), nil
+	return governing(sets[0], per[:n]), nil
 }
 
 // base returns the resultant on the base with the given factors on the

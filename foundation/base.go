@@ -88,12 +88,7 @@ type conditioned struct {
 // in each condition among its values ("U_dr", "U_un"). A terse set gets the
 // worst result only.
 func governing(set actionSet, rs []conditioned) check.Result {
-	worst := 0
-	for i := range rs {
-		if rs[i].r.Ratio > rs[worst].r.Ratio {
-			worst = i
-		}
-	}
+	worst := worstCondition(rs)
 	g := rs[worst].r
 	if set.terse {
 		return g
@@ -125,6 +120,18 @@ func governing(set actionSet, rs []conditioned) check.Result {
 		prefix += "; " + g.Basis
 	}
 	return g.WithBasis(prefix).WithValues(vs...)
+}
+
+// worstCondition returns the index of the result of rs that governing
+// reports: the first of the highest ratio.
+func worstCondition(rs []conditioned) int {
+	worst := 0
+	for i := range rs {
+		if rs[i].r.Ratio > rs[worst].r.Ratio {
+			worst = i
+		}
+	}
+	return worst
 }
 
 // note returns r with the note appended, or r as it is on a terse basis.
@@ -190,18 +197,18 @@ func (ld baseLoad) contact(along, across units.Length) (units.Pressure, error) {
 	return c.Max, err
 }
 
-// baseValues returns the resultant's values: N, H, e, and the contact
-// pressures of a rigid base; for a biaxial base also H_y and e_y, and the
-// area in compression A_c in place of the contact length.
-func baseValues(ld baseLoad, along, across float64) []check.Value {
+// appendBaseValues appends to vs the resultant's values: N, H, e, and the
+// contact pressures of a rigid base; for a biaxial base also H_y and e_y,
+// and the area in compression A_c in place of the contact length.
+func appendBaseValues(vs []check.Value, ld baseLoad, along, across float64) []check.Value {
 	if ld.biaxial {
-		vs := []check.Value{
+		vs = append(vs,
 			check.Of("N", "effective normal force on the base", units.Force(ld.n)),
 			check.Of("H", "horizontal force on the base along its side Along", units.Force(ld.h)),
 			check.Of("H_y", "horizontal force on the base along its side Across", units.Force(ld.hy)),
 			check.Of("e", "eccentricity of the resultant from the base centre along Along", units.Length(ld.e)),
 			check.Of("e_y", "eccentricity of the resultant from the base centre along Across", units.Length(ld.ey)),
-		}
+		)
 		if c, err := BiaxialContactPressure(units.Force(ld.n), units.Length(ld.e), units.Length(ld.ey), units.Length(along), units.Length(across)); err == nil {
 			vs = append(vs,
 				check.Of("q_max", "peak contact pressure of a rigid base", c.Max),
@@ -210,11 +217,11 @@ func baseValues(ld baseLoad, along, across float64) []check.Value {
 		}
 		return vs
 	}
-	vs := []check.Value{
+	vs = append(vs,
 		check.Of("N", "effective normal force on the base", units.Force(ld.n)),
 		check.Of("H", "horizontal force on the base", units.Force(ld.h)),
 		check.Of("e", "eccentricity of the resultant from the base centre", units.Length(ld.e)),
-	}
+	)
 	if qmax, qmin, contact, err := ContactPressure(units.Force(ld.n), units.Length(ld.e), units.Length(along), units.Length(across)); err == nil {
 		vs = append(vs,
 			check.Of("q_max", "peak contact pressure of a rigid base", qmax),
@@ -272,7 +279,8 @@ func soilBearing(id, title string, along, across, depth units.Length, water Wate
 		if set.terse {
 			return r
 		}
-		return r.WithValues(baseValues(ld, a, w)...).WithNote("resultant outside the base")
+		var buf [valueRoom]check.Value
+		return r.WithValues(appendBaseValues(buf[:0], ld, a, w)...).WithNote("resultant outside the base")
 	}
 	if ld.outside(a, w) {
 		return outside(), nil
@@ -295,7 +303,8 @@ func soilBearing(id, title string, along, across, depth units.Length, water Wate
 	if set.terse {
 		return r, nil
 	}
-	vs := baseValues(ld, a, w)
+	var buf [valueRoom]check.Value // the values on the stack, copied once into the result
+	vs := appendBaseValues(buf[:0], ld, a, w)
 	vs = append(vs, check.Of("A'", "effective base area", br.Area()))
 	r = r.WithValues(br.appendValues(vs)...)
 	r = r.WithNote(fmt.Sprintf("%v, %v: qult %v on the effective base %v × %v", br.Method, cond, br.Qult, br.BEff, br.LEff))
@@ -348,7 +357,8 @@ func peakAgainst(id, title string, along, across units.Length, ld baseLoad, allo
 		if set.terse {
 			return r, nil
 		}
-		return r.WithValues(baseValues(ld, a, w)...).WithNote("resultant outside the base"), nil
+		var buf [valueRoom]check.Value
+		return r.WithValues(appendBaseValues(buf[:0], ld, a, w)...).WithNote("resultant outside the base"), nil
 	}
 	qmax, err := ld.contact(along, across)
 	if err != nil {
@@ -358,5 +368,10 @@ func peakAgainst(id, title string, along, across units.Length, ld baseLoad, allo
 	if set.terse {
 		return r, nil
 	}
-	return r.WithValues(append(baseValues(ld, a, w), extra...)...), nil
+	var buf [valueRoom]check.Value
+	return r.WithValues(append(appendBaseValues(buf[:0], ld, a, w), extra...)...), nil
 }
+
+// valueRoom is the room on the stack for the values of one result built
+// before they are copied into it.
+const valueRoom = 48

@@ -254,7 +254,15 @@ func (f Footing) AppendCheck(dst []check.Result, load FootingLoad, s Soil, m Met
 	if s.IsRock { // presumed bearing values go with characteristic actions
 		bearSets = []actionSet{bs.allowableSet()}
 	}
+	// Bearing: each condition's worst set found on the ratios alone (the
+	// terse set's numbers are the full set's), and only the result that
+	// governs built in full (governing reads the others' ratios).
 	var bearPer, slidePer [2]conditioned
+	var bearSet [2]int
+	nb := 0
+	// Nothing to choose from: one condition and one set, built in full
+	// at once.
+	single := len(bearSets) == 1 && (len(conds) == 1 || s.IsRock)
 	for i, cond := range conds {
 		for j, set := range sets {
 			r := f.sliding(load, s, cond, ld, set, fsSlide)
@@ -265,15 +273,26 @@ func (f Footing) AppendCheck(dst []check.Result, load FootingLoad, s Soil, m Met
 		if s.IsRock && i > 0 {
 			continue
 		}
+		nb++
 		for j, set := range bearSets {
-			r, err := f.bearing(load, s, m, cond, ld, set, fsBear)
+			scoring := set
+			scoring.terse = set.terse || !single
+			r, err := f.bearing(load, s, m, cond, ld, scoring, fsBear)
 			if err != nil {
 				return nil, err
 			}
 			if j == 0 || r.Ratio > bearPer[i].r.Ratio {
-				bearPer[i] = conditioned{cond, r}
+				bearPer[i], bearSet[i] = conditioned{cond, r}, j
 			}
 		}
+	}
+	if !bs.Terse && !single {
+		w := worstCondition(bearPer[:nb])
+		r, err := f.bearing(load, s, m, bearPer[w].cond, ld, bearSets[bearSet[w]], fsBear)
+		if err != nil {
+			return nil, err
+		}
+		bearPer[w].r = r
 	}
 	bear := bearPer[0].r
 	if !s.IsRock {
@@ -291,42 +310,54 @@ func (f Footing) waterAtBase() bool { return f.Water.depth() <= float64(f.Depth)
 
 // bearing checks the base pressure under every design load state and
 // weight factor (the pad and its cover unfavourable or favourable) and
-// keeps the worst.
+// keeps the worst. The worst is found on the ratios alone (the terse
+// set's numbers are the full set's), and only its result is built in
+// full.
 func (f Footing) bearing(load FootingLoad, s Soil, m Method, cond Condition, ld blockLoads, set actionSet, fs float64) (check.Result, error) {
 	const id, title = "footing.bearing", "Footing bearing pressure"
-	weights := []float64{set.gG}
-	if set.gGfav != set.gG {
-		weights = append(weights, set.gGfav)
+	one := func(st loadState, gw float64, set actionSet) (check.Result, error) {
+		n := gw*(ld.weight-ld.buoyancy) + st.v
+		if n <= 0 {
+			r := check.Compare(id, title, units.KindPressure, 0, 0).WithBasis(basisOf(set, "the bearing pressure", fs))
+			r = set.values(r, check.Of("N", "effective normal force on the base", units.Force(n)))
+			return set.note(r, "net uplift: the footing lifts off its base"), nil
+		}
+		bl := baseLoad{n: n, h: math.Abs(st.h), e: st.m / n, hy: math.Abs(st.hy), ey: st.my / n, biaxial: true}
+		if s.IsRock {
+			return rockBaseBearing(id, title, f.Along, f.Across, bl, s, set)
+		}
+		return soilBearing(id, title, f.Along, f.Across, f.Depth, f.Water, bl, s, m, cond, set, fs)
 	}
-	var worst check.Result
-	first := true
+	weights := [2]float64{set.gG, set.gGfav}
+	nw := 1
+	if set.gGfav != set.gG {
+		nw = 2
+	}
 	states, ns := set.states(load)
+	if ns*nw == 1 {
+		return one(states[0], weights[0], set) // nothing to choose from
+	}
+	scoring := set
+	scoring.terse = true
+	var worst check.Result
+	var worstState loadState
+	var worstWeight float64
+	first := true
 	for _, st := range states[:ns] {
-		for _, gw := range weights {
-			n := gw*(ld.weight-ld.buoyancy) + st.v
-			var r check.Result
-			if n <= 0 {
-				r = check.Compare(id, title, units.KindPressure, 0, 0).WithBasis(basisOf(set, "the bearing pressure", fs))
-				r = set.values(r, check.Of("N", "effective normal force on the base", units.Force(n)))
-				r = set.note(r, "net uplift: the footing lifts off its base")
-			} else {
-				bl := baseLoad{n: n, h: math.Abs(st.h), e: st.m / n, hy: math.Abs(st.hy), ey: st.my / n, biaxial: true}
-				var err error
-				if s.IsRock {
-					r, err = rockBaseBearing(id, title, f.Along, f.Across, bl, s, set)
-				} else {
-					r, err = soilBearing(id, title, f.Along, f.Across, f.Depth, f.Water, bl, s, m, cond, set, fs)
-				}
-				if err != nil {
-					return check.Result{}, err
-				}
+		for _, gw := range weights[:nw] {
+			r, err := one(st, gw, scoring)
+			if err != nil {
+				return check.Result{}, err
 			}
 			if first || r.Ratio > worst.Ratio {
-				worst, first = r, false
+				worst, worstState, worstWeight, first = r, st, gw, false
 			}
 		}
 	}
-	return worst, nil
+	if set.terse || first {
+		return worst, nil
+	}
+	return one(worstState, worstWeight, set)
 }
 
 // sliding checks base shear under every design load state, the pad's

@@ -135,12 +135,27 @@ func TestFootingRejects(t *testing.T) {
 	}
 }
 
-// TestTerseSameNumbers checks that the terse basis changes only the text.
+// TestTerseSameNumbers checks that the terse basis changes only the text:
+// the footing and anchor bearing checks pick their governing state, set and
+// condition on terse ratios and build only that result in full, so this is
+// what makes their full results the worst. Soils: drained only; with an
+// undrained strength too (two conditions); with the site's allowable
+// pressure beside the bearing equation.
 func TestTerseSameNumbers(t *testing.T) {
-	soil, err := foundation.LookupSoil("dense sand")
+	sand, err := foundation.LookupSoil("dense sand")
 	if err != nil {
 		t.Fatal(err)
 	}
+	both, allowed := sand, sand
+	both.Undrained = 60e3
+	allowed.Allowable = 150e3
+	for _, soil := range []foundation.Soil{sand, both, allowed} {
+		terseSameNumbers(t, soil)
+	}
+}
+
+func terseSameNumbers(t *testing.T, soil foundation.Soil) {
+	t.Helper()
 	f := foundation.Footing{Along: 2.4, Across: 3, Thickness: 0.7, Depth: 1.2}
 	load := foundation.FootingLoad{Vertical: 300e3, Horizontal: 30e3, Moment: 80e3, VariableShare: 0.6}
 	blk := foundation.AnchorBlock{Length: 4.5, Width: 5, Height: 2.6, Depth: 3, PassiveMobilisation: 0.5}
@@ -173,6 +188,9 @@ func TestTerseSameNumbers(t *testing.T) {
 			}
 			if x.Basis == "" {
 				t.Errorf("partial %v, %s: full result has no basis", partial, x.ID)
+			}
+			if _, un := x.Value("U_un"); strings.HasSuffix(x.ID, ".bearing") && soil.Undrained > 0 && !un {
+				t.Errorf("partial %v, %s: no utilisation in the undrained condition", partial, x.ID)
 			}
 		}
 	}

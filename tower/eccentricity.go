@@ -234,13 +234,15 @@ func EccentricityCheck(r Resultant, c Column, opt *Eccentricity) (check.Result, 
 		where = fmt.Sprintf("the checked section %v above the column base", yc)
 	}
 	res = res.WithBasis(form + ", at " + where + "; limit: " + rule + "; no factor of safety (common practice)")
-	vals := []check.Value{
+	// The values in one slice on the stack, copied once into the result.
+	var buf [16]check.Value
+	vals := append(buf[:0],
 		check.Of("ΣV", "vertical force of the rope forces (down)", units.Force(v)),
 		check.Of(hname, hmeaning, units.Force(h)),
 		check.Of("R", "magnitude of the rope-force resultant", units.Force(math.Hypot(h, v))),
 		check.Of("δ", "angle of the rope-force resultant from the vertical", units.Angle(delta)),
 		check.Of("y_c", "height of the checked section above the column base section", yc),
-	}
+	)
 	if h != 0 {
 		vals = append(vals, check.Of("h", "height above the checked section where the rope-force line crosses the column axis", units.Length(mc/h)))
 	}
@@ -252,6 +254,9 @@ func EccentricityCheck(r Resultant, c Column, opt *Eccentricity) (check.Result, 
 		check.Of(dname, dmeaning, deff),
 		check.Of("e_lim", "allowed eccentricity", allowed),
 	)
+	if c.Facing > 0 {
+		vals = append(vals, check.Of("t_f", "facing left out of the effective section on each face", c.Facing))
+	}
 	res = res.WithValues(vals...)
 	switch {
 	case h == 0 && mc == 0:
@@ -267,7 +272,6 @@ func EccentricityCheck(r Resultant, c Column, opt *Eccentricity) (check.Result, 
 		res = res.WithNote(fmt.Sprintf("e = %v %s", units.Length(math.Abs(e)), side(e)))
 	}
 	if c.Facing > 0 {
-		res = res.WithValues(check.Of("t_f", "facing left out of the effective section on each face", c.Facing))
 		res = res.WithNote(fmt.Sprintf("effective section %v × %v: %v of facing on each face left out", c.EffectiveDepth(), c.EffectiveWidth(), c.Facing))
 	}
 	return res, nil
