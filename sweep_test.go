@@ -64,6 +64,11 @@ func denseGrid(t *testing.T, b Bridge, fam LoadedLength, n int) collect {
 // maximum is not refined below minRefined).
 func TestLoadedLengthAgainstDenseGrid(t *testing.T) {
 	bridges := map[string]Bridge{"demo": Demo(), "level": loadTestBridge(t, "level.json")}
+	if !testing.Short() {
+		for _, f := range []string{"soft_clay", "river_bank", "rock_gorge"} {
+			bridges[f] = loadTestBridge(t, f+".json")
+		}
+	}
 	for name, b := range bridges {
 		m, err := newModel(b)
 		if err != nil {
