@@ -41,6 +41,11 @@ type AnchorBlock struct {
 	// submerged height, soil below the water weighs its submerged unit
 	// weight, and bearing and passive resistance use effective stresses.
 	Water Water
+	// GroundSlope is the inclination of the ground falling away from the
+	// block within reach of its failure zones; zero for level ground. It
+	// enters the bearing equation's ground-inclination factors and the
+	// passive resistance on the front face (see Check).
+	GroundSlope units.Angle
 	// Steps are concrete parts standing on the block (a stepped block);
 	// none for a plain rectangular block.
 	Steps []Step
@@ -66,6 +71,9 @@ func (a AnchorBlock) validate() error {
 	}
 	if err := a.Water.validate("AnchorBlock.Water"); err != nil {
 		return err
+	}
+	if !(a.GroundSlope >= 0 && a.GroundSlope < 90*units.Degree) {
+		return invalid("AnchorBlock.GroundSlope", "must be at least 0 and less than 90 deg")
 	}
 	for i, st := range a.Steps {
 		name := fmt.Sprintf("AnchorBlock.Steps[%d]", i)
@@ -109,6 +117,30 @@ func rankineLevel(phi units.Angle, passive bool) float64 {
 		t = math.Tan(math.Pi/4 + float64(phi)/2)
 	}
 	return t * t
+}
+
+// passiveK returns the passive coefficient on the front face in strength
+// st (see earth): zero where no passive resistance is counted.
+func (a AnchorBlock) passiveK(st strength) float64 {
+	b := a.GroundSlope
+	if st.cond != Drained {
+		if b > 0 {
+			return 0
+		}
+		return 1
+	}
+	phi := units.Angle(st.phi)
+	if b == 0 {
+		return rankineLevel(phi, true)
+	}
+	if b >= phi {
+		return 0
+	}
+	k, err := CoulombPassive(phi, 0, 0, -b)
+	if err != nil {
+		return 0
+	}
+	return k
 }
 
 // Step is a rectangular concrete part standing on an anchor block, making
@@ -183,15 +215,22 @@ func (a AnchorBlock) loads(s Soil) blockLoads {
 // above the base, in strength st (drained: Rankine's Kp, Ka with Bell's
 // cohesion terms; undrained: K = 1 and c_u), effective stresses with the
 // block's water level (the water's own pressure acts alike on both faces).
+//
+// Ground falling away at GroundSlope β: drained, Kp is Coulomb's for a
+// smooth vertical face and ground falling at β in front (δ = 0, plane
+// wedge), and none at or beyond φ; undrained, no passive resistance is
+// counted on falling ground (cautious).
 func (a AnchorBlock) earth(s Soil, st strength) (pp, pa EarthForce) {
 	d := float64(a.Depth)
 	top := math.Max(d-float64(a.Height), 0)
-	kp, ka := 1.0, 1.0
+	kp, ka := a.passiveK(st), 1.0
 	if st.cond == Drained {
-		kp, ka = rankineLevel(units.Angle(st.phi), true), rankineLevel(units.Angle(st.phi), false)
+		ka = rankineLevel(units.Angle(st.phi), false)
 	}
 	g, gs, dw := float64(s.UnitWeight), float64(s.SubmergedWeight()), a.Water.depth()
-	pp = layeredEarth(kp, st.c, 1, top, d, g, gs, dw)
+	if kp > 0 {
+		pp = layeredEarth(kp, st.c, 1, top, d, g, gs, dw)
+	}
 	pa = layeredEarth(ka, st.c, -1, top, d, g, gs, dw)
 	pp.Force *= units.Force(a.Width)
 	pa.Force *= units.Force(a.Width)
@@ -452,6 +491,17 @@ func (a AnchorBlock) sliding(pulls []AnchorPull, s Soil, cond Condition, ld bloc
 			check.Of("P_p", "full passive resistance on the front face", pp.Force),
 			check.Of("P_a", "active thrust on the back face", pa.Force))
 		note += fmt.Sprintf("; passive resistance %v mobilised at %.2f, active thrust %v on the back face", pp.Force, mu, pa.Force)
+		if b := a.GroundSlope; b > 0 {
+			kp := a.passiveK(st)
+			vs = append(vs, check.Of("β_g", "slope of the ground falling away from the block", b),
+				check.Of("K_p", "passive coefficient on the front face", units.Ratio(kp)))
+			switch {
+			case kp == 0:
+				note += fmt.Sprintf("; the ground falls at %.1f° from the block: no passive resistance counted", b.Degrees())
+			default:
+				note += fmt.Sprintf("; the ground falls at %.1f° from the block: K_p by Coulomb for a smooth face and ground falling in front", b.Degrees())
+			}
+		}
 	}
 	if st.cond == Drained {
 		note += "; cohesion ignored at the base"
@@ -530,7 +580,7 @@ func (a AnchorBlock) bearing(pulls []AnchorPull, s Soil, m Method, cond Conditio
 	if s.IsRock {
 		r, err = rockBaseBearing(id, title, a.Length, a.Width, bl, s, set)
 	} else {
-		r, err = soilBearing(id, title, a.Length, a.Width, a.Depth, a.Water, bl, s, m, cond, set, fs)
+		r, err = soilBearing(id, title, a.Length, a.Width, a.Depth, a.Water, a.GroundSlope, bl, s, m, cond, set, fs)
 	}
 	if err != nil {
 		return check.Result{}, err

@@ -397,3 +397,53 @@ func TestAnchorBlockAllowableAndEquation(t *testing.T) {
 		t.Errorf("bearing %v (ratio %.3f), basis %q", b.Status, b.Ratio, b.Basis)
 	}
 }
+
+// TestAnchorBlockFallingGround checks the block on ground falling away at
+// 20°: the passive coefficient is Coulomb's for a smooth vertical face and
+// ground falling in front (Murthy eq. 11.51 form, δ = 0, β = −20°; by
+// hand: sin36·sin16/cos20 = 0.587785·0.275637/0.939693 = 0.172413, √ =
+// 0.415226, Kp = cos²36/(1 − 0.415226)² = 0.654508/0.341961 = 1.913984,
+// against Rankine's 3.851840 on level ground), the bearing takes the
+// ground factors (see TestBearingGroundSlope), and at or beyond φ' no
+// passive resistance is counted.
+func TestAnchorBlockFallingGround(t *testing.T) {
+	fx := 80 * math.Cos(25*math.Pi/180)
+	at := func(slope float64) []check.Result {
+		t.Helper()
+		blk := testBlock()
+		blk.PassiveMobilisation = 0.5
+		blk.GroundSlope = deg(slope)
+		rs, err := blk.Check([]foundation.AnchorPull{testPull()}, testSand(), foundation.EC7, nil)
+		if err != nil {
+			t.Fatal(err)
+		}
+		noNaN(t, rs)
+		return rs
+	}
+	level, falling, steep := at(0), at(20), at(40)
+	pa := 0.5 * math.Pow(math.Tan(27*math.Pi/180), 2) * 19 * 2.25 * 2.5
+	pp := func(kp float64) float64 { return 0.5 * kp * 19 * 2.25 * 2.5 }
+	base := func(rs []check.Result) float64 { // the base's shear resistance, from the level case
+		s := byID(t, rs, "anchor.sliding")
+		return s.Capacity
+	}
+	near(t, "level passive", base(level), base(steep)+0.5e3*pp(3.851840), 1e-6)
+	near(t, "falling passive", base(falling), base(steep)+0.5e3*pp(1.913994), 1e-6)
+	near(t, "steep: base shear only, the active thrust still driving", byID(t, steep, "anchor.sliding").Demand/1e3, fx+pa, 1e-9)
+	for _, c := range []struct {
+		rs   []check.Result
+		want float64
+	}{{falling, 1.913994}, {steep, 0}} {
+		v, ok := byID(t, c.rs, "anchor.sliding").Value("K_p")
+		if !ok {
+			t.Fatal("no K_p value on falling ground")
+		}
+		near(t, "K_p value", float64(v.Value)+1e-12, c.want+1e-12, 1e-6)
+	}
+	if bl, bf := byID(t, level, "anchor.bearing"), byID(t, falling, "anchor.bearing"); !(bf.Ratio > bl.Ratio) {
+		t.Errorf("bearing on falling ground %.3f, on level ground %.3f: want higher", bf.Ratio, bl.Ratio)
+	}
+	if _, ok := byID(t, falling, "anchor.bearing").Value("g_q"); !ok {
+		t.Error("bearing on falling ground carries no ground factor")
+	}
+}

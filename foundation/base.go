@@ -241,12 +241,12 @@ func appendBaseValues(vs []check.Value, ld baseLoad, along, across float64) []ch
 // the bearing equation carries the load's inclination and eccentricity,
 // which for an anchor block's base can take most of the capacity: used
 // alone, the allowable pressure could pass what fails by the equation.
-func soilBearing(id, title string, along, across, depth units.Length, water Water, ld baseLoad,
+func soilBearing(id, title string, along, across, depth units.Length, water Water, slope units.Angle, ld baseLoad,
 	s Soil, m Method, cond Condition, set actionSet, fs float64) (check.Result, error) {
 	if set.allowable && s.Allowable > 0 {
 		byTheory := s
 		byTheory.Allowable = 0
-		rq, err := soilBearing(id, title, along, across, depth, water, ld, byTheory, m, cond, set, fs)
+		rq, err := soilBearing(id, title, along, across, depth, water, slope, ld, byTheory, m, cond, set, fs)
 		if err != nil {
 			return check.Result{}, err
 		}
@@ -288,7 +288,7 @@ func soilBearing(id, title string, along, across, depth units.Length, water Wate
 	sd := s.withStrength(s.strengthIn(cond, set))
 	br, err := BearingCapacity(BearingInput{AlongLoad: along, AcrossLoad: across, Depth: depth, Vertical: units.Force(ld.n),
 		Horizontal: units.Force(ld.h), HorizontalAcross: units.Force(ld.hy), EccAlong: units.Length(ld.e), EccAcross: units.Length(ld.ey),
-		Water: water}, sd, m, cond)
+		Water: water, GroundSlope: slope}, sd, m, cond)
 	if errors.Is(err, ErrOutsideBase) {
 		return outside(), nil
 	}

@@ -67,6 +67,12 @@ type BearingInput struct {
 	EccAlong, EccAcross units.Length
 	// Water is the water level at the site of the base.
 	Water Water
+	// GroundSlope is the inclination β of the ground falling away from
+	// the base within reach of its failure zone; zero for level ground.
+	// It enters the ground-inclination factors g (see BearingCapacity);
+	// at or beyond φ' (drained) or 45° (undrained) no bearing resistance
+	// is counted.
+	GroundSlope units.Angle
 }
 
 // Bearing is the result of BearingCapacity: the ultimate bearing pressure
@@ -87,6 +93,10 @@ type Bearing struct {
 	Sc, Sq, Sgamma float64
 	Dc, Dq, Dgamma float64
 	Ic, Iq, Igamma float64
+	// Ground-inclination factors of the c, q and γ terms (1 on level
+	// ground), and the slope β they were taken for.
+	Gc, Gq, Ggamma float64
+	GroundSlope    units.Angle
 	// M is the exponent of the inclination factors (Vesić and EN 1997-1
 	// Annex D); zero for the methods that have none.
 	M float64
@@ -122,7 +132,7 @@ func (b Bearing) Values() []check.Value {
 }
 
 func (b Bearing) appendValues(dst []check.Value) []check.Value {
-	return append(dst,
+	dst = append(dst,
 		check.Of("φ", "friction angle in the bearing equation, zero undrained", b.Friction),
 		check.Of("c", "cohesion in the bearing equation: c' drained, c_u undrained", b.Cohesion),
 		check.Of("q", "effective overburden at base level", b.Overburden),
@@ -142,6 +152,16 @@ func (b Bearing) appendValues(dst []check.Value) []check.Value {
 		check.Of("i_q", "load-inclination factor, overburden term", units.Ratio(b.Iq)),
 		check.Of("i_γ", "load-inclination factor, self-weight term", units.Ratio(b.Igamma)),
 		check.Of("θ", "angle between the horizontal load and the longer effective side L'", b.Theta),
+	)
+	if b.GroundSlope > 0 {
+		dst = append(dst,
+			check.Of("β_g", "slope of the ground falling away from the base", b.GroundSlope),
+			check.Of("g_c", "ground-inclination factor, cohesion term", units.Ratio(b.Gc)),
+			check.Of("g_q", "ground-inclination factor, overburden term", units.Ratio(b.Gq)),
+			check.Of("g_γ", "ground-inclination factor, self-weight term", units.Ratio(b.Ggamma)),
+		)
+	}
+	return append(dst,
 		check.Of("m", "exponent of the inclination factors; zero when the method has none", units.Ratio(b.M)),
 		check.Of("q_c", "cohesion term of the bearing equation", b.TermC),
 		check.Of("q_q", "overburden term of the bearing equation", b.TermQ),
@@ -165,6 +185,9 @@ func (in BearingInput) validate() error {
 		if err := nonNegative("BearingInput.Depth", float64(in.Depth)); err != nil {
 			return err
 		}
+	}
+	if !(in.GroundSlope >= 0 && in.GroundSlope < 90*units.Degree) {
+		return invalid("BearingInput.GroundSlope", "must be at least 0 and less than 90 deg")
 	}
 	for _, f := range []struct {
 		name string
@@ -402,18 +425,92 @@ func BearingCapacity(in BearingInput, s Soil, m Method, cond Condition) (Bearing
 	}
 	r.Notes = f.notes
 
-	termC := st.c * nc * r.Sc * r.Dc * r.Ic
+	beta := float64(in.GroundSlope)
+	gf := groundFactors(st, m, beta)
+	r.Gc, r.Gq, r.Ggamma, r.GroundSlope = gf.c, gf.q, gf.g, in.GroundSlope
+	if gf.none {
+		r.Notes = append(r.Notes, gf.note)
+		r.Gc, r.Gq, r.Ggamma = 0, 0, 0
+		return r, nil // no bearing resistance counted
+	}
+
+	termC := st.c * nc * r.Sc * r.Dc * r.Ic * r.Gc
 	if f.additiveC {
-		termC = st.c * nc * math.Max(r.Sc+r.Dc+r.Ic-2, 0)
+		// Hansen's additive form: the ground factor enters as g'c = 1 − gc.
+		termC = st.c * nc * math.Max(r.Sc+r.Dc+r.Ic-2-(1-r.Gc), 0)
 		if f.cExhausted {
 			termC = 0
 		}
 	}
 	r.TermC = units.Pressure(termC)
-	r.TermQ = units.Pressure(q * nq * r.Sq * r.Dq * r.Iq)
-	r.TermGamma = units.Pressure(0.5 * ge * bEff * ng * r.Sgamma * r.Dgamma * r.Igamma)
-	r.Qult = r.TermC + r.TermQ + r.TermGamma
+	r.TermQ = units.Pressure(q * nq * r.Sq * r.Dq * r.Iq * r.Gq)
+	r.TermGamma = units.Pressure(0.5 * ge * bEff * ng * r.Sgamma * r.Dgamma * r.Igamma * r.Ggamma)
+	if !st.drained && beta > 0 {
+		// Vesić's Nγ = −2 sin β for φ = 0 on sloping ground: the soil's
+		// weight drives the failure down the slope.
+		r.Ngamma = -2 * math.Sin(beta)
+		r.TermGamma = units.Pressure(-ge * bEff * math.Sin(beta))
+	}
+	r.Qult = max(r.TermC+r.TermQ+r.TermGamma, 0)
 	return r, nil
+}
+
+// ground holds the ground-inclination factors of a bearing equation, or
+// none when the slope is beyond their range.
+type ground struct {
+	c, q, g float64
+	none    bool
+	note    string
+}
+
+// groundFactors returns the ground-inclination factors for ground falling
+// away from the base at beta (radians) (Bowles, Foundation Analysis and
+// Design, 5th ed., Table 4-5, from Hansen 1970 and Vesić 1975):
+//
+//	Hansen:  gq = gγ = (1 − 0.5 tan β)⁵;  gc = 1 − β°/147°
+//	Vesić:   gq = gγ = (1 − tan β)²;      gc = gq − (1 − gq)/(Nc tan φ)
+//	undrained (φ = 0): gc = 1 − 2β/(π + 2) (Vesić; Hansen's 1 − β°/147° in his
+//	         additive form), gq = 1, and Nγ = −2 sin β (Vesić)
+//
+// Terzaghi, Meyerhof and EN 1997-1 Annex D have no ground factors: they
+// take the smaller of Hansen's and Vesić's, factor by factor (cautious).
+// Beyond the factors' range (drained β ≥ φ, where even a cohesionless
+// slope stands no steeper; undrained β ≥ 45°) no bearing resistance is
+// counted.
+func groundFactors(st bearingState, m Method, beta float64) ground {
+	if beta <= 0 {
+		return ground{c: 1, q: 1, g: 1}
+	}
+	deg := beta * 180 / math.Pi
+	if !st.drained {
+		if beta >= math.Pi/4 {
+			return ground{none: true, note: fmt.Sprintf("the ground falls at %.1f° from the base, beyond the 45° of the "+
+				"undrained ground-inclination factors: no bearing resistance counted (the bank's own stability governs: check it by hand)", deg)}
+		}
+		if m == Hansen {
+			return ground{c: 1 - deg/147, q: 1, g: 1}
+		}
+		return ground{c: 1 - 2*beta/(math.Pi+2), q: 1, g: 1}
+	}
+	if beta >= st.phi {
+		return ground{none: true, note: fmt.Sprintf("the ground falls at %.1f° from the base, at or beyond φ = %.1f°: "+
+			"no bearing resistance counted (the bank's own stability governs: check it by hand)", deg, st.phi*180/math.Pi)}
+	}
+	t := math.Tan(beta)
+	hq := math.Pow(1-0.5*t, 5)
+	hc := 1 - deg/147
+	vq := 0.0
+	if t < 1 {
+		vq = (1 - t) * (1 - t)
+	}
+	vc := math.Max(vq-(1-vq)/(st.nc*st.tanPhi), 0)
+	switch m {
+	case Hansen:
+		return ground{c: hc, q: hq, g: hq}
+	case Vesic:
+		return ground{c: vc, q: vq, g: vq}
+	}
+	return ground{c: math.Min(hc, vc), q: math.Min(hq, vq), g: math.Min(hq, vq)}
 }
 
 // bearingState is what every method's factors depend on.

@@ -449,3 +449,107 @@ func TestBearingLoadAtAnAngle(t *testing.T) {
 	b, _ = foundation.BearingCapacity(in, s, foundation.EC7, foundation.Undrained)
 	near(t, "undrained i_c", b.Ic, 0.5*(1+math.Sqrt(1-100e3/(1.6*2.4*40e3))), 1e-12)
 }
+
+// TestBearingGroundSlope checks the ground-inclination factors against
+// Bowles, Foundation Analysis and Design, 5th ed., Table 4-5 (Hansen 1970,
+// Vesić 1975) [R] (Vesić's gc for φ > 0 in the form of his ic and dc
+// [M]), each value worked by hand here for β = 20°
+// (tan β = 0.363970, β = 0.349066 rad):
+//
+//	Hansen  gq = gγ = (1 − 0.5·0.363970)⁵ = 0.818015⁵ = 0.366275;  gc = 1 − 20/147 = 0.863946
+//	Vesić   gq = gγ = (1 − 0.363970)²    = 0.636030² = 0.404534
+//	        gc = gq − (1 − gq)/(Nc tanφ); φ' 30°: Nc tanφ = 30.140·0.577350 = 17.4013 → 0.370314;
+//	        Terzaghi's Nc 37.16 (Das, Table 3.1, from memory [M]): Nc tanφ = 21.4543 → 0.376779
+//	undrained gc = 1 − 2·0.349066/(π + 2) = 0.864218 (Vesić), 0.863946 (Hansen);
+//	        Nγ = −2 sin 20° = −0.684040, the γ term −γ B' sin β
+//
+// Meyerhof, Terzaghi and EN 1997-1 Annex D have none of their own and take
+// the smaller of the two, factor by factor.
+func TestBearingGroundSlope(t *testing.T) {
+	m, kN := units.Metre, units.Kilonewton
+	in := foundation.BearingInput{AlongLoad: 2 * m, AcrossLoad: 3 * m, Depth: 1 * m, Vertical: 300 * kN}
+	slope := in
+	slope.GroundSlope = units.FromDegrees(20)
+	type want struct{ gc, gq, gg float64 }
+	const (
+		hq, hc = 0.366275, 0.863946
+		vq, vc = 0.404534, 0.370314
+	)
+	for _, c := range []struct {
+		method foundation.Method
+		want   want
+	}{
+		{foundation.Hansen, want{hc, hq, hq}},
+		{foundation.Vesic, want{vc, vq, vq}},
+		{foundation.EC7, want{vc, hq, hq}},
+		{foundation.Meyerhof, want{vc, hq, hq}},
+		{foundation.Terzaghi, want{0.376779, hq, hq}},
+	} {
+		level, err := foundation.BearingCapacity(in, sand30(), c.method, foundation.Drained)
+		if err != nil {
+			t.Fatal(err)
+		}
+		got, err := foundation.BearingCapacity(slope, sand30(), c.method, foundation.Drained)
+		if err != nil {
+			t.Fatal(err)
+		}
+		name := c.method.String()
+		near(t, name+" gc", got.Gc, c.want.gc, 1e-5)
+		near(t, name+" gq", got.Gq, c.want.gq, 1e-5)
+		near(t, name+" gγ", got.Ggamma, c.want.gg, 1e-5)
+		// Each term scales by its factor and nothing else changes.
+		near(t, name+" q term", float64(got.TermQ), float64(level.TermQ)*c.want.gq, 1e-5)
+		near(t, name+" γ term", float64(got.TermGamma), float64(level.TermGamma)*c.want.gg, 1e-5)
+		if got.Qult >= level.Qult {
+			t.Errorf("%s: sloping ground bears %v, level %v", name, got.Qult, level.Qult)
+		}
+	}
+
+	// Undrained: c_u 40 kPa, γ 18 kN/m³, centric, so B' = 2 m.
+	clay := foundation.Soil{UnitWeight: 18 * kNm3, Undrained: 40 * units.Kilopascal}
+	for _, c := range []struct {
+		method foundation.Method
+		gc     float64
+	}{{foundation.EC7, 0.864218}, {foundation.Vesic, 0.864218}, {foundation.Hansen, 0.863946}} {
+		level, err := foundation.BearingCapacity(in, clay, c.method, foundation.Undrained)
+		if err != nil {
+			t.Fatal(err)
+		}
+		got, err := foundation.BearingCapacity(slope, clay, c.method, foundation.Undrained)
+		if err != nil {
+			t.Fatal(err)
+		}
+		name := c.method.String() + " undrained"
+		near(t, name+" gc", got.Gc, c.gc, 1e-5)
+		near(t, name+" γ term", float64(got.TermGamma), -18e3*2*math.Sin(20*math.Pi/180), 1e-9)
+		near(t, name+" q term", float64(got.TermQ), float64(level.TermQ), 1e-12)
+		if c.method != foundation.Hansen {
+			near(t, name+" c term", float64(got.TermC), float64(level.TermC)*c.gc, 1e-5)
+		} else {
+			// Additive form: c_u Nc (sc + dc + ic − 2 − g'c), g'c = β°/147°.
+			lv := float64(level.TermC) / (40e3 * (math.Pi + 2))
+			near(t, name+" c term", float64(got.TermC), 40e3*(math.Pi+2)*(lv-20.0/147), 1e-5)
+		}
+	}
+
+	// At or beyond φ' the slope governs: no bearing counted, said so.
+	steep := in
+	steep.GroundSlope = units.FromDegrees(30)
+	got, err := foundation.BearingCapacity(steep, sand30(), foundation.EC7, foundation.Drained)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got.Qult != 0 || len(got.Notes) == 0 {
+		t.Errorf("ground at φ': qult %v, notes %q; want 0 and a note", got.Qult, got.Notes)
+	}
+	steep.GroundSlope = units.FromDegrees(45)
+	if got, err := foundation.BearingCapacity(steep, clay, foundation.EC7, foundation.Undrained); err != nil || got.Qult != 0 {
+		t.Errorf("undrained at 45°: qult %v, %v; want 0", got.Qult, err)
+	}
+	for _, bad := range []float64{-1, 90, math.NaN()} {
+		steep.GroundSlope = units.FromDegrees(bad)
+		if _, err := foundation.BearingCapacity(steep, sand30(), foundation.EC7, foundation.Drained); !errors.Is(err, foundation.ErrInvalid) {
+			t.Errorf("ground slope %v°: %v, want ErrInvalid", bad, err)
+		}
+	}
+}

@@ -117,6 +117,10 @@
 //     Engineering Handbook, Van Nostrand Reinhold.
 //   - Prandtl 1921 — L. Prandtl, Über die Eindringungsfestigkeit plastischer
 //     Baustoffe, Z. angew. Math. Mech. 1, 1921 (N_c = π + 2).
+//   - Bowles — J. E. Bowles, Foundation Analysis and Design, 5th ed.,
+//     McGraw-Hill, 1996, Table 4-5 (ground-inclination factors of Hansen
+//     and Vesić; Nγ = −2 sin β for φ = 0) and §4-9 (footings near slopes:
+//     no reduction once the footing stands about 2B back from the crest).
 //   - Das — B. M. Das, Principles of Foundation Engineering, 7th ed.,
 //     Cengage, 2011: §3.6 (groundwater), §3.11 (eccentric load), ch. 7
 //     (Rankine, Coulomb, Bell), and its chapter on anchor plates (Teng).

@@ -30,6 +30,10 @@ type Footing struct {
 	// Water is the water level at the footing: the pad and its soil cover
 	// are buoyed, and bearing uses effective stresses.
 	Water Water
+	// GroundSlope is the inclination of the ground falling away from the
+	// footing within reach of its failure zone; zero for level ground. It
+	// enters the bearing equation's ground-inclination factors.
+	GroundSlope units.Angle
 }
 
 // FootingLoad is the load from the tower, brought to the underside of the
@@ -135,6 +139,9 @@ func (f Footing) validate() error {
 	}
 	if err := nonNegative("Footing.UnitWeight", float64(f.UnitWeight)); err != nil {
 		return err
+	}
+	if !(f.GroundSlope >= 0 && f.GroundSlope < 90*units.Degree) {
+		return invalid("Footing.GroundSlope", "must be at least 0 and less than 90 deg")
 	}
 	return f.Water.validate("Footing.Water")
 }
@@ -326,7 +333,7 @@ func (f Footing) bearing(load FootingLoad, s Soil, m Method, cond Condition, ld 
 		if s.IsRock {
 			return rockBaseBearing(id, title, f.Along, f.Across, bl, s, set)
 		}
-		return soilBearing(id, title, f.Along, f.Across, f.Depth, f.Water, bl, s, m, cond, set, fs)
+		return soilBearing(id, title, f.Along, f.Across, f.Depth, f.Water, f.GroundSlope, bl, s, m, cond, set, fs)
 	}
 	weights := [2]float64{set.gG, set.gGfav}
 	nw := 1
