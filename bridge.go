@@ -50,8 +50,12 @@ type Site struct {
 	// Freeboard is the clearance required between the design flood and the
 	// underside of the walkway at its lowest point.
 	Freeboard units.Length `json:"freeboard"`
-	// Ground optionally traces the ground along the bridge axis for the
-	// drawing: x from the left saddle (negative behind it), elevation z.
+	// Ground optionally traces the ground along the bridge axis, left to
+	// right: x from the left saddle (negative behind it), elevation z. The
+	// drawing shows it, and the footing and anchor checks read from it the
+	// ground's fall near each base (bearing, and the passive resistance of
+	// blocks and deadmen); without it they take the ground level and say
+	// so.
 	Ground []Point `json:"ground,omitempty"`
 }
 

@@ -289,7 +289,12 @@ func TestMirroredBridge(t *testing.T) {
 	mb.Banks.Left, mb.Banks.Right = b.Banks.Right, b.Banks.Left
 	mb.Site.Rise = -b.Site.Rise
 	mb.Site.LeftSaddle = b.Site.LeftSaddle + b.Site.Rise
+	// The ground line mirrored about midspan: x → span − x, in order.
 	mb.Site.Ground = nil
+	for i := len(b.Site.Ground) - 1; i >= 0; i-- {
+		p := b.Site.Ground[i]
+		mb.Site.Ground = append(mb.Site.Ground, Point{X: b.Site.Span - p.X, Z: p.Z})
+	}
 	mb.Loads.DeckFrom = "right"
 	a, err := Check(b, nil)
 	if err != nil {

@@ -54,7 +54,7 @@ func ExampleSearch() {
 		SagRatios: []float64{1.0 / 20, 1.0 / 18},
 		Counts:    []int{4, 6},
 		Anchors: []sagspan.BlockSize{
-			{Length: 4.5 * m, Width: 5 * m, Height: 2.6 * m, Depth: 3 * m},
+			{Length: 4.5 * m, Width: 5.4 * m, Height: 2.6 * m, Depth: 3 * m},
 			{Length: 5.5 * m, Width: 6 * m, Height: 2.8 * m, Depth: 3.2 * m},
 		},
 	}
@@ -71,7 +71,7 @@ func ExampleSearch() {
 	}
 	// Output:
 	// 8 candidates, 2 feasible
-	// best: sag 1/20, 6 ropes, anchor 4.500 m long, cost 45958, utilisation 0.970
+	// best: sag 1/20, 6 ropes, anchor 4.500 m long, cost 47912, utilisation 0.970
 }
 
 // ExampleAnalysis_WriteText is the README's "Using it from Go": read a

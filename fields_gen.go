@@ -147,7 +147,7 @@ var fieldDocs = map[string]string{
 	"SectionSpec.Wall":                "Wall is the tube's wall thickness.",
 	"Site.Flood":                      "Flood is the elevation of the design flood, or \"none\" where no flood reaches the bridge.",
 	"Site.Freeboard":                  "Freeboard is the clearance required between the design flood and the underside of the walkway at its lowest point.",
-	"Site.Ground":                     "Ground optionally traces the ground along the bridge axis for the drawing: x from the left saddle (negative behind it), elevation z.",
+	"Site.Ground":                     "Ground optionally traces the ground along the bridge axis, left to right: x from the left saddle (negative behind it), elevation z. The drawing shows it, and the footing and anchor checks read from it the ground's fall near each base (bearing, and the passive resistance of blocks and deadmen); without it they take the ground level and say so.",
 	"Site.LeftSaddle":                 "LeftSaddle is the elevation of the left walkway-rope saddle.",
 	"Site.Rise":                       "Rise is the height of the right saddle above the left one; negative when the right saddle is lower.",
 	"Site.Span":                       "Span is the horizontal distance between the walkway-rope saddles.",

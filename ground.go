@@ -26,6 +26,11 @@ type bankGround struct {
 	// groundwater is the groundwater elevation, when given.
 	groundwater *units.Length
 	flood       Level
+	// line is the site's ground line (site.ground), xs the saddle's
+	// position along it and dir the direction of the span from the bank
+	// (+1 left, −1 right).
+	line    []Point
+	xs, dir float64
 }
 
 // saddleElevation returns the elevation of a bank's walkway-rope saddle.
@@ -64,7 +69,11 @@ func (b Bridge) groundOf(s Side, soil foundation.Soil) bankGround {
 	k := b.bankOf(s)
 	m, _ := k.Soil.method() // validated
 	z := b.saddleElevation(s)
-	g := bankGround{bank: k, soil: soil, method: m, groundwater: k.Soil.Groundwater, flood: b.Site.Flood}
+	g := bankGround{bank: k, soil: soil, method: m, groundwater: k.Soil.Groundwater, flood: b.Site.Flood,
+		line: b.Site.Ground, dir: 1}
+	if s == Right {
+		g.xs, g.dir = float64(b.Site.Span), -1
+	}
 	ft := k.Tower.Footing
 	g.footingTop = z - k.Tower.Height
 	g.footingGround = g.footingTop + ft.Depth - ft.Thickness
@@ -135,17 +144,119 @@ func (g *bankGround) waterAt(lc LoadCase, ground units.Length) foundation.Water 
 func (g *bankGround) pad(spec FootingSpec) foundation.Footing {
 	t := g.bank.Tower
 	return foundation.Footing{Along: spec.Length, Across: spec.Width, Thickness: spec.Thickness, Depth: spec.Depth,
-		UnitWeight: t.UnitWeight, Footprint: units.Area(float64(t.Depth) * float64(t.Width))}
+		UnitWeight: t.UnitWeight, Footprint: units.Area(float64(t.Depth) * float64(t.Width)),
+		GroundSlope: g.footingSlope(spec).beta}
 }
 
 // block, deadman and rock return the bank's anchor for package foundation.
 func (g *bankGround) block(a AnchorSpec) foundation.AnchorBlock {
 	return foundation.AnchorBlock{Length: a.Length, Width: a.Width, Height: a.Height, Depth: a.Depth,
-		UnitWeight: a.UnitWeight, PassiveMobilisation: a.Passive}
+		UnitWeight: a.UnitWeight, PassiveMobilisation: a.Passive, GroundSlope: g.anchorSlope(a).beta}
+}
+
+// baseSlope is the fall of the ground at a base, read from the ground
+// line: the steepest fall away from the base within reach of its edges
+// (twice its side along the bridge: Bowles, Foundation Analysis and
+// Design, §4-9, finds no reduction of the bearing factors once a footing
+// stands about that far back from a slope's crest) or under it.
+type baseSlope struct {
+	beta    units.Angle
+	reach   units.Length
+	line    bool // a ground line is given
+	covered bool // it covers the base and its reach
+	rock    bool // the base stands on rock
+}
+
+// footingSlope returns the ground's fall at a tower footing of size spec,
+// centred ColumnOffset behind the column.
+func (g *bankGround) footingSlope(spec FootingSpec) baseSlope {
+	c := g.xs - g.dir*float64(spec.ColumnOffset)
+	h := float64(spec.Length) / 2
+	s := fallAt(g.line, c-h, c+h, 2*float64(spec.Length))
+	s.rock = g.soil.IsRock
+	return s
+}
+
+// anchorSlope returns the ground's fall at an anchor block or deadman: its
+// attachment lies the backstay's horizontal run behind the saddle,
+// AttachX from the block's back edge.
+func (g *bankGround) anchorSlope(a AnchorSpec) baseSlope {
+	ax := a.AttachX
+	if ax == 0 {
+		ax = a.Length / 2
+	}
+	attach := g.xs - g.dir*float64(g.bank.Backstay.Horizontal)
+	back := attach - g.dir*float64(ax)
+	front := back + g.dir*float64(a.Length)
+	// Reach: twice the length along the pull, or the depth (a passive
+	// wedge in front reaches about Depth·tan(45° + φ/2) ≤ 2·Depth).
+	s := fallAt(g.line, min(back, front), max(back, front), 2*math.Max(float64(a.Length), float64(a.Depth)))
+	s.rock = g.soil.IsRock
+	return s
+}
+
+// fallAt returns the steepest fall of the ground line away from a base
+// spanning x0…x1 along it: segments within reach beyond x1 that fall
+// toward +x, within reach before x0 that fall toward −x, and under the
+// base falling either way.
+func fallAt(line []Point, x0, x1, reach float64) baseSlope {
+	s := baseSlope{reach: units.Length(reach), line: len(line) > 1}
+	if !s.line {
+		return s
+	}
+	lo, hi := x0-reach, x1+reach
+	s.covered = float64(line[0].X) <= lo && float64(line[len(line)-1].X) >= hi
+	worst := 0.0
+	for i := 1; i < len(line); i++ {
+		a, b := line[i-1], line[i]
+		xa, xb := float64(a.X), float64(b.X)
+		if xb <= lo || xa >= hi {
+			continue
+		}
+		slope := math.Atan2(float64(b.Z-a.Z), xb-xa) // rising toward +x positive
+		if xb > x1 {                                 // beyond the base: falling toward +x
+			worst = math.Max(worst, -slope)
+		}
+		if xa < x0 { // before it: falling toward −x
+			worst = math.Max(worst, slope)
+		}
+		if xa < x1 && xb > x0 { // under it: either way
+			worst = math.Max(worst, math.Abs(slope))
+		}
+	}
+	s.beta = units.Angle(worst)
+	return s
+}
+
+// text returns the basis a bearing or sliding result of the base carries
+// about the ground around it.
+func (s baseSlope) text(id string) string {
+	if !strings.HasSuffix(id, ".bearing") && !strings.HasSuffix(id, ".sliding") && id != "anchor.deadman.pullout" {
+		return ""
+	}
+	if !s.line {
+		return "; no ground line given (site.ground): the ground around the base is taken level — where the bank falls away from it, " +
+			"bearing and passive resistance are less than computed: give the ground line"
+	}
+	out := fmt.Sprintf("; ground from the ground line (site.ground): steepest fall within %s of the base's edges %.1f°", s.reach, s.beta.Degrees())
+	switch {
+	case s.rock && s.beta > 0:
+		out += " (on rock the bearing pressure is not reduced for it: the rock mass's stability toward the slope, " +
+			"joints dipping out of it, must be checked by hand)"
+	case s.beta > 0 && strings.HasSuffix(id, ".bearing"):
+		out += " (ground-inclination factors in the bearing equation, the crest's set-back not counted: cautious)"
+	case s.beta > 0 && (id == "anchor.sliding" || id == "anchor.deadman.pullout"):
+		out += " (the passive resistance in front for ground falling at that slope: Coulomb, smooth face)"
+	}
+	if !s.covered {
+		out += "; beyond the ground line the ground is taken level"
+	}
+	return out + "; the bank's own stability is not checked"
 }
 
 func (g *bankGround) deadman(a AnchorSpec) foundation.Deadman {
-	d := foundation.Deadman{Length: a.Width, Height: a.Height, Thickness: a.Length, Depth: a.Depth, UnitWeight: a.UnitWeight}
+	d := foundation.Deadman{Length: a.Width, Height: a.Height, Thickness: a.Length, Depth: a.Depth, UnitWeight: a.UnitWeight,
+		GroundSlope: g.anchorSlope(a).beta}
 	if a.Beam != nil {
 		d.Section = foundation.SteelSection{Yield: a.Beam.Steel, PlasticModulus: a.Beam.PlasticModulus, ShearArea: a.Beam.ShearArea}
 	}
@@ -237,7 +348,7 @@ func (m *model) footingAcross(s Side, spec FootingSpec, perm tower.Resultant, sv
 	ld.VariableMoment, ld.VariableMomentAcross = ld.VariableMomentAcross, ld.VariableMoment
 	var err error
 	m.scratch, err = f.AppendCheck(m.scratch[:0], ld, g.soil, g.method, m.foundationBasis())
-	m.waterBasis(m.scratch, s, svc.Case, f.Water)
+	m.waterBasis(m.scratch, s, svc.Case, f.Water, g.footingSlope(spec))
 	return m.scratch, err
 }
 
@@ -308,38 +419,24 @@ func (m *model) footing(s Side, spec FootingSpec, perm tower.Resultant, svc Case
 	f.Water = g.waterAt(svc.Case, g.footingGround)
 	var err error
 	m.scratch, err = f.AppendCheck(m.scratch[:0], m.footingLoad(s, spec, perm, svc), g.soil, g.method, m.foundationBasis())
-	m.waterBasis(m.scratch, s, svc.Case, f.Water)
+	m.waterBasis(m.scratch, s, svc.Case, f.Water, g.footingSlope(spec))
 	return m.scratch, err
 }
 
 // waterBasis states in each result's basis the water level used, and
 // gives its elevation as the value "z_w" (not on a terse basis).
-func (m *model) waterBasis(rs []check.Result, s Side, lc LoadCase, w foundation.Water) {
+func (m *model) waterBasis(rs []check.Result, s Side, lc LoadCase, w foundation.Water, slope baseSlope) {
 	if m.fbasis.Terse {
 		return
 	}
 	level, ok, _ := m.ground[s].waterLevel(lc)
 	text := m.ground[s].waterText(lc)
 	for i := range rs {
-		rs[i] = rs[i].WithBasis(rs[i].Basis + "; water level used: " + text + levelGround(rs[i].ID))
+		rs[i] = rs[i].WithBasis(rs[i].Basis + "; water level used: " + text + slope.text(rs[i].ID))
 		if ok {
 			rs[i] = rs[i].WithValues(check.Of("z_w", "elevation of the water level used", level))
 		}
 	}
-}
-
-// levelGround returns the caution a bearing or sliding result carries about
-// the ground around the base: the checks take it level, and on a bank that
-// falls away in front of the base (a river bank, a gorge edge) bearing and
-// passive resistance are less than computed. The bridge's ground line is
-// used for the drawing only.
-func levelGround(id string) string {
-	switch {
-	case strings.HasSuffix(id, ".bearing"), strings.HasSuffix(id, ".sliding"):
-		return "; the ground around the base is taken level: where the bank falls away in front of it, " +
-			"bearing and passive resistance are less than computed (reduce them by hand, e.g. with ground-inclination factors)"
-	}
-	return ""
 }
 
 // foundationBasis returns the verification basis of the anchor and
@@ -418,7 +515,11 @@ func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Re
 			}
 		}
 	}
-	m.waterBasis(m.scratch, s, svc.Case, water)
+	slope := baseSlope{}
+	if spec.Type != "rock" {
+		slope = g.anchorSlope(spec)
+	}
+	m.waterBasis(m.scratch, s, svc.Case, water, slope)
 	m.scratch, err = m.attachment(m.scratch, s, spec, perm, svc, pull, permanent)
 	return m.scratch, err
 }

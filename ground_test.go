@@ -502,3 +502,92 @@ func TestFloodedDeadman(t *testing.T) {
 		t.Errorf("scour note: flooded %v, dry %v", flooded.Notes, dry.Notes)
 	}
 }
+
+// TestGroundLineSlope checks that the footing and anchor checks read the
+// ground's fall from the ground line (site.ground):
+//   - a bank falling at 20° from 0.8 m in front of the left footing's edge
+//     gives its bearing Hansen's ground factor, the smaller of Hansen's and
+//     Vesić's that EN 1997-1 Annex D (which has none) takes:
+//     gq = (1 − 0.5 tan 20°)⁵ = 0.366274 (Bowles, Table 4-5, by hand);
+//   - the right bank, level, gives none;
+//   - the demo's earlier ground line, a 39.3° bank 0.3 m from the footing
+//     in dense sand (φ' 36°), fails the footing's bearing outright: a
+//     cohesionless bank steeper than φ' carries nothing at its crest, which
+//     the check on level ground passed at 0.17.
+func TestGroundLineSlope(t *testing.T) {
+	b := Demo()
+	tan20 := math.Tan(20 * math.Pi / 180)
+	b.Site.Ground = []Point{{X: -30, Z: 110.1}, {X: 2, Z: 110.1}, {X: 12, Z: units.Length(110.1 - 10*tan20)},
+		{X: 60, Z: 100}, {X: 65, Z: 110.9}, {X: 100, Z: 110.9}}
+	a, err := Check(b, &Options{SkipComfort: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	left := find(t, a.Report, "footing.bearing", "left footing", "permanent")
+	if v, ok := left.Value("β_g"); !ok || math.Abs(float64(v.Value)-20*math.Pi/180) > 1e-9 {
+		t.Errorf("left footing: β_g %v (%v), want 20°", v.Value, ok)
+	}
+	if v, ok := left.Value("g_q"); !ok || math.Abs(float64(v.Value)-0.366274) > 1e-6 {
+		t.Errorf("left footing: g_q %v (%v), want 0.366274", v.Value, ok)
+	}
+	if !strings.Contains(left.Basis, "steepest fall within 4.800 m of the base's edges 20.0°") {
+		t.Errorf("left footing basis: %q", left.Basis)
+	}
+	right := find(t, a.Report, "footing.bearing", "right footing", "permanent")
+	if _, ok := right.Value("β_g"); ok || !strings.Contains(right.Basis, "edges 0.0°") {
+		t.Errorf("right footing on level ground: basis %q", right.Basis)
+	}
+
+	b.Site.Ground = []Point{{X: -26, Z: 110.8}, {X: -8, Z: 110.6}, {X: 1.5, Z: 110.1}, {X: 12, Z: 101.5},
+		{X: 30, Z: 97}, {X: 44, Z: 96.5}, {X: 62, Z: 102}, {X: 70.5, Z: 110.9}, {X: 80, Z: 111.8}, {X: 96, Z: 112.2}}
+	a, err = Check(b, &Options{SkipComfort: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	left = find(t, a.Report, "footing.bearing", "left footing", "permanent")
+	if left.Status != check.Fail || left.Capacity != 0 || !strings.Contains(strings.Join(left.Notes, " "), "no bearing resistance counted") {
+		t.Errorf("footing at the crest of a 39° bank in dense sand: %s, capacity %v, notes %q; want a failure with no bearing counted",
+			left.Status, left.Capacity, left.Notes)
+	}
+
+	// Without a ground line the ground is taken level, and the basis says so.
+	b.Site.Ground = nil
+	a, err = Check(b, &Options{SkipComfort: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r := find(t, a.Report, "footing.bearing", "left footing", "permanent"); !strings.Contains(r.Basis, "no ground line given") {
+		t.Errorf("no ground line: basis %q", r.Basis)
+	}
+}
+
+// TestFallAt checks the reading of a ground line's fall by hand.
+func TestFallAt(t *testing.T) {
+	line := []Point{{X: -10, Z: 5}, {X: -4, Z: 8}, {X: 0, Z: 8}, {X: 3, Z: 6}, {X: 20, Z: 0}}
+	deg := func(rise, run float64) float64 { return math.Atan2(rise, run) * 180 / math.Pi }
+	for _, c := range []struct {
+		name          string
+		x0, x1, reach float64
+		want          float64
+		covered       bool
+	}{
+		// Base −1…1: under it, 0…1 falls at atan(2/3); beyond it 1…3 the
+		// same; before it −4…−1 level; −10…−4 is beyond reach 2.
+		{"crest under the base", -1, 1, 2, deg(2, 3), true},
+		// Base −3…−2, reach 1: before it −4…−3 level; −10…−4 is out of reach.
+		{"level plateau", -3, -2, 1, 0, true},
+		// Base −3…−2, reach 7: −10…−4 rises toward +x, so it falls toward
+		// −x, away from the base: atan(3/6); 0…3 falls toward +x: atan(2/3).
+		{"both sides", -3, -2, 7, math.Max(deg(3, 6), deg(2, 3)), true},
+		// Base 18…19, reach 4: the line ends at 20, so it is not covered.
+		{"past the end", 18, 19, 4, deg(6, 17), false},
+	} {
+		s := fallAt(line, c.x0, c.x1, c.reach)
+		if math.Abs(s.beta.Degrees()-c.want) > 1e-9 || s.covered != c.covered || !s.line {
+			t.Errorf("%s: β %.6f° covered %v, want %.6f° %v", c.name, s.beta.Degrees(), s.covered, c.want, c.covered)
+		}
+	}
+	if s := fallAt(nil, 0, 1, 2); s.line || s.beta != 0 {
+		t.Errorf("no line: %+v", s)
+	}
+}

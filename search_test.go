@@ -24,7 +24,7 @@ func smallSpace() SearchSpace {
 		Counts:    []int{4, 6},
 		Anchors: []BlockSize{
 			{Length: 3.5 * m, Width: 4 * m, Height: 2.2 * m, Depth: 2.8 * m},
-			{Length: 4.5 * m, Width: 5 * m, Height: 2.6 * m, Depth: 3 * m},
+			{Length: 4.5 * m, Width: 5.4 * m, Height: 2.6 * m, Depth: 3 * m},
 		},
 		Footings: []FootingSize{
 			{Length: 2.0 * m, Width: 2.6 * m, Thickness: 0.6 * m},

@@ -117,6 +117,10 @@ func (b Bridge) Validate() error {
 	for i, p := range s.Ground {
 		v.finite(at(fmt.Sprintf("site.ground[%d].x", i)), float64(p.X))
 		v.finite(at(fmt.Sprintf("site.ground[%d].z", i)), float64(p.Z))
+		if v.err == nil && i > 0 && !(p.X > s.Ground[i-1].X) {
+			v.fail(at(fmt.Sprintf("site.ground[%d].x", i)), "%s does not lie beyond the point before it (%s): the ground line runs from left to right",
+				p.X, s.Ground[i-1].X)
+		}
 	}
 
 	c := b.Climate

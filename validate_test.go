@@ -183,3 +183,17 @@ func TestLimitsAgreeWithPackages(t *testing.T) {
 		t.Errorf("only %d bridges at the ends of their ranges were checked", checked)
 	}
 }
+
+// TestGroundLineOrder: the ground line now decides the footing and
+// anchor checks' ground slope, so a point out of order (a slip in a
+// survey transcription) is refused, naming the point.
+func TestGroundLineOrder(t *testing.T) {
+	b := Demo()
+	b.Site.Ground = append([]Point(nil), b.Site.Ground...)
+	b.Site.Ground[3].X = b.Site.Ground[1].X
+	err := b.Validate()
+	var fe *FieldError
+	if !errors.As(err, &fe) || fe.Field != "site.ground[3].x" || !strings.Contains(err.Error(), "left to right") {
+		t.Fatalf("ground line out of order: %v", err)
+	}
+}

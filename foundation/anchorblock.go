@@ -119,10 +119,10 @@ func rankineLevel(phi units.Angle, passive bool) float64 {
 	return t * t
 }
 
-// passiveK returns the passive coefficient on the front face in strength
-// st (see earth): zero where no passive resistance is counted.
-func (a AnchorBlock) passiveK(st strength) float64 {
-	b := a.GroundSlope
+// passiveK returns the passive coefficient on a vertical smooth face in
+// strength st with the ground falling away in front at b (see
+// AnchorBlock.earth): zero where no passive resistance is counted.
+func passiveK(st strength, b units.Angle) float64 {
 	if st.cond != Drained {
 		if b > 0 {
 			return 0
@@ -223,7 +223,7 @@ func (a AnchorBlock) loads(s Soil) blockLoads {
 func (a AnchorBlock) earth(s Soil, st strength) (pp, pa EarthForce) {
 	d := float64(a.Depth)
 	top := math.Max(d-float64(a.Height), 0)
-	kp, ka := a.passiveK(st), 1.0
+	kp, ka := passiveK(st, a.GroundSlope), 1.0
 	if st.cond == Drained {
 		ka = rankineLevel(units.Angle(st.phi), false)
 	}
@@ -492,7 +492,7 @@ func (a AnchorBlock) sliding(pulls []AnchorPull, s Soil, cond Condition, ld bloc
 			check.Of("P_a", "active thrust on the back face", pa.Force))
 		note += fmt.Sprintf("; passive resistance %v mobilised at %.2f, active thrust %v on the back face", pp.Force, mu, pa.Force)
 		if b := a.GroundSlope; b > 0 {
-			kp := a.passiveK(st)
+			kp := passiveK(st, b)
 			vs = append(vs, check.Of("β_g", "slope of the ground falling away from the block", b),
 				check.Of("K_p", "passive coefficient on the front face", units.Ratio(kp)))
 			switch {

@@ -456,7 +456,7 @@ func TestBearingLoadAtAnAngle(t *testing.T) {
 // [M]), each value worked by hand here for β = 20°
 // (tan β = 0.363970, β = 0.349066 rad):
 //
-//	Hansen  gq = gγ = (1 − 0.5·0.363970)⁵ = 0.818015⁵ = 0.366275;  gc = 1 − 20/147 = 0.863946
+//	Hansen  gq = gγ = (1 − 0.5·0.363970)⁵ = 0.818015⁵ = 0.366274;  gc = 1 − 20/147 = 0.863946
 //	Vesić   gq = gγ = (1 − 0.363970)²    = 0.636030² = 0.404534
 //	        gc = gq − (1 − gq)/(Nc tanφ); φ' 30°: Nc tanφ = 30.140·0.577350 = 17.4013 → 0.370314;
 //	        Terzaghi's Nc 37.16 (Das, Table 3.1, from memory [M]): Nc tanφ = 21.4543 → 0.376779
@@ -472,7 +472,7 @@ func TestBearingGroundSlope(t *testing.T) {
 	slope.GroundSlope = units.FromDegrees(20)
 	type want struct{ gc, gq, gg float64 }
 	const (
-		hq, hc = 0.366275, 0.863946
+		hq, hc = 0.366274, 0.863946
 		vq, vc = 0.404534, 0.370314
 	)
 	for _, c := range []struct {

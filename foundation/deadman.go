@@ -30,6 +30,12 @@ type Deadman struct {
 	// Water is the water level at the deadman: effective stresses in the
 	// passive and active pressures, submerged weights in uplift.
 	Water Water
+	// GroundSlope is the inclination of the ground falling away from the
+	// deadman within reach of its passive wedge; zero for level ground.
+	// Drained, the passive coefficient is then Coulomb's for ground
+	// falling in front (δ = 0), none at or beyond φ'; undrained, no
+	// passive resistance is counted on falling ground (cautious).
+	GroundSlope units.Angle
 	// Section is the deadman's steel section, checked in bending and shear
 	// as a beam on the soil reaction; the zero value means the section is
 	// not a steel one described here (a concrete or timber beam), and its
@@ -52,6 +58,9 @@ func (d Deadman) validate() error {
 	if err := d.Water.validate("Deadman.Water"); err != nil {
 		return err
 	}
+	if !(d.GroundSlope >= 0 && d.GroundSlope < 90*units.Degree) {
+		return invalid("Deadman.GroundSlope", "must be at least 0 and less than 90 deg")
+	}
 	if err := d.Section.validate("Deadman.Section", true); err != nil {
 		return err
 	}
@@ -67,7 +76,8 @@ func (d Deadman) validate() error {
 //	deeper: the larger of Length (Pp − Pa) over the face only and the
 //	   near-surface value at Depth = 2·Height
 //
-// with Rankine coefficients for level ground and Bell's cohesion terms
+// with Rankine coefficients for level ground (Kp as AnchorBlock's on
+// ground falling in front, GroundSlope) and Bell's cohesion terms
 // (drained), or K = 1 and c_u (undrained, where the end-effect term
 // vanishes with φ), effective stresses with the deadman's water level, the
 // active side's tension cut off. The deeper form is this package's
@@ -111,7 +121,7 @@ type deadmanResistance struct {
 func (r deadmanResistance) values() []check.Value {
 	return []check.Value{
 		check.Of("T_u", "ultimate horizontal resistance of the soil", units.Force(r.t)),
-		check.Of("K_p", "passive earth-pressure coefficient (Rankine; 1 undrained)", units.Ratio(r.kp)),
+		check.Of("K_p", "passive earth-pressure coefficient (Rankine on level ground, Coulomb with δ = 0 on ground falling in front; 1 undrained on level ground)", units.Ratio(r.kp)),
 		check.Of("K_a", "active earth-pressure coefficient (Rankine; 1 undrained)", units.Ratio(r.ka)),
 		check.Of("z_t", "depth of the top of the face the pressures act on", units.Length(r.top)),
 		check.Of("z_b", "depth of the bottom of that face", units.Length(r.bottom)),
@@ -142,17 +152,18 @@ func (d Deadman) resistance(s Soil, st strength) deadmanResistance {
 }
 
 // coefficients returns Kp and Ka in strength st: Rankine's for level
-// ground drained, 1 undrained.
-func (st strength) coefficients() (kp, ka float64) {
+// ground drained, 1 undrained; Kp for ground falling at slope in front as
+// passiveK.
+func (st strength) coefficients(slope units.Angle) (kp, ka float64) {
 	if st.cond == Undrained {
-		return 1, 1
+		return passiveK(st, slope), 1
 	}
-	return rankineLevel(units.Angle(st.phi), true), rankineLevel(units.Angle(st.phi), false)
+	return passiveK(st, slope), rankineLevel(units.Angle(st.phi), false)
 }
 
 // passiveLessActive returns Length (Pp − Pa) between depths top and bottom.
 func (d Deadman) passiveLessActive(s Soil, st strength, top, bottom float64) deadmanResistance {
-	kp, ka := st.coefficients()
+	kp, ka := st.coefficients(d.GroundSlope)
 	g, gs, dw := float64(s.UnitWeight), float64(s.SubmergedWeight()), d.Water.depth()
 	pp := layeredEarth(kp, st.c, 1, top, bottom, g, gs, dw)
 	pa := layeredEarth(ka, st.c, -1, top, bottom, g, gs, dw)

@@ -164,3 +164,28 @@ func TestDeadmanValuesRoundTrip(t *testing.T) {
 	}
 	near(t, "capacity", po.Capacity, (pp-pa+te)*1e3, 1e-9)
 }
+
+// TestDeadmanFallingGround: ground falling at 20° in front of the deadman
+// of TestDeadmanHand (φ 30°, γ 18, face 0–1.5 m, 3 m long). Kp is
+// Coulomb's for a smooth face and ground falling in front (Murthy eq.
+// 11.51 form, δ = 0, β = −20°; by hand: sin30·sin10/cos20 = 0.092396, √ =
+// 0.303968, Kp = cos²30/(1 − 0.303968)² = 0.75/0.484460 = 1.548112), so
+// T = ½·18·1.5²·(1.548112 − 1/3)·3 = 73.798 kN, against 162 kN on level
+// ground; at 30° (φ) none is counted and the active thrust alone remains.
+func TestDeadmanFallingGround(t *testing.T) {
+	d := testDeadman()
+	d.GroundSlope = deg(20)
+	r, _, err := d.Resistance(sand30(), foundation.Drained)
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "Teng on falling ground", float64(r)/1e3, 73.798, 1e-4)
+	d.GroundSlope = deg(30)
+	if r, _, err = d.Resistance(sand30(), foundation.Drained); err != nil || r > 0 {
+		t.Errorf("ground falling at φ: resistance %v, %v; want none", r, err)
+	}
+	d.GroundSlope = deg(95)
+	if _, _, err := d.Resistance(sand30(), foundation.Drained); !errors.Is(err, foundation.ErrInvalid) {
+		t.Errorf("ground slope 95°: %v, want ErrInvalid", err)
+	}
+}
