@@ -267,20 +267,26 @@ func (c RCColumn) validate() error {
 // validRestraints checks the restraints, springs and base flexibility of a
 // column.
 func validRestraints(name string, along, across Restraint, alongSpring, acrossSpring, k float64) error {
-	for _, r := range []struct {
-		n string
+	// The names are built only for an error: this runs for every check.
+	for i, r := range [2]struct {
 		r Restraint
 		k float64
-	}{{name + ".Along", along, alongSpring}, {name + ".Across", across, acrossSpring}} {
-		if !r.r.valid() {
-			return invalid(r.n, int(r.r), "is not FreeTop, HeldTop or SpringTop")
+	}{{along, alongSpring}, {across, acrossSpring}} {
+		if r.r.valid() && r.k >= 0 && !math.IsInf(r.k, 0) {
+			continue
 		}
-		if err := nonNegative(r.n+"Spring", units.Ratio(r.k)); err != nil {
+		n := name + [2]string{".Along", ".Across"}[i]
+		if !r.r.valid() {
+			return invalid(n, int(r.r), "is not FreeTop, HeldTop or SpringTop")
+		}
+		if err := nonNegative(n+"Spring", units.Ratio(r.k)); err != nil {
 			return err
 		}
 	}
-	if err := nonNegative(name+".BaseFlexibility", units.Ratio(k)); err != nil {
-		return err
+	if !(k >= 0 && !math.IsInf(k, 0)) {
+		if err := nonNegative(name+".BaseFlexibility", units.Ratio(k)); err != nil {
+			return err
+		}
 	}
 	if k > 100 {
 		return invalid(name+".BaseFlexibility", k, "is beyond any base that holds a column (at most 100)")
