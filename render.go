@@ -23,7 +23,7 @@ var reportParts = []func(*Analysis) check.Section{
 
 // Sections returns the sections of the full report, in order.
 func (a *Analysis) Sections(opts *check.RenderOptions) []check.Section {
-	out := []check.Section{a.designBasisSection()}
+	out := []check.Section{a.notCheckedSection(), a.designBasisSection()}
 	out = append(out, a.Report.Sections(a.renderOptions(opts))...)
 	for _, part := range reportParts {
 		out = append(out, part(a))
@@ -120,6 +120,7 @@ func (a *Analysis) erectionSection() check.Section {
 type analysisJSON struct {
 	Bridge      string         `json:"bridge"`
 	Caution     string         `json:"caution"`
+	NotChecked  []string       `json:"not_checked"`
 	DesignBasis DesignBasis    `json:"design_basis"`
 	Report      check.Report   `json:"report"`
 	Cases       []caseJSON     `json:"cases"`
@@ -163,7 +164,7 @@ type erectionJSON struct {
 // report (failures first), the rope states of every characteristic case,
 // the frequencies and the erection tables.
 func (a *Analysis) MarshalJSON() ([]byte, error) {
-	out := analysisJSON{Bridge: a.Bridge.Name, Caution: check.Caution, DesignBasis: a.DesignBasis(), Report: a.Report}
+	out := analysisJSON{Bridge: a.Bridge.Name, Caution: check.Caution, NotChecked: a.NotChecked(), DesignBasis: a.DesignBasis(), Report: a.Report}
 	for _, cs := range a.Service {
 		c := caseJSON{Name: cs.Case.Name}
 		for _, g := range cs.Groups {

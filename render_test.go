@@ -203,3 +203,59 @@ func TestOneUnitPerCheck(t *testing.T) {
 		}
 	}
 }
+
+// TestNotChecked: every report says what it does not check, beside the
+// verdict, following the description's own choices (common practice for
+// the scope of a design check).
+func TestNotChecked(t *testing.T) {
+	b := Demo()
+	a, err := Check(b, &Options{SkipComfort: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	has := func(list []string, s string) bool {
+		for _, x := range list {
+			if strings.Contains(x, s) {
+				return true
+			}
+		}
+		return false
+	}
+	base := a.NotChecked()
+	for _, s := range []string{"walkway's own members", "structural design of the footings", "terminations' hardware",
+		"Fatigue", "earthquake", "take the ground line's fall"} {
+		if !has(base, s) {
+			t.Errorf("demo: %q missing from %q", s, base)
+		}
+	}
+	var text, js bytes.Buffer
+	if err := a.WriteText(&text, nil); err != nil {
+		t.Fatal(err)
+	}
+	if i, j := strings.Index(text.String(), "Not checked by this report"), strings.Index(text.String(), "Design basis"); i < 0 || j < i {
+		t.Error("the text report does not open with what it does not check")
+	}
+	if err := a.WriteJSON(&js); err != nil {
+		t.Fatal(err)
+	}
+	var doc struct {
+		NotChecked []string `json:"not_checked"`
+	}
+	if err := json.Unmarshal(js.Bytes(), &doc); err != nil || len(doc.NotChecked) != len(base) {
+		t.Errorf("JSON not_checked: %d items (%v), want %d", len(doc.NotChecked), err, len(base))
+	}
+
+	// A frame tower, no ground line, no attachment described, rock.
+	b.Site.Ground = nil
+	b.Banks.Left.Tower.Section.Type = "frame"
+	b.Banks.Right.Anchor.Attachment = nil
+	yes := true
+	b.Banks.Right.Soil.IsRock = &yes
+	a.Bridge = b
+	got := a.NotChecked()
+	for _, s := range []string{"left tower's frame bracing", "taken level", "attachment at the right anchor", "rock mass's own stability at the right"} {
+		if !has(got, s) {
+			t.Errorf("%q missing from %q", s, got)
+		}
+	}
+}
