@@ -58,7 +58,7 @@ func (a *Analysis) notCheckedSection() check.Section {
 	s := check.Section{ID: "not-checked", Title: "Not checked by this report",
 		Text: []string{"A pass below covers the checks listed in the report, and only those. These remain with the engineer:"}}
 	for _, item := range a.NotChecked() {
-		s.Text = append(s.Text, "- "+item)
+		s.Items = append(s.Items, [2]string{"", item})
 	}
 	return s
 }
