@@ -188,9 +188,12 @@ func (g *bankGround) anchorSlope(a AnchorSpec) baseSlope {
 	attach := g.xs - g.dir*float64(g.bank.Backstay.Horizontal)
 	back := attach - g.dir*float64(ax)
 	front := back + g.dir*float64(a.Length)
-	// Reach: twice the length along the pull, or the depth (a passive
-	// wedge in front reaches about Depth·tan(45° + φ/2) ≤ 2·Depth).
-	s := fallAt(g.line, min(back, front), max(back, front), 2*math.Max(float64(a.Length), float64(a.Depth)))
+	// Reach: twice the length along the pull or the depth, and at least
+	// the passive wedge in front, Depth·tan(45° + φ'/2) on level ground
+	// (beyond 2·Depth for φ' > 36.9°).
+	wedge := float64(a.Depth) * math.Tan(math.Pi/4+float64(g.soil.Friction)/2)
+	reach := max(2*float64(a.Length), 2*float64(a.Depth), wedge)
+	s := fallAt(g.line, min(back, front), max(back, front), reach)
 	s.rock = g.soil.IsRock
 	return s
 }
@@ -240,18 +243,22 @@ func (s baseSlope) text(id string) string {
 	}
 	out := fmt.Sprintf("; ground from the ground line (site.ground): steepest fall within %s of the base's edges %.1f°", s.reach, s.beta.Degrees())
 	switch {
-	case s.rock && s.beta > 0:
+	case s.beta == 0:
+	case strings.HasSuffix(id, ".bearing") && s.rock:
 		out += " (on rock the bearing pressure is not reduced for it: the rock mass's stability toward the slope, " +
 			"joints dipping out of it, must be checked by hand)"
-	case s.beta > 0 && strings.HasSuffix(id, ".bearing"):
+	case strings.HasSuffix(id, ".bearing"):
 		out += " (ground-inclination factors in the bearing equation, the crest's set-back not counted: cautious)"
-	case s.beta > 0 && (id == "anchor.sliding" || id == "anchor.deadman.pullout"):
-		out += " (the passive resistance in front for ground falling at that slope: Coulomb, smooth face)"
+	case id == "anchor.sliding" || id == "anchor.deadman.pullout":
+		out += " (any passive resistance counted in front is taken for ground falling at that slope: Coulomb's K_p, " +
+			"smooth face, drained; none at or beyond φ', nor undrained)"
+	default:
+		out += " (not used: the footing's sliding counts no passive resistance)"
 	}
 	if !s.covered {
 		out += "; beyond the ground line the ground is taken level"
 	}
-	return out + "; the bank's own stability is not checked"
+	return out + "; the line runs along the bridge's axis, so a fall across the bridge is not seen; the bank's own stability is not checked"
 }
 
 func (g *bankGround) deadman(a AnchorSpec) foundation.Deadman {

@@ -591,3 +591,107 @@ func TestFallAt(t *testing.T) {
 		t.Errorf("no line: %+v", s)
 	}
 }
+
+// TestBasePositionsOnGroundLine places a short 30° fall on the ground line
+// just inside and just outside each base's reach, on both banks, and
+// checks that the footing and the anchor see it only inside: the footing
+// centred ColumnOffset from the column (the column 0.5 m toward the span
+// from it, bridge.go), reach twice its length from its edges on either
+// side; the anchor's attachment Backstay.Horizontal behind the saddle,
+// AttachX (default half the length) from its back edge, reach from its
+// front edge toward the span.
+func TestBasePositionsOnGroundLine(t *testing.T) {
+	b := Demo()
+	tan30 := math.Tan(30 * math.Pi / 180)
+	// fall returns a line level but for a 0.1 m run from x in direction dir
+	// that falls at 30° that way.
+	fall := func(x, dir float64) []Point {
+		z := units.Length(-0.1 * tan30)
+		if dir < 0 {
+			return []Point{{X: -200, Z: z}, {X: units.Length(x - 0.1), Z: z}, {X: units.Length(x), Z: 0}, {X: 300, Z: 0}}
+		}
+		return []Point{{X: -200, Z: 0}, {X: units.Length(x), Z: 0}, {X: units.Length(x + 0.1), Z: z}, {X: 300, Z: z}}
+	}
+	for _, s := range []Side{Left, Right} {
+		// Toward the span: +x from the left bank, −x from the right.
+		g := bankGround{bank: b.bankOf(s), dir: 1, soil: foundation.Soil{Friction: units.FromDegrees(30)}}
+		x0 := 0.0
+		if s == Right {
+			g.xs, g.dir, x0 = float64(b.Site.Span), -1, float64(b.Site.Span)
+		}
+		toSpan := g.dir
+		ft := g.bank.Tower.Footing
+		ft.ColumnOffset = 0.5
+		centre := x0 - toSpan*0.5
+		half, reach := float64(ft.Length)/2, 2*float64(ft.Length)
+		a := g.bank.Anchor
+		front := x0 - toSpan*float64(g.bank.Backstay.Horizontal) + toSpan*float64(a.Length)/2
+		areach := 2 * math.Max(float64(a.Length), float64(a.Depth))
+		for _, c := range []struct {
+			name string
+			x    float64 // where the fall starts
+			dir  float64
+			seen func() units.Angle
+		}{
+			{"footing, toward the span", centre + toSpan*(half+reach), toSpan, func() units.Angle { return g.footingSlope(ft).beta }},
+			{"footing, behind it", centre - toSpan*(half+reach), -toSpan, func() units.Angle { return g.footingSlope(ft).beta }},
+			{"anchor, in front", front + toSpan*areach, toSpan, func() units.Angle { return g.anchorSlope(a).beta }},
+		} {
+			g.line = fall(c.x-c.dir*0.05, c.dir)
+			if got := c.seen().Degrees(); math.Abs(got-30) > 1e-9 {
+				t.Errorf("%v %s: a fall starting 0.05 m inside the reach seen at %.3f°, want 30°", s, c.name, got)
+			}
+			g.line = fall(c.x+c.dir*0.05, c.dir)
+			if got := c.seen().Degrees(); got != 0 {
+				t.Errorf("%v %s: a fall starting 0.05 m beyond the reach seen at %.3f°, want 0°", s, c.name, got)
+			}
+		}
+	}
+}
+
+// TestAnchorReachCoversPassiveWedge: a deadman's passive wedge on level
+// ground reaches Depth·tan(45° + φ'/2) in front of it (Rankine's passive
+// plane at 45° − φ'/2 to the horizontal: Das, Principles of Foundation
+// Engineering, ch. 7, in package foundation's references [M]), beyond
+// 2·Depth once φ' > 36.9°: in φ' 45° (2.414·Depth) a fall starting
+// 2.2·Depth in front cuts the wedge and must be seen.
+func TestAnchorReachCoversPassiveWedge(t *testing.T) {
+	b := Demo()
+	g := bankGround{bank: b.bankOf(Left), dir: 1, soil: foundation.Soil{Friction: units.FromDegrees(45)}}
+	a := AnchorSpec{Type: "deadman", Length: 0.3, Width: 3, Height: 0.8, Depth: 2}
+	front := -float64(g.bank.Backstay.Horizontal) + float64(a.Length)/2
+	x := front + 2.2*float64(a.Depth)
+	g.line = []Point{{X: -200, Z: 0}, {X: units.Length(x), Z: 0}, {X: units.Length(x + 1), Z: -0.5}, {X: 300, Z: -0.5}}
+	want := math.Atan(0.5) * 180 / math.Pi
+	if got := g.anchorSlope(a).beta.Degrees(); math.Abs(got-want) > 1e-9 {
+		t.Errorf("fall 2.2·Depth in front of a deadman in φ' 45°: seen at %.3f°, want %.3f°", got, want)
+	}
+}
+
+// TestBaseSlopeWords: each result's basis says what the ground's fall did
+// to it — nothing to a footing's sliding (it counts no passive
+// resistance), nothing to bearing on rock (but a check by hand), the
+// passive coefficient of a block or deadman, none undrained or at φ' —
+// and that a fall across the bridge is not known to the check.
+func TestBaseSlopeWords(t *testing.T) {
+	s := baseSlope{beta: units.FromDegrees(20), reach: 4.8, line: true, covered: true}
+	rock := s
+	rock.rock = true
+	for _, c := range []struct {
+		slope    baseSlope
+		id, want string
+		not      string
+	}{
+		{s, "footing.sliding", "not used", "Coulomb"},
+		{s, "footing.bearing", "ground-inclination factors", "not used"},
+		{rock, "anchor.sliding", "Coulomb", "bearing pressure"},
+		{rock, "footing.bearing", "on rock the bearing pressure is not reduced", "ground-inclination"},
+		{s, "anchor.deadman.pullout", "none at or beyond φ', nor undrained", "bearing"},
+		{s, "anchor.bearing", "across the bridge", ""},
+	} {
+		got := c.slope.text(c.id)
+		if !strings.Contains(got, c.want) || (c.not != "" && strings.Contains(got, c.not)) {
+			t.Errorf("%s (rock %v): %q; want %q and not %q", c.id, c.slope.rock, got, c.want, c.not)
+		}
+	}
+}

@@ -402,10 +402,10 @@ func TestAnchorBlockAllowableAndEquation(t *testing.T) {
 // 20°: the passive coefficient is Coulomb's for a smooth vertical face and
 // ground falling in front (Murthy eq. 11.51 form, δ = 0, β = −20°; by
 // hand: sin36·sin16/cos20 = 0.587785·0.275637/0.939693 = 0.172413, √ =
-// 0.415226, Kp = cos²36/(1 − 0.415226)² = 0.654508/0.341961 = 1.913984,
-// against Rankine's 3.851840 on level ground), the bearing takes the
-// ground factors (see TestBearingGroundSlope), and at or beyond φ' no
-// passive resistance is counted.
+// 0.415226, Kp = cos²36/(1 − 0.415226)² = 0.654508/0.341961 = 1.91399,
+// 1.913994 unrounded, against Rankine's 3.851840 on level ground), the
+// bearing takes the ground factors (see TestBearingGroundSlope), and at
+// or beyond φ' no passive resistance is counted.
 func TestAnchorBlockFallingGround(t *testing.T) {
 	fx := 80 * math.Cos(25*math.Pi/180)
 	at := func(slope float64) []check.Result {

@@ -487,10 +487,15 @@ func groundFactors(st bearingState, m Method, beta float64) ground {
 			return ground{none: true, note: fmt.Sprintf("the ground falls at %.1f° from the base, beyond the 45° of the "+
 				"undrained ground-inclination factors: no bearing resistance counted (the bank's own stability governs: check it by hand)", deg)}
 		}
-		if m == Hansen {
-			return ground{c: 1 - deg/147, q: 1, g: 1}
+		hc, vc := 1-deg/147, 1-2*beta/(math.Pi+2)
+		switch m {
+		case Hansen:
+			return ground{c: hc, q: 1, g: 1}
+		case Vesic:
+			return ground{c: vc, q: 1, g: 1}
 		}
-		return ground{c: 1 - 2*beta/(math.Pi+2), q: 1, g: 1}
+		// The smaller, as drained: Hansen's, by at most 0.1 %.
+		return ground{c: math.Min(hc, vc), q: 1, g: 1}
 	}
 	if beta >= st.phi {
 		return ground{none: true, note: fmt.Sprintf("the ground falls at %.1f° from the base, at or beyond φ = %.1f°: "+

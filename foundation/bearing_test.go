@@ -460,11 +460,12 @@ func TestBearingLoadAtAnAngle(t *testing.T) {
 //	Vesić   gq = gγ = (1 − 0.363970)²    = 0.636030² = 0.404534
 //	        gc = gq − (1 − gq)/(Nc tanφ); φ' 30°: Nc tanφ = 30.140·0.577350 = 17.4013 → 0.370314;
 //	        Terzaghi's Nc 37.16 (Das, Table 3.1, from memory [M]): Nc tanφ = 21.4543 → 0.376779
-//	undrained gc = 1 − 2·0.349066/(π + 2) = 0.864218 (Vesić), 0.863946 (Hansen);
-//	        Nγ = −2 sin 20° = −0.684040, the γ term −γ B' sin β
+//	undrained gc = 1 − 2·0.349066/(π + 2) = 0.864218 (Vesić [M]: not confirmed in the
+//	        table's stored text), 0.863946 (Hansen, g'c = β°/147° [R]);
+//	        Nγ = −2 sin 20° = −0.684040 (Vesić, φ = 0 [R]), the γ term −γ B' sin β
 //
 // Meyerhof, Terzaghi and EN 1997-1 Annex D have none of their own and take
-// the smaller of the two, factor by factor.
+// the smaller of the two, factor by factor: undrained, Hansen's gc.
 func TestBearingGroundSlope(t *testing.T) {
 	m, kN := units.Metre, units.Kilonewton
 	in := foundation.BearingInput{AlongLoad: 2 * m, AcrossLoad: 3 * m, Depth: 1 * m, Vertical: 300 * kN}
@@ -510,7 +511,8 @@ func TestBearingGroundSlope(t *testing.T) {
 	for _, c := range []struct {
 		method foundation.Method
 		gc     float64
-	}{{foundation.EC7, 0.864218}, {foundation.Vesic, 0.864218}, {foundation.Hansen, 0.863946}} {
+	}{{foundation.EC7, 0.863946}, {foundation.Meyerhof, 0.863946}, {foundation.Terzaghi, 0.863946},
+		{foundation.Vesic, 0.864218}, {foundation.Hansen, 0.863946}} {
 		level, err := foundation.BearingCapacity(in, clay, c.method, foundation.Undrained)
 		if err != nil {
 			t.Fatal(err)

@@ -72,7 +72,8 @@ func (d Deadman) validate() error {
 // also in Das, Principles of Foundation Engineering, ch. on anchor plates):
 //
 //	near the surface (Height ≥ Depth/2): T = Length (Pp − Pa) over 0 … Depth
-//	   + with EndEffects: ⅓ K0 γ (√Kp + √Ka) Depth³ tan φ  (γ' when water is within Depth)
+//	   + with EndEffects: ⅓ K0 γ (√Kp + √Ka) Depth³ tan φ  (γ' when water is within Depth;
+//	     none where no passive resistance is counted, Kp = 0)
 //	deeper: the larger of Length (Pp − Pa) over the face only and the
 //	   near-surface value at Depth = 2·Height
 //
@@ -176,7 +177,9 @@ func (d Deadman) passiveLessActive(s Soil, st strength, top, bottom float64) dea
 // teng returns Teng's near-surface resistance for a face reaching depth h.
 func (d Deadman) teng(s Soil, st strength, h float64) deadmanResistance {
 	r := d.passiveLessActive(s, st, 0, h)
-	if !d.EndEffects || st.cond == Undrained {
+	// No passive wedge on ground falling at or beyond φ' (Kp = 0): no
+	// friction on its sides either.
+	if !d.EndEffects || st.cond == Undrained || r.kp == 0 {
 		return r
 	}
 	g := float64(s.UnitWeight)

@@ -189,3 +189,30 @@ func TestDeadmanFallingGround(t *testing.T) {
 		t.Errorf("ground slope 95°: %v, want ErrInvalid", err)
 	}
 }
+
+// TestDeadmanEndEffectsOnSteepGround: where the ground falls at or beyond
+// φ' in front no passive wedge forms, so Teng's end-effect term (the
+// friction on the sides of that wedge) has nothing to act on either. A
+// short, deep deadman (0.6 m long, face 1–3 m, φ 30°, γ 18, end effects
+// asked for), by hand: the active thrust alone, ½·(1/3)·18·3²·0.6 =
+// 16.2 kN, against the pull; counting the end term with Kp = 0,
+// ⅓·0.4·18·√(1/3)·3³·tan30° = 21.6 kN, would leave 5.4 kN of resistance
+// on ground that carries none.
+func TestDeadmanEndEffectsOnSteepGround(t *testing.T) {
+	d := foundation.Deadman{Length: 0.6, Height: 2, Thickness: 0.3, Depth: 3, EndEffects: true}
+	for _, slope := range []float64{30, 35} {
+		d.GroundSlope = deg(slope)
+		r, _, err := d.Resistance(sand30(), foundation.Drained)
+		if err != nil {
+			t.Fatal(err)
+		}
+		near(t, "resistance on ground falling at or beyond φ", float64(r)/1e3, -16.2, 1e-9)
+	}
+	rs, err := d.Check([]foundation.AnchorPull{{Force: 2 * units.Kilonewton}}, sand30(), nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if po := byID(t, rs, "anchor.deadman.pullout"); po.Status != check.Fail {
+		t.Errorf("pull-out of 2 kN on ground falling beyond φ: %s, capacity %v; want a failure", po.Status, po.Capacity)
+	}
+}
