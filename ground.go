@@ -150,8 +150,9 @@ func (g *bankGround) pad(spec FootingSpec) foundation.Footing {
 
 // block, deadman and rock return the bank's anchor for package foundation.
 func (g *bankGround) block(a AnchorSpec) foundation.AnchorBlock {
+	s := g.anchorSlope(a)
 	return foundation.AnchorBlock{Length: a.Length, Width: a.Width, Height: a.Height, Depth: a.Depth,
-		UnitWeight: a.UnitWeight, PassiveMobilisation: a.Passive, GroundSlope: g.anchorSlope(a).beta}
+		UnitWeight: a.UnitWeight, PassiveMobilisation: a.Passive, GroundSlope: s.beta, BackSlope: s.rise}
 }
 
 // baseSlope is the fall of the ground at a base, read from the ground
@@ -165,6 +166,9 @@ type baseSlope struct {
 	line    bool // a ground line is given
 	covered bool // it covers the base and its reach
 	rock    bool // the base stands on rock
+	// rise is the steepest rise of the ground behind an anchor, away from
+	// the span, within its reach: the active thrust on its back face.
+	rise units.Angle
 }
 
 // footingSlope returns the ground's fall at a tower footing of size spec,
@@ -195,7 +199,33 @@ func (g *bankGround) anchorSlope(a AnchorSpec) baseSlope {
 	reach := max(2*float64(a.Length), 2*float64(a.Depth), wedge)
 	s := fallAt(g.line, min(back, front), max(back, front), reach)
 	s.rock = g.soil.IsRock
+	s.rise = riseBehind(g.line, back, g.dir, reach)
 	return s
+}
+
+// maxSlope is the steepest slope read from a ground line: a segment of
+// almost no run is taken as this, short of vertical.
+const maxSlope = 89.9 * units.Degree
+
+// riseBehind returns the steepest rise of the ground line away from the
+// span (the span lies toward dir from the bank) within reach behind an
+// anchor's back edge at back.
+func riseBehind(line []Point, back, dir, reach float64) units.Angle {
+	lo, hi := back-reach, back
+	if dir < 0 {
+		lo, hi = back, back+reach
+	}
+	worst := 0.0
+	for i := 1; i < len(line); i++ {
+		a, b := line[i-1], line[i]
+		xa, xb := float64(a.X), float64(b.X)
+		if xb <= lo || xa >= hi {
+			continue
+		}
+		slope := math.Atan2(float64(b.Z-a.Z), xb-xa) // rising toward +x positive
+		worst = math.Max(worst, -dir*slope)
+	}
+	return min(units.Angle(worst), maxSlope)
 }
 
 // fallAt returns the steepest fall of the ground line away from a base
@@ -227,7 +257,7 @@ func fallAt(line []Point, x0, x1, reach float64) baseSlope {
 			worst = math.Max(worst, math.Abs(slope))
 		}
 	}
-	s.beta = units.Angle(worst)
+	s.beta = min(units.Angle(worst), maxSlope)
 	return s
 }
 
@@ -255,6 +285,10 @@ func (s baseSlope) text(id string) string {
 	default:
 		out += " (not used: the footing's sliding counts no passive resistance)"
 	}
+	if s.rise > 0 && (id == "anchor.sliding" || id == "anchor.deadman.pullout") {
+		out += fmt.Sprintf("; ground rising behind at %.1f°: any active thrust on the back face is Coulomb's for that backslope "+
+			"(smooth face, drained, the slope taken at most φ')", s.rise.Degrees())
+	}
 	if !s.covered {
 		out += "; beyond the ground line the ground is taken level"
 	}
@@ -262,8 +296,9 @@ func (s baseSlope) text(id string) string {
 }
 
 func (g *bankGround) deadman(a AnchorSpec) foundation.Deadman {
+	s := g.anchorSlope(a)
 	d := foundation.Deadman{Length: a.Width, Height: a.Height, Thickness: a.Length, Depth: a.Depth, UnitWeight: a.UnitWeight,
-		GroundSlope: g.anchorSlope(a).beta}
+		GroundSlope: s.beta, BackSlope: s.rise}
 	if a.Beam != nil {
 		d.Section = foundation.SteelSection{Yield: a.Beam.Steel, PlasticModulus: a.Beam.PlasticModulus, ShearArea: a.Beam.ShearArea}
 	}

@@ -695,3 +695,29 @@ func TestBaseSlopeWords(t *testing.T) {
 		}
 	}
 }
+
+// TestRiseBehind checks the reading of the ground rising behind an anchor
+// (away from the span) by hand: a bank rising 4 m in 12 m, atan(1/3) =
+// 18.435°, behind either bank's anchor within reach, and nothing out of
+// reach.
+func TestRiseBehind(t *testing.T) {
+	want := math.Atan(1.0/3) * 180 / math.Pi
+	left := []Point{{X: -20, Z: 12}, {X: -8, Z: 8}, {X: 0, Z: 8}}
+	right := []Point{{X: 0, Z: 8}, {X: 8, Z: 8}, {X: 20, Z: 12}}
+	for _, c := range []struct {
+		name             string
+		line             []Point
+		back, dir, reach float64
+		want             float64
+	}{
+		{"left bank, in reach", left, -6, 1, 3, want},
+		{"left bank, out of reach", left, -3, 1, 3, 0},
+		{"right bank, in reach", right, 6, -1, 3, want},
+		{"right bank, out of reach", right, 3, -1, 3, 0},
+		{"right bank reading a left bank's line", left, -6, -1, 3, 0},
+	} {
+		if got := riseBehind(c.line, c.back, c.dir, c.reach).Degrees(); math.Abs(got-c.want) > 1e-9 {
+			t.Errorf("%s: %.6f°, want %.6f°", c.name, got, c.want)
+		}
+	}
+}

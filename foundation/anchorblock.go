@@ -46,6 +46,11 @@ type AnchorBlock struct {
 	// enters the bearing equation's ground-inclination factors and the
 	// passive resistance on the front face (see Check).
 	GroundSlope units.Angle
+	// BackSlope is the inclination of the ground rising behind the block
+	// (away from the pull); zero for level ground. Drained, the active
+	// thrust on the back face, counted with the passive resistance, takes
+	// Coulomb's Ka for that backslope (δ = 0), at most the slope of φ'.
+	BackSlope units.Angle
 	// Steps are concrete parts standing on the block (a stepped block);
 	// none for a plain rectangular block.
 	Steps []Step
@@ -74,6 +79,9 @@ func (a AnchorBlock) validate() error {
 	}
 	if !(a.GroundSlope >= 0 && a.GroundSlope < 90*units.Degree) {
 		return invalid("AnchorBlock.GroundSlope", "must be at least 0 and less than 90 deg")
+	}
+	if !(a.BackSlope >= 0 && a.BackSlope < 90*units.Degree) {
+		return invalid("AnchorBlock.BackSlope", "must be at least 0 and less than 90 deg")
 	}
 	for i, st := range a.Steps {
 		name := fmt.Sprintf("AnchorBlock.Steps[%d]", i)
@@ -117,6 +125,26 @@ func rankineLevel(phi units.Angle, passive bool) float64 {
 		t = math.Tan(math.Pi/4 + float64(phi)/2)
 	}
 	return t * t
+}
+
+// activeK returns the active coefficient on a vertical smooth face in
+// strength st with the ground rising behind it at b: Rankine's on level
+// ground; Coulomb's for the backslope (δ = 0; Murthy eq. 11.51 form), the
+// slope taken at most φ (a steeper bank stands by its cohesion, which the
+// thrust's cohesion term already counts); 1 undrained (total stress).
+func activeK(st strength, b units.Angle) float64 {
+	if st.cond != Drained {
+		return 1
+	}
+	phi := units.Angle(st.phi)
+	if b == 0 {
+		return rankineLevel(phi, false)
+	}
+	k, err := CoulombActive(phi, 0, 0, min(b, phi))
+	if err != nil {
+		return rankineLevel(phi, false)
+	}
+	return k
 }
 
 // passiveK returns the passive coefficient on a vertical smooth face in
@@ -223,10 +251,7 @@ func (a AnchorBlock) loads(s Soil) blockLoads {
 func (a AnchorBlock) earth(s Soil, st strength) (pp, pa EarthForce) {
 	d := float64(a.Depth)
 	top := math.Max(d-float64(a.Height), 0)
-	kp, ka := passiveK(st, a.GroundSlope), 1.0
-	if st.cond == Drained {
-		ka = rankineLevel(units.Angle(st.phi), false)
-	}
+	kp, ka := passiveK(st, a.GroundSlope), activeK(st, a.BackSlope)
 	g, gs, dw := float64(s.UnitWeight), float64(s.SubmergedWeight()), a.Water.depth()
 	if kp > 0 {
 		pp = layeredEarth(kp, st.c, 1, top, d, g, gs, dw)
@@ -491,6 +516,10 @@ func (a AnchorBlock) sliding(pulls []AnchorPull, s Soil, cond Condition, ld bloc
 			check.Of("P_p", "full passive resistance on the front face", pp.Force),
 			check.Of("P_a", "active thrust on the back face", pa.Force))
 		note += fmt.Sprintf("; passive resistance %v mobilised at %.2f, active thrust %v on the back face", pp.Force, mu, pa.Force)
+		if b := a.BackSlope; b > 0 {
+			vs = append(vs, check.Of("β_b", "slope of the ground rising behind the block", b),
+				check.Of("K_a", "active coefficient on the back face", units.Ratio(activeK(st, b))))
+		}
 		if b := a.GroundSlope; b > 0 {
 			kp := passiveK(st, b)
 			vs = append(vs, check.Of("β_g", "slope of the ground falling away from the block", b),

@@ -447,3 +447,30 @@ func TestAnchorBlockFallingGround(t *testing.T) {
 		t.Error("bearing on falling ground carries no ground factor")
 	}
 }
+
+// TestAnchorBlockRisingGroundBehind: with the passive resistance counted,
+// the active thrust on the back face takes Coulomb's Ka for ground rising
+// behind at 20° (Murthy eq. 11.51 form, δ = 0, vertical face; by hand for
+// φ 36°: sin36·sin16/cos20 = 0.172413, √ = 0.415227, Ka = cos²36/(1 +
+// 0.415227)² = 0.654508/2.002867 = 0.326786, against Rankine's 0.259616 on
+// level ground), and at a backslope steeper than φ the slope of φ.
+func TestAnchorBlockRisingGroundBehind(t *testing.T) {
+	at := func(back float64) check.Result {
+		t.Helper()
+		blk := testBlock()
+		blk.PassiveMobilisation = 0.5
+		blk.BackSlope = deg(back)
+		rs, err := blk.Check([]foundation.AnchorPull{testPull()}, testSand(), foundation.EC7, nil)
+		if err != nil {
+			t.Fatal(err)
+		}
+		noNaN(t, rs)
+		return byID(t, rs, "anchor.sliding")
+	}
+	fx := 80 * math.Cos(25*math.Pi/180)
+	pa := func(ka float64) float64 { return 0.5 * ka * 19 * 2.25 * 2.5 }
+	near(t, "level", at(0).Demand/1e3, fx+pa(0.259616), 1e-6)
+	near(t, "rising 20°", at(20).Demand/1e3, fx+pa(0.326786), 1e-6)
+	// Ka at β = φ = 36°: cos²36/(1 + √(sin36·sin0/cos36))² = cos²36 = 0.654508.
+	near(t, "rising 50°, taken at φ", at(50).Demand/1e3, fx+pa(0.654508), 1e-6)
+}

@@ -36,6 +36,9 @@ type Deadman struct {
 	// falling in front (δ = 0), none at or beyond φ'; undrained, no
 	// passive resistance is counted on falling ground (cautious).
 	GroundSlope units.Angle
+	// BackSlope is the inclination of the ground rising behind the deadman
+	// (away from the pull); the active pressure takes it as AnchorBlock's.
+	BackSlope units.Angle
 	// Section is the deadman's steel section, checked in bending and shear
 	// as a beam on the soil reaction; the zero value means the section is
 	// not a steel one described here (a concrete or timber beam), and its
@@ -60,6 +63,9 @@ func (d Deadman) validate() error {
 	}
 	if !(d.GroundSlope >= 0 && d.GroundSlope < 90*units.Degree) {
 		return invalid("Deadman.GroundSlope", "must be at least 0 and less than 90 deg")
+	}
+	if !(d.BackSlope >= 0 && d.BackSlope < 90*units.Degree) {
+		return invalid("Deadman.BackSlope", "must be at least 0 and less than 90 deg")
 	}
 	if err := d.Section.validate("Deadman.Section", true); err != nil {
 		return err
@@ -152,19 +158,16 @@ func (d Deadman) resistance(s Soil, st strength) deadmanResistance {
 	return shallow
 }
 
-// coefficients returns Kp and Ka in strength st: Rankine's for level
-// ground drained, 1 undrained; Kp for ground falling at slope in front as
-// passiveK.
-func (st strength) coefficients(slope units.Angle) (kp, ka float64) {
-	if st.cond == Undrained {
-		return passiveK(st, slope), 1
-	}
-	return passiveK(st, slope), rankineLevel(units.Angle(st.phi), false)
+// coefficients returns Kp and Ka in strength st for ground falling at
+// slope in front and rising at back behind (passiveK, activeK): Rankine's
+// on level ground drained, 1 undrained.
+func (st strength) coefficients(slope, back units.Angle) (kp, ka float64) {
+	return passiveK(st, slope), activeK(st, back)
 }
 
 // passiveLessActive returns Length (Pp − Pa) between depths top and bottom.
 func (d Deadman) passiveLessActive(s Soil, st strength, top, bottom float64) deadmanResistance {
-	kp, ka := st.coefficients(d.GroundSlope)
+	kp, ka := st.coefficients(d.GroundSlope, d.BackSlope)
 	g, gs, dw := float64(s.UnitWeight), float64(s.SubmergedWeight()), d.Water.depth()
 	pp := layeredEarth(kp, st.c, 1, top, bottom, g, gs, dw)
 	pa := layeredEarth(ka, st.c, -1, top, bottom, g, gs, dw)
