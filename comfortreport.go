@@ -89,14 +89,11 @@ func (a *Analysis) comfortSection() check.Section {
 	return sec
 }
 
-// rangeOf names the critical range a response's mode lies in.
+// rangeOf names the range a response's mode lies in: the critical range,
+// else the band where the load model's harmonic excites it.
 func rangeOf(r vibration.Response) string {
-	ranges := vibration.VerticalRanges
-	if r.Direction == vibration.Across {
-		ranges = vibration.LateralRanges
-	}
-	k, _ := vibration.InRange(r.Frequency, ranges)
-	return fmt.Sprintf("%.2f–%.2f Hz", float64(ranges[k][0]), float64(ranges[k][1]))
+	lo, hi, _ := walkersExcite(r.Frequency, r.Corrected, r.Direction)
+	return fmt.Sprintf("%.2f–%.2f Hz", float64(lo), float64(hi))
 }
 
 // comfortJSON is the JSON form of the comfort stage: the modes in SI, with

@@ -86,7 +86,9 @@ const (
 // Critical ranges of footbridge frequencies (from memory; widely cited,
 // e.g. Živanović, Pavić & Reynolds 2005): walkers' vertical force at its
 // first harmonic 1.25–2.3 Hz and its second 2.5–4.6 Hz; their lateral
-// force 0.5–1.2 Hz.
+// force 0.5–1.2 Hz. The lateral ψ of the load model reaches wider,
+// 0.3–1.3 Hz (see LateralFirst): an assessment selects modes by ψ > 0 as
+// well as by these ranges.
 var (
 	VerticalRanges = [][2]units.Frequency{{1.25, 2.3}, {2.5, 4.6}}
 	LateralRanges  = [][2]units.Frequency{{0.5, 1.2}}
@@ -129,6 +131,19 @@ func (h Harmonic) Psi(f units.Frequency) float64 {
 	return float64((h.F4 - f) / (h.F4 - h.F3))
 }
 
+// PsiMax returns the largest ψ(f) over the band lo ≤ f ≤ hi: the
+// trapezoid rises, holds and falls, so its largest value over a band is 1
+// where the band meets the plateau and otherwise that of the nearer end.
+func (h Harmonic) PsiMax(lo, hi units.Frequency) float64 {
+	if hi < lo {
+		lo, hi = hi, lo
+	}
+	if hi >= h.F2 && lo <= h.F3 {
+		return 1
+	}
+	return math.Max(h.Psi(lo), h.Psi(hi))
+}
+
 // The harmonics of the load model (Sétra 2006, from memory): 280 N
 // vertical at the first harmonic of walking, 70 N at the second, 35 N
 // lateral at the first.
@@ -157,6 +172,10 @@ type Response struct {
 	Label     string
 	Frequency units.Frequency
 	Direction Direction
+	// Corrected is the frequency corrected for the mesh's estimated error,
+	// f/(1 − ε_h) (see Mode.Error): the lumped chain reads low, so the
+	// true frequency lies between Frequency and about Corrected.
+	Corrected units.Frequency
 	Harmonic  Harmonic
 	Traffic   Traffic
 	Damping   float64
@@ -179,7 +198,11 @@ type Response struct {
 
 // Response returns the resonant response of mode i of md to walkers w
 // with the harmonic of the load model that the mode's frequency and
-// direction call for (the one with the larger ψ·F). The mode is taken at
+// direction call for (the one with the larger ψ·F), ψ the largest over the
+// band from the mode's frequency to that frequency corrected for the
+// mesh's estimated error, f/(1 − ε_h): the lumped chain reads low, and on
+// the rising side of ψ(f) the mesh's own frequency would read ψ low. The
+// mode is taken at
 // resonance, the single-mode steady state
 //
 //	M* q̈ + 2ξωM* q̇ + ω²M* q = F* cos ωt,   q = F*/(2ξ ω²M*),   a = ω² q = F*/(2ξM*)
@@ -214,19 +237,22 @@ func (md Modal) Response(i int, w Walkers) (Response, error) {
 	default:
 		return Response{}, invalidf("mode %d is %s: walkers do not excite it in this load model", i+1, mode.Kind)
 	}
+	// The lumped chain reads low: the true frequency lies between the
+	// mesh's and the corrected one, and ψ is taken at its largest there.
+	lo, hi := mode.Frequency, mode.Frequency/units.Frequency(1-mode.Error)
 	h := harmonics[0]
 	for _, c := range harmonics[1:] {
-		if c.Psi(mode.Frequency)*float64(c.Force) > h.Psi(mode.Frequency)*float64(h.Force) {
+		if c.PsiMax(lo, hi)*float64(c.Force) > h.PsiMax(lo, hi)*float64(h.Force) {
 			h = c
 		}
 	}
 	area := float64(md.Span) * float64(md.Width)
 	n := w.Traffic.Density() * area
 	r := Response{
-		Mode: i, Label: mode.Label(), Frequency: mode.Frequency, Direction: dir, Harmonic: h,
+		Mode: i, Label: mode.Label(), Frequency: mode.Frequency, Corrected: hi, Direction: dir, Harmonic: h,
 		Traffic: w.Traffic, Damping: w.Damping, ModalMass: mode.ModalMass,
 		Area: units.Area(area), Walkers: n, Equivalent: EquivalentNumber(w.Traffic, w.Damping, n),
-		Psi: h.Psi(mode.Frequency),
+		Psi: h.PsiMax(lo, hi),
 	}
 	r.Load = units.Pressure(r.Equivalent * float64(h.Force) * r.Psi / area)
 	r.ModalForce = units.Force(float64(r.Load) * md.absIntegral(i, dir))
@@ -280,10 +306,11 @@ func (r Response) Check() check.Result {
 		id, title = "vibration.acceleration.lateral", "Lateral acceleration under walkers"
 	}
 	res := check.Advisory(id, title, units.KindAcceleration, float64(r.Acceleration), float64(r.Limit)).
-		WithBasis(fmt.Sprintf("single mode at resonance a = F*/(2ξM*) under the walkers' harmonic force of Sétra 2006 (%s: %s per walker × ψ(f) × n' in phase, n' = %s; from memory), load in the direction of the mode shape everywhere; limit EN 1990 A2.4.3.2 (from memory)",
+		WithBasis(fmt.Sprintf("single mode at resonance a = F*/(2ξM*) under the walkers' harmonic force of Sétra 2006 (%s: %s per walker × ψ(f) × n' in phase, n' = %s; from memory), ψ the largest between f and f_c = f/(1−ε_h), the frequency the mesh's estimated error corrects to (the lumped chain reads low), load in the direction of the mode shape everywhere; limit EN 1990 A2.4.3.2 (from memory)",
 			r.Harmonic.Name, r.Harmonic.Force, equivalentRule(r.Traffic))).
 		WithValues(
 			check.Of("f", "natural frequency", r.Frequency),
+			check.Of("f_c", "natural frequency corrected for the mesh's estimated error, f/(1−ε_h)", r.Corrected),
 			check.Of("M*", "modal mass, largest displacement of the walking surface 1", r.ModalMass),
 			check.Of("ξ", "ratio of critical damping", units.Ratio(r.Damping)),
 			check.Of("S", "walkway area", r.Area),

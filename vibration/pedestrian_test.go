@@ -189,3 +189,75 @@ func TestTorsionalResponse(t *testing.T) {
 		t.Errorf("torsional mode assessed %s against %v", r.Direction, r.Limit)
 	}
 }
+
+// TestResponseAtTheTrueFrequency: the lumped chain reads a mode low (by
+// its Error), and on the rising side of ψ(f) a low frequency reads ψ, and
+// the acceleration with it, low. The reduction must be taken at the true
+// frequency or above it on the safe side.
+//
+// A level walkway of span 200 m on two rope planes, everything at one
+// level, sagging 13.6 m: its lateral modes are those of a taut string of
+// the whole tension and mass, f_k = (k/2L)√(ΣH/m) [R: Rayleigh, The
+// Theory of Sound, §123], with ΣH = mgL²/(8·sag), so f_1 = ½√(g/(8·sag))
+// ≈ 0.150 Hz and the third lateral mode ≈ 0.45 Hz, on the rising side of
+// the lateral ψ of Sétra 2006 (0 at 0.3 Hz, 1 from 0.5 Hz; from memory).
+// On 60 elements the chain reads that mode low by 1 − sin θ/θ,
+// θ = 3π/120 [D: the lumped taut string, whose Error is exact].
+func TestResponseAtTheTrueFrequency(t *testing.T) {
+	const l, sag, rope, deck, n = 200.0, 13.6, 8.0, 60.0, 60
+	m := Model{Span: l, Walkway: Walkway{Mass: deck, Width: 1.2}}
+	h := horizontal(rope+deck/2, l, sag)
+	for _, y := range []float64{0.6, -0.6} {
+		m.Ropes = append(m.Ropes, Rope{Name: "walkway rope", Y: units.Length(y), Shape: parabola{l, 0, sag},
+			H: units.Force(h), Mass: rope, EA: 2e8, Tied: true})
+	}
+	md, err := m.Modes(&Settings{Elements: n, MaxVertical: 1, MaxLateral: 0.6})
+	if err != nil {
+		t.Fatal(err)
+	}
+	i := -1
+	for j, mode := range md.Modes {
+		if mode.Kind == Lateral && mode.HalfWaves == 3 {
+			i = j
+		}
+	}
+	if i < 0 {
+		t.Fatal("no lateral mode of three half-waves")
+	}
+	exact := 3 / (2 * l) * math.Sqrt(2*h/(2*rope+deck))
+	if exact < 0.3 || exact > 0.5 {
+		t.Fatalf("test set-up: the third lateral mode at %.4f Hz is not on the rising side of ψ", exact)
+	}
+	resp, err := md.Response(i, Walkers{Traffic: Sparse, Damping: 0.01})
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "corrected frequency", float64(resp.Corrected), exact, 1e-9)
+	want := LateralFirst.Psi(units.Frequency(exact))
+	if resp.Psi < want*(1-1e-9) {
+		t.Errorf("ψ = %.6f at the mesh's %.5f Hz, below ψ = %.6f at the string's %.5f Hz: the acceleration reads low",
+			resp.Psi, float64(resp.Frequency), want, exact)
+	}
+	if _, ok := resp.Check().Value("f_c"); !ok {
+		t.Error("the check does not report the corrected frequency f_c")
+	}
+}
+
+// TestPsiMax: the largest ψ over a band of frequencies, against ψ sampled
+// finely over it [D: the trapezoid of Sétra 2006 sampled, from memory].
+func TestPsiMax(t *testing.T) {
+	for _, h := range []Harmonic{VerticalFirst, VerticalSecond, LateralFirst} {
+		for lo := 0.0; lo < 5; lo += 0.037 {
+			for _, w := range []float64{0, 0.01, 0.05, 0.3, 1} {
+				var want float64
+				for k := 0; k <= 2000; k++ {
+					want = math.Max(want, h.Psi(units.Frequency(lo+w*float64(k)/2000)))
+				}
+				got := h.PsiMax(units.Frequency(lo), units.Frequency(lo+w))
+				if got < want-1e-12 || got > want+w/2000*10 {
+					t.Errorf("%s: ψ max over %.3f–%.3f Hz = %.6f, sampled %.6f", h.Name, lo, lo+w, got, want)
+				}
+			}
+		}
+	}
+}
