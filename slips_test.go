@@ -87,6 +87,10 @@ func TestSlips(t *testing.T) {
     {"name": "walkway ropes", "role": "walkway", "count": 6, "sag": "3.6 m",
       "rope": {"construction": "6x36-IWRC", "diameter": "32 mm", "grade": "1770 MPa"}},`, nil, false,
 			`sagspan: bridge description: ropes[1].name: "walkway ropes" also names ropes[0]: a group listed twice counts its ropes twice; give each group once, with all its ropes in its count, and name each group apart (line 41, column 15)`},
+		// The depth to the water in the borehole, not its elevation: taken
+		// as water 107 m below the footing, the bank was checked dry.
+		{"groundwater as a depth below ground", `"preset": "dense sand"}`, `"preset": "dense sand", "groundwater_elevation": "2.0 m"}`, nil, false,
+			`sagspan: bridge description: banks.left.soil.groundwater_elevation: 2.000 m lies 105.7 m below the lowest base of this bank (the anchor's at 107.7 m), out of reach of every check: it is an elevation on the datum of the saddles (site.left_saddle_elevation 112.0 m), not a depth below ground; leave it out where the groundwater lies out of reach (line {line}, column 65)`},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {

@@ -181,8 +181,11 @@ func (b Bridge) validateGround(v *validator, side Side) {
 	if v.err != nil {
 		return
 	}
-	// The foundation package's own refusals, by a dry run with no load.
 	bank := b.groundOf(side, soil)
+	if gw := k.Soil.Groundwater; gw != nil {
+		b.validateGroundwater(v, f, bank, *gw)
+	}
+	// The foundation package's own refusals, by a dry run with no load.
 	if _, err := bank.pad(bank.bank.Tower.Footing).Check(foundation.FootingLoad{}, soil, bank.method, nil); err != nil {
 		v.fail(at(f+".tower.footing"), "%v", err)
 		return
@@ -257,4 +260,31 @@ func (b Bridge) validateBuried(v *validator, side Side) {
 	}
 	v.fail(path{"banks." + side.String(), ".tower.footing.depth"}, "%s below ground puts the ground at the footing at %s, at or above the saddle at %s (a %s column on a %s footing): the saddle would be buried; the depth is that of the footing's underside below the ground, and the tower's height that of the saddle above the footing's top",
 		ft.Depth, ground, saddle, t.Height, ft.Thickness)
+}
+
+// maxWaterBelowBase is how far below a bank's lowest base a groundwater
+// level is taken for a slip: no check here reaches water that deep (the
+// bearing of a base feels water within about its width below it, common
+// practice, and a footing is at most 20 m wide here), so a
+// level that low changes nothing but is likely a depth below ground, or a
+// level on another datum, written where the elevation goes.
+const maxWaterBelowBase = 30 * units.Metre
+
+// validateGroundwater refuses a groundwater level far below every base of
+// the bank: leaving it out gives the same checks.
+func (b Bridge) validateGroundwater(v *validator, f string, g bankGround, gw units.Length) {
+	a := g.bank.Anchor
+	lowest, what := g.footingTop-g.bank.Tower.Footing.Thickness, "the footing's"
+	anchor := g.anchorGround - a.Depth
+	if a.Type == "rock" {
+		anchor = g.anchorGround - a.FreeLength - a.BondLength
+	}
+	if anchor < lowest {
+		lowest, what = anchor, "the anchor's"
+	}
+	if lowest-gw <= maxWaterBelowBase {
+		return
+	}
+	v.fail(at(f+".soil.groundwater_elevation"), "%s lies %s below the lowest base of this bank (%s at %s), out of reach of every check: it is an elevation on the datum of the saddles (site.left_saddle_elevation %s), not a depth below ground; leave it out where the groundwater lies out of reach",
+		gw, lowest-gw, what, lowest, b.Site.LeftSaddle)
 }
