@@ -67,6 +67,30 @@ func TestSlips(t *testing.T) {
 		// "strains the rope by 31.9 %", naming no field.
 		{"walkway too heavy for its ropes", `"load": "0.45 kN/m"`, `"load": "25 kN/m"`, []string{`"count": 6`, `"count": 1`}, true,
 			`sagspan: bridge description: walkway.parts: walkway ropes, case "permanent": cable: the new state strains the rope by 9.8 %, beyond the small-strain model (5 %): invalid input; the walkway's own weight strains the walkway ropes beyond what the rope model covers: lighten the walkway (walkway.parts) or use larger or more ropes (ropes[0].rope.diameter, ropes[0].count)`},
+		// q_p copied in kN/m² without its unit: read as 0.756 Pa, the wind
+		// cases passed with next to no wind.
+		{"wind pressure in kPa written bare", `"wind_speed": "22 m/s"`, `"wind_pressure": 0.756`, nil, false,
+			`sagspan: bridge description: climate.wind_pressure: 0.7560 Pa is outside the plausible range 0.05000 kPa to 10.00 kPa (line {line}, column 22)`},
+		// The flood's height above the river bed, not its elevation: the
+		// clearance passed by 100 m.
+		{"flood on the river's own datum", `"flood_elevation": "103.5 m"`, `"flood_elevation": "3.5 m"`, nil, false,
+			`sagspan: bridge description: site.flood_elevation: the design flood at 3.500 m lies at or below the ground line everywhere under the span (lowest 96.50 m at x = 44.00 m, site.ground[5]): no flood can stand there; give its elevation on the datum of the saddles and the ground line (site.left_saddle_elevation 112.0 m), or "none" where no flood reaches the bridge (line {line}, column 24)`},
+		{"flood below the river bed", `"flood_elevation": "103.5 m"`, `"flood_elevation": "95.0 m"`, nil, false,
+			`sagspan: bridge description: site.flood_elevation: the design flood at 95.00 m lies at or below the ground line everywhere under the span (lowest 96.50 m at x = 44.00 m, site.ground[5]): no flood can stand there; give its elevation on the datum of the saddles and the ground line (site.left_saddle_elevation 112.0 m), or "none" where no flood reaches the bridge (line {line}, column 24)`},
+		// A footing 3.5 m below ground under a 2.4 m column on a 0.7 m
+		// slab buries the saddle: this passed.
+		{"footing deeper than its tower is high", `"depth": "1.2 m", "column_offset": "-0.2 m"`, `"depth": "3.5 m", "column_offset": "-0.2 m"`, nil, false,
+			`sagspan: bridge description: banks.left.tower.footing.depth: 3.500 m below ground puts the ground at the footing at 112.4 m, at or above the saddle at 112.0 m (a 2.400 m column on a 700.0 mm footing): the saddle would be buried; the depth is that of the footing's underside below the ground, and the tower's height that of the saddle above the footing's top (line {line}, column 89)`},
+		// The walkway group pasted twice: twice the ropes, and this passed
+		// for a lighter walkway.
+		{"rope group listed twice", `"ropes": [`, `"ropes": [
+    {"name": "walkway ropes", "role": "walkway", "count": 6, "sag": "3.6 m",
+      "rope": {"construction": "6x36-IWRC", "diameter": "32 mm", "grade": "1770 MPa"}},`, nil, false,
+			`sagspan: bridge description: ropes[1].name: "walkway ropes" also names ropes[0]: a group listed twice counts its ropes twice; give each group once, with all its ropes in its count, and name each group apart (line 41, column 15)`},
+		// The depth to the water in the borehole, not its elevation: taken
+		// as water 107 m below the footing, the bank was checked dry.
+		{"groundwater as a depth below ground", `"preset": "dense sand"}`, `"preset": "dense sand", "groundwater_elevation": "2.0 m"}`, nil, false,
+			`sagspan: bridge description: banks.left.soil.groundwater_elevation: 2.000 m lies 105.7 m below the lowest base of this bank (the anchor's at 107.7 m), out of reach of every check: it is an elevation on the datum of the saddles (site.left_saddle_elevation 112.0 m), not a depth below ground; leave it out where the groundwater lies out of reach (line {line}, column 65)`},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {

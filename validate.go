@@ -123,6 +123,8 @@ func (b Bridge) Validate() error {
 		}
 	}
 
+	b.validateFlood(v)
+
 	c := b.Climate
 	v.positive(at("climate.reference"), float64(c.Reference), units.KindTemperature)
 	v.positive(at("climate.coldest"), float64(c.Coldest), units.KindTemperature)
@@ -161,6 +163,8 @@ func (b Bridge) Validate() error {
 	b.validateBank(v, "banks.left", b.Banks.Left)
 	b.validateBank(v, "banks.right", b.Banks.Right)
 	v.rangesAt("", reflect.ValueOf(&b).Elem())
+	b.validateBuried(v, Left)
+	b.validateBuried(v, Right)
 	b.validateGround(v, Left)
 	b.validateGround(v, Right)
 	b.validateLoads(v)
@@ -176,6 +180,8 @@ func (b Bridge) validateBanks() error {
 	b.validateBank(v, "banks.left", b.Banks.Left)
 	b.validateBank(v, "banks.right", b.Banks.Right)
 	v.rangesAt("banks", reflect.ValueOf(&b.Banks).Elem())
+	b.validateBuried(v, Left)
+	b.validateBuried(v, Right)
 	return v.err
 }
 
@@ -205,6 +211,11 @@ func (b Bridge) validateRopes(v *validator) {
 		if v.err == nil && float64(g.Sag) < minSagRatio*float64(b.Site.Span) {
 			v.fail(path{f, ".sag"}, "sag %s is less than 1/%.0f of the span %s: a rope that tight carries many times its load in tension; footbridge sag ratios lie between about 1/25 and 1/8",
 				g.Sag, 1/minSagRatio, b.Site.Span)
+		}
+		for j, h := range b.Ropes[:i] {
+			if v.err == nil && g.Name == h.Name {
+				v.fail(path{f, ".name"}, "%q also names ropes[%d]: a group listed twice counts its ropes twice; give each group once, with all its ropes in its count, and name each group apart", g.Name, j)
+			}
 		}
 		v.nonNegative(path{f, ".offset"}, float64(g.Offset), units.KindLength)
 		if math.IsNaN(g.Share) || g.Share < 0 || g.Share > 1 {
@@ -477,11 +488,16 @@ var limits = map[string]limit{
 	"Point.X":         between(-3000*units.Metre, 4000*units.Metre),
 	"Point.Z":         between(-500*units.Metre, 9000*units.Metre),
 
-	"Climate.Reference":    between(minTemperature, maxTemperature),
-	"Climate.Coldest":      between(minTemperature, maxTemperature),
-	"Climate.Hottest":      between(minTemperature, maxTemperature),
-	"Climate.WindSpeed":    between(0*units.MetrePerSecond, 80*units.MetrePerSecond), // basic wind speeds reach about 70 m/s in cyclone regions
-	"Climate.WindPressure": between(0*units.Pascal, 10*units.Kilopascal),
+	"Climate.Reference": between(minTemperature, maxTemperature),
+	"Climate.Coldest":   between(minTemperature, maxTemperature),
+	"Climate.Hottest":   between(minTemperature, maxTemperature),
+	// Basic wind speeds reach about 70 m/s in cyclone regions; the lowest
+	// of design use lie near 20 m/s (common practice), so below 10 m/s a
+	// value is a slip (km/h, a decimal point), as is a peak velocity
+	// pressure below 50 Pa (½ρv² of 10 m/s is 62.5 Pa): a q_p copied in
+	// kN/m² without its unit reads as a few pascals.
+	"Climate.WindSpeed":    between(10*units.MetrePerSecond, 80*units.MetrePerSecond),
+	"Climate.WindPressure": between(50*units.Pascal, 10*units.Kilopascal),
 	"Climate.Exposure":     plain(0.5, 5), // ce(z) of EN 1991-1-4 Figure 4.2 lies within about 1 to 4.5
 
 	"Walkway.Width":     between(0.3*units.Metre, 5*units.Metre),

@@ -2,6 +2,7 @@ package sagspan
 
 import (
 	"errors"
+	"fmt"
 	"math"
 
 	"github.com/sagspan/sagspan/foundation"
@@ -180,8 +181,11 @@ func (b Bridge) validateGround(v *validator, side Side) {
 	if v.err != nil {
 		return
 	}
-	// The foundation package's own refusals, by a dry run with no load.
 	bank := b.groundOf(side, soil)
+	if gw := k.Soil.Groundwater; gw != nil {
+		b.validateGroundwater(v, f, bank, *gw)
+	}
+	// The foundation package's own refusals, by a dry run with no load.
 	if _, err := bank.pad(bank.bank.Tower.Footing).Check(foundation.FootingLoad{}, soil, bank.method, nil); err != nil {
 		v.fail(at(f+".tower.footing"), "%v", err)
 		return
@@ -189,4 +193,98 @@ func (b Bridge) validateGround(v *validator, side Side) {
 	if _, err := bank.anchorDryRun(); err != nil {
 		v.fail(at(f+".anchor"), "%v", err)
 	}
+}
+
+// validateFlood refuses a design flood that the ground line, where it runs
+// across the whole span, puts at or below the ground everywhere under the
+// span: a flood given as a height above the river bed, or on another datum,
+// would otherwise pass the clearance check by the height of the site.
+func (b Bridge) validateFlood(v *validator) {
+	s := b.Site
+	g := s.Ground
+	if v.err != nil || s.Flood.None || len(g) < 2 || g[0].X > 0 || g[len(g)-1].X < s.Span {
+		return
+	}
+	// The lowest ground under the span lies at a point of the line or at
+	// an end of the span.
+	low, at, point := units.Length(math.Inf(1)), units.Length(0), -1
+	consider := func(x, z units.Length, i int) {
+		if z < low {
+			low, at, point = z, x, i
+		}
+	}
+	for i, p := range g {
+		if p.X >= 0 && p.X <= s.Span {
+			consider(p.X, p.Z, i)
+		}
+	}
+	for _, x := range []units.Length{0, s.Span} {
+		consider(x, groundAt(g, x), -1)
+	}
+	if s.Flood.Z > low {
+		return
+	}
+	where := fmt.Sprintf("x = %s", at)
+	if point >= 0 {
+		where += fmt.Sprintf(", site.ground[%d]", point)
+	}
+	v.fail(path{name: "site.flood_elevation"}, "the design flood at %s lies at or below the ground line everywhere under the span (lowest %s at %s): no flood can stand there; give its elevation on the datum of the saddles and the ground line (site.left_saddle_elevation %s), or \"none\" where no flood reaches the bridge",
+		s.Flood.Z, low, where, s.LeftSaddle)
+}
+
+// groundAt returns the elevation of ground line g at x, which lies within it.
+func groundAt(g []Point, x units.Length) units.Length {
+	for i := 1; i < len(g); i++ {
+		if x <= g[i].X {
+			a, c := g[i-1], g[i]
+			return a.Z + (c.Z-a.Z)*(x-a.X)/(c.X-a.X)
+		}
+	}
+	return g[len(g)-1].Z
+}
+
+// validateBuried refuses a footing whose depth below ground, under a
+// column of the tower's height on a slab of its thickness, puts the ground
+// at the footing at or above the saddle: a depth and a height given from
+// different references, or the footing's depth for the column's height.
+func (b Bridge) validateBuried(v *validator, side Side) {
+	if v.err != nil {
+		return
+	}
+	k := b.bankOf(side)
+	t, ft := k.Tower, k.Tower.Footing
+	saddle := b.saddleElevation(side)
+	ground := saddle - t.Height - ft.Thickness + ft.Depth
+	if ground < saddle {
+		return
+	}
+	v.fail(path{"banks." + side.String(), ".tower.footing.depth"}, "%s below ground puts the ground at the footing at %s, at or above the saddle at %s (a %s column on a %s footing): the saddle would be buried; the depth is that of the footing's underside below the ground, and the tower's height that of the saddle above the footing's top",
+		ft.Depth, ground, saddle, t.Height, ft.Thickness)
+}
+
+// maxWaterBelowBase is how far below a bank's lowest base a groundwater
+// level is taken for a slip: no check here reaches water that deep (the
+// bearing of a base feels water within about its width below it, common
+// practice, and a footing is at most 20 m wide here), so a
+// level that low changes nothing but is likely a depth below ground, or a
+// level on another datum, written where the elevation goes.
+const maxWaterBelowBase = 30 * units.Metre
+
+// validateGroundwater refuses a groundwater level far below every base of
+// the bank: leaving it out gives the same checks.
+func (b Bridge) validateGroundwater(v *validator, f string, g bankGround, gw units.Length) {
+	a := g.bank.Anchor
+	lowest, what := g.footingTop-g.bank.Tower.Footing.Thickness, "the footing's"
+	anchor := g.anchorGround - a.Depth
+	if a.Type == "rock" {
+		anchor = g.anchorGround - a.FreeLength - a.BondLength
+	}
+	if anchor < lowest {
+		lowest, what = anchor, "the anchor's"
+	}
+	if lowest-gw <= maxWaterBelowBase {
+		return
+	}
+	v.fail(at(f+".soil.groundwater_elevation"), "%s lies %s below the lowest base of this bank (%s at %s), out of reach of every check: it is an elevation on the datum of the saddles (site.left_saddle_elevation %s), not a depth below ground; leave it out where the groundwater lies out of reach",
+		gw, lowest-gw, what, lowest, b.Site.LeftSaddle)
 }
