@@ -48,9 +48,11 @@ func (t Traffic) Density() float64 {
 	return traffics[t].density
 }
 
-// Crowd reports whether the class is a crowd condition (dense or very
-// dense), for which EN 1990 A2.4.3.2 allows the larger lateral limit.
-func (t Traffic) Crowd() bool { return t == Dense || t == VeryDense }
+// Crowd reports whether the class is the exceptional crowd condition
+// (very dense, class I), for which EN 1990 A2.4.3.2 allows the larger
+// lateral limit. Dense traffic (class II) is busy normal use and keeps the
+// normal-use limit: the cautious reading of "exceptional crowd".
+func (t Traffic) Crowd() bool { return t == VeryDense }
 
 // Walkers is the pedestrian action on the walkway.
 type Walkers struct {

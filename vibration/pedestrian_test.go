@@ -89,6 +89,18 @@ func TestResponseByHand(t *testing.T) {
 	if r.Limit != 0.2 {
 		t.Errorf("lateral limit for sparse traffic %v, want 0.2 m/s² (EN 1990 A2.4.3.2, from memory)", r.Limit)
 	}
+	// The larger lateral limit is for exceptional crowd conditions only
+	// (EN 1990 A2.4.3.2, from memory): very dense traffic; dense traffic is
+	// busy normal use and keeps 0.2 m/s² (the cautious reading).
+	for traffic, want := range map[Traffic]units.Acceleration{Sparse: 0.2, Dense: 0.2, VeryDense: 0.4} {
+		r, err := md.Response(i, Walkers{Traffic: traffic, Damping: xi})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if r.Limit != want {
+			t.Errorf("lateral limit for %s traffic %v, want %v", traffic, r.Limit, want)
+		}
+	}
 
 	// The steady amplitude of q̈ + 2ξωq̇ + ω²q = (F*/M*) cos ωt by fourth-
 	// order Runge–Kutta over 400 periods (ξωt ≈ 25: the transient gone).
