@@ -20,6 +20,8 @@ func (a *Analysis) NotChecked() []string {
 		"The rope terminations' hardware (number and tightening of grips, sockets, thimbles, turnbuckles) beyond the efficiency " +
 			"taken on the rope's strength, and the saddles' own structure beyond the groove's radius.",
 		"Fatigue, corrosion and durability of ropes, clamps and steelwork; inspection and maintenance.",
+		"Walkers' force along the bridge (modes that move the walkway lengthwise), runners and deliberate swaying: " +
+			"the comfort stage assesses vertical and lateral walking only, each mode in its main direction.",
 		"Actions the description does not carry: earthquake, debris and impact in the flood, vehicles and pack animals, " +
 			"snow or ice unless given as a walkway part.",
 	}
