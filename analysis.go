@@ -241,6 +241,7 @@ func (m *model) run(a *Analysis, opts *Options) error {
 	if err := m.grooveChecks(&grooves); err != nil {
 		return err
 	}
+	m.levelChecks(&grooves)
 	a.Report.Add(grooves...)
 	if comfortErr != nil {
 		return comfortErr

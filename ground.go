@@ -632,3 +632,65 @@ func (m *model) attachment(dst []check.Result, s Side, spec AnchorSpec, perm, sv
 	}
 	return dst, nil
 }
+
+// levelTolerance is how far the ground line may lie from the ground a
+// base's levels imply before the report flags it: a survey and a
+// description of the same bank that differ by more at a base suggest a
+// slip (a tower height transposed, a depth on the wrong base). Our
+// judgement, said in the result.
+const levelTolerance = 0.5 * units.Metre
+
+// lineAt returns the ground line's elevation at x, and false where the
+// line does not reach x.
+func lineAt(line []Point, x float64) (units.Length, bool) {
+	for i := 1; i < len(line); i++ {
+		a, b := line[i-1], line[i]
+		if x >= float64(a.X) && x <= float64(b.X) {
+			t := (x - float64(a.X)) / float64(b.X-a.X)
+			return a.Z + units.Length(t)*(b.Z-a.Z), true
+		}
+	}
+	return 0, false
+}
+
+// levelChecks flags each footing and block anchor whose ground, as the
+// tower's height, the footing's depth and the backstay's drop place it,
+// lies more than levelTolerance from the ground line (site.ground) there.
+func (m *model) levelChecks(out sink) {
+	if len(m.b.Site.Ground) < 2 {
+		return
+	}
+	for side := Left; side <= Right; side++ {
+		g := &m.ground[side]
+		bank := m.bank(side)
+		type base struct {
+			element, from string
+			x           float64
+			z           units.Length
+		}
+		bases := []base{{footingElement[side], "the saddle's elevation less the tower's height and the footing's thickness, plus its depth",
+			g.xs - g.dir*float64(bank.Tower.Footing.ColumnOffset), g.footingGround}}
+		if a := bank.Anchor; a.Type != "rock" {
+			bases = append(bases, base{anchorElement[side], "the saddle's elevation less the backstay's drop, less the attachment's height, plus the anchor's depth",
+				g.xs - g.dir*float64(bank.Backstay.Horizontal), g.anchorGround})
+		}
+		for _, b := range bases {
+			z, ok := lineAt(m.b.Site.Ground, b.x)
+			if !ok {
+				continue
+			}
+			d := units.Length(math.Abs(float64(z - b.z)))
+			r := check.Advisory("site.ground_level", "Ground line against the levels of the base", units.KindLength, float64(d), float64(levelTolerance)).
+				For(b.element, grooveCase).
+				WithBasis("the ground at the base from " + b.from + ", against the ground line (site.ground) there; more than " +
+					levelTolerance.String() + " apart suggests a slip in a level (our judgement)").
+				WithValues(
+					check.Of("x", "position of the base along the ground line", units.Length(b.x)),
+					check.Of("z_line", "ground line's elevation there", z),
+					check.Of("z_base", "ground at the base from the description's levels", b.z),
+					check.Of("Δz", "the two apart", d),
+				)
+			out.add(r)
+		}
+	}
+}

@@ -721,3 +721,29 @@ func TestRiseBehind(t *testing.T) {
 		}
 	}
 }
+
+// TestGroundLevelFlag: a tower height transposed (4.2 m for 2.4 m) moves
+// the left footing's ground 1.8 m below the ground line, which the report
+// flags (site.ground_level, 0.5 m our judgement); the demo's own levels
+// agree with its line within 40 mm at every base.
+func TestGroundLevelFlag(t *testing.T) {
+	b := Demo()
+	a, err := Check(b, &Options{SkipComfort: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, el := range []string{"left footing", "left anchor", "right footing", "right anchor"} {
+		if r := find(t, a.Report, "site.ground_level", el, grooveCase); r.Status != check.Pass || r.Demand > 0.04 {
+			t.Errorf("demo %s: %s, %.3f m apart", el, r.Status, r.Demand)
+		}
+	}
+	b.Banks.Left.Tower.Height = 4.2 // the saddle where it was: the footing 1.8 m lower
+	a, err = Check(b, &Options{SkipComfort: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := find(t, a.Report, "site.ground_level", "left footing", grooveCase)
+	if r.Status != check.Flag || math.Abs(r.Demand-1.8-0.03) > 1e-9 {
+		t.Errorf("transposed tower height: %s, %.4f m apart; want a flag at 1.83 m", r.Status, r.Demand)
+	}
+}

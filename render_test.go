@@ -245,15 +245,19 @@ func TestNotChecked(t *testing.T) {
 		t.Errorf("JSON not_checked: %d items (%v), want %d", len(doc.NotChecked), err, len(base))
 	}
 
-	// A frame tower, no ground line, no attachment described, rock.
+	// A frame tower, no ground line, no attachment described, rock, no
+	// wind, a case left out.
 	b.Site.Ground = nil
 	b.Banks.Left.Tower.Section.Type = "frame"
 	b.Banks.Right.Anchor.Attachment = nil
 	yes := true
 	b.Banks.Right.Soil.IsRock = &yes
+	b.Climate.WindSpeed, b.Climate.WindPressure = 0, 0
+	b.Loads.Omit = []string{"flood with crowd"}
 	a.Bridge = b
 	got := a.NotChecked()
-	for _, s := range []string{"left tower's frame bracing", "taken level", "attachment at the right anchor", "rock mass's own stability at the right"} {
+	for _, s := range []string{"left tower's frame bracing", "taken level", "attachment at the right anchor", "rock mass's own stability at the right",
+		"no wind case is checked", "(loads.omit): flood with crowd."} {
 		if !has(got, s) {
 			t.Errorf("%q missing from %q", s, got)
 		}

@@ -1,6 +1,8 @@
 package sagspan
 
 import (
+	"strings"
+
 	"github.com/sagspan/sagspan/check"
 )
 
@@ -24,6 +26,13 @@ func (a *Analysis) NotChecked() []string {
 			"the comfort stage assesses vertical and lateral walking only, each mode in its main direction.",
 		"Actions the description does not carry: earthquake, debris and impact in the flood, vehicles and pack animals, " +
 			"snow or ice unless given as a walkway part.",
+	}
+	if b.wind() <= 0 {
+		out = append(out, "Wind: the description gives no wind speed or pressure (climate.wind_speed, climate.wind_pressure), "+
+			"so no wind case is checked.")
+	}
+	if len(b.Loads.Omit) > 0 {
+		out = append(out, "The cases and searched loadings the description leaves out (loads.omit): "+strings.Join(b.Loads.Omit, "; ")+".")
 	}
 	bank := "The overall stability of each bank (a deep slip through it, scour and erosion around the bases)"
 	if len(b.Site.Ground) < 2 {
