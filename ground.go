@@ -665,8 +665,8 @@ func (m *model) levelChecks(out sink) {
 		bank := m.bank(side)
 		type base struct {
 			element, from string
-			x           float64
-			z           units.Length
+			x             float64
+			z             units.Length
 		}
 		bases := []base{{footingElement[side], "the saddle's elevation less the tower's height and the footing's thickness, plus its depth",
 			g.xs - g.dir*float64(bank.Tower.Footing.ColumnOffset), g.footingGround}}
@@ -682,8 +682,8 @@ func (m *model) levelChecks(out sink) {
 			d := units.Length(math.Abs(float64(z - b.z)))
 			r := check.Advisory("site.ground_level", "Ground line against the levels of the base", units.KindLength, float64(d), float64(levelTolerance)).
 				For(b.element, grooveCase).
-				WithBasis("the ground at the base from " + b.from + ", against the ground line (site.ground) there; more than " +
-					levelTolerance.String() + " apart suggests a slip in a level (our judgement)").
+				WithBasis("the ground at the base from "+b.from+", against the ground line (site.ground) there; more than "+
+					levelTolerance.String()+" apart suggests a slip in a level (our judgement)").
 				WithValues(
 					check.Of("x", "position of the base along the ground line", units.Length(b.x)),
 					check.Of("z_line", "ground line's elevation there", z),
