@@ -242,6 +242,7 @@ func (m *model) run(a *Analysis, opts *Options) error {
 		return err
 	}
 	m.levelChecks(&grooves)
+	m.gradeChecks(&grooves)
 	a.Report.Add(grooves...)
 	if comfortErr != nil {
 		return comfortErr

@@ -1,9 +1,11 @@
 package sagspan
 
 import (
+	"strings"
 	"testing"
 
 	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/units"
 )
 
 // TestGrooveFlagCarriesItsNumbers: a saddle whose groove diameter the
@@ -80,5 +82,32 @@ func TestTerminationDefaultIsGrips(t *testing.T) {
 		}
 		r := find(t, a.Report, "cable.tension", "walkway ropes", casePermanent)
 		near(t, "rope capacity, termination "+term, r.Capacity, 0.8*mbf/3, 1e-9)
+	}
+}
+
+// TestGradeFlag: a catalogue rope with a grade none of the usual ones
+// (1570, 1770, 1960, 2160 MPa: EN 12385-4, from memory) is flagged, as a
+// mistyped 1970 for 1770 would give the rope 11 % more strength; the
+// demo's grades raise no flag.
+func TestGradeFlag(t *testing.T) {
+	b := Demo()
+	a, err := Check(b, &Options{SkipComfort: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, r := range a.Report.Results {
+		if r.ID == "cable.grade" {
+			t.Errorf("demo: %s", r)
+		}
+	}
+	b.Ropes = append([]RopeGroup(nil), b.Ropes...)
+	b.Ropes[0].Rope.Grade = 1970 * units.Megapascal
+	a, err = Check(b, &Options{SkipComfort: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	r := find(t, a.Report, "cable.grade", b.Ropes[0].Name, grooveCase)
+	if r.Status != check.Flag || !strings.Contains(strings.Join(r.Notes, " "), "none of the usual grades") {
+		t.Errorf("grade 1970 MPa: %s", r)
 	}
 }

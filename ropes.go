@@ -98,6 +98,38 @@ func (m *model) ropeChecks(out sink, svc, des CaseState, all bool) error {
 	return nil
 }
 
+// ropeGrades are the usual grades of steel wire rope, the nominal
+// tensile strength of its wires (EN 12385-4, from memory).
+var ropeGrades = []units.Pressure{1570 * units.Megapascal, 1770 * units.Megapascal, 1960 * units.Megapascal, 2160 * units.Megapascal}
+
+// gradeChecks flags a catalogue rope whose grade is none of the usual
+// ones: the catalogue works its strength out from any grade, so a grade
+// mistyped (1970 for 1770) would otherwise pass with 11 % more strength.
+func (m *model) gradeChecks(out sink) {
+	for _, g := range m.groups {
+		spec := g.Rope
+		if spec.MBF > 0 {
+			continue // a rope given directly
+		}
+		usual := false
+		for _, q := range ropeGrades {
+			usual = usual || math.Abs(float64(spec.Grade-q)) < 0.5*float64(units.Megapascal)
+		}
+		if usual {
+			continue
+		}
+		r := check.Record("cable.grade", "Rope grade against the usual grades", units.KindPressure, float64(spec.Grade)).
+			For(g.Name, grooveCase).
+			WithBasis("the catalogue's breaking force follows from the grade given; the usual grades are 1570, 1770, 1960 and 2160 MPa " +
+				"(EN 12385-4, from memory)").
+			WithValues(check.Of("R_r", "rope grade given", spec.Grade)).
+			WithNote("grade " + spec.Grade.String() + " is none of the usual grades: check it against the maker's certificate " +
+				"(a mistyped grade changes the rope's strength in proportion)")
+		r.Status = check.Flag
+		out.add(r)
+	}
+}
+
 // grooveCase names the "case" of a check that no load case changes.
 const grooveCase = "any load case"
 
