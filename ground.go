@@ -19,10 +19,11 @@ type bankGround struct {
 	soil   foundation.Soil
 	method foundation.Method
 	// footingTop is the elevation of the column base (the footing's top),
-	// footingGround that of the ground at the footing, anchorGround that
-	// of the ground at the anchor (the rock surface at a rock anchor's
-	// head).
-	footingTop, footingGround, anchorGround units.Length
+	// attach that of the backstays' attachment at the anchor. Neither
+	// depends on the size of the footing or anchor; the ground at each
+	// does (footingGround, anchorGround), so a design search trying
+	// another size reads it from the size it tries.
+	footingTop, attach units.Length
 	// groundwater is the groundwater elevation, when given.
 	groundwater *units.Length
 	flood       Level
@@ -74,20 +75,32 @@ func (b Bridge) groundOf(s Side, soil foundation.Soil) bankGround {
 	if s == Right {
 		g.xs, g.dir = float64(b.Site.Span), -1
 	}
-	ft := k.Tower.Footing
 	g.footingTop = z - k.Tower.Height
-	g.footingGround = g.footingTop + ft.Depth - ft.Thickness
-	attach := z - k.Backstay.Drop
-	switch a := k.Anchor; a.Type {
-	case "rock":
-		g.anchorGround = attach
-	default:
-		g.anchorGround = attach - a.attachHeight() + a.Depth
-	}
+	g.attach = z - k.Backstay.Drop
 	if a := k.Anchor; a.Type == "rock" {
 		g.soil.GroutBond = a.groutBond(soil)
 	}
 	return g
+}
+
+// footingGround returns the elevation of the ground at a footing of size
+// spec: its underside (the column base less the footing's thickness) plus
+// its depth below ground. A thicker footing on the same depth lies under
+// lower ground.
+func (g *bankGround) footingGround(spec FootingSpec) units.Length {
+	return g.footingTop - spec.Thickness + spec.Depth
+}
+
+// anchorGround returns the elevation of the ground at anchor a (the rock
+// surface at a rock anchor's head): the attachment, less its height above
+// the base of a block or the bottom of a deadman's face, plus the depth of
+// that base below ground. It moves with the anchor's height (the
+// attachment's default height is a share of it) and depth.
+func (g *bankGround) anchorGround(a AnchorSpec) units.Length {
+	if a.Type == "rock" {
+		return g.attach
+	}
+	return g.attach - a.attachHeight() + a.Depth
 }
 
 // waterLevel returns the water level at a bank in case lc, whether there
@@ -382,7 +395,7 @@ func (m *model) footingAcross(s Side, spec FootingSpec, perm tower.Resultant, sv
 	g := &m.ground[s]
 	f := g.pad(spec)
 	f.Along, f.Across = spec.Width, spec.Length // turned: along the lateral force
-	f.Water = g.waterAt(svc.Case, g.footingGround)
+	f.Water = g.waterAt(svc.Case, g.footingGround(spec))
 	ld := m.footingLoad(s, spec, perm, svc)
 	ld.Horizontal, ld.HorizontalAcross = ld.HorizontalAcross, ld.Horizontal
 	ld.Moment, ld.MomentAcross = ld.MomentAcross, ld.Moment
@@ -458,7 +471,7 @@ func (m *model) footingLoad(s Side, spec FootingSpec, perm tower.Resultant, svc 
 func (m *model) footing(s Side, spec FootingSpec, perm tower.Resultant, svc CaseState) ([]check.Result, error) {
 	g := &m.ground[s]
 	f := g.pad(spec)
-	f.Water = g.waterAt(svc.Case, g.footingGround)
+	f.Water = g.waterAt(svc.Case, g.footingGround(spec))
 	var err error
 	m.scratch, err = f.AppendCheck(m.scratch[:0], m.footingLoad(s, spec, perm, svc), g.soil, g.method, m.foundationBasis())
 	m.waterBasis(m.scratch, s, svc.Case, f.Water, g.footingSlope(spec))
@@ -492,7 +505,8 @@ func (m *model) foundationBasis() *foundation.Basis { return &m.fbasis }
 func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Result, error) {
 	basis := m.foundationBasis()
 	g := &m.ground[s]
-	water := g.waterAt(svc.Case, g.anchorGround)
+	ground := g.anchorGround(spec)
+	water := g.waterAt(svc.Case, ground)
 	x, z := spec.AttachX, spec.AttachZ
 	if x == 0 {
 		x = spec.Length / 2
@@ -533,7 +547,7 @@ func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Re
 	default:
 		blk := g.block(spec)
 		blk.Water = water
-		scoured := blk.PassiveMobilisation > 0 && g.flooded(svc.Case, g.anchorGround)
+		scoured := blk.PassiveMobilisation > 0 && g.flooded(svc.Case, ground)
 		if scoured {
 			blk.PassiveMobilisation = 0
 		}
@@ -549,7 +563,7 @@ func (m *model) anchor(s Side, spec AnchorSpec, perm, svc CaseState) ([]check.Re
 	if err != nil {
 		return nil, err
 	}
-	if spec.Type == "deadman" && g.flooded(svc.Case, g.anchorGround) && !basis.Terse {
+	if spec.Type == "deadman" && g.flooded(svc.Case, ground) && !basis.Terse {
 		for i := range m.scratch {
 			if m.scratch[i].ID == "anchor.deadman.pullout" {
 				m.scratch[i] = m.scratch[i].WithNote("the design flood stands over the deadman's ground: its resistance is the soil in front of it, " +
@@ -669,10 +683,10 @@ func (m *model) levelChecks(out sink) {
 			z             units.Length
 		}
 		bases := []base{{footingElement[side], "the saddle's elevation less the tower's height and the footing's thickness, plus its depth",
-			g.xs - g.dir*float64(bank.Tower.Footing.ColumnOffset), g.footingGround}}
+			g.xs - g.dir*float64(bank.Tower.Footing.ColumnOffset), g.footingGround(bank.Tower.Footing)}}
 		if a := bank.Anchor; a.Type != "rock" {
 			bases = append(bases, base{anchorElement[side], "the saddle's elevation less the backstay's drop, less the attachment's height, plus the anchor's depth",
-				g.xs - g.dir*float64(bank.Backstay.Horizontal), g.anchorGround})
+				g.xs - g.dir*float64(bank.Backstay.Horizontal), g.anchorGround(a)})
 		}
 		for _, b := range bases {
 			z, ok := lineAt(m.b.Site.Ground, b.x)

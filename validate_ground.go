@@ -275,9 +275,9 @@ const maxWaterBelowBase = 30 * units.Metre
 func (b Bridge) validateGroundwater(v *validator, f string, g bankGround, gw units.Length) {
 	a := g.bank.Anchor
 	lowest, what := g.footingTop-g.bank.Tower.Footing.Thickness, "the footing's"
-	anchor := g.anchorGround - a.Depth
+	anchor := g.anchorGround(a) - a.Depth
 	if a.Type == "rock" {
-		anchor = g.anchorGround - a.FreeLength - a.BondLength
+		anchor = g.anchorGround(a) - a.FreeLength - a.BondLength
 	}
 	if anchor < lowest {
 		lowest, what = anchor, "the anchor's"
