@@ -534,12 +534,20 @@ func (st stage) anchorChecks(m *model, out sink, size BlockSize) error {
 }
 
 // footingChecks checks the footings of size on both banks in the stage:
-// every case, and each loaded-length family's footing pass. A family's
-// pass refines the footing checks' maxima beyond the search's points;
-// where the highest footing ratio on those points is below other, the
-// candidate's highest ratio of every other check, by more than
-// footingMargin, the refined maxima cannot change the candidate's verdict,
-// utilisation or governing result, and the pass stops at the points.
+// every case, and each loaded-length family's footing pass, which refines
+// the footing checks' maxima beyond the search's points as the whole-bridge
+// check does. other is the candidate's highest ratio of every check no
+// footing size changes.
+//
+// The pass is left out only where the candidate already fails on those
+// other checks (other > 1): its verdict is then the same with or without
+// the pass (exact). Its utilisation is the same too unless the pass would
+// raise a footing ratio above other, which the test below rules out where
+// the highest footing ratio on the points lies below other by more than
+// footingMargin (an empirical bound, not a proof: it can only misorder the
+// near misses, never call a design feasible or change the best one). A
+// candidate that passes every other check always gets the full pass, so
+// its verdict and utilisation are the whole-bridge check's.
 func (st stage) footingChecks(m *model, out sink, size FootingSize, other float64) error {
 	specs := [2]FootingSpec{size.apply(m.bank(Left).Tower.Footing), size.apply(m.bank(Right).Tower.Footing)}
 	for side := Left; side <= Right; side++ {
@@ -556,7 +564,7 @@ func (st stage) footingChecks(m *model, out sink, size FootingSize, other float6
 				}
 			}
 		}
-		if onPoints.max*(1+footingMargin) < other && !onPoints.failed {
+		if other > 1 && onPoints.max*(1+footingMargin) < other && !onPoints.failed {
 			continue
 		}
 		if _, _, _, err := s.footingPass(out, specs); err != nil {
@@ -567,7 +575,8 @@ func (st stage) footingChecks(m *model, out sink, size FootingSize, other float6
 }
 
 // footingMargin bounds how much a footing pass's refinement may raise a
-// footing check's ratio above its highest on the search's points: 25 %,
+// footing check's ratio above its highest on the search's points, for the
+// order of candidates that fail anyway (see footingChecks): 25 %,
 // about five times the largest rise seen on the test bridges (5.3 % in the
 // demo's construction stage, whose search has the fewest points; under
 // 0.6 % elsewhere).

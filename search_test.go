@@ -74,7 +74,7 @@ func TestSearchAgreesWithBruteForce(t *testing.T) {
 		if got.SagRatio != d.SagRatio || got.Anchor != d.Anchor || got.Footing != d.Footing || got.Count != d.Count || got.Diameter != d.Diameter {
 			t.Fatalf("candidate %d is %+v, want %+v", i, got, d)
 		}
-		if ok != got.Feasible || math.Abs(u-got.Utilisation) > 1e-12*math.Max(1, u) || c != got.Cost {
+		if ok != got.Feasible || !sameRatio(u, got.Utilisation, 1e-12) || c != got.Cost {
 			t.Errorf("candidate %d: search %v/%.6g/%.6g, brute force %v/%.6g/%.6g", i, got.Feasible, got.Utilisation, got.Cost, ok, u, c)
 		}
 		if ok {
@@ -109,7 +109,7 @@ func TestSearchAgreesWithBruteForce(t *testing.T) {
 	// Every design on the front and every near miss scores as brute force does.
 	for _, d := range append(append([]Design{}, res.Front...), res.NearMisses...) {
 		ok, u, c := bruteForce(t, b, d)
-		if ok != d.Feasible || math.Abs(u-d.Utilisation) > 1e-12*math.Max(1, u) || c != d.Cost {
+		if ok != d.Feasible || !sameRatio(u, d.Utilisation, 1e-12) || c != d.Cost {
 			t.Errorf("candidate %+v: search %v/%v/%v, brute force %v/%v/%v", d, d.Feasible, d.Utilisation, d.Cost, ok, u, c)
 		}
 	}
@@ -349,7 +349,7 @@ func TestSearchSizesAsChecked(t *testing.T) {
 			t.Errorf("%s: search has %d checks, Check %d", what, len(got), len(want))
 		}
 		for k, w := range want {
-			if g, ok := got[k]; !ok || math.Abs(g-w) > 1e-12*math.Max(1, w) {
+			if g, ok := got[k]; !ok || !sameRatio(g, w, 1e-12) {
 				t.Errorf("%s: %s %s: search %.9g, Check %.9g", what, k.id, k.element, g, w)
 			}
 		}

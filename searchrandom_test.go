@@ -10,6 +10,7 @@ import (
 	"testing"
 
 	"github.com/sagspan/sagspan/check"
+	"github.com/sagspan/sagspan/foundation"
 	"github.com/sagspan/sagspan/units"
 )
 
@@ -125,7 +126,7 @@ func TestSearchAgreesWithCheckOnTestBridges(t *testing.T) {
 						t.Fatalf("candidate %d is %+v, want %+v", i, d, want)
 					}
 					ok, u, c := bruteForce(t, b, d)
-					if ok != d.Feasible || !(u == d.Utilisation || math.Abs(u-d.Utilisation) <= 1e-9*math.Max(1, u)) || c != d.Cost {
+					if ok != d.Feasible || !sameRatio(u, d.Utilisation, 1e-9) || c != d.Cost {
 						t.Errorf("candidate %d (sag 1/%.1f, %d × %v, anchor %v, footing %v): search %v/%.6g/%.6g (%s, %s, %s), Check %v/%.6g/%.6g",
 							i, 1/d.SagRatio, d.Count, d.Diameter, d.Anchor, d.Footing, d.Feasible, d.Utilisation, d.Cost,
 							d.Governing.ID, d.Governing.Element, d.Governing.Case, ok, u, c)
@@ -180,7 +181,7 @@ func TestSearchPartsAgreeWithCheckOnTestBridges(t *testing.T) {
 			t.Errorf("%s: search has %d checks, Check %d", what, len(got), len(want))
 		}
 		for k, w := range want {
-			if g, ok := got[k]; !ok || math.Abs(g.Ratio-w.Ratio) > 1e-9*math.Max(1, w.Ratio) {
+			if g, ok := got[k]; !ok || !sameRatio(g.Ratio, w.Ratio, 1e-9) {
 				t.Errorf("%s: %s %s: search %.9g (%s), Check %.9g (%s)", what, k.id, k.element, g.Ratio, g.Case, w.Ratio, w.Case)
 			}
 		}
@@ -228,4 +229,63 @@ func TestSearchPartsAgreeWithCheckOnTestBridges(t *testing.T) {
 			})
 		}
 	}
+}
+
+// TestSearchRefusesWhatCheckRefuses tries an anchor size that raises the
+// lowest base of the demo's banks so that a groundwater level just within
+// reach of the bridge's own bases (maxWaterBelowBase) falls out of reach:
+// Check refuses that design (validateGroundwater), so the search must not
+// call it feasible.
+func TestSearchRefusesWhatCheckRefuses(t *testing.T) {
+	b := Demo()
+	own := b.Banks.Left.Anchor
+	for side := Left; side <= Right; side++ {
+		k := b.bankOf(side)
+		g := b.groundOf(side, foundationSoil(t, k))
+		gw := min(g.footingTop-k.Tower.Footing.Thickness, g.anchorGround(k.Anchor)-k.Anchor.Depth) - maxWaterBelowBase + 0.05*units.Metre
+		if side == Left {
+			b.Banks.Left.Soil.Groundwater = &gw
+		} else {
+			b.Banks.Right.Soil.Groundwater = &gw
+		}
+	}
+	if err := b.Validate(); err != nil {
+		t.Fatalf("the bridge itself: %v", err)
+	}
+	space := SearchSpace{Anchors: []BlockSize{
+		{Length: own.Length, Width: 6.5 * units.Metre, Height: own.Height, Depth: own.Depth},
+		{Length: own.Length, Width: 6.5 * units.Metre, Height: own.Height - 0.6*units.Metre, Depth: own.Depth},
+	}}
+	res, err := Search(context.Background(), b, space, &SearchSettings{KeepAll: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	for i, d := range res.All {
+		ok, u, _ := bruteForce(t, b, d)
+		if ok != d.Feasible || !sameRatio(u, d.Utilisation, 1e-9) {
+			t.Errorf("anchor %d %v: search %v/%.6g (%s), Check %v/%.6g", i, d.Anchor, d.Feasible, d.Utilisation, d.Governing.ID, ok, u)
+		}
+	}
+	if _, err := Check(Design{Anchor: space.Anchors[1]}.Apply(b), nil); err == nil {
+		t.Error("Check accepts the raised anchor: the test no longer tries what it means to")
+	}
+}
+
+func foundationSoil(t *testing.T, k Bank) foundation.Soil {
+	t.Helper()
+	s, err := k.Soil.soil()
+	if err != nil {
+		t.Fatal(err)
+	}
+	return s
+}
+
+// sameRatio reports whether two ratios agree to tol relative (both
+// infinite alike, or both finite and close): |Inf − x| ≤ tol·Inf would
+// hold for any x.
+func sameRatio(a, b, tol float64) bool {
+	if math.IsInf(a, 0) || math.IsInf(b, 0) {
+		return a == b
+	}
+	return math.Abs(a-b) <= tol*math.Max(1, math.Abs(a))
 }

@@ -182,6 +182,11 @@ func (b Bridge) validateBanks() error {
 	v.rangesAt("banks", reflect.ValueOf(&b.Banks).Elem())
 	b.validateBuried(v, Left)
 	b.validateBuried(v, Right)
+	// The soil, groundwater and dry run of each bank: the groundwater's
+	// reach is judged from the lowest base, which a size moves, and the
+	// foundation package's refusals depend on the size.
+	b.validateGround(v, Left)
+	b.validateGround(v, Right)
 	return v.err
 }
 
