@@ -409,16 +409,7 @@ func TestAnchorBlockAllowableAndEquation(t *testing.T) {
 func TestAnchorBlockFallingGround(t *testing.T) {
 	fx := 80 * math.Cos(25*math.Pi/180)
 	at := func(slope float64) []check.Result {
-		t.Helper()
-		blk := testBlock()
-		blk.PassiveMobilisation = 0.5
-		blk.GroundSlope = deg(slope)
-		rs, err := blk.Check([]foundation.AnchorPull{testPull()}, testSand(), foundation.EC7, nil)
-		if err != nil {
-			t.Fatal(err)
-		}
-		noNaN(t, rs)
-		return rs
+		return passiveBlock(t, func(b *foundation.AnchorBlock) { b.GroundSlope = deg(slope) })
 	}
 	level, falling, steep := at(0), at(20), at(40)
 	pa := 0.5 * math.Pow(math.Tan(27*math.Pi/180), 2) * 19 * 2.25 * 2.5
@@ -456,16 +447,7 @@ func TestAnchorBlockFallingGround(t *testing.T) {
 // level ground), and at a backslope steeper than φ the slope of φ.
 func TestAnchorBlockRisingGroundBehind(t *testing.T) {
 	at := func(back float64) check.Result {
-		t.Helper()
-		blk := testBlock()
-		blk.PassiveMobilisation = 0.5
-		blk.BackSlope = deg(back)
-		rs, err := blk.Check([]foundation.AnchorPull{testPull()}, testSand(), foundation.EC7, nil)
-		if err != nil {
-			t.Fatal(err)
-		}
-		noNaN(t, rs)
-		return byID(t, rs, "anchor.sliding")
+		return byID(t, passiveBlock(t, func(b *foundation.AnchorBlock) { b.BackSlope = deg(back) }), "anchor.sliding")
 	}
 	fx := 80 * math.Cos(25*math.Pi/180)
 	pa := func(ka float64) float64 { return 0.5 * ka * 19 * 2.25 * 2.5 }
@@ -473,4 +455,19 @@ func TestAnchorBlockRisingGroundBehind(t *testing.T) {
 	near(t, "rising 20°", at(20).Demand/1e3, fx+pa(0.326786), 1e-6)
 	// Ka at β = φ = 36°: cos²36/(1 + √(sin36·sin0/cos36))² = cos²36 = 0.654508.
 	near(t, "rising 50°, taken at φ", at(50).Demand/1e3, fx+pa(0.654508), 1e-6)
+}
+
+// passiveBlock checks the test block with half its passive resistance
+// counted, as set changes it, under the test pull on the test sand.
+func passiveBlock(t *testing.T, set func(*foundation.AnchorBlock)) []check.Result {
+	t.Helper()
+	blk := testBlock()
+	blk.PassiveMobilisation = 0.5
+	set(&blk)
+	rs, err := blk.Check([]foundation.AnchorPull{testPull()}, testSand(), foundation.EC7, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	noNaN(t, rs)
+	return rs
 }
