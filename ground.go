@@ -280,7 +280,7 @@ func (s baseSlope) text(id string) string {
 		out += " (ground-inclination factors in the bearing equation, the crest's set-back not counted: cautious)"
 	case id == "anchor.sliding" || id == "anchor.deadman.pullout":
 		out += " (any passive resistance counted in front is taken for ground falling at that slope: Coulomb's K_p, " +
-			"smooth face, drained; none at or beyond φ', nor undrained)"
+			"smooth face, drained, none at or beyond φ'; undrained, a plane wedge in total stress)"
 	default:
 		out += " (not used: the footing's sliding counts no passive resistance)"
 	}

@@ -471,3 +471,44 @@ func passiveBlock(t *testing.T, set func(*foundation.AnchorBlock)) []check.Resul
 	noNaN(t, rs)
 	return rs
 }
+
+// TestAnchorBlockUndrainedFallingGround: in clay, undrained, the passive
+// thrust on ground falling 10° in front is the level ground's scaled by the
+// least thrust of a plane wedge (found here by scanning the failure
+// plane's angle: the wedge's statics, P = ½γhx tanθ + c_u x (1 + tan²θ),
+// x = h/(tanθ + tanβ)), against Rankine's ½γh² + 2c_u h on level ground;
+// a slope of 1° takes off under 2 %, not the whole thrust.
+func TestAnchorBlockUndrainedFallingGround(t *testing.T) {
+	clay := foundation.Soil{Name: "invented soft clay", UnitWeight: 18 * kNm3, Undrained: 40 * units.Kilopascal}
+	slide := func(beta float64) check.Result {
+		t.Helper()
+		blk := testBlock()
+		blk.PassiveMobilisation = 0.5
+		blk.GroundSlope = deg(beta)
+		rs, err := blk.Check([]foundation.AnchorPull{testPull()}, clay, foundation.EC7, nil)
+		if err != nil {
+			t.Fatal(err)
+		}
+		noNaN(t, rs)
+		return byID(t, rs, "anchor.sliding")
+	}
+	const g, h, cu, width = 18e3, 1.5, 40e3, 2.5
+	wedge := func(beta float64) float64 {
+		b, least := math.Tan(beta*math.Pi/180), math.Inf(1)
+		for k := 1; k < 90000; k++ {
+			tt := math.Tan(float64(k) / 1000 * math.Pi / 180)
+			x := h / (tt + b)
+			least = math.Min(least, 0.5*g*h*x*tt+cu*x*(1+tt*tt))
+		}
+		return least
+	}
+	level := slide(0)
+	near(t, "level: Rankine's", wedge(0), 0.5*g*h*h+2*cu*h, 1e-6)
+	for _, beta := range []float64{1, 10} {
+		got := slide(beta)
+		near(t, "passive lost", level.Capacity-got.Capacity, 0.5*width*(wedge(0)-wedge(beta)), 1e-4)
+		if beta == 1 && !(got.Capacity > 0.98*level.Capacity) {
+			t.Errorf("1° of fall: resistance %v of %v", got.Capacity, level.Capacity)
+		}
+	}
+}
