@@ -229,16 +229,21 @@ func riseBehind(line []Point, back, dir, reach float64) units.Angle {
 		lo, hi = back, back+reach
 	}
 	worst := 0.0
+	eachSegment(line, lo, hi, func(_, _, slope float64) { worst = math.Max(worst, -dir*slope) })
+	return min(units.Angle(worst), maxSlope)
+}
+
+// eachSegment calls f with the ends and the slope (rising toward +x
+// positive) of every segment of the ground line that overlaps lo…hi.
+func eachSegment(line []Point, lo, hi float64, f func(xa, xb, slope float64)) {
 	for i := 1; i < len(line); i++ {
 		a, b := line[i-1], line[i]
 		xa, xb := float64(a.X), float64(b.X)
 		if xb <= lo || xa >= hi {
 			continue
 		}
-		slope := math.Atan2(float64(b.Z-a.Z), xb-xa) // rising toward +x positive
-		worst = math.Max(worst, -dir*slope)
+		f(xa, xb, math.Atan2(float64(b.Z-a.Z), xb-xa))
 	}
-	return min(units.Angle(worst), maxSlope)
 }
 
 // fallAt returns the steepest fall of the ground line away from a base
@@ -253,14 +258,8 @@ func fallAt(line []Point, x0, x1, reach float64) baseSlope {
 	lo, hi := x0-reach, x1+reach
 	s.covered = float64(line[0].X) <= lo && float64(line[len(line)-1].X) >= hi
 	worst := 0.0
-	for i := 1; i < len(line); i++ {
-		a, b := line[i-1], line[i]
-		xa, xb := float64(a.X), float64(b.X)
-		if xb <= lo || xa >= hi {
-			continue
-		}
-		slope := math.Atan2(float64(b.Z-a.Z), xb-xa) // rising toward +x positive
-		if xb > x1 {                                 // beyond the base: falling toward +x
+	eachSegment(line, lo, hi, func(xa, xb, slope float64) {
+		if xb > x1 { // beyond the base: falling toward +x
 			worst = math.Max(worst, -slope)
 		}
 		if xa < x0 { // before it: falling toward −x
@@ -269,7 +268,7 @@ func fallAt(line []Point, x0, x1, reach float64) baseSlope {
 		if xa < x1 && xb > x0 { // under it: either way
 			worst = math.Max(worst, math.Abs(slope))
 		}
-	}
+	})
 	s.beta = min(units.Angle(worst), maxSlope)
 	return s
 }
@@ -294,7 +293,7 @@ func (s baseSlope) text(id string) string {
 		out += " (ground-inclination factors in the bearing equation, the crest's set-back not counted: cautious)"
 	case id == "anchor.sliding" || id == "anchor.deadman.pullout":
 		out += " (any passive resistance counted in front is taken for ground falling at that slope: Coulomb's K_p, " +
-			"smooth face, drained; none at or beyond φ', nor undrained)"
+			"smooth face, drained, none at or beyond φ'; undrained, a plane wedge in total stress)"
 	default:
 		out += " (not used: the footing's sliding counts no passive resistance)"
 	}

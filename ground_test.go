@@ -686,7 +686,7 @@ func TestBaseSlopeWords(t *testing.T) {
 		{s, "footing.bearing", "ground-inclination factors", "not used"},
 		{rock, "anchor.sliding", "Coulomb", "bearing pressure"},
 		{rock, "footing.bearing", "on rock the bearing pressure is not reduced", "ground-inclination"},
-		{s, "anchor.deadman.pullout", "none at or beyond φ', nor undrained", "bearing"},
+		{s, "anchor.deadman.pullout", "undrained, a plane wedge in total stress", "bearing"},
 		{s, "anchor.bearing", "across the bridge", ""},
 	} {
 		got := c.slope.text(c.id)

@@ -152,10 +152,7 @@ func activeK(st strength, b units.Angle) float64 {
 // AnchorBlock.earth): zero where no passive resistance is counted.
 func passiveK(st strength, b units.Angle) float64 {
 	if st.cond != Drained {
-		if b > 0 {
-			return 0
-		}
-		return 1
+		return 1 // on falling ground the thrust is reduced by undrainedWedge
 	}
 	phi := units.Angle(st.phi)
 	if b == 0 {
@@ -169,6 +166,34 @@ func passiveK(st strength, b units.Angle) float64 {
 		return 0
 	}
 	return k
+}
+
+// undrainedWedge returns, undrained on ground falling at b in front of a
+// smooth vertical face reaching depth h, the passive thrust over that on
+// level ground; 1 drained or on level ground. A plane wedge in total
+// stress (Coulomb's method; the statics derived here): a failure plane at
+// t = tan θ from the face's foot meets the ground falling at tan b after
+// x = h/(t + tan b), the wedge weighs ½γhx and the plane carries c_u over
+// its length, so the thrust is
+//
+//	P(t) = (½γh² t + c_u h (1 + t²)) / (t + tan b)
+//
+// least at t = √(tan²b + 1 − ½γh tan b/c_u) − tan b (at t = 0 where that
+// is not positive); on level ground t = 1 and P = ½γh² + 2c_u h, Rankine's
+// undrained passive thrust. The ratio scales the layered thrust of the
+// face (the wedge taken from the surface, at the soil's total unit weight:
+// its weight drives the wedge down the slope, cautious).
+func undrainedWedge(st strength, gamma, h float64, b units.Angle) float64 {
+	if st.cond == Drained || b <= 0 || !(h > 0) || !(st.c > 0) {
+		return 1
+	}
+	a, c, tb := 0.5*gamma*h*h, st.c*h, math.Tan(float64(b))
+	p := func(t float64) float64 { return (a*t + c*(1+t*t)) / (t + tb) }
+	t := 0.0
+	if disc := tb*tb + 1 - a*tb/c; disc > 0 {
+		t = math.Max(math.Sqrt(disc)-tb, 0)
+	}
+	return math.Min(p(t)/(a+2*c), 1)
 }
 
 // Step is a rectangular concrete part standing on an anchor block, making
@@ -246,8 +271,8 @@ func (a AnchorBlock) loads(s Soil) blockLoads {
 //
 // Ground falling away at GroundSlope β: drained, Kp is Coulomb's for a
 // smooth vertical face and ground falling at β in front (δ = 0, plane
-// wedge), and none at or beyond φ; undrained, no passive resistance is
-// counted on falling ground (cautious).
+// wedge), and none at or beyond φ; undrained, the level-ground thrust
+// scaled by undrainedWedge.
 func (a AnchorBlock) earth(s Soil, st strength) (pp, pa EarthForce) {
 	d := float64(a.Depth)
 	top := math.Max(d-float64(a.Height), 0)
@@ -255,6 +280,7 @@ func (a AnchorBlock) earth(s Soil, st strength) (pp, pa EarthForce) {
 	g, gs, dw := float64(s.UnitWeight), float64(s.SubmergedWeight()), a.Water.depth()
 	if kp > 0 {
 		pp = layeredEarth(kp, st.c, 1, top, d, g, gs, dw)
+		pp.Force *= units.Force(undrainedWedge(st, g, d, a.GroundSlope))
 	}
 	pa = layeredEarth(ka, st.c, -1, top, d, g, gs, dw)
 	pp.Force *= units.Force(a.Width)
@@ -525,6 +551,10 @@ func (a AnchorBlock) sliding(pulls []AnchorPull, s Soil, cond Condition, ld bloc
 			vs = append(vs, check.Of("β_g", "slope of the ground falling away from the block", b),
 				check.Of("K_p", "passive coefficient on the front face", units.Ratio(kp)))
 			switch {
+			case st.cond == Undrained:
+				rho := undrainedWedge(st, float64(s.UnitWeight), float64(a.Depth), b)
+				vs = append(vs, check.Of("ρ_p", "undrained passive thrust on the falling ground over that on level ground (plane wedge)", units.Ratio(rho)))
+				note += fmt.Sprintf("; the ground falls at %.1f° from the block: the undrained passive thrust %.3f of level ground's, by a plane wedge in total stress", b.Degrees(), rho)
 			case kp == 0:
 				note += fmt.Sprintf("; the ground falls at %.1f° from the block: no passive resistance counted", b.Degrees())
 			default:

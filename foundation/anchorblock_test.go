@@ -409,16 +409,7 @@ func TestAnchorBlockAllowableAndEquation(t *testing.T) {
 func TestAnchorBlockFallingGround(t *testing.T) {
 	fx := 80 * math.Cos(25*math.Pi/180)
 	at := func(slope float64) []check.Result {
-		t.Helper()
-		blk := testBlock()
-		blk.PassiveMobilisation = 0.5
-		blk.GroundSlope = deg(slope)
-		rs, err := blk.Check([]foundation.AnchorPull{testPull()}, testSand(), foundation.EC7, nil)
-		if err != nil {
-			t.Fatal(err)
-		}
-		noNaN(t, rs)
-		return rs
+		return passiveBlock(t, func(b *foundation.AnchorBlock) { b.GroundSlope = deg(slope) })
 	}
 	level, falling, steep := at(0), at(20), at(40)
 	pa := 0.5 * math.Pow(math.Tan(27*math.Pi/180), 2) * 19 * 2.25 * 2.5
@@ -456,16 +447,7 @@ func TestAnchorBlockFallingGround(t *testing.T) {
 // level ground), and at a backslope steeper than φ the slope of φ.
 func TestAnchorBlockRisingGroundBehind(t *testing.T) {
 	at := func(back float64) check.Result {
-		t.Helper()
-		blk := testBlock()
-		blk.PassiveMobilisation = 0.5
-		blk.BackSlope = deg(back)
-		rs, err := blk.Check([]foundation.AnchorPull{testPull()}, testSand(), foundation.EC7, nil)
-		if err != nil {
-			t.Fatal(err)
-		}
-		noNaN(t, rs)
-		return byID(t, rs, "anchor.sliding")
+		return byID(t, passiveBlock(t, func(b *foundation.AnchorBlock) { b.BackSlope = deg(back) }), "anchor.sliding")
 	}
 	fx := 80 * math.Cos(25*math.Pi/180)
 	pa := func(ka float64) float64 { return 0.5 * ka * 19 * 2.25 * 2.5 }
@@ -473,4 +455,60 @@ func TestAnchorBlockRisingGroundBehind(t *testing.T) {
 	near(t, "rising 20°", at(20).Demand/1e3, fx+pa(0.326786), 1e-6)
 	// Ka at β = φ = 36°: cos²36/(1 + √(sin36·sin0/cos36))² = cos²36 = 0.654508.
 	near(t, "rising 50°, taken at φ", at(50).Demand/1e3, fx+pa(0.654508), 1e-6)
+}
+
+// passiveBlock checks the test block with half its passive resistance
+// counted, as set changes it, under the test pull on the test sand.
+func passiveBlock(t *testing.T, set func(*foundation.AnchorBlock)) []check.Result {
+	t.Helper()
+	blk := testBlock()
+	blk.PassiveMobilisation = 0.5
+	set(&blk)
+	rs, err := blk.Check([]foundation.AnchorPull{testPull()}, testSand(), foundation.EC7, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	noNaN(t, rs)
+	return rs
+}
+
+// TestAnchorBlockUndrainedFallingGround: in clay, undrained, the passive
+// thrust on ground falling 10° in front is the level ground's scaled by the
+// least thrust of a plane wedge (found here by scanning the failure
+// plane's angle: the wedge's statics, P = ½γhx tanθ + c_u x (1 + tan²θ),
+// x = h/(tanθ + tanβ)), against Rankine's ½γh² + 2c_u h on level ground;
+// a slope of 1° takes off under 2 %, not the whole thrust.
+func TestAnchorBlockUndrainedFallingGround(t *testing.T) {
+	clay := foundation.Soil{Name: "invented soft clay", UnitWeight: 18 * kNm3, Undrained: 40 * units.Kilopascal}
+	slide := func(beta float64) check.Result {
+		t.Helper()
+		blk := testBlock()
+		blk.PassiveMobilisation = 0.5
+		blk.GroundSlope = deg(beta)
+		rs, err := blk.Check([]foundation.AnchorPull{testPull()}, clay, foundation.EC7, nil)
+		if err != nil {
+			t.Fatal(err)
+		}
+		noNaN(t, rs)
+		return byID(t, rs, "anchor.sliding")
+	}
+	const g, h, cu, width = 18e3, 1.5, 40e3, 2.5
+	wedge := func(beta float64) float64 {
+		b, least := math.Tan(beta*math.Pi/180), math.Inf(1)
+		for k := 1; k < 90000; k++ {
+			tt := math.Tan(float64(k) / 1000 * math.Pi / 180)
+			x := h / (tt + b)
+			least = math.Min(least, 0.5*g*h*x*tt+cu*x*(1+tt*tt))
+		}
+		return least
+	}
+	level := slide(0)
+	near(t, "level: Rankine's", wedge(0), 0.5*g*h*h+2*cu*h, 1e-6)
+	for _, beta := range []float64{1, 10} {
+		got := slide(beta)
+		near(t, "passive lost", level.Capacity-got.Capacity, 0.5*width*(wedge(0)-wedge(beta)), 1e-4)
+		if beta == 1 && !(got.Capacity > 0.98*level.Capacity) {
+			t.Errorf("1° of fall: resistance %v of %v", got.Capacity, level.Capacity)
+		}
+	}
 }

@@ -33,8 +33,8 @@ type Deadman struct {
 	// GroundSlope is the inclination of the ground falling away from the
 	// deadman within reach of its passive wedge; zero for level ground.
 	// Drained, the passive coefficient is then Coulomb's for ground
-	// falling in front (δ = 0), none at or beyond φ'; undrained, no
-	// passive resistance is counted on falling ground (cautious).
+	// falling in front (δ = 0), none at or beyond φ'; undrained, the
+	// thrust of a plane wedge in total stress (see AnchorBlock.earth).
 	GroundSlope units.Angle
 	// BackSlope is the inclination of the ground rising behind the deadman
 	// (away from the pull); the active pressure takes it as AnchorBlock's.
@@ -170,6 +170,7 @@ func (d Deadman) passiveLessActive(s Soil, st strength, top, bottom float64) dea
 	kp, ka := st.coefficients(d.GroundSlope, d.BackSlope)
 	g, gs, dw := float64(s.UnitWeight), float64(s.SubmergedWeight()), d.Water.depth()
 	pp := layeredEarth(kp, st.c, 1, top, bottom, g, gs, dw)
+	pp.Force *= units.Force(undrainedWedge(st, g, bottom, d.GroundSlope))
 	pa := layeredEarth(ka, st.c, -1, top, bottom, g, gs, dw)
 	l := float64(d.Length)
 	r := deadmanResistance{kp: kp, ka: ka, top: top, bottom: bottom, pp: l * float64(pp.Force), pa: l * float64(pa.Force)}
