@@ -186,7 +186,7 @@ func (b Bridge) validateGround(v *validator, side Side) {
 		b.validateGroundwater(v, f, bank, *gw)
 	}
 	// The foundation package's own refusals, by a dry run with no load.
-	if _, err := bank.pad(bank.bank.Tower.Footing).Check(foundation.FootingLoad{}, soil, bank.method, nil); err != nil {
+	if _, err := bank.pad(bank.bank.Tower.Footing).Check(foundation.FootingLoad{}, soil, bank.method, dryRun()); err != nil {
 		v.fail(at(f+".tower.footing"), "%v", err)
 		return
 	}
