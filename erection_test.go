@@ -28,7 +28,7 @@ func TestErectionClosesOnDesignSag(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	checked := 0
+	checked, worst := 0, 0.0
 	for _, file := range files {
 		b, err := LoadFile(file)
 		if err != nil {
@@ -68,12 +68,17 @@ func TestErectionClosesOnDesignSag(t *testing.T) {
 					}
 				}
 				scale := (lo + hi) / 2 * (1 + g.constructionalStretch())
-				hung := solveInput{load: cable.Load{Uniform: g.self + units.LoadPerLength(g.share)*m.dead}, intact: 1, scale: scale}
+				// The walkway hung as the permanent case hangs it (its dead
+				// load per metre of walkway), on the rope set to the row.
+				hung := m.solveInput(g, m.characteristic(b.Cases()[0]))
+				hung.scale = scale
 				gs, err := m.solveGroup(i, hung)
 				if err != nil {
 					t.Fatal(err)
 				}
-				if d := math.Abs(float64(gs.Sag - g.Sag)); d > 0.005 {
+				d := math.Abs(float64(gs.Sag - g.Sag))
+				worst = math.Max(worst, d)
+				if d > 0.005 {
 					t.Errorf("%s, %s set to %s at %s: hangs at %s, design sag %s (%.1f mm off)",
 						file, g.Name, row.Sag, row.Temperature, gs.Sag, g.Sag, 1000*d)
 				}
@@ -81,6 +86,7 @@ func TestErectionClosesOnDesignSag(t *testing.T) {
 			}
 		}
 	}
+	t.Logf("%d rows, the walkway hung on each at most %.2f mm from the design sag", checked, 1000*worst)
 	if checked == 0 {
 		t.Fatal("no erection row checked")
 	}
