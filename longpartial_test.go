@@ -20,24 +20,11 @@ import (
 // EN 12385-4), tower (EN 1992-1-1, Timoshenko & Gere) and foundation
 // (EN 1997-1, Vesić).
 func TestLongPartialByHand(t *testing.T) {
-	b, err := LoadFile("testdata/long_partial.json")
+	a, err := Check(loadTestdata(t, "long_partial.json"), &Options{SkipComfort: true})
 	if err != nil {
 		t.Fatal(err)
 	}
-	a, err := Check(b, &Options{SkipComfort: true})
-	if err != nil {
-		t.Fatal(err)
-	}
-	governing := func(id, element string) check.Result {
-		t.Helper()
-		for _, r := range a.Report.Governing() {
-			if r.ID == id && r.Element == element {
-				return r
-			}
-		}
-		t.Fatalf("no governing %s for %s", id, element)
-		return check.Result{}
-	}
+	governing := func(id, element string) check.Result { return governingOf(t, a, id, element) }
 	result := func(id, element, lc string) check.Result {
 		t.Helper()
 		for _, r := range a.Report.Results {

@@ -20,11 +20,7 @@ import (
 // its source; [D] marks a value derived here by a route other than the
 // library's.
 func TestSteepFrameByHand(t *testing.T) {
-	b, err := LoadFile("testdata/steep_frame.json")
-	if err != nil {
-		t.Fatal(err)
-	}
-	a, err := Check(b, &Options{SkipComfort: true})
+	a, err := Check(loadTestdata(t, "steep_frame.json"), &Options{SkipComfort: true})
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -38,16 +34,7 @@ func TestSteepFrameByHand(t *testing.T) {
 		t.Fatalf("no case %q", name)
 		return CaseState{}
 	}
-	governing := func(id, element string) check.Result {
-		t.Helper()
-		for _, r := range a.Report.Governing() {
-			if r.ID == id && r.Element == element {
-				return r
-			}
-		}
-		t.Fatalf("no governing %s for %s", id, element)
-		return check.Result{}
-	}
+	governing := func(id, element string) check.Result { return governingOf(t, a, id, element) }
 	value := func(r check.Result, sym string) float64 {
 		t.Helper()
 		v, ok := r.Value(sym)
