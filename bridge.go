@@ -520,7 +520,9 @@ type SoilSpec struct {
 	// K_sp method.
 	JointAperture *units.Length `json:"joint_aperture,omitempty"`
 	// BearingMethod is the bearing-capacity method of this bank's footing
-	// and anchor block: "EN 1997-1 Annex D" (default) or "Vesic".
+	// and anchor block: "EN 1997-1 Annex D" (default), "Vesic" or
+	// "Hansen". No one method is the lowest everywhere: under a strongly
+	// inclined pull Hansen's inclination factors give the least.
 	BearingMethod string `json:"bearing_method,omitempty"`
 	// Groundwater is the elevation of the groundwater table at this bank,
 	// on the datum of the site's levels; left out, no groundwater within

@@ -152,7 +152,7 @@ var fieldDocs = map[string]string{
 	"Site.Rise":                       "Rise is the height of the right saddle above the left one; negative when the right saddle is lower.",
 	"Site.Span":                       "Span is the horizontal distance between the walkway-rope saddles.",
 	"SoilSpec.Allowable":              "Allowable is an allowable bearing pressure from the site investigation: on rock the bearing limit; on soil, on the allowable basis, the peak contact pressure is checked against it beside the bearing-capacity equation (which carries the load's inclination) and the worse governs.",
-	"SoilSpec.BearingMethod":          "BearingMethod is the bearing-capacity method of this bank's footing and anchor block: \"EN 1997-1 Annex D\" (default) or \"Vesic\".",
+	"SoilSpec.BearingMethod":          "BearingMethod is the bearing-capacity method of this bank's footing and anchor block: \"EN 1997-1 Annex D\" (default), \"Vesic\" or \"Hansen\". No one method is the lowest everywhere: under a strongly inclined pull Hansen's inclination factors give the least.",
 	"SoilSpec.Cohesion":               "Cohesion is the drained (effective) cohesion c'.",
 	"SoilSpec.Friction":               "Friction is the drained (effective) angle of shearing resistance φ'.",
 	"SoilSpec.Groundwater":            "Groundwater is the elevation of the groundwater table at this bank, on the datum of the site's levels; left out, no groundwater within reach. In the flood case the design flood raises it where higher.",

@@ -747,3 +747,30 @@ func TestGroundLevelFlag(t *testing.T) {
 		t.Errorf("transposed tower height: %s, %.4f m apart; want a flag at 1.83 m", r.Status, r.Demand)
 	}
 }
+
+// TestHansenChosen: a bank may choose Hansen's bearing method. On the
+// hillside bridge's left anchor block (dense sand, a strongly inclined
+// pull) Hansen's inclination factors give less capacity than EN 1997-1
+// Annex D's, so the block's bearing utilisation rises with it (the hand
+// review found 3516 against 4226 kPa, Bowles' Hansen by hand).
+func TestHansenChosen(t *testing.T) {
+	b := loadTestdata(t, "hillside_tube.json")
+	util := func(b Bridge) check.Result {
+		t.Helper()
+		a, err := Check(b, &Options{SkipComfort: true})
+		if err != nil {
+			t.Fatal(err)
+		}
+		return governingOf(t, a, "anchor.bearing", "left anchor")
+	}
+	annexD := util(b)
+	b.Banks.Left.Soil.BearingMethod = "Hansen"
+	hansen := util(b)
+	if !(hansen.Ratio > annexD.Ratio) || !strings.Contains(strings.Join(hansen.Notes, " "), "Hansen") {
+		t.Errorf("Hansen: %.4f (notes %q), Annex D %.4f", hansen.Ratio, hansen.Notes, annexD.Ratio)
+	}
+	b.Banks.Left.Soil.BearingMethod = "Hanson"
+	if err := b.Validate(); err == nil || !strings.Contains(err.Error(), `"Hansen"`) {
+		t.Errorf("a method misspelt: %v", err)
+	}
+}

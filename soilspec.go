@@ -168,13 +168,14 @@ var bearingMethods = map[string]foundation.Method{
 	"ec7":               foundation.EC7,
 	"vesic":             foundation.Vesic,
 	"vesić":             foundation.Vesic,
+	"hansen":            foundation.Hansen,
 }
 
 // method returns the bank's bearing-capacity method.
 func (s SoilSpec) method() (foundation.Method, error) {
 	m, ok := bearingMethods[strings.ToLower(strings.TrimSpace(s.BearingMethod))]
 	if !ok {
-		return 0, fieldErr("bearing_method", "unknown method %q; want \"EN 1997-1 Annex D\" (default) or \"Vesic\"", s.BearingMethod)
+		return 0, fieldErr("bearing_method", "unknown method %q; want \"EN 1997-1 Annex D\" (default), \"Vesic\" or \"Hansen\"", s.BearingMethod)
 	}
 	return m, nil
 }

@@ -246,8 +246,8 @@ func TestSteepFrameByHand(t *testing.T) {
 
 	// 4. The deadman (left bank): Teng's continuous anchor near the surface
 	// (Height 2.4 m ≥ Depth/2 = 2.35 m), Rankine's pressures with Bell's
-	// cohesion and the tension crack on the active side (Craig, Soil
-	// Mechanics, ch. 11), water below (141.5 m, the deadman's bottom at
+	// cohesion and the tension crack on the active side (Das, in package
+	// foundation's References), water below (141.5 m, the deadman's bottom at
 	// 142.2 m), level ground (the line is level from x = −45 m to 1.5 m).
 	{
 		const gam, c, l, h = 19e3, 5e3, 5.5, 4.7
