@@ -4,7 +4,6 @@ import (
 	"math"
 	"testing"
 
-	"gonum.org/v1/gonum/floats/scalar"
 	"gonum.org/v1/gonum/integrate/quad"
 
 	"github.com/sagspan/sagspan/check"
@@ -27,74 +26,10 @@ import (
 // (accelerations and lateral lock-in, as a light rope bridge with 1 %
 // damping does), which is why the analysis here skips it.
 func TestHillsideTubeByHand(t *testing.T) {
-	b, err := LoadFile("testdata/hillside_tube.json")
-	if err != nil {
-		t.Fatal(err)
-	}
-	a, err := Check(b, &Options{SkipComfort: true})
-	if err != nil {
-		t.Fatal(err)
-	}
+	h := checkByHand(t, "hillside_tube.json")
+	a, state, governing, result, value, near := h.a, h.state, h.governing, h.result, h.value, h.near
 	if a.Report.Status() == check.Fail {
 		t.Errorf("the bridge should pass every check without comfort, got %v", a.Report.Status())
-	}
-	state := func(states []CaseState, name string) CaseState {
-		t.Helper()
-		for _, s := range states {
-			if s.Case.Name == name {
-				return s
-			}
-		}
-		t.Fatalf("no case %q", name)
-		return CaseState{}
-	}
-	governing := func(id, element string) check.Result {
-		t.Helper()
-		for _, r := range a.Report.Governing() {
-			if r.ID == id && r.Element == element {
-				return r
-			}
-		}
-		t.Fatalf("no governing %s for %s", id, element)
-		return check.Result{}
-	}
-	result := func(id, element, lc string) check.Result {
-		t.Helper()
-		for _, r := range a.Report.Results {
-			if r.ID == id && r.Element == element && r.Case == lc {
-				return r
-			}
-		}
-		t.Fatalf("no %s for %s in %q", id, element, lc)
-		return check.Result{}
-	}
-	value := func(r check.Result, sym string) float64 {
-		t.Helper()
-		v, ok := r.Value(sym)
-		if !ok {
-			t.Fatalf("%s (%s, %s): no value %s", r.ID, r.Element, r.Case, sym)
-		}
-		return v.Value
-	}
-	near := func(what string, got, want, tol float64) {
-		t.Helper()
-		if !scalar.EqualWithinRel(got, want, tol) {
-			t.Errorf("%s: library %.6g, by hand %.6g (%.3f %%, tolerance %.2g %%)", what, got, want, 100*(got/want-1), 100*tol)
-		} else {
-			t.Logf("%s: library %.6g, by hand %.6g (%.3f %%)", what, got, want, 100*(got/want-1))
-		}
-	}
-	bisect := func(f func(float64) float64, lo, hi float64) float64 {
-		flo := f(lo)
-		for range 200 {
-			mid := (lo + hi) / 2
-			if fm := f(mid); (fm > 0) == (flo > 0) {
-				lo, flo = mid, fm
-			} else {
-				hi = mid
-			}
-		}
-		return (lo + hi) / 2
 	}
 	deg := math.Pi / 180
 

@@ -3,10 +3,6 @@ package sagspan
 import (
 	"math"
 	"testing"
-
-	"gonum.org/v1/gonum/floats/scalar"
-
-	"github.com/sagspan/sagspan/check"
 )
 
 // TestLongPartialByHand checks the governing numbers of
@@ -20,59 +16,8 @@ import (
 // EN 12385-4), tower (EN 1992-1-1, Timoshenko & Gere) and foundation
 // (EN 1997-1, Vesić).
 func TestLongPartialByHand(t *testing.T) {
-	a, err := Check(loadTestdata(t, "long_partial.json"), &Options{SkipComfort: true})
-	if err != nil {
-		t.Fatal(err)
-	}
-	governing := func(id, element string) check.Result { return governingOf(t, a, id, element) }
-	result := func(id, element, lc string) check.Result {
-		t.Helper()
-		for _, r := range a.Report.Results {
-			if r.ID == id && r.Element == element && r.Case == lc {
-				return r
-			}
-		}
-		t.Fatalf("no %s for %s in %q", id, element, lc)
-		return check.Result{}
-	}
-	design := func(name string) CaseState {
-		t.Helper()
-		for _, s := range a.Design {
-			if s.Case.Name == name {
-				return s
-			}
-		}
-		t.Fatalf("no design state %q", name)
-		return CaseState{}
-	}
-	value := func(r check.Result, sym string) float64 {
-		t.Helper()
-		v, ok := r.Value(sym)
-		if !ok {
-			t.Fatalf("%s (%s, %s): no value %s", r.ID, r.Element, r.Case, sym)
-		}
-		return v.Value
-	}
-	near := func(what string, got, want, tol float64) {
-		t.Helper()
-		if !scalar.EqualWithinRel(got, want, tol) {
-			t.Errorf("%s: library %.6g, by hand %.6g (%.3f %%, tolerance %.2g %%)", what, got, want, 100*(got/want-1), 100*tol)
-		} else {
-			t.Logf("%s: library %.6g, by hand %.6g (%.3f %%)", what, got, want, 100*(got/want-1))
-		}
-	}
-	bisect := func(f func(float64) float64, lo, hi float64) float64 {
-		flo := f(lo)
-		for range 200 {
-			mid := (lo + hi) / 2
-			if fm := f(mid); (fm > 0) == (flo > 0) {
-				lo, flo = mid, fm
-			} else {
-				hi = mid
-			}
-		}
-		return (lo + hi) / 2
-	}
+	h := checkByHand(t, "long_partial.json")
+	governing, result, design, value, near := h.governing, h.result, h.design, h.value, h.near
 	deg := math.Pi / 180
 
 	// 1. Walkway ropes on the partial basis, EN 1993-1-11:2006 6.2

@@ -4,10 +4,7 @@ import (
 	"math"
 	"testing"
 
-	"gonum.org/v1/gonum/floats/scalar"
 	"gonum.org/v1/gonum/integrate/quad"
-
-	"github.com/sagspan/sagspan/check"
 )
 
 // TestSteepFrameByHand checks the governing numbers of
@@ -20,37 +17,8 @@ import (
 // its source; [D] marks a value derived here by a route other than the
 // library's.
 func TestSteepFrameByHand(t *testing.T) {
-	a, err := Check(loadTestdata(t, "steep_frame.json"), &Options{SkipComfort: true})
-	if err != nil {
-		t.Fatal(err)
-	}
-	state := func(states []CaseState, name string) CaseState {
-		t.Helper()
-		for _, s := range states {
-			if s.Case.Name == name {
-				return s
-			}
-		}
-		t.Fatalf("no case %q", name)
-		return CaseState{}
-	}
-	governing := func(id, element string) check.Result { return governingOf(t, a, id, element) }
-	value := func(r check.Result, sym string) float64 {
-		t.Helper()
-		v, ok := r.Value(sym)
-		if !ok {
-			t.Fatalf("%s (%s, %s): no value %s", r.ID, r.Element, r.Case, sym)
-		}
-		return v.Value
-	}
-	near := func(what string, got, want, tol float64) {
-		t.Helper()
-		if !scalar.EqualWithinRel(got, want, tol) {
-			t.Errorf("%s: library %.6g, by hand %.6g (%.3f %%, tolerance %.2g %%)", what, got, want, 100*(got/want-1), 100*tol)
-		} else {
-			t.Logf("%s: library %.6g, by hand %.6g (%.3f %%)", what, got, want, 100*(got/want-1))
-		}
-	}
+	h := checkByHand(t, "steep_frame.json")
+	a, state, governing, value, near := h.a, h.state, h.governing, h.value, h.near
 
 	// 1. Walkway ropes under the full crowd at the reference temperature
 	// ("flood with crowd": the characteristic rope state is that of the
@@ -103,18 +71,6 @@ func TestSteepFrameByHand(t *testing.T) {
 		for i, s := range bs {
 			c := math.Hypot(s[0], s[1])
 			l0b[i] = c / (1 + h0*c/s[0]/ea)
-		}
-		bisect := func(f func(float64) float64, lo, hi float64) float64 {
-			flo := f(lo)
-			for range 200 {
-				mid := (lo + hi) / 2
-				if fm := f(mid); (fm > 0) == (flo > 0) {
-					lo, flo = mid, fm
-				} else {
-					hi = mid
-				}
-			}
-			return (lo + hi) / 2
 		}
 		// travel of a roller saddle toward the span that brings the
 		// backstay's horizontal pull to h
