@@ -2,6 +2,8 @@ package sagspan
 
 import (
 	"math"
+	"path/filepath"
+	"strings"
 	"testing"
 
 	"github.com/sagspan/sagspan/check"
@@ -63,10 +65,22 @@ func denseGrid(t *testing.T, b Bridge, fam LoadedLength, n int) collect {
 // search reports by more than 0.5 % (of 0.05 for a check used less: its
 // maximum is not refined below minRefined).
 func TestLoadedLengthAgainstDenseGrid(t *testing.T) {
+	// The demo and the level span always; every other test bridge too
+	// unless short.
 	bridges := map[string]Bridge{"demo": Demo(), "level": loadTestBridge(t, "level.json")}
 	if !testing.Short() {
-		for _, f := range []string{"soft_clay", "river_bank", "rock_gorge"} {
-			bridges[f] = loadTestBridge(t, f+".json")
+		files, err := filepath.Glob("testdata/*.json")
+		if err != nil {
+			t.Fatal(err)
+		}
+		for _, f := range files {
+			name := strings.TrimSuffix(filepath.Base(f), ".json")
+			if _, ok := bridges[name]; ok {
+				continue
+			}
+			if b, err := LoadFile(f); err == nil {
+				bridges[name] = b
+			}
 		}
 	}
 	for name, b := range bridges {
