@@ -707,6 +707,12 @@ func (m *model) levelChecks(out sink) {
 					check.Of("z_base", "ground at the base from the description's levels", b.z),
 					check.Of("Δz", "the two apart", d),
 				)
+			if r.Status == check.Pass {
+				// Within the tolerance it is information, not a
+				// utilisation of the design (a design search's score, the
+				// governing summary).
+				r.Status = check.Info
+			}
 			out.add(r)
 		}
 	}

@@ -733,7 +733,7 @@ func TestGroundLevelFlag(t *testing.T) {
 		t.Fatal(err)
 	}
 	for _, el := range []string{"left footing", "left anchor", "right footing", "right anchor"} {
-		if r := find(t, a.Report, "site.ground_level", el, grooveCase); r.Status != check.Pass || r.Demand > 0.04 {
+		if r := find(t, a.Report, "site.ground_level", el, grooveCase); r.Status != check.Info || r.Demand > 0.04 {
 			t.Errorf("demo %s: %s, %.3f m apart", el, r.Status, r.Demand)
 		}
 	}
