@@ -219,7 +219,8 @@ func (b Bridge) validateFlood(v *validator) {
 		}
 	}
 	for _, x := range []units.Length{0, s.Span} {
-		consider(x, groundAt(g, x), -1)
+		z, _ := lineAt(g, float64(x)) // the line runs across the span
+		consider(x, z, -1)
 	}
 	if s.Flood.Z > low {
 		return
@@ -230,17 +231,6 @@ func (b Bridge) validateFlood(v *validator) {
 	}
 	v.fail(path{name: "site.flood_elevation"}, "the design flood at %s lies at or below the ground line everywhere under the span (lowest %s at %s): no flood can stand there; give its elevation on the datum of the saddles and the ground line (site.left_saddle_elevation %s), or \"none\" where no flood reaches the bridge",
 		s.Flood.Z, low, where, s.LeftSaddle)
-}
-
-// groundAt returns the elevation of ground line g at x, which lies within it.
-func groundAt(g []Point, x units.Length) units.Length {
-	for i := 1; i < len(g); i++ {
-		if x <= g[i].X {
-			a, c := g[i-1], g[i]
-			return a.Z + (c.Z-a.Z)*(x-a.X)/(c.X-a.X)
-		}
-	}
-	return g[len(g)-1].Z
 }
 
 // validateBuried refuses a footing whose depth below ground, under a
