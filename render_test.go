@@ -253,11 +253,12 @@ func TestNotChecked(t *testing.T) {
 	yes := true
 	b.Banks.Right.Soil.IsRock = &yes
 	b.Climate.WindSpeed, b.Climate.WindPressure = 0, 0
-	b.Loads.Omit = []string{"flood with crowd"}
+	b.Loads.Omit = []string{"flood with crowd", "wind, hottest rope"}
 	a.Bridge = b
 	got := a.NotChecked()
 	for _, s := range []string{"left tower's frame bracing", "taken level", "attachment at the right anchor", "rock mass's own stability at the right",
-		"no wind case is checked", "(loads.omit): flood with crowd."} {
+		"no wind case is checked",
+		`(loads.omit): "flood with crowd"; "wind, hottest rope".`} { // each name quoted: one may hold a comma
 		if !has(got, s) {
 			t.Errorf("%q missing from %q", s, got)
 		}

@@ -1,6 +1,7 @@
 package sagspan
 
 import (
+	"strconv"
 	"strings"
 
 	"github.com/sagspan/sagspan/check"
@@ -32,7 +33,13 @@ func (a *Analysis) NotChecked() []string {
 			"so no wind case is checked.")
 	}
 	if len(b.Loads.Omit) > 0 {
-		out = append(out, "The cases and searched loadings the description leaves out (loads.omit): "+strings.Join(b.Loads.Omit, "; ")+".")
+		// Each name quoted: a case's name may hold a comma ("wind, hottest
+		// rope"), which unquoted reads as two things left out.
+		names := make([]string, len(b.Loads.Omit))
+		for i, n := range b.Loads.Omit {
+			names[i] = strconv.Quote(n)
+		}
+		out = append(out, "The cases and searched loadings the description leaves out (loads.omit): "+strings.Join(names, "; ")+".")
 	}
 	bank := "The overall stability of each bank (a deep slip through it, scour and erosion around the bases)"
 	if len(b.Site.Ground) < 2 {

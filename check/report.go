@@ -365,10 +365,30 @@ func (r Report) AllFailures() []Result {
 
 // Summary returns the overall verdict in words, such as "Overall: FAIL: 3
 // of 229 results fail, in 2 checks (listed first)" or "Overall: pass (229
-// results)".
+// results)". Flagged results are counted beside it, so that a verdict of
+// flag (or a failure) never hides how many results lie beyond an advisory
+// limit: "Overall: flag: none fails; 4 of 229 results flagged, in 2
+// checks (see the governing cases)".
 func (r Report) Summary() string {
 	st := r.Status()
-	if st != Fail {
+	flagged, flaggedChecks := 0, 0
+	for _, res := range r.Results {
+		if res.Status == Flag {
+			flagged++
+		}
+	}
+	for _, res := range r.Governing() {
+		if res.Status == Flag {
+			flaggedChecks++
+		}
+	}
+	flags := fmt.Sprintf("%d of %d results flagged, in %s (see the governing cases; a flag never fails, but each needs the engineer's judgement)",
+		flagged, len(r.Results), plural(flaggedChecks, "check"))
+	switch st {
+	case Flag:
+		return "Overall: flag: none fails; " + flags
+	case Fail:
+	default:
 		return fmt.Sprintf("Overall: %s (%d results)", st, len(r.Results))
 	}
 	fails := r.AllFailures()
@@ -376,7 +396,11 @@ func (r Report) Summary() string {
 	if len(fails) == 1 {
 		verb = "fails"
 	}
-	return fmt.Sprintf("Overall: FAIL: %d of %d results %s, in %s (listed first)", len(fails), len(r.Results), verb, plural(len(r.Failures()), "check"))
+	out := fmt.Sprintf("Overall: FAIL: %d of %d results %s, in %s (listed first)", len(fails), len(r.Results), verb, plural(len(r.Failures()), "check"))
+	if flagged > 0 {
+		out += "; besides, " + flags
+	}
+	return out
 }
 
 // plural returns "1 check", "2 checks".

@@ -354,3 +354,23 @@ func BenchmarkWithValues(b *testing.B) {
 }
 
 var sinkResult Result
+
+// TestSummaryCountsFlags: a verdict of flag says that nothing fails and how
+// many results are flagged, and a failing verdict counts the flags beside
+// the failures, so that neither hides an advisory limit exceeded.
+func TestSummaryCountsFlags(t *testing.T) {
+	var r Report
+	r.Add(Compare("a", "a", units.KindForce, 1, 2).For("e", "one"),
+		Advisory("b", "b", units.KindForce, 3, 2).For("e", "one"),
+		Advisory("b", "b", units.KindForce, 5, 2).For("e", "two"))
+	assert.Equal(t, "Overall: flag: none fails; 2 of 3 results flagged, in 1 check "+
+		"(see the governing cases; a flag never fails, but each needs the engineer's judgement)", r.Summary())
+
+	r.Add(Compare("c", "c", units.KindForce, 3, 2).For("e", "one"))
+	assert.Equal(t, "Overall: FAIL: 1 of 4 results fails, in 1 check (listed first); besides, 2 of 4 results flagged, in 1 check "+
+		"(see the governing cases; a flag never fails, but each needs the engineer's judgement)", r.Summary())
+
+	var clean Report
+	clean.Add(Compare("a", "a", units.KindForce, 1, 2))
+	assert.Equal(t, "Overall: pass (1 results)", clean.Summary())
+}

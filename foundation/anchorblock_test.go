@@ -223,6 +223,16 @@ func TestAnchorBlockEdgeCases(t *testing.T) {
 	noNaN(t, rs)
 	if b := byID(t, rs, "anchor.bearing"); b.Status != check.Fail || !strings.Contains(strings.Join(b.Notes, " "), "outside") {
 		t.Errorf("outside base: %v %v", b.Status, b.Notes)
+	} else {
+		// The capacity of 0 and the unbounded ratio are explained, with the
+		// eccentricity beside the half-length it exceeds (1 m block: 500 mm).
+		notes := strings.Join(b.Notes, " ")
+		for _, want := range []string{"against half its side, 500.0 mm", "bearing capacity is taken as 0", "(inf): a failure",
+			"mean pressure N/A on the whole base area"} {
+			if !strings.Contains(notes, want) {
+				t.Errorf("outside base: the note lacks %q: %s", want, notes)
+			}
+		}
 	}
 	// Groundwater at the surface lowers the uplift factor.
 	wet := testBlock()

@@ -186,6 +186,21 @@ func (ld baseLoad) outside(a, w float64) bool {
 	return math.Abs(ld.e) >= a/2 || math.Abs(ld.ey) >= w/2
 }
 
+// outsideNote says, with its numbers, why a base whose resultant reaches
+// its edge has a bearing capacity of zero: no contact pressure under a
+// rigid base can balance it, whatever the ground's strength, so the result
+// fails with an unbounded ratio; the demand shown is the mean pressure
+// N/(a·w), for reference only.
+func (ld baseLoad) outsideNote(a, w float64) string {
+	where := fmt.Sprintf("e = %v from the base centre against half its side, %v", units.Length(math.Abs(ld.e)), units.Length(a/2))
+	if ld.biaxial {
+		where += fmt.Sprintf("; e_y = %v against %v square to it", units.Length(math.Abs(ld.ey)), units.Length(w/2))
+	}
+	return "resultant outside the base (" + where + "): no contact pressure can balance it, the base tips whatever " +
+		"the ground's strength; its bearing capacity is taken as 0, so the ratio is unbounded (inf): a failure, not a " +
+		"missing number; the demand shown is the mean pressure N/A on the whole base area, for reference only"
+}
+
 // contact returns the peak contact pressure of a rigid base of sides
 // along and across under ld.
 func (ld baseLoad) contact(along, across units.Length) (units.Pressure, error) {
@@ -204,10 +219,10 @@ func appendBaseValues(vs []check.Value, ld baseLoad, along, across float64) []ch
 	if ld.biaxial {
 		vs = append(vs,
 			check.Of("N", "effective normal force on the base", units.Force(ld.n)),
-			check.Of("H", "horizontal force on the base along its side Along", units.Force(ld.h)),
-			check.Of("H_y", "horizontal force on the base along its side Across", units.Force(ld.hy)),
-			check.Of("e", "eccentricity of the resultant from the base centre along Along", units.Length(ld.e)),
-			check.Of("e_y", "eccentricity of the resultant from the base centre along Across", units.Length(ld.ey)),
+			check.Of("H", "horizontal force on the base in the check's direction", units.Force(ld.h)),
+			check.Of("H_y", "horizontal force on the base square to the check's direction", units.Force(ld.hy)),
+			check.Of("e", "eccentricity of the resultant from the base centre in the check's direction", units.Length(ld.e)),
+			check.Of("e_y", "eccentricity of the resultant from the base centre square to the check's direction", units.Length(ld.ey)),
 		)
 		if c, err := BiaxialContactPressure(units.Force(ld.n), units.Length(ld.e), units.Length(ld.ey), units.Length(along), units.Length(across)); err == nil {
 			vs = append(vs,
@@ -280,7 +295,7 @@ func soilBearing(id, title string, along, across, depth units.Length, water Wate
 			return r
 		}
 		var buf [valueRoom]check.Value
-		return r.WithValues(appendBaseValues(buf[:0], ld, a, w)...).WithNote("resultant outside the base")
+		return r.WithValues(appendBaseValues(buf[:0], ld, a, w)...).WithNote(ld.outsideNote(a, w))
 	}
 	if ld.outside(a, w) {
 		return outside(), nil
@@ -358,7 +373,7 @@ func peakAgainst(id, title string, along, across units.Length, ld baseLoad, allo
 			return r, nil
 		}
 		var buf [valueRoom]check.Value
-		return r.WithValues(appendBaseValues(buf[:0], ld, a, w)...).WithNote("resultant outside the base"), nil
+		return r.WithValues(appendBaseValues(buf[:0], ld, a, w)...).WithNote(ld.outsideNote(a, w)), nil
 	}
 	qmax, err := ld.contact(along, across)
 	if err != nil {

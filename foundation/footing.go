@@ -395,10 +395,10 @@ func (f Footing) sliding(load FootingLoad, s Soil, cond Condition, ld blockLoads
 	}
 	vs, note := shearValues(str, worstN, worstShear)
 	vs = append(vs,
-		check.Of("H", "horizontal force on the base along its side Along", units.Force(worstH)),
-		check.Of("H_y", "horizontal force on the base along its side Across", units.Force(worstHy)),
-		check.Of("e", "eccentricity of the base resultant along Along", units.Length(worstE)),
-		check.Of("e_y", "eccentricity of the base resultant along Across", units.Length(worstEy)))
+		check.Of("H", "horizontal force on the base in the check's direction", units.Force(worstH)),
+		check.Of("H_y", "horizontal force on the base square to the check's direction", units.Force(worstHy)),
+		check.Of("e", "eccentricity of the base resultant in the check's direction", units.Length(worstE)),
+		check.Of("e_y", "eccentricity of the base resultant square to the check's direction", units.Length(worstEy)))
 	if str.cond == Drained {
 		note += "; cohesion and passive resistance ignored"
 	} else {
