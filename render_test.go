@@ -6,6 +6,7 @@ import (
 	"flag"
 	"os"
 	"path/filepath"
+	"strconv"
 	"strings"
 	"testing"
 
@@ -262,5 +263,46 @@ func TestNotChecked(t *testing.T) {
 		if !has(got, s) {
 			t.Errorf("%q missing from %q", s, got)
 		}
+	}
+}
+
+// TestLiftedCaseNotChecked: where the wind lifts the walkway (a storm of
+// 50 m/s on a walkway of lift coefficient 2), the case has no rope state, its
+// rope, tower and foundation checks are missing, and the report says so:
+// the uplift check fails with a note, and the not-checked list names the
+// case.
+func TestLiftedCaseNotChecked(t *testing.T) {
+	b := Demo()
+	b.Loads.WalkwayLift, b.Climate.WindSpeed = 2, 50
+	if err := b.Validate(); err != nil {
+		t.Fatal(err)
+	}
+	a, err := Check(b, &Options{SkipComfort: true})
+	if err != nil {
+		t.Fatal(err)
+	}
+	var lifted string
+	for _, r := range a.Report.Results {
+		if r.ID == "walkway.uplift" && strings.Contains(strings.Join(r.Notes, " "), "lifts the walkway in this case") {
+			if r.Status != check.Fail {
+				t.Errorf("%s: %s", r.Case, r.Status)
+			}
+			lifted = r.Case
+		}
+	}
+	if lifted == "" {
+		t.Fatal("no case lifts the walkway in a 50 m/s storm")
+	}
+	for _, r := range a.Report.Results {
+		if r.Case == lifted && strings.HasPrefix(r.ID, "tower.") {
+			t.Errorf("%s %s under the lifted case %q", r.ID, r.Element, lifted)
+		}
+	}
+	found := false
+	for _, s := range a.NotChecked() {
+		found = found || strings.Contains(s, strconv.Quote(lifted)) && strings.Contains(s, "wind lifts the walkway")
+	}
+	if !found {
+		t.Errorf("the not-checked list does not name %q: %q", lifted, a.NotChecked())
 	}
 }

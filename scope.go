@@ -41,6 +41,16 @@ func (a *Analysis) NotChecked() []string {
 		}
 		out = append(out, "The cases and searched loadings the description leaves out (loads.omit): "+strings.Join(names, "; ")+".")
 	}
+	var lifted []string
+	for _, r := range a.Report.Results {
+		if r.ID == "walkway.uplift" && strings.Contains(strings.Join(r.Notes, " "), "lifts the walkway in this case") {
+			lifted = append(lifted, strconv.Quote(r.Case))
+		}
+	}
+	if len(lifted) > 0 {
+		out = append(out, "The rope, tower and foundation checks of the cases in which the wind lifts the walkway ("+
+			strings.Join(lifted, "; ")+"): no rope state exists there, and walkway.uplift fails.")
+	}
 	bank := "The overall stability of each bank (a deep slip through it, scour and erosion around the bases)"
 	if len(b.Site.Ground) < 2 {
 		bank += "; without a ground line (site.ground) the ground around every base is taken level, which overestimates " +

@@ -72,7 +72,8 @@ const (
 
 const upliftBasis = "static equilibrium of the walkway under the wind's upward force c_f,z q_p b (EN 1991-1-4 8.3.3, from memory): " +
 	"the permanent weight of the walkway and its ropes (the walkway's per metre of walkway, its slope not counted: cautious) must hold it down with the EQU factors of EN 1990 Table A2.4(A) for bridges, " +
-	"γG,inf 0.95 and γQ 1.5 (from memory); where it does not, the walkway lifts and the ropes' states under the case are not analysed: " +
+	"γG,inf 0.95 and γQ 1.5 (from memory); where it does not, the check fails; where the net load itself points up, the walkway lifts and " +
+	"the case's rope, tower and foundation checks are not made at all (a note says so): " +
 	"hold the walkway down (storm ropes, a heavier deck) or give a smaller lift coefficient for an open deck (loads.walkway_lift)"
 
 // upliftCheck returns the check that the permanent weight of the walkway
@@ -108,7 +109,8 @@ func (m *model) upliftCheck(lc LoadCase) (check.Result, bool) {
 			check.Of("γ_Q", "factor on the wind", units.Ratio(upliftGammaQ)),
 		)
 	if lifted {
-		r = r.WithNote("the wind lifts the walkway in this case (its net load points up, characteristic or factored): its rope states are not analysed")
+		r = r.WithNote("the wind lifts the walkway in this case (its net load points up, characteristic or factored): its rope states are not analysed, " +
+			"so the case's rope, tower and foundation checks are missing from this report")
 		if r.Status != check.Fail {
 			r.Status, r.Ratio = check.Fail, math.Max(r.Ratio, 1+1e-9)
 		}
