@@ -48,34 +48,7 @@ func TestErectionClosesOnDesignSag(t *testing.T) {
 				t.Fatalf("%s: erection table %d is %q with %d rows", file, i, et.Group, len(et.Rows))
 			}
 			for _, row := range et.Rows {
-				bare := m.bareInput(i, row.Temperature)
-				sagAt := func(scale float64) float64 {
-					in := bare
-					in.scale = scale
-					gs, err := m.solveGroup(i, in)
-					if err != nil {
-						t.Fatal(err)
-					}
-					return float64(gs.Sag)
-				}
-				lo, hi := 0.98, 1.02
-				for range 60 {
-					mid := (lo + hi) / 2
-					if sagAt(mid) < float64(row.Sag) {
-						lo = mid
-					} else {
-						hi = mid
-					}
-				}
-				scale := (lo + hi) / 2 * (1 + g.constructionalStretch())
-				// The walkway hung as the permanent case hangs it (its dead
-				// load per metre of walkway), on the rope set to the row.
-				hung := m.solveInput(g, m.characteristic(b.Cases()[0]))
-				hung.scale = scale
-				gs, err := m.solveGroup(i, hung)
-				if err != nil {
-					t.Fatal(err)
-				}
+				gs := hangOnRow(t, m, i, row, 0.98, 1.02)
 				d := math.Abs(float64(gs.Sag - g.Sag))
 				worst = math.Max(worst, d)
 				if d > 0.005 {
@@ -147,7 +120,8 @@ func TestConstructionalStretchByHand(t *testing.T) {
 //
 //  1. the rope whose bare sag, free to render, is the row's sag (bisection
 //     on its length, every unstretched length scaled alike);
-//  2. the walkway hung on it, still free to render, after its
+//  2. the walkway hung on it as the permanent case hangs it (per metre of
+//     walkway), still free to render, after its
 //     constructional stretch, at the reference temperature;
 //
 // the midspan sag must be the design sag within 5 mm, and the instructions
@@ -174,31 +148,7 @@ func TestErectionWithClampedGrooves(t *testing.T) {
 		t.Errorf("the instructions do not say when to clamp the ropes: %q", et.Hold)
 	}
 	for _, row := range et.Rows {
-		bare := crew.bareInput(0, row.Temperature)
-		sagAt := func(scale float64) float64 {
-			in := bare
-			in.scale = scale
-			gs, err := crew.solveGroup(0, in)
-			if err != nil {
-				t.Fatal(err)
-			}
-			return float64(gs.Sag)
-		}
-		lo, hi := 0.95, 1.05
-		for range 60 {
-			mid := (lo + hi) / 2
-			if sagAt(mid) < float64(row.Sag) {
-				lo = mid
-			} else {
-				hi = mid
-			}
-		}
-		scale := (lo + hi) / 2 * (1 + g.constructionalStretch())
-		hung := solveInput{load: cable.Load{Uniform: g.self + units.LoadPerLength(g.share)*crew.dead}, intact: 1, scale: scale}
-		gs, err := crew.solveGroup(0, hung)
-		if err != nil {
-			t.Fatal(err)
-		}
+		gs := hangOnRow(t, crew, 0, row, 0.95, 1.05)
 		if d := math.Abs(float64(gs.Sag - g.Sag)); d > 0.005 {
 			t.Errorf("set to %s at %s: hangs at %s, design sag %s (%.1f mm off)", row.Sag, row.Temperature, gs.Sag, g.Sag, 1000*d)
 		}
@@ -251,4 +201,38 @@ func TestConstructionStartsFromErection(t *testing.T) {
 	}
 	near(t, "H of the bare ropes in the construction stage", float64(bare.Groups[0].H), float64(row.H), 1e-9)
 	near(t, "sag of the bare ropes in the construction stage", float64(bare.Groups[0].Sag), float64(row.Sag), 1e-9)
+}
+
+// hangOnRow follows the crew on group i of model m: the bare new rope
+// whose sag at the row's temperature is the row's (bisection on its
+// length between lo and hi times the design's, every unstretched length
+// scaled alike, an inverse the table itself never runs), then, once it has
+// taken its constructional stretch, the walkway hung on it as the
+// permanent case hangs it (characteristic, its dead load per metre of
+// walkway) at the reference temperature. It returns that hung state.
+func hangOnRow(t *testing.T, m *model, i int, row cable.ErectionRow, lo, hi float64) GroupState {
+	t.Helper()
+	g := m.groups[i]
+	bare := m.bareInput(i, row.Temperature)
+	for range 60 {
+		mid := (lo + hi) / 2
+		in := bare
+		in.scale = mid
+		gs, err := m.solveGroup(i, in)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if gs.Sag < row.Sag {
+			lo = mid
+		} else {
+			hi = mid
+		}
+	}
+	hung := m.solveInput(g, m.characteristic(m.b.Cases()[0]))
+	hung.scale = (lo + hi) / 2 * (1 + g.constructionalStretch())
+	gs, err := m.solveGroup(i, hung)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return gs
 }
