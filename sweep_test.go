@@ -28,14 +28,7 @@ func (c collect) add(r check.Result) {
 // highest ratio.
 func denseGrid(t *testing.T, b Bridge, fam LoadedLength, n int) collect {
 	t.Helper()
-	m, err := newModel(b)
-	if err != nil {
-		t.Fatal(err)
-	}
-	perm, _, err := m.pair(b.Cases()[0], nil)
-	if err != nil {
-		t.Fatal(err)
-	}
+	m, perm := permanentOf(t, b)
 	out := collect{}
 	l := b.Site.Span
 	for _, p := range fam.Placements {
@@ -84,14 +77,7 @@ func TestLoadedLengthAgainstDenseGrid(t *testing.T) {
 		}
 	}
 	for name, b := range bridges {
-		m, err := newModel(b)
-		if err != nil {
-			t.Fatal(err)
-		}
-		perm, _, err := m.pair(b.Cases()[0], nil)
-		if err != nil {
-			t.Fatal(err)
-		}
+		m, perm := permanentOf(t, b)
 		for _, fam := range b.LoadedLengths() {
 			got := collect{}
 			sr, _, err := m.searchLength(got, perm, fam, true)
@@ -121,4 +107,19 @@ func TestLoadedLengthAgainstDenseGrid(t *testing.T) {
 			t.Logf("%s, %s %s: %d checks, %d stretches tried, search at most %.3f %% under the dense grid", name, fam.Name, fam.Label, len(dense), len(tried), 100*worst)
 		}
 	}
+}
+
+// permanentOf returns a model of bridge b and its permanent case's
+// characteristic state.
+func permanentOf(t *testing.T, b Bridge) (*model, CaseState) {
+	t.Helper()
+	m, err := newModel(b)
+	if err != nil {
+		t.Fatal(err)
+	}
+	perm, _, err := m.pair(b.Cases()[0], nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return m, perm
 }
